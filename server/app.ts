@@ -1,0 +1,73 @@
+import express from 'express'
+import helmet from 'helmet'
+import { pinoHttp } from 'pino-http'
+import { randomUUID } from 'node:crypto'
+import { existsSync } from 'node:fs'
+import path from 'node:path'
+import type { AppConfig } from './lib/config'
+import { errorHandler } from './lib/error-handler'
+import { notFound } from './lib/errors'
+import { logger } from './lib/logger'
+import { authRouter } from './modules/auth/auth.routes'
+import { configurePassport } from './modules/auth/passport'
+import { requireSameOrigin } from './modules/auth/same-origin'
+import { createSessionMiddleware, type SessionStore } from './modules/auth/session'
+import { healthRouter } from './modules/health/health.routes'
+import { peopleRouter } from './modules/people/people.routes'
+
+export interface AppDeps {
+  config: AppConfig
+  sessionStore: SessionStore
+  /** Folder of the built client; served with a fallback to index.html when present. */
+  clientDir?: string
+}
+
+/** Builds the Express app without listening, so tests can drive it in process. */
+export function createApp({ config, sessionStore, clientDir }: AppDeps) {
+  const app = express()
+  const passport = configurePassport()
+  const sessionMiddleware = createSessionMiddleware(config, sessionStore)
+
+  if (config.cookieSecure) app.set('trust proxy', 1)
+  app.disable('x-powered-by')
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'connect-src': ["'self'", 'ws:', 'wss:'] },
+      },
+    }),
+  )
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (_req, res) => {
+        const id = randomUUID()
+        res.setHeader('x-request-id', id)
+        return id
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  )
+
+  const api = express.Router()
+  api.use(express.json({ limit: '256kb' }))
+  api.use(requireSameOrigin(config.allowedOrigins))
+  api.use('/health', healthRouter)
+  api.use(sessionMiddleware, passport.session())
+  api.use('/', authRouter(config))
+  api.use('/people', peopleRouter)
+  api.use((req: express.Request) => {
+    throw notFound(`The API route ${req.method} ${req.path}`)
+  })
+  app.use('/api', api)
+
+  if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    app.get(/^\/(?!api\/|socket\.io\/).*/, (_req, res) => {
+      res.setHeader('cache-control', 'no-cache')
+      res.sendFile(path.join(clientDir, 'index.html'))
+    })
+  }
+  app.use(errorHandler)
+  return { app, sessionMiddleware, passport }
+}

@@ -1,0 +1,3 @@
+import { Foundation1796171166803 } from './1796171166803-Foundation'
+
+export const migrations: Array<new () => object> = [Foundation1796171166803]

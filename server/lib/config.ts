@@ -1,0 +1,48 @@
+import { z } from 'zod'
+
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  ROUNDTIDE_PUBLIC_URL: z.string().url().optional(),
+  ROUNDTIDE_DB_HOST: z.string().default('127.0.0.1'),
+  ROUNDTIDE_DB_PORT: z.coerce.number().int().default(3307),
+  ROUNDTIDE_DB_NAME: z.string().default('roundtide'),
+  ROUNDTIDE_DB_USER: z.string().default('roundtide'),
+  ROUNDTIDE_DB_PASSWORD: z.string().default('roundtide-local'),
+  ROUNDTIDE_SESSION_SECRET: z.string().min(16).default('roundtide-local-session-secret-change-me'),
+  ROUNDTIDE_COOKIE_SECURE: z.enum(['true', 'false']).default('false'),
+  ROUNDTIDE_ALLOWED_ORIGINS: z.string().default(''),
+  ROUNDTIDE_SIGNIN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(50),
+  ROUNDTIDE_SIGNIN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
+  ROUNDTIDE_UPLOAD_DIR: z.string().default('.data/uploads'),
+  ROUNDTIDE_DEMO_PASSWORD: z.string().min(8).default('tidepool-demo'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+})
+
+export type AppConfig = ReturnType<typeof loadConfig>
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
+  const e = EnvSchema.parse(env)
+  return {
+    env: e.NODE_ENV,
+    host: e.HOST,
+    port: e.PORT,
+    publicUrl: e.ROUNDTIDE_PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`,
+    db: {
+      host: e.ROUNDTIDE_DB_HOST,
+      port: e.ROUNDTIDE_DB_PORT,
+      database: e.ROUNDTIDE_DB_NAME,
+      username: e.ROUNDTIDE_DB_USER,
+      password: e.ROUNDTIDE_DB_PASSWORD,
+    },
+    sessionSecret: e.ROUNDTIDE_SESSION_SECRET,
+    cookieSecure: e.ROUNDTIDE_COOKIE_SECURE === 'true',
+    allowedOrigins: e.ROUNDTIDE_ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
+    signInLimitPerAddress: e.ROUNDTIDE_SIGNIN_LIMIT_PER_ADDRESS,
+    signInLimitPerAccount: e.ROUNDTIDE_SIGNIN_LIMIT_PER_ACCOUNT,
+    uploadDir: e.ROUNDTIDE_UPLOAD_DIR,
+    demoPassword: e.ROUNDTIDE_DEMO_PASSWORD,
+    logLevel: e.LOG_LEVEL,
+  }
+}

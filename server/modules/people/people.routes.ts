@@ -1,0 +1,36 @@
+import { Router } from 'express'
+import {
+  CreatePersonInputSchema,
+  PersonIdParamSchema,
+  ResetPasswordInputSchema,
+  UpdatePersonInputSchema,
+} from '#shared/schemas/person'
+import { requireRole } from '../auth/require-role'
+import { createPerson, listPeople, resetPassword, updatePerson } from './people.service'
+import { forbidden } from '../../lib/errors'
+
+export const peopleRouter = Router()
+peopleRouter.use(requireRole('manager'))
+
+peopleRouter.get('/', async (_req, res) => {
+  res.json(await listPeople())
+})
+
+peopleRouter.post('/', async (req, res) => {
+  res.status(201).json(await createPerson(CreatePersonInputSchema.parse(req.body)))
+})
+
+peopleRouter.patch('/:id', async (req, res) => {
+  const { id } = PersonIdParamSchema.parse(req.params)
+  const input = UpdatePersonInputSchema.parse(req.body)
+  if (id === req.user!.id && (input.active === false || (input.role && input.role !== 'manager'))) {
+    throw forbidden('You cannot deactivate yourself or remove your own manager role; ask another manager.')
+  }
+  res.json(await updatePerson(id, input))
+})
+
+peopleRouter.post('/:id/password', async (req, res) => {
+  const { id } = PersonIdParamSchema.parse(req.params)
+  const { password } = ResetPasswordInputSchema.parse(req.body)
+  res.json(await resetPassword(id, password))
+})

@@ -1,0 +1,124 @@
+import * as rruleNamespace from 'rrule'
+import type { Options } from 'rrule'
+import type { WallTime } from './zone-time'
+
+type RRuleModule = typeof rruleNamespace
+// rrule 2.8.1 ships CommonJS as "main" and ESM as "module": Node ESM (tsx) sees only a
+// `default` export holding the CommonJS object, while Vite and Vitest see the named exports.
+const rruleModule: RRuleModule = (rruleNamespace as { default?: RRuleModule }).default ?? rruleNamespace
+
+export const RRule = rruleModule.RRule
+
+/** UNTIL as written: UTC (`...Z`), local wall time, or a bare date. */
+export type RuleUntil = WallTime & { isUtc: boolean; isDateOnly: boolean }
+
+export type ParsedRule = {
+  /** The rule value, upper-cased, without the `RRULE:` prefix. */
+  value: string
+  /** rrule's options, minus dtstart (which the caller supplies). */
+  options: Partial<Options>
+  parts: ReadonlyMap<string, string>
+  until: RuleUntil | null
+}
+
+type NumberLimits = { min: number; max: number; signed?: boolean; single?: boolean }
+
+// Ranges from RFC 5545 §3.3.10; rrule itself accepts out-of-range numbers silently
+const NUMBER_PARTS: Record<string, NumberLimits> = {
+  COUNT: { min: 1, max: Number.MAX_SAFE_INTEGER, single: true },
+  INTERVAL: { min: 1, max: Number.MAX_SAFE_INTEGER, single: true },
+  BYSECOND: { min: 0, max: 59 },
+  BYMINUTE: { min: 0, max: 59 },
+  BYHOUR: { min: 0, max: 23 },
+  BYMONTHDAY: { min: 1, max: 31, signed: true },
+  BYYEARDAY: { min: 1, max: 366, signed: true },
+  BYWEEKNO: { min: 1, max: 53, signed: true },
+  BYMONTH: { min: 1, max: 12 },
+  BYSETPOS: { min: 1, max: 366, signed: true },
+}
+const OTHER_PARTS = ['FREQ', 'UNTIL', 'BYDAY', 'WKST']
+const FREQUENCIES = ['YEARLY', 'MONTHLY', 'WEEKLY', 'DAILY', 'HOURLY', 'MINUTELY', 'SECONDLY']
+const WEEKDAY = /^(?:[+-]?(\d{1,2}))?(MO|TU|WE|TH|FR|SA|SU)$/
+const UNTIL = /^(\d{4})(\d{2})(\d{2})(?:T(\d{2})(\d{2})(\d{2})(Z)?)?$/
+
+function fail(reason: string): never {
+  throw new Error(`Invalid RRULE: ${reason}`)
+}
+
+function splitParts(value: string): Map<string, string> {
+  const parts = new Map<string, string>()
+  for (const part of value.split(';')) {
+    const [name, partValue, ...rest] = part.split('=')
+    if (!name || !partValue || rest.length > 0) fail(`"${part}" is not written as NAME=VALUE`)
+    if (!(name in NUMBER_PARTS) && !OTHER_PARTS.includes(name)) fail(`unknown part "${name}"`)
+    if (parts.has(name)) fail(`${name} is given more than once`)
+    parts.set(name, partValue)
+  }
+  return parts
+}
+
+function checkNumbers(name: string, text: string, limits: NumberLimits): void {
+  const items = text.split(',')
+  if (limits.single && items.length > 1) fail(`${name} takes a single number`)
+  for (const item of items) {
+    const wellFormed = (limits.signed ? /^[+-]?\d+$/ : /^\d+$/).test(item)
+    const size = Math.abs(Number(item))
+    if (!wellFormed || size < limits.min || size > limits.max) {
+      const range = limits.signed ? `±${limits.min} to ±${limits.max}` : `${limits.min} to ${limits.max}`
+      fail(`${name}=${text}: each value must be a whole number from ${range}`)
+    }
+  }
+}
+
+function checkCombinations(parts: Map<string, string>): void {
+  const freq = parts.get('FREQ') ?? ''
+  const has = (name: string) => parts.has(name)
+  const byDay = parts.get('BYDAY')?.split(',') ?? []
+  for (const day of byDay) {
+    const match = WEEKDAY.exec(day)
+    if (!match) fail(`BYDAY value "${day}" is not a weekday such as MO, 2TU or -1FR`)
+    const ordinal = match[1]
+    if (ordinal !== undefined && (Number(ordinal) < 1 || Number(ordinal) > 53)) fail(`BYDAY value "${day}" is out of range`)
+    if (ordinal !== undefined && freq !== 'MONTHLY' && freq !== 'YEARLY') {
+      fail(`BYDAY with a position (like ${day}) needs FREQ=MONTHLY or FREQ=YEARLY`)
+    }
+  }
+  if (has('WKST') && !/^(MO|TU|WE|TH|FR|SA|SU)$/.test(parts.get('WKST') ?? '')) fail('WKST must be a weekday such as MO')
+  if (has('COUNT') && has('UNTIL')) fail('COUNT and UNTIL cannot both be given')
+  if (has('BYWEEKNO') && freq !== 'YEARLY') fail('BYWEEKNO needs FREQ=YEARLY')
+  if (has('BYMONTHDAY') && freq === 'WEEKLY') fail('BYMONTHDAY cannot be used with FREQ=WEEKLY')
+  if (has('BYYEARDAY') && ['MONTHLY', 'WEEKLY', 'DAILY'].includes(freq)) fail(`BYYEARDAY cannot be used with FREQ=${freq}`)
+  if (has('BYSETPOS') && ![...parts.keys()].some((name) => name.startsWith('BY') && name !== 'BYSETPOS')) {
+    fail('BYSETPOS needs another BY... part to pick from')
+  }
+}
+
+function parseUntil(text: string | undefined): RuleUntil | null {
+  if (text === undefined) return null
+  const match = UNTIL.exec(text)
+  if (!match) fail(`UNTIL=${text} is not a date (YYYYMMDD) or date-time (YYYYMMDDTHHMMSS, optionally ending in Z)`)
+  const [year, month, day, hour, minute, second] = match.slice(1, 7).map((field) => Number(field ?? 0))
+  return { year, month, day, hour, minute, second, isUtc: match[7] === 'Z', isDateOnly: match[4] === undefined }
+}
+
+/** Parses and checks one RRULE value (with or without the `RRULE:` prefix). Throws a readable Error. */
+export function parseRule(rrule: string): ParsedRule {
+  const value = rrule.trim().replace(/^RRULE:/i, '').toUpperCase()
+  if (value === '') fail('the rule is empty')
+  if (/[\r\n]/.test(value)) fail('expected a single RRULE value, without DTSTART or other lines')
+  const parts = splitParts(value)
+  const freq = parts.get('FREQ')
+  if (freq === undefined) fail('FREQ is required (for example FREQ=DAILY)')
+  if (!FREQUENCIES.includes(freq)) fail(`FREQ=${freq} is not one of ${FREQUENCIES.join(', ')}`)
+  for (const [name, text] of parts) {
+    const limits = NUMBER_PARTS[name]
+    if (limits) checkNumbers(name, text, limits)
+  }
+  checkCombinations(parts)
+  const until = parseUntil(parts.get('UNTIL'))
+  try {
+    return { value, options: RRule.parseString(value), parts, until }
+  } catch (error) {
+    return fail(error instanceof Error ? error.message : String(error))
+  }
+}

@@ -1,0 +1,90 @@
+import { IANAZone } from 'luxon'
+
+/** A wall-clock reading (calendar fields) that belongs to no zone until one is chosen. */
+export type WallTime = {
+  year: number
+  month: number
+  day: number
+  hour: number
+  minute: number
+  second: number
+}
+
+export const DAY_MS = 86_400_000
+const MINUTE_MS = 60_000
+const LOCAL_WALL_TIME = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2}):(\d{2})$/
+
+export function resolveZone(tzid: string): IANAZone {
+  if (!IANAZone.isValidZone(tzid)) throw new Error(`Unknown time zone "${tzid}"`)
+  return IANAZone.create(tzid)
+}
+
+/**
+ * "Floating" milliseconds: the wall time written as if it were UTC. The Date built from it
+ * reads back the same wall time through its getUTC* methods under any process TZ.
+ */
+export function wallToFloatingMs(wall: WallTime): number {
+  const date = new Date(0)
+  // setUTCFullYear keeps years 0-99 literal, unlike Date.UTC
+  date.setUTCFullYear(wall.year, wall.month - 1, wall.day)
+  date.setUTCHours(wall.hour, wall.minute, wall.second, 0)
+  return date.getTime()
+}
+
+export function floatingMsToWall(floatingMs: number): WallTime {
+  const date = new Date(floatingMs)
+  return {
+    year: date.getUTCFullYear(),
+    month: date.getUTCMonth() + 1,
+    day: date.getUTCDate(),
+    hour: date.getUTCHours(),
+    minute: date.getUTCMinutes(),
+    second: date.getUTCSeconds(),
+  }
+}
+
+const pad = (value: number, width = 2) => String(value).padStart(width, '0')
+
+export function formatWallTime(wall: WallTime): string {
+  const date = `${pad(wall.year, 4)}-${pad(wall.month)}-${pad(wall.day)}`
+  return `${date}T${pad(wall.hour)}:${pad(wall.minute)}:${pad(wall.second)}`
+}
+
+export function formatUtcInstant(instantMs: number): string {
+  return `${formatWallTime(floatingMsToWall(instantMs))}Z`
+}
+
+export function parseWallTime(text: string, label: string): WallTime {
+  const match = LOCAL_WALL_TIME.exec(text)
+  if (!match) {
+    throw new Error(`Invalid ${label} "${text}": expected local time as YYYY-MM-DDTHH:mm:ss`)
+  }
+  const [year, month, day, hour, minute, second] = match.slice(1).map(Number)
+  const wall = { year, month, day, hour, minute, second }
+  // Date arithmetic rolls 2025-02-30 over to March, so a changed read-back means no such date
+  if (formatWallTime(floatingMsToWall(wallToFloatingMs(wall))) !== text) {
+    throw new Error(`Invalid ${label} "${text}": no such calendar date or time`)
+  }
+  return wall
+}
+
+export function instantToFloatingMs(instantMs: number, zone: IANAZone): number {
+  return instantMs + zone.offset(instantMs) * MINUTE_MS
+}
+
+/**
+ * Places a wall time in a zone following RFC 5545 §3.3.5: a time that occurs twice
+ * (clocks go back) means its first occurrence; a time that does not occur (clocks go
+ * forward) is read with the offset in force before the gap, which moves it forward by
+ * the length of the gap. Luxon's own guess picks the later instant in some zones, so
+ * the candidates are checked here explicitly.
+ */
+export function floatingMsToInstant(floatingMs: number, zone: IANAZone): number {
+  const offsetBefore = zone.offset(floatingMs - DAY_MS)
+  const nearbyOffsets = new Set([offsetBefore, zone.offset(floatingMs), zone.offset(floatingMs + DAY_MS)])
+  const matchingInstants = [...nearbyOffsets]
+    .map((offset) => floatingMs - offset * MINUTE_MS)
+    .filter((instant) => instantToFloatingMs(instant, zone) === floatingMs)
+  if (matchingInstants.length > 0) return Math.min(...matchingInstants)
+  return floatingMs - offsetBefore * MINUTE_MS
+}

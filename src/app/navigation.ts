@@ -1,0 +1,31 @@
+import {
+  BarChart3, Bell, CalendarDays, ClipboardCheck, Fish, LayoutGrid, Repeat, Users, CalendarClock,
+  type LucideIcon,
+} from 'lucide-react'
+import type { Role } from '#shared/schemas/person'
+
+export interface NavItem {
+  to: string
+  label: string
+  icon: LucideIcon
+  roles: readonly Role[]
+  /** Shown in the phone's bottom bar; the rest sit under "More". */
+  primary?: boolean
+}
+
+const everyone = ['manager', 'supervisor', 'technician', 'observer'] as const
+
+export const NAV_ITEMS: NavItem[] = [
+  { to: '/round', label: 'Round', icon: ClipboardCheck, roles: ['manager', 'supervisor', 'technician'], primary: true },
+  { to: '/board', label: 'Board', icon: LayoutGrid, roles: everyone, primary: true },
+  { to: '/calendar', label: 'Calendar', icon: CalendarDays, roles: everyone, primary: true },
+  { to: '/on-call', label: 'On call', icon: Bell, roles: everyone, primary: true },
+  { to: '/tanks', label: 'Tanks', icon: Fish, roles: everyone },
+  { to: '/routines', label: 'Routines', icon: Repeat, roles: ['manager', 'supervisor', 'observer'] },
+  { to: '/roster', label: 'Roster', icon: CalendarClock, roles: ['manager', 'supervisor'] },
+  { to: '/reports', label: 'Reports', icon: BarChart3, roles: ['manager', 'supervisor', 'observer'] },
+  { to: '/people', label: 'People', icon: Users, roles: ['manager'] },
+]
+
+export const navFor = (role: Role) => NAV_ITEMS.filter((item) => item.roles.includes(role))
+export const homeFor = (role: Role) => (role === 'observer' ? '/board' : '/round')

@@ -1,0 +1,35 @@
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query'
+import { toast } from 'sonner'
+import { ApiError } from '../lib/api-client'
+
+function sendToSignIn() {
+  const here = window.location.pathname + window.location.search
+  if (!window.location.pathname.startsWith('/sign-in')) {
+    window.location.assign(`/sign-in?redirectTo=${encodeURIComponent(here)}`)
+  }
+}
+
+export function createQueryClient() {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        staleTime: 30_000,
+        retry: (count, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2,
+      },
+    },
+    queryCache: new QueryCache({
+      onError: (error, query) => {
+        if (error instanceof ApiError && error.status === 401) return sendToSignIn()
+        // Background refetch failed: keep the stale data on screen and say so once.
+        if (query.state.data !== undefined) toast.error(`Could not refresh: ${error.message}`)
+      },
+    }),
+    mutationCache: new MutationCache({
+      onError: (error) => {
+        if (error instanceof ApiError && error.status === 401) return sendToSignIn()
+        if (error instanceof ApiError && error.code === 'validation_failed' && error.fieldErrors) return
+        toast.error(error.message)
+      },
+    }),
+  })
+}

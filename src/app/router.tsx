@@ -1,0 +1,56 @@
+import type { QueryClient } from '@tanstack/react-query'
+import { createBrowserRouter, redirect } from 'react-router-dom'
+import { authQueries } from '../features/auth/api/auth-queries'
+import { homeFor } from './navigation'
+import { AppLayout, loader as appLoader } from './routes/app-layout'
+import { NotFound, RouteError } from './routes/route-error'
+
+type PlannedArea = Parameters<typeof import('./routes/coming-soon').ComingSoon>[0]['area']
+
+const planned = (path: string, area: PlannedArea) => ({
+  path,
+  lazy: async () => {
+    const { ComingSoon } = await import('./routes/coming-soon')
+    return { Component: () => <ComingSoon area={area} /> }
+  },
+})
+
+export function createRouter(queryClient: QueryClient) {
+  return createBrowserRouter([
+    { path: '/sign-in', lazy: () => import('./routes/sign-in-page'), ErrorBoundary: RouteError },
+    {
+      path: '/',
+      Component: AppLayout,
+      loader: appLoader(queryClient),
+      ErrorBoundary: RouteError,
+      HydrateFallback: () => null,
+      children: [
+        {
+          index: true,
+          loader: async () => redirect(homeFor((await queryClient.ensureQueryData(authQueries.me())).role)),
+        },
+        {
+          ErrorBoundary: RouteError,
+          children: [
+            planned('round', 'round'),
+            planned('board', 'board'),
+            planned('calendar', 'calendar'),
+            planned('on-call', 'on-call'),
+            planned('tanks', 'tanks'),
+            planned('routines', 'routines'),
+            planned('roster', 'roster'),
+            planned('reports', 'reports'),
+            {
+              path: 'people',
+              lazy: async () => {
+                const m = await import('./routes/people-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            { path: '*', Component: NotFound },
+          ],
+        },
+      ],
+    },
+  ])
+}

@@ -1,0 +1,56 @@
+import request from 'supertest'
+import type { Role } from '#shared/schemas/person'
+import { createApp } from '#server/app'
+import { createDataSource, setDataSource } from '#server/db/data-source'
+import { loadConfig, type AppConfig } from '#server/lib/config'
+import { createSessionStore } from '#server/modules/auth/session'
+import { createPerson } from '#server/modules/people/people.service'
+import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
+
+export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
+  return { ...loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: process.env.ROUNDTIDE_DB_NAME ?? 'roundtide_test' }), ...overrides }
+}
+
+/** One in-process app on the test database, with helpers to sign people in. */
+export async function startTestApp(overrides: Partial<AppConfig> = {}) {
+  const config = testConfig(overrides)
+  const dataSource = createDataSource(config.db)
+  await dataSource.initialize()
+  setDataSource(dataSource)
+  const stores: Array<ReturnType<typeof createSessionStore>> = []
+
+  function newApp() {
+    const store = createSessionStore(config)
+    stores.push(store)
+    return createApp({ config, sessionStore: store }).app
+  }
+
+  const app = newApp()
+
+  async function createPersonWithRole(role: Role, extra: Parameters<typeof buildPersonInput>[0] = {}) {
+    return createPerson(buildPersonInput({ role, ...extra }))
+  }
+
+  /** A supertest agent that keeps its session cookie, signed in as a new person of that role. */
+  async function signedInAgent(role: Role, target = app) {
+    const person = await createPersonWithRole(role)
+    const agent = request.agent(target)
+    await agent.post('/api/session').send({ email: person.email, password: TEST_PASSWORD }).expect(200)
+    return { agent, person }
+  }
+
+  return {
+    app,
+    config,
+    dataSource,
+    newApp,
+    createPersonWithRole,
+    signedInAgent,
+    async close() {
+      await Promise.all(stores.map((s) => s.close()))
+      await dataSource.destroy()
+    },
+  }
+}
+
+export type TestApp = Awaited<ReturnType<typeof startTestApp>>
