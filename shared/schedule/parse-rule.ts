@@ -57,16 +57,19 @@ function splitParts(value: string): Map<string, string> {
   return parts
 }
 
+function describeLimits(limits: NumberLimits): string {
+  if (limits.single) return `a whole number of at least ${limits.min}`
+  const sign = limits.signed ? '±' : ''
+  return `whole numbers from ${sign}${limits.min} to ${sign}${limits.max}`
+}
+
 function checkNumbers(name: string, text: string, limits: NumberLimits): void {
   const items = text.split(',')
   if (limits.single && items.length > 1) fail(`${name} takes a single number`)
   for (const item of items) {
     const wellFormed = (limits.signed ? /^[+-]?\d+$/ : /^\d+$/).test(item)
     const size = Math.abs(Number(item))
-    if (!wellFormed || size < limits.min || size > limits.max) {
-      const range = limits.signed ? `±${limits.min} to ±${limits.max}` : `${limits.min} to ${limits.max}`
-      fail(`${name}=${text}: each value must be a whole number from ${range}`)
-    }
+    if (!wellFormed || size < limits.min || size > limits.max) fail(`${name}=${text}: expected ${describeLimits(limits)}`)
   }
 }
 
@@ -93,6 +96,25 @@ function checkCombinations(parts: Map<string, string>): void {
   }
 }
 
+const LONGEST_MONTH_DAYS = [31, 29, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31]
+
+// rrule only checks its end (UNTIL, a window) when a date matches, so a rule that never matches
+// is walked up to year 9999 (seconds of work): catch the common impossible rules up front
+function checkDatesExist(parts: Map<string, string>): void {
+  const weekdays = parts.get('BYDAY')?.split(',') ?? []
+  const pastFifth = (weekday: string) => Math.abs(parseInt(weekday, 10)) > 5
+  if (parts.get('FREQ') === 'MONTHLY' && weekdays.length > 0 && weekdays.every(pastFifth)) {
+    fail(`BYDAY=${parts.get('BYDAY')} asks for a weekday past the 5th in a month, so the rule has no dates`)
+  }
+  const monthDays = parts.get('BYMONTHDAY')?.split(',').map((day) => Math.abs(Number(day))) ?? []
+  const months = parts.get('BYMONTH')?.split(',').map(Number) ?? []
+  if (monthDays.length === 0 || months.length === 0) return
+  const longest = Math.max(...months.map((month) => LONGEST_MONTH_DAYS[month - 1]))
+  if (monthDays.every((day) => day > longest)) {
+    fail(`BYMONTHDAY=${parts.get('BYMONTHDAY')} never falls in BYMONTH=${parts.get('BYMONTH')}, so the rule has no dates`)
+  }
+}
+
 function parseUntil(text: string | undefined): RuleUntil | null {
   if (text === undefined) return null
   const match = UNTIL.exec(text)
@@ -115,6 +137,7 @@ export function parseRule(rrule: string): ParsedRule {
     if (limits) checkNumbers(name, text, limits)
   }
   checkCombinations(parts)
+  checkDatesExist(parts)
   const until = parseUntil(parts.get('UNTIL'))
   try {
     return { value, options: RRule.parseString(value), parts, until }

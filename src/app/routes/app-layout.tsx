@@ -33,7 +33,7 @@ export function AppLayout() {
 
   return (
     <div className="min-h-dvh md:flex">
-      <aside className="hidden w-60 shrink-0 flex-col bg-tide-900 p-4 md:flex">
+      <aside className="hidden w-60 shrink-0 flex-col bg-tide-900 p-4 md:sticky md:top-0 md:flex md:h-dvh">
         <div className="mb-6 flex items-center gap-2 text-xl font-bold text-white">
           <img src="/icon.svg" alt="" className="size-8" /> Roundtide
         </div>

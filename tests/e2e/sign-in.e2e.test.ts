@@ -1,0 +1,52 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
+
+let s: BrowserSession
+beforeAll(async () => {
+  s = await startBrowserSession()
+})
+afterAll(() => s?.close())
+
+describe('signing in and out', () => {
+  test('a technician on a phone signs in, sees the round navigation without People, and signs out', async () => {
+    const tech = await s.createPerson('technician')
+    const { page, context } = await s.newPage(PHONE)
+    await s.signIn(page, tech.email)
+    await expect.poll(() => page.url()).toContain('/round')
+    const nav = page.getByRole('navigation', { name: 'Main' }).filter({ visible: true })
+    await nav.getByRole('link', { name: 'Round' }).waitFor()
+    expect(await nav.getByRole('link', { name: 'Board' }).isVisible()).toBe(true)
+    await page.getByRole('button', { name: 'More' }).click()
+    expect(await page.getByRole('link', { name: 'People' }).count()).toBe(0)
+    await screenshot(page, 'technician-phone-more')
+    await page.getByRole('button', { name: 'Sign out' }).click()
+    await page.waitForURL('**/sign-in')
+    await page.goto('/round')
+    await page.waitForURL('**/sign-in?redirectTo=%2Fround')
+    await context.close()
+  })
+
+  test('a manager on a desktop signs in and sees every section including People', async () => {
+    const manager = await s.createPerson('manager')
+    const { page, context } = await s.newPage(DESKTOP)
+    await s.signIn(page, manager.email)
+    const nav = page.getByRole('navigation', { name: 'Main' }).filter({ visible: true })
+    for (const name of ['Round', 'Board', 'Calendar', 'On call', 'Tanks', 'Routines', 'Roster', 'Reports', 'People']) {
+      await nav.getByRole('link', { name }).waitFor()
+    }
+    await screenshot(page, 'manager-desktop-home')
+    await context.close()
+  })
+
+  test('a wrong password shows a clear message and stays on the sign-in page', async () => {
+    const tech = await s.createPerson('technician')
+    const { page, context } = await s.newPage(PHONE)
+    await page.goto('/sign-in')
+    await page.getByLabel('E-mail').fill(tech.email)
+    await page.getByLabel('Password').fill('definitely-wrong')
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await page.getByRole('alert').filter({ hasText: 'do not match' }).waitFor()
+    expect(page.url()).toContain('/sign-in')
+    await context.close()
+  })
+})

@@ -1,0 +1,54 @@
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
+import path from 'node:path'
+import { setDataSource } from '#server/db/data-source'
+import { startServer } from '#server/start-server'
+import { createPerson } from '#server/modules/people/people.service'
+import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
+import type { Role } from '#shared/schemas/person'
+import { testConfig } from './test-app'
+
+export const PHONE = { width: 390, height: 844 }
+export const DESKTOP = { width: 1366, height: 900 }
+
+/** The built client and API on a free port, and Debian's chromium driven by playwright-core. */
+export async function startBrowserSession() {
+  const server = await startServer(testConfig({ port: 0 }), { clientDir: path.resolve('dist') })
+  const browser: Browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+  })
+
+  async function newPage(viewport = DESKTOP): Promise<{ context: BrowserContext; page: Page }> {
+    const context = await browser.newContext({ viewport, baseURL: server.url, serviceWorkers: 'block' })
+    const page = await context.newPage()
+    return { context, page }
+  }
+
+  async function signIn(page: Page, email: string, password = TEST_PASSWORD) {
+    await page.goto('/sign-in')
+    await page.getByLabel('E-mail').fill(email)
+    await page.getByLabel('Password').fill(password)
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'))
+  }
+
+  return {
+    url: server.url,
+    browser,
+    newPage,
+    signIn,
+    createPerson: (role: Role, extra: Parameters<typeof buildPersonInput>[0] = {}) => createPerson(buildPersonInput({ role, ...extra })),
+    async close() {
+      await browser.close()
+      await server.stop()
+      setDataSource(undefined as never)
+    },
+  }
+}
+
+export type BrowserSession = Awaited<ReturnType<typeof startBrowserSession>>
+
+export async function screenshot(page: Page, name: string) {
+  await page.screenshot({ path: path.join('test-results', `${name}.png`), fullPage: true })
+}
