@@ -1,11 +1,82 @@
+import { DateTime } from 'luxon'
+import { db } from '#server/db/data-source'
+import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } from '#server/modules/facility/facility.entities'
+import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
+import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { createPerson } from '#server/modules/people/people.service'
-import { buildPersonInput } from './factories'
+import { RoutineEntity } from '#server/modules/routines/routine.entity'
+import { materialise } from '#server/modules/tasks/materialiser'
+import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
+import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
+import { DEMO_ROUTINES } from './demo-routines'
+import { DEMO_AREAS, DEMO_BATCHES, DEMO_EQUIPMENT, DEMO_FACILITY, DEMO_SYSTEMS, DEMO_TANKS } from './demo-structure'
+import { buildPersonInput } from './factories'
 
-/** Loads the invented demo facility into an empty, migrated database. */
+const idsByCode = <T extends { id: number; code: string }>(rows: T[]) => new Map(rows.map((r) => [r.code, r.id]))
+
+/** Loads the invented demo facility into an empty, migrated database, anchored on today. */
 export async function seedDemo(demoPassword: string, log: (line: string) => void = console.log) {
+  const people = new Map<string, number>()
   for (const person of DEMO_PEOPLE) {
-    await createPerson(buildPersonInput({ ...person, password: demoPassword }))
+    people.set(person.email, (await createPerson(buildPersonInput({ ...person, password: demoPassword }))).id)
   }
-  log(`Seeded ${DEMO_PEOPLE.length} people.`)
+  const facility = await createFacilityIfMissing(DEMO_FACILITY)
+  const today = DateTime.now().setZone(facility.timeZone).startOf('day')
+
+  const areas = idsByCode(await db().getRepository(AreaEntity).save(DEMO_AREAS))
+  const systems = idsByCode(
+    await db().getRepository(SystemEntity).save(DEMO_SYSTEMS.map(({ area, ...s }) => ({ ...s, areaId: areas.get(area)! }))),
+  )
+  const tanks = idsByCode(
+    await db().getRepository(TankEntity).save(DEMO_TANKS.map(({ area, system, ...t }) => ({ ...t, areaId: areas.get(area)!, systemId: systems.get(system)! }))),
+  )
+  const equipment = idsByCode(
+    await db().getRepository(EquipmentEntity).save(DEMO_EQUIPMENT.map(({ area, ...e }) => ({ ...e, areaId: areas.get(area)! }))),
+  )
+  const batches = idsByCode(
+    await db().getRepository(BatchEntity).save(
+      DEMO_BATCHES.map(({ daysAgo, tanks: codes, ...batch }) => ({
+        ...batch,
+        arrivalDate: today.minus({ days: daysAgo }).toISODate()!,
+        tankIds: codes.map((c) => tanks.get(c)!),
+      })),
+    ),
+  )
+
+  await db().getRepository(ParameterEntity).save(DEMO_PARAMETERS.map(({ bands: _b, ...p }) => ({ ...p, derived: p.derived ?? false })))
+  await db().getRepository(LimitEntity).save([
+    ...DEMO_PARAMETERS.filter((p) => p.bands).map((p) => ({ parameterKey: p.key, scope: 'facility' as const, scopeId: null, ...p.bands! })),
+    ...DEMO_SYSTEM_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'system' as const, scopeId: systems.get(l.system)!, ...l.bands })),
+    ...DEMO_BATCH_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'batch' as const, scopeId: batches.get(l.batch)!, ...l.bands })),
+  ])
+
+  const lookup: Record<string, Map<string, number>> = { tank: tanks, system: systems, equipment, area: areas, area_tanks: areas, batch: batches }
+  const anchor = today.minus({ weeks: 8 }).toISODate()
+  await db().getRepository(RoutineEntity).save(
+    DEMO_ROUTINES.map((r) => ({
+      name: r.name,
+      category: r.category,
+      instructions: r.instructions,
+      targetKind: r.targetKind,
+      targetIds: r.targets.map((code) => lookup[r.targetKind].get(code)!),
+      onlyInUse: r.onlyInUse ?? true,
+      rrule: r.rrule,
+      dtstart: `${anchor}T${r.time}:00`,
+      durationMinutes: r.durationMinutes,
+      windowBeforeMinutes: 30,
+      graceMinutes: r.graceMinutes,
+      priority: r.welfareCritical ? ('welfare_critical' as const) : ('routine' as const),
+      assigneeRule: (r.assignee.kind === 'named' ? { kind: 'person', personId: people.get(r.assignee.email)! } : r.assignee) as AssigneeRule,
+      requiredReadings: r.readings,
+      activeFrom: null,
+      activeTo: null,
+      paused: false,
+      skipDates: [],
+      ladderId: null,
+      version: 1,
+    })),
+  )
+  const { created } = await materialise()
+  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines and ${created} tasks from ${today.toISODate()}.`)
 }

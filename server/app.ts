@@ -13,7 +13,11 @@ import { configurePassport } from './modules/auth/passport'
 import { requireSameOrigin } from './modules/auth/same-origin'
 import { createSessionMiddleware, type SessionStore } from './modules/auth/session'
 import { healthRouter } from './modules/health/health.routes'
+import { facilityRouter } from './modules/facility/facility.routes'
+import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter } from './modules/people/people.routes'
+import { routinesRouter } from './modules/routines/routines.routes'
+import { tasksRouter } from './modules/tasks/tasks.routes'
 
 export interface AppDeps {
   config: AppConfig
@@ -56,6 +60,10 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use(sessionMiddleware, passport.session())
   api.use('/', authRouter(config))
   api.use('/people', peopleRouter)
+  api.use('/', facilityRouter)
+  api.use('/', parametersRouter)
+  api.use('/routines', routinesRouter)
+  api.use('/tasks', tasksRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

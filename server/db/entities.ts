@@ -1,4 +1,11 @@
+import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
+import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
+import { RoutineEntity } from '../modules/routines/routine.entity'
+import { TaskEntity } from '../modules/tasks/task.entity'
 
-/** Every table the app maps; migrations must match these (checked by `npm run db:check`). */
-export const entities = [PersonEntity]
+/** Every table the app maps; a migration must match these. */
+export const entities = [
+  PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
+  ParameterEntity, LimitEntity, RoutineEntity, TaskEntity,
+]

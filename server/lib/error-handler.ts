@@ -26,6 +26,15 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     })
     return
   }
+  const multerCode = (err as { name?: string; code?: string })?.name === 'MulterError' ? (err as { code: string }).code : null
+  if (multerCode === 'LIMIT_FILE_SIZE') {
+    res.status(413).json({ error: { code: 'payload_too_large', message: 'That file is too large.' } })
+    return
+  }
+  if (multerCode) {
+    res.status(400).json({ error: { code: 'validation_failed', message: `The upload was refused (${multerCode}).` } })
+    return
+  }
   const bodyErr = err as BodyParserError
   if (bodyErr?.type === 'entity.parse.failed') {
     res.status(400).json({ error: { code: 'validation_failed', message: 'The request body is not valid JSON.' } })

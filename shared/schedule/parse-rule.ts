@@ -5,7 +5,9 @@ import type { WallTime } from './zone-time'
 type RRuleModule = typeof rruleNamespace
 // rrule 2.8.1 ships CommonJS as "main" and ESM as "module": Node ESM (tsx) sees only a
 // `default` export holding the CommonJS object, while Vite and Vitest see the named exports.
-const rruleModule: RRuleModule = (rruleNamespace as { default?: RRuleModule }).default ?? rruleNamespace
+// Reflect.get keeps the bundler from warning that the ESM build has no default export.
+const commonJsExports = Reflect.get(rruleNamespace, 'default') as RRuleModule | undefined
+const rruleModule: RRuleModule = commonJsExports ?? rruleNamespace
 
 export const RRule = rruleModule.RRule
 

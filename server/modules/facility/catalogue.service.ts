@@ -1,0 +1,61 @@
+import type { EntitySchema, ObjectLiteral } from 'typeorm'
+import type { z } from 'zod'
+import { db } from '../../db/data-source'
+import { conflict, notFound } from '../../lib/errors'
+
+type WithId = ObjectLiteral & { id: number }
+
+/**
+ * Plain list/get/create/update/remove for the facility's catalogues (areas, systems, tanks,
+ * equipment, batches): they differ only in shape, so one set of functions serves them all.
+ */
+export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
+  entity: EntitySchema<T>,
+  inputSchema: S,
+  label: string,
+  opts: { order?: Record<string, 'ASC' | 'DESC'>; onChange?: (before: T | null, after: T | null) => Promise<void> } = {},
+) {
+  const repo = () => db().getRepository(entity)
+
+  async function get(id: number): Promise<T> {
+    const row = await repo().findOneBy({ id } as never)
+    if (!row) throw notFound(`That ${label}`)
+    return row
+  }
+
+  async function assertCodeFree(code: unknown, exceptId?: number) {
+    if (typeof code !== 'string') return
+    const other = await repo().findOneBy({ code } as never)
+    if (other && other.id !== exceptId) throw conflict(`Another ${label} already has the code ${code}.`)
+  }
+
+  return {
+    list: () => repo().find({ order: (opts.order ?? { code: 'ASC' }) as never }),
+    get,
+    async create(input: unknown): Promise<T> {
+      const data = inputSchema.parse(input) as Omit<T, 'id'>
+      await assertCodeFree((data as ObjectLiteral).code)
+      const saved = (await repo().save(repo().create(data as never))) as unknown as T
+      await opts.onChange?.(null, saved)
+      return saved
+    },
+    async update(id: number, input: unknown): Promise<T> {
+      const before = await get(id)
+      const data = (inputSchema as unknown as z.ZodObject).partial().parse(input) as Partial<T>
+      await assertCodeFree((data as ObjectLiteral).code, id)
+      const after = await repo().save({ ...before, ...data })
+      await opts.onChange?.(before, after)
+      return after
+    },
+    async remove(id: number): Promise<void> {
+      const before = await get(id)
+      try {
+        await repo().delete(id)
+      } catch (err) {
+        if ((err as { code?: string }).code === 'ER_ROW_IS_REFERENCED_2') throw conflict(`That ${label} is still in use.`)
+        throw err
+      }
+      await opts.onChange?.(before, null)
+    },
+  }
+}

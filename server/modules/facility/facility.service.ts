@@ -1,0 +1,24 @@
+import { UpdateFacilityInputSchema, type Facility } from '#shared/schemas/facility'
+import { db } from '../../db/data-source'
+import { notFound } from '../../lib/errors'
+import { FacilityEntity } from './facility.entities'
+
+const repo = () => db().getRepository(FacilityEntity)
+
+/** Roundtide runs one facility per database; the first row is it. */
+export async function getFacility(): Promise<Facility> {
+  const [row] = await repo().find({ order: { id: 'ASC' }, take: 1 })
+  if (!row) throw notFound('The facility (run the seed or create it first)')
+  return row
+}
+
+export async function updateFacility(input: unknown): Promise<Facility> {
+  const data = UpdateFacilityInputSchema.parse(input)
+  const current = await getFacility()
+  return repo().save({ ...current, ...data })
+}
+
+export async function createFacilityIfMissing(facility: Omit<Facility, 'id'>): Promise<Facility> {
+  const [row] = await repo().find({ order: { id: 'ASC' }, take: 1 })
+  return row ?? repo().save(repo().create(facility))
+}

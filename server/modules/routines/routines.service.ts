@@ -1,0 +1,71 @@
+import { validateRule } from '#shared/schedule/describe-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
+import { RoutineInputSchema, UpdateRoutineInputSchema, type Routine, type RoutineData } from '#shared/schemas/routine'
+import { db } from '../../db/data-source'
+import { conflict, notFound, validationError } from '../../lib/errors'
+import { getFacility } from '../facility/facility.service'
+import { ParameterEntity } from '../parameters/parameter.entities'
+import { materialise, rematerialiseRoutine, removeUntouchedFutureTasks } from '../tasks/materialiser'
+import { RoutineEntity, type RoutineRow } from './routine.entity'
+
+const repo = () => db().getRepository(RoutineEntity)
+
+function toRoutine(row: RoutineRow): Routine {
+  const { createdAt: _c, updatedAt: _u, ...routine } = row
+  void _c
+  void _u
+  return routine
+}
+
+export async function listRoutines(): Promise<Routine[]> {
+  return (await repo().find({ order: { category: 'ASC', name: 'ASC' } })).map(toRoutine)
+}
+
+export async function getRoutine(id: number): Promise<Routine> {
+  const row = await repo().findOneBy({ id })
+  if (!row) throw notFound('That routine')
+  return toRoutine(row)
+}
+
+/** Checks what the schema cannot: the rule expands, the readings exist. */
+async function checkRoutine(data: RoutineData) {
+  const ruleError = validateRule(data.rrule)
+  if (ruleError) throw validationError(ruleError, { rrule: [ruleError] })
+  try {
+    expandRule({ rrule: data.rrule, dtstart: data.dtstart, tzid: (await getFacility()).timeZone, limit: 1 })
+  } catch (err) {
+    throw validationError((err as Error).message, { rrule: [(err as Error).message] })
+  }
+  const known = new Set((await db().getRepository(ParameterEntity).find()).map((p) => p.key))
+  const unknown = data.requiredReadings.filter((k) => !known.has(k))
+  if (unknown.length) throw validationError(`Unknown reading: ${unknown.join(', ')}`, { requiredReadings: [`Unknown: ${unknown.join(', ')}`] })
+}
+
+export async function createRoutine(input: unknown): Promise<Routine> {
+  const data = RoutineInputSchema.parse(input)
+  await checkRoutine(data)
+  const saved = await repo().save(repo().create({ ...data, version: 1 }))
+  if (!saved.paused) await materialise({ routineIds: [saved.id], from: new Date() })
+  return toRoutine(saved)
+}
+
+export async function updateRoutine(id: number, input: unknown): Promise<Routine> {
+  const { version, ...data } = UpdateRoutineInputSchema.parse(input)
+  const current = await repo().findOneBy({ id })
+  if (!current) throw notFound('That routine')
+  if (current.version !== version) {
+    throw conflict('Someone changed this routine after you opened it. Reload to see their changes.', { currentVersion: current.version })
+  }
+  await checkRoutine(data)
+  const saved = await repo().save({ ...current, ...data, version: current.version + 1 })
+  if (saved.paused) await removeUntouchedFutureTasks({ routineId: id })
+  else await rematerialiseRoutine(id)
+  return toRoutine(saved)
+}
+
+export async function deleteRoutine(id: number): Promise<void> {
+  await getRoutine(id)
+  await removeUntouchedFutureTasks({ routineId: id })
+  // Past and kept tasks stay as records; they keep the routine id for history.
+  await repo().delete(id)
+}

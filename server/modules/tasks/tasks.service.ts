@@ -1,0 +1,81 @@
+import { DateTime } from 'luxon'
+import { CreateTaskInputSchema, type Task, type TaskListQuery } from '#shared/schemas/task'
+import { db } from '../../db/data-source'
+import { notFound, validationError } from '../../lib/errors'
+import { PersonEntity } from '../people/person.entity'
+import { TaskEntity, type TaskRow } from './task.entity'
+import { toTask, type TaskContext } from './task.mapper'
+import { loadCatalogue, resolveTargets } from './targets'
+
+const repo = () => db().getRepository(TaskEntity)
+
+export async function loadTaskContext(): Promise<TaskContext> {
+  const [cat, people] = await Promise.all([loadCatalogue(), db().getRepository(PersonEntity).find({ select: { id: true, name: true } })])
+  return { cat, names: new Map(people.map((p) => [p.id, p.name])) }
+}
+
+export async function listTasks(query: TaskListQuery): Promise<Task[]> {
+  const qb = repo().createQueryBuilder('t')
+  if (query.date) qb.where('t.localDate = :date', { date: query.date })
+  else qb.where('t.localDate BETWEEN :from AND :to', { from: query.from, to: query.to })
+  if (query.areaId) qb.andWhere('t.areaId = :areaId', { areaId: query.areaId })
+  if (query.category) qb.andWhere('t.category = :category', { category: query.category })
+  if (query.status) qb.andWhere('t.status = :status', { status: query.status })
+  if (query.routineId) qb.andWhere('t.routineId = :routineId', { routineId: query.routineId })
+  if (query.tankId) qb.andWhere('t.tankId = :tankId', { tankId: query.tankId })
+  if (query.assigneeId === 'none') qb.andWhere('t.assigneeId IS NULL')
+  else if (query.assigneeId) qb.andWhere('t.assigneeId = :assigneeId', { assigneeId: query.assigneeId })
+  qb.orderBy('t.dueAt', 'ASC').addOrderBy('t.id', 'ASC')
+  const [rows, ctx] = await Promise.all([qb.getMany(), loadTaskContext()])
+  return rows.map((r) => toTask(r, ctx))
+}
+
+export async function getTaskRow(id: number): Promise<TaskRow> {
+  const row = await repo().findOneBy({ id })
+  if (!row) throw notFound('That task')
+  return row
+}
+
+export async function getTask(id: number): Promise<Task> {
+  return toTask(await getTaskRow(id), await loadTaskContext())
+}
+
+/** A one-off task, outside any routine (e.g. "check the spare pump today"). */
+export async function createOneOffTask(input: unknown): Promise<Task> {
+  const data = CreateTaskInputSchema.parse(input)
+  const ctx = await loadTaskContext()
+  const zone = ctx.cat.facility.timeZone
+  const local = DateTime.fromISO(data.localStart, { zone })
+  if (!local.isValid) throw validationError('That start time is not valid.', { localStart: ['Not a valid date and time'] })
+  const [target] =
+    data.targetKind === 'facility'
+      ? resolveTargets({ targetKind: 'facility', targetIds: [], onlyInUse: false }, ctx.cat)
+      : resolveTargets({ targetKind: data.targetKind, targetIds: data.targetId ? [data.targetId] : [], onlyInUse: false }, ctx.cat)
+  if (!target) throw validationError('That target does not exist.', { targetId: ['Choose an existing target'] })
+  const due = local.toJSDate()
+  const saved = await repo().save(
+    repo().create({
+      routineId: null,
+      title: data.title,
+      category: data.category,
+      instructions: data.instructions,
+      priority: data.priority,
+      targetKind: target.kind,
+      targetId: target.id,
+      tankId: target.tankId,
+      areaId: target.areaId,
+      localDate: local.toISODate()!,
+      localStart: local.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      dueAt: due,
+      windowStartAt: new Date(due.getTime() - 30 * 60_000),
+      graceUntil: new Date(due.getTime() + data.graceMinutes * 60_000),
+      durationMinutes: data.durationMinutes,
+      status: 'planned',
+      assigneeId: data.assigneeId,
+      assignedManually: data.assigneeId !== null,
+      requiredReadings: data.requiredReadings,
+      version: 1,
+    }),
+  )
+  return toTask(saved, ctx)
+}

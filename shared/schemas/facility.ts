@@ -1,0 +1,102 @@
+import { z } from 'zod'
+
+const code = z.string().trim().min(1, 'Required').max(40).regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
+const name = z.string().trim().min(1, 'Required').max(120)
+const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
+const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+
+export function isValidTimeZone(tz: string) {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: tz })
+    return true
+  } catch {
+    return false
+  }
+}
+
+export const FacilitySchema = z.object({
+  id: z.number().int(),
+  name,
+  timeZone: z.string().refine(isValidTimeZone, 'Unknown IANA time zone'),
+  handoverTime: hhmm,
+  quarantineDays: z.number().int().min(0).max(365),
+  arrivalTempDiffLimitC: z.number().min(0).max(10),
+  minOxygenHours: z.number().min(0).max(240),
+})
+export type Facility = z.infer<typeof FacilitySchema>
+export const UpdateFacilityInputSchema = FacilitySchema.omit({ id: true }).partial()
+export type UpdateFacilityInput = z.infer<typeof UpdateFacilityInputSchema>
+
+export const AreaSchema = z.object({
+  id: z.number().int(),
+  code,
+  name,
+  roundOrder: z.number().int().min(0).max(10000),
+  quarantine: z.boolean(),
+})
+export type Area = z.infer<typeof AreaSchema>
+export const AreaInputSchema = AreaSchema.omit({ id: true })
+export type AreaInput = z.infer<typeof AreaInputSchema>
+
+export const SystemSchema = z.object({
+  id: z.number().int(),
+  code,
+  name,
+  areaId: z.number().int().nullable(),
+  volumeL: z.number().positive().max(1e8),
+  salinitySetpoint: z.number().min(0).max(45).nullable(),
+})
+export type System = z.infer<typeof SystemSchema>
+export const SystemInputSchema = SystemSchema.omit({ id: true })
+export type SystemInput = z.infer<typeof SystemInputSchema>
+
+export const TANK_KINDS = ['tank', 'bin'] as const
+export const TankSchema = z.object({
+  id: z.number().int(),
+  code,
+  name,
+  areaId: z.number().int(),
+  systemId: z.number().int().nullable(),
+  volumeL: z.number().positive().max(1e7),
+  kind: z.enum(TANK_KINDS),
+  inUse: z.boolean(),
+})
+export type Tank = z.infer<typeof TankSchema>
+export const TankInputSchema = TankSchema.omit({ id: true })
+export type TankInput = z.infer<typeof TankInputSchema>
+
+export const EquipmentSchema = z.object({
+  id: z.number().int(),
+  code,
+  name,
+  kind: z.string().trim().min(1, 'Required').max(60),
+  areaId: z.number().int().nullable(),
+})
+export type Equipment = z.infer<typeof EquipmentSchema>
+export const EquipmentInputSchema = EquipmentSchema.omit({ id: true })
+export type EquipmentInput = z.infer<typeof EquipmentInputSchema>
+
+export const BATCH_STATUSES = ['quarantine', 'active', 'dispatched', 'ended'] as const
+export const BatchSchema = z.object({
+  id: z.number().int(),
+  code,
+  species: z.string().trim().min(1, 'Required').max(120),
+  origin: z.string().trim().max(200),
+  arrivalDate: isoDate,
+  count: z.number().int().min(0).max(10_000_000),
+  meanWeightG: z.number().min(0).max(100_000),
+  tankIds: z.array(z.number().int()),
+  status: z.enum(BATCH_STATUSES),
+})
+export type Batch = z.infer<typeof BatchSchema>
+export const BatchInputSchema = BatchSchema.omit({ id: true })
+export type BatchInput = z.infer<typeof BatchInputSchema>
+
+export const IdParamSchema = z.object({ id: z.coerce.number().int().positive() })
+
+export const TankImportResultSchema = z.object({
+  created: z.number().int(),
+  updated: z.number().int(),
+  unchanged: z.number().int(),
+})
+export type TankImportResult = z.infer<typeof TankImportResultSchema>
