@@ -77,6 +77,7 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
       version: 1,
     })),
   )
-  const { created } = await materialise()
+  // The demo starts at the beginning of today, so the morning's round is there whenever it is run.
+  const { created } = await materialise({ from: today.toJSDate() })
   log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines and ${created} tasks from ${today.toISODate()}.`)
 }

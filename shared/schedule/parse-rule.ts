@@ -15,7 +15,7 @@ export const RRule = rruleModule.RRule
 export type RuleUntil = WallTime & { isUtc: boolean; isDateOnly: boolean }
 
 export type ParsedRule = {
-  /** The rule value, upper-cased, without the `RRULE:` prefix. */
+  /** The rule value tidied: upper-cased, no `RRULE:` prefix, no empty parts. */
   value: string
   /** rrule's options, minus dtstart (which the caller supplies). */
   options: Partial<Options>
@@ -49,7 +49,8 @@ function fail(reason: string): never {
 
 function splitParts(value: string): Map<string, string> {
   const parts = new Map<string, string>()
-  for (const part of value.split(';')) {
+  // a trailing or doubled ";" is a common slip when rules are pasted, so empty parts are skipped
+  for (const part of value.split(';').filter((piece) => piece !== '')) {
     const [name, partValue, ...rest] = part.split('=')
     if (!name || !partValue || rest.length > 0) fail(`"${part}" is not written as NAME=VALUE`)
     if (!(name in NUMBER_PARTS) && !OTHER_PARTS.includes(name)) fail(`unknown part "${name}"`)
@@ -83,7 +84,7 @@ function checkCombinations(parts: Map<string, string>): void {
     const match = WEEKDAY.exec(day)
     if (!match) fail(`BYDAY value "${day}" is not a weekday such as MO, 2TU or -1FR`)
     const ordinal = match[1]
-    if (ordinal !== undefined && (Number(ordinal) < 1 || Number(ordinal) > 53)) fail(`BYDAY value "${day}" is out of range`)
+    if (ordinal !== undefined && (Number(ordinal) < 1 || Number(ordinal) > 53)) fail(`BYDAY value "${day}": positions go from 1 to 53`)
     if (ordinal !== undefined && freq !== 'MONTHLY' && freq !== 'YEARLY') {
       fail(`BYDAY with a position (like ${day}) needs FREQ=MONTHLY or FREQ=YEARLY`)
     }
@@ -127,10 +128,11 @@ function parseUntil(text: string | undefined): RuleUntil | null {
 
 /** Parses and checks one RRULE value (with or without the `RRULE:` prefix). Throws a readable Error. */
 export function parseRule(rrule: string): ParsedRule {
-  const value = rrule.trim().replace(/^RRULE:/i, '').toUpperCase()
-  if (value === '') fail('the rule is empty')
-  if (/[\r\n]/.test(value)) fail('expected a single RRULE value, without DTSTART or other lines')
-  const parts = splitParts(value)
+  const text = rrule.trim().replace(/^RRULE:/i, '').toUpperCase()
+  if (/[\r\n]/.test(text)) fail('expected a single RRULE value, without DTSTART or other lines')
+  const parts = splitParts(text)
+  if (parts.size === 0) fail('the rule is empty')
+  const value = [...parts].map(([name, partValue]) => `${name}=${partValue}`).join(';')
   const freq = parts.get('FREQ')
   if (freq === undefined) fail('FREQ is required (for example FREQ=DAILY)')
   if (!FREQUENCIES.includes(freq)) fail(`FREQ=${freq} is not one of ${FREQUENCIES.join(', ')}`)

@@ -26,8 +26,8 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
   const cat = await loadCatalogue()
   const repo = db().getRepository(RoutineEntity)
   const routines = (opts.routineIds ? await repo.findBy(opts.routineIds.map((id) => ({ id }))) : await repo.find()).filter((r) => !r.paused)
-  // From the start of the facility's today, so a server started mid-afternoon still shows the morning.
-  const from = opts.from ?? DateTime.now().setZone(cat.facility.timeZone).startOf('day').toJSDate()
+  // From now on by default: earlier occurrences of a new rule would be born overdue.
+  const from = opts.from ?? new Date()
   const until = new Date(from.getTime() + (opts.horizonDays ?? DEFAULT_HORIZON_DAYS) * 86_400_000)
   let created = 0
   for (const [index, routine] of routines.entries()) {

@@ -8,10 +8,11 @@ const localsOf = (input: ExpandRuleInput) => expandRule(input).map((occurrence) 
 // Expected values here are common practice / computed by hand (Berlin is UTC+01:00 in January,
 // Sydney UTC+10:00 after 6 April 2025).
 describe('expandRule inputs and bounds', () => {
-  it('when the rule comes with or without the RRULE: prefix or in lower case, then the result is the same', () => {
+  it('when the rule comes with or without the RRULE: prefix, in lower case or with a trailing semicolon, then the result is the same', () => {
     const plain = expandRule({ ...berlinMorning, rrule: 'FREQ=DAILY;COUNT=3' })
     expect(expandRule({ ...berlinMorning, rrule: 'RRULE:FREQ=DAILY;COUNT=3' })).toEqual(plain)
     expect(expandRule({ ...berlinMorning, rrule: ' rrule:freq=daily;count=3 ' })).toEqual(plain)
+    expect(expandRule({ ...berlinMorning, rrule: 'FREQ=DAILY;COUNT=3;' })).toEqual(plain)
   })
 
   it('when UNTIL is given in UTC, then it is compared as an instant and includes an occurrence exactly at it', () => {
