@@ -13,6 +13,7 @@ import { configurePassport } from './modules/auth/passport'
 import { requireSameOrigin } from './modules/auth/same-origin'
 import { createSessionMiddleware, type SessionStore } from './modules/auth/session'
 import { healthRouter } from './modules/health/health.routes'
+import { completionsRouter } from './modules/completions/completions.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter } from './modules/people/people.routes'
@@ -64,6 +65,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', parametersRouter)
   api.use('/routines', routinesRouter)
   api.use('/tasks', tasksRouter)
+  api.use('/', completionsRouter(config))
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

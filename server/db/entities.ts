@@ -1,3 +1,4 @@
+import { AlertEntity, CompletionEntity, PhotoEntity, ReadingEntity } from '../modules/completions/completion.entities'
 import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
@@ -7,5 +8,5 @@ import { TaskEntity } from '../modules/tasks/task.entity'
 /** Every table the app maps; a migration must match these. */
 export const entities = [
   PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
-  ParameterEntity, LimitEntity, RoutineEntity, TaskEntity,
+  ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
 ]

@@ -4,6 +4,7 @@
  * CDFs come from the incomplete gamma and beta functions (Abramowitz & Stegun 1964, 26.2.30 and 26.7.1):
  *   Φ(x)      = ½ [1 + P(½, x²/2)]                       for x ≥ 0
  *   F_ν(t)    = 1 − ½ I_{ν/(ν+t²)}(ν/2, ½)               for t ≥ 0
+ *             = ½ + ½ I_{t²/(ν+t²)}(½, ν/2)              (same, by I_x(a,b) = 1 − I_{1−x}(b,a))
  * Quantiles invert the CDF by bisection: slower than a closed-form approximation but needs no tuned
  * coefficients and is accurate to the CDF itself (about 1e-13 relative here), which is far more than a
  * sample-size calculation can use. The whole file can be swapped for a library inverse without
@@ -33,7 +34,13 @@ export function studentTCdf(t: number, df: number): number {
   requireDegreesOfFreedom(df)
   if (Number.isNaN(t)) throw new RangeError('studentTCdf needs a number, got NaN')
   if (t === 0) return 0.5
-  const tail = 0.5 * regularizedIncompleteBeta(df / (df + t * t), df / 2, 0.5)
+  const tSquared = t * t
+  // Pass whichever of x = ν/(ν+t²) and 1 − x is the smaller, computed directly: forming 1 − x from a
+  // value of x near 1 would throw away digits when ν is large.
+  const tail =
+    tSquared < df
+      ? 0.5 * (1 - regularizedIncompleteBeta(tSquared / (df + tSquared), 0.5, df / 2))
+      : 0.5 * regularizedIncompleteBeta(df / (df + tSquared), df / 2, 0.5)
   return t > 0 ? 1 - tail : tail
 }
 

@@ -42,11 +42,24 @@ function ratioToNumber(numerator: bigint, denominator: bigint, exponent: number)
   return negative ? -value : value
 }
 
-export type ExactMoments = { count: number; mean: number; variance: number }
+/**
+ * √(numerator / denominator × 10^exponent) for an even exponent, without forming the square first:
+ * the variance of values near 1e300 overflows a double although their SD does not.
+ */
+function sqrtOfRatioToNumber(numerator: bigint, denominator: bigint, exponent: number): number {
+  if (numerator === 0n) return 0
+  const digitGap = numerator.toString().length - denominator.toString().length
+  // Pull an even power of ten out so the remaining ratio sits comfortably inside double range.
+  const evenShift = 2 * Math.floor(digitGap / 2)
+  const scaledRatio = ratioToNumber(numerator, denominator, -evenShift)
+  return Number(`${Math.sqrt(scaledRatio)}e${(exponent + evenShift) / 2}`)
+}
+
+export type ExactMoments = { count: number; mean: number; sd: number }
 
 /**
- * Mean and sample variance (n − 1 divisor) of finite values, exact up to the final rounding.
- * variance = (n Σx² − (Σx)²) / (n (n − 1)); NaN when there is a single value.
+ * Mean and sample standard deviation (n − 1 divisor) of finite values, exact up to the final rounding:
+ * sd² = (n Σx² − (Σx)²) / (n (n − 1)). sd is NaN when there is a single value.
  */
 export function exactMoments(values: readonly number[]): ExactMoments {
   const count = values.length
@@ -63,7 +76,7 @@ export function exactMoments(values: readonly number[]): ExactMoments {
   }
   const n = BigInt(count)
   const mean = ratioToNumber(sum, n, commonExponent)
-  if (count === 1) return { count, mean, variance: Number.NaN }
-  const variance = ratioToNumber(n * sumOfSquares - sum * sum, n * (n - 1n), 2 * commonExponent)
-  return { count, mean, variance }
+  if (count === 1) return { count, mean, sd: Number.NaN }
+  const sd = sqrtOfRatioToNumber(n * sumOfSquares - sum * sum, n * (n - 1n), 2 * commonExponent)
+  return { count, mean, sd }
 }

@@ -1,0 +1,53 @@
+import { Router } from 'express'
+import multer from 'multer'
+import { z } from 'zod'
+import { IdParamSchema } from '#shared/schemas/facility'
+import type { AppConfig } from '../../lib/config'
+import { AppError } from '../../lib/errors'
+import { publishTask } from '../../realtime/task-events'
+import { requireRole, signedIn } from '../auth/require-role'
+import { getTask } from '../tasks/tasks.service'
+import { takeTask } from '../tasks/take-task.service'
+import { completeTask } from './completions.service'
+import { PHOTO_MAX_BYTES, listPhotos, photoFile, savePhoto } from './photos.service'
+
+const doers = requireRole('manager', 'supervisor', 'technician')
+
+export function completionsRouter(config: AppConfig) {
+  const router = Router()
+  const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: PHOTO_MAX_BYTES, files: 1 } })
+
+  router.post('/tasks/:id/completion', doers, async (req, res) => {
+    const { id } = IdParamSchema.parse(req.params)
+    const result = await completeTask(id, req.user!, req.body)
+    publishTask('task:updated', result.task)
+    if (result.recheckTaskId) publishTask('task:created', await getTask(result.recheckTaskId))
+    res.json(result)
+  })
+
+  router.post('/tasks/:id/take', doers, async (req, res) => {
+    const task = await takeTask(IdParamSchema.parse(req.params).id, req.user!)
+    publishTask('task:updated', task)
+    res.json(task)
+  })
+
+  router.post('/tasks/:id/photos', doers, upload.single('photo'), async (req, res) => {
+    const { id } = IdParamSchema.parse(req.params)
+    if (!req.file) throw new AppError(400, 'validation_failed', 'Attach a photo in the "photo" field.', { fieldErrors: { photo: ['Required'] } })
+    const photo = await savePhoto(config.uploadDir, id, req.user!.id, req.file)
+    res.status(201).json({ id: photo.id, mimeType: photo.mimeType, sizeBytes: photo.sizeBytes })
+  })
+
+  router.get('/tasks/:id/photos', signedIn, async (req, res) => {
+    const rows = await listPhotos(IdParamSchema.parse(req.params).id)
+    res.json(rows.map((p) => ({ id: p.id, mimeType: p.mimeType, sizeBytes: p.sizeBytes, createdAt: p.createdAt.toISOString() })))
+  })
+
+  router.get('/photos/:photoId', signedIn, async (req, res) => {
+    const { photoId } = z.object({ photoId: z.string().uuid() }).parse(req.params)
+    const file = await photoFile(config.uploadDir, photoId)
+    res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow' })
+  })
+
+  return router
+}

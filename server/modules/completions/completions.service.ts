@@ -1,0 +1,128 @@
+import { bandFor, pickLimit, worstBand } from '#shared/readings/band'
+import { deriveReadings } from '#shared/readings/derive'
+import { CompletionInputSchema, type CompletionResult, type Reading } from '#shared/schemas/completion'
+import type { Person } from '#shared/schemas/person'
+import { db } from '../../db/data-source'
+import { conflict, validationError } from '../../lib/errors'
+import { ParameterEntity } from '../parameters/parameter.entities'
+import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
+import { toTask } from '../tasks/task.mapper'
+import { CompletionEntity, ReadingEntity } from './completion.entities'
+import { createRecheck, startCriticalAlert } from './follow-ups'
+import { readingContextFor } from './reading-context'
+import { assertMayComplete } from './who-may-complete'
+
+/**
+ * The server's judgement of a completion: every required reading present and physically
+ * possible, derived values worked out, each reading banded against the limits for that place,
+ * a flag and a recheck when anything is out of the ok range, and exactly one winner when two
+ * people complete the same task.
+ */
+export async function completeTask(taskId: number, person: Person, input: unknown): Promise<CompletionResult> {
+  const data = CompletionInputSchema.parse(input)
+  const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
+  if (replay) {
+    if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
+    return replay.response as CompletionResult
+  }
+  const task = await getTaskRow(taskId)
+  assertMayComplete(task, person)
+  await assertStillOpen(task)
+  if (data.version !== undefined && data.version !== task.version) {
+    throw conflict('This task changed since you opened it (it may have been moved or reassigned). Check it and try again.', { currentVersion: task.version })
+  }
+
+  const doneAt = data.doneAt ? new Date(data.doneAt) : new Date()
+  const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings) : { rows: [] as Reading[], notes: [] as string[] }
+  const flag = data.outcome === 'done' ? worstBand(readings.rows.map((r) => r.band)) : 'ok'
+  const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
+  const context = await readingContextFor(task)
+
+  const result = await db().transaction(async (manager) => {
+    const claimed = await manager
+      .createQueryBuilder()
+      .update(TaskEntity)
+      .set({
+        status: data.outcome,
+        flag: flag === 'ok' ? null : flag,
+        lateMinutes,
+        completedAt: doneAt,
+        completedById: person.id,
+        assigneeId: task.assigneeId ?? person.id,
+        version: () => 'version + 1',
+      })
+      .where('id = :id AND version = :version', { id: task.id, version: task.version })
+      .andWhere("status NOT IN ('done', 'skipped')")
+      .execute()
+    if (!claimed.affected) return null
+    await manager.getRepository(CompletionEntity).insert({
+      id: data.completionId, taskId: task.id, personId: person.id, outcome: data.outcome,
+      skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
+    })
+    if (readings.rows.length) {
+      await manager.getRepository(ReadingEntity).insert(
+        readings.rows.map((r) => ({
+          completionId: data.completionId, taskId: task.id, tankId: context.tankId, systemId: context.systemId,
+          parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: doneAt, personId: person.id,
+        })),
+      )
+    }
+    return true
+  })
+  if (!result) {
+    // Lost the race: say who won.
+    await assertStillOpen(await getTaskRow(taskId))
+    throw conflict('This task changed while you were completing it. Check it and try again.')
+  }
+
+  const updated = await getTaskRow(taskId)
+  const recheckTaskId = flag === 'ok' ? null : (await createRecheck(updated, person.id)).id
+  if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
+  const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
+  await db().getRepository(CompletionEntity).update(data.completionId, { response: response as never })
+  return response
+}
+
+async function assertStillOpen(task: TaskRow) {
+  if (task.status !== 'done' && task.status !== 'skipped') return
+  const ctx = await loadTaskContext()
+  const who = (task.completedById && ctx.names.get(task.completedById)) || 'someone'
+  const when = task.completedAt?.toISOString() ?? 'earlier'
+  throw conflict(`${who} already ${task.status === 'done' ? 'completed' : 'skipped'} this task at ${when}.`, {
+    completedByName: who,
+    completedAt: task.completedAt?.toISOString() ?? null,
+  })
+}
+
+async function judgeReadings(task: TaskRow, values: Record<string, number>) {
+  const parameters = new Map((await db().getRepository(ParameterEntity).find()).map((p) => [p.key, p]))
+  const fieldErrors: Record<string, string[]> = {}
+  for (const key of task.requiredReadings) {
+    if (values[key] === undefined) fieldErrors[`readings.${key}`] = [`${parameters.get(key)?.name ?? key} is required`]
+  }
+  for (const [key, value] of Object.entries(values)) {
+    const p = parameters.get(key)
+    if (!p) fieldErrors[`readings.${key}`] = ['Unknown reading']
+    else if (p.derived) fieldErrors[`readings.${key}`] = [`${p.name} is worked out by Roundtide, not typed in`]
+    else if (value < p.physicalMin || value > p.physicalMax) {
+      fieldErrors[`readings.${key}`] = [`${p.name} ${value} ${p.unit} is impossible (must be ${p.physicalMin}–${p.physicalMax})`]
+    }
+  }
+  if (Object.keys(fieldErrors).length) {
+    const first = Object.values(fieldErrors)[0][0]
+    throw validationError(`Nothing was saved: ${first}.`, fieldErrors)
+  }
+  const context = await readingContextFor(task)
+  const derived = deriveReadings(values, context.salinitySetpoint)
+  const rows: Reading[] = [...Object.entries(values).map(([k, v]) => [k, v, false] as const), ...Object.entries(derived.values).map(([k, v]) => [k, v, true] as const)].map(
+    ([parameterKey, value, isDerived]) => ({
+      parameterKey,
+      value,
+      unit: parameters.get(parameterKey)?.unit ?? '',
+      band: bandFor(value, pickLimit(context.limits, parameterKey, context)),
+      derived: isDerived,
+    }),
+  )
+  return { rows, notes: derived.notes }
+}

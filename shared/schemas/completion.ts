@@ -1,0 +1,48 @@
+import { z } from 'zod'
+import { BandSchema } from './parameter'
+import { TaskSchema } from './task'
+
+export const SKIP_REASONS = ['no_access', 'tank_empty', 'equipment_fault', 'fish_stressed', 'not_enough_time', 'other'] as const
+export const SKIP_REASON_LABELS: Record<(typeof SKIP_REASONS)[number], string> = {
+  no_access: 'Could not get to it',
+  tank_empty: 'Tank is empty',
+  equipment_fault: 'Meter or equipment not working',
+  fish_stressed: 'Fish too stressed to disturb',
+  not_enough_time: 'Ran out of time',
+  other: 'Other (say why)',
+}
+
+export const CompletionInputSchema = z
+  .object({
+    /** Made by the client, so a replay (e.g. after a dropped connection) is recognised. */
+    completionId: z.string().uuid('completionId must be a UUID'),
+    outcome: z.enum(['done', 'skipped']).default('done'),
+    version: z.number().int().optional(),
+    readings: z.record(z.string().min(1).max(40), z.number({ error: 'Enter a number' }).finite('Enter a number')).default({}),
+    skipReason: z.enum(SKIP_REASONS).optional(),
+    note: z.string().trim().max(2000).optional(),
+    /** When the work was really done (typing in a paper sheet later); defaults to now. */
+    doneAt: z.string().datetime().optional(),
+  })
+  .superRefine((c, ctx) => {
+    if (c.outcome === 'skipped' && !c.skipReason) ctx.addIssue({ code: 'custom', path: ['skipReason'], message: 'Choose why it could not be done' })
+    if (c.outcome === 'skipped' && c.skipReason === 'other' && !c.note) ctx.addIssue({ code: 'custom', path: ['note'], message: 'Say why it could not be done' })
+  })
+export type CompletionInput = z.input<typeof CompletionInputSchema>
+
+export const ReadingSchema = z.object({
+  parameterKey: z.string(),
+  value: z.number(),
+  unit: z.string(),
+  band: BandSchema,
+  derived: z.boolean(),
+})
+export type Reading = z.infer<typeof ReadingSchema>
+
+export const CompletionResultSchema = z.object({
+  task: TaskSchema,
+  readings: z.array(ReadingSchema),
+  recheckTaskId: z.number().int().nullable(),
+  notes: z.array(z.string()),
+})
+export type CompletionResult = z.infer<typeof CompletionResultSchema>
