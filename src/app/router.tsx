@@ -37,7 +37,25 @@ export function createRouter(queryClient: QueryClient) {
             planned('calendar', 'calendar'),
             planned('on-call', 'on-call'),
             planned('tanks', 'tanks'),
-            planned('routines', 'routines'),
+            {
+              path: 'routines',
+              children: [
+                {
+                  index: true,
+                  lazy: async () => {
+                    const m = await import('./routes/routines-page')
+                    return { Component: m.Component, loader: m.loader(queryClient) }
+                  },
+                },
+                ...['new', ':id'].map((path) => ({
+                  path,
+                  lazy: async () => {
+                    const m = await import('./routes/routine-editor-page')
+                    return { Component: m.Component, loader: m.loader(queryClient) }
+                  },
+                })),
+              ],
+            },
             planned('roster', 'roster'),
             planned('reports', 'reports'),
             {

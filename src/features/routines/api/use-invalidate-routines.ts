@@ -1,12 +1,15 @@
 import { useQueryClient } from '@tanstack/react-query'
+import type { Routine } from '#shared/schemas/routine'
 import { routineKeys, routineTaskKeys } from './routine-queries'
 
-/** Saving or deleting a routine changes its materialised tasks as well as the routine list. */
+/** Saving a routine changes the list and its materialised tasks; the saved routine is the detail. */
 export function useInvalidateRoutines() {
   const queryClient = useQueryClient()
-  return () =>
-    Promise.all([
-      queryClient.invalidateQueries({ queryKey: routineKeys.all }),
+  return (saved: Routine) => {
+    queryClient.setQueryData(routineKeys.detail(saved.id), saved)
+    return Promise.all([
+      queryClient.invalidateQueries({ queryKey: routineKeys.lists() }),
       queryClient.invalidateQueries({ queryKey: routineTaskKeys.lists() }),
     ])
+  }
 }

@@ -19,7 +19,7 @@ export function StartFields({ timeFollowsRule }: { timeFollowsRule: boolean }) {
         type="date"
         value={date}
         onChange={(e) => set(e.target.value, time)}
-        error={errors.dtstart?.message}
+        error={errors.dtstart ? 'Choose a start date and time' : undefined}
       />
       <Field
         label="Start time"

@@ -1,0 +1,88 @@
+import type { DataSource, QueryRunner } from 'typeorm'
+import { logger } from '../lib/logger'
+import { materialise } from '../modules/tasks/materialiser'
+import { getTask } from '../modules/tasks/tasks.service'
+import { publishTask } from '../realtime/task-events'
+import { advanceTaskStatuses } from './status-clock'
+
+const LOCK_NAME = 'roundtide_scheduler'
+const HORIZON_EVERY_MS = 60 * 60 * 1000
+
+export interface SchedulerOptions {
+  intervalMs?: number
+  now?: () => Date
+  /** Processes sharing a lock name share one leader; tests use their own name. */
+  lockName?: string
+}
+
+/**
+ * The background clock. Only one process acts at a time: it must hold a MariaDB advisory
+ * lock (GET_LOCK, tied to one connection) to tick, so several app processes on one database
+ * never double-act; if the holder dies its connection drops and another takes over.
+ */
+export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
+  const intervalMs = opts.intervalMs ?? 30_000
+  const now = opts.now ?? (() => new Date())
+  const lockName = opts.lockName ?? LOCK_NAME
+  let runner: QueryRunner | null = null
+  let holding = false
+  let lastHorizon = 0
+  let running: Promise<void> | null = null
+  let stopped = false
+
+  async function ensureLock(): Promise<boolean> {
+    try {
+      if (!runner || runner.isReleased) {
+        runner = ds.createQueryRunner()
+        holding = false
+      }
+      if (!holding) {
+        const [row] = await runner.query('SELECT GET_LOCK(?, 0) AS got', [lockName])
+        holding = Number(row?.got) === 1
+      }
+      return holding
+    } catch (err) {
+      logger.warn({ err }, 'scheduler could not reach the database; will retry')
+      await runner?.release().catch(() => undefined)
+      runner = null
+      holding = false
+      return false
+    }
+  }
+
+  async function tick() {
+    if (stopped || !(await ensureLock())) return
+    try {
+      const at = now()
+      const { changed } = await advanceTaskStatuses(ds, at)
+      for (const id of changed.slice(0, 500)) publishTask('task:updated', await getTask(id))
+      if (at.getTime() - lastHorizon > HORIZON_EVERY_MS) {
+        lastHorizon = at.getTime()
+        await materialise({ from: at })
+      }
+    } catch (err) {
+      logger.error({ err }, 'scheduler tick failed')
+    }
+  }
+
+  const run = () => {
+    if (!running) running = tick().finally(() => (running = null))
+    return running
+  }
+  const timer = setInterval(run, intervalMs)
+  void run()
+
+  return {
+    tick: run,
+    isLeader: () => holding,
+    async stop() {
+      stopped = true
+      clearInterval(timer)
+      await running
+      if (runner && !runner.isReleased) {
+        await runner.query('SELECT RELEASE_LOCK(?)', [lockName]).catch(() => undefined)
+        await runner.release().catch(() => undefined)
+      }
+    },
+  }
+}

@@ -1,0 +1,54 @@
+import { DateTime } from 'luxon'
+import { pickLimit } from '#shared/readings/band'
+import type { Person } from '#shared/schemas/person'
+import type { Round, RoundTask } from '#shared/schemas/round'
+import { db } from '../../db/data-source'
+import { LimitEntity, ParameterEntity } from '../parameters/parameter.entities'
+import { TaskEntity } from './task.entity'
+import { toTask } from './task.mapper'
+import { loadTaskContext } from './tasks.service'
+
+/**
+ * One person's round for a facility day: their tasks plus unassigned ones they may take,
+ * in walking order (areas by round order, quarantine last), then by tank and time.
+ */
+export async function getRound(person: Person, date?: string): Promise<Round> {
+  const ctx = await loadTaskContext()
+  const zone = ctx.cat.facility.timeZone
+  const day = date ?? DateTime.now().setZone(zone).toISODate()!
+  const rows = await db()
+    .getRepository(TaskEntity)
+    .createQueryBuilder('t')
+    .where('t.localDate = :day', { day })
+    .andWhere('(t.assigneeId = :me OR t.assigneeId IS NULL)', { me: person.id })
+    .orderBy('t.dueAt', 'ASC')
+    .getMany()
+  const [parameters, limits] = await Promise.all([db().getRepository(ParameterEntity).find(), db().getRepository(LimitEntity).find()])
+  const paramByKey = new Map(parameters.map((p) => [p.key, p]))
+  const areas = [...ctx.cat.areas.values()].sort((a, b) => Number(a.quarantine) - Number(b.quarantine) || a.roundOrder - b.roundOrder)
+  const areaRank = new Map(areas.map((a, i) => [a.id, i]))
+  const batches = [...ctx.cat.batches.values()].filter((b) => b.status === 'active' || b.status === 'quarantine')
+
+  const tasks: RoundTask[] = rows.map((row) => {
+    const tank = row.tankId ? ctx.cat.tanks.get(row.tankId) : undefined
+    const systemId = row.targetKind === 'system' ? row.targetId : (tank?.systemId ?? null)
+    const where = { systemId, batchIds: batches.filter((b) => tank && b.tankIds.includes(tank.id)).map((b) => b.id) }
+    return {
+      ...toTask(row, ctx),
+      salinitySetpoint: systemId ? (ctx.cat.systems.get(systemId)?.salinitySetpoint ?? null) : null,
+      readingSpecs: row.requiredReadings.flatMap((key) => {
+        const p = paramByKey.get(key)
+        if (!p) return []
+        const l = pickLimit(limits, key, where)
+        return [{ key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, okMin: l?.okMin ?? null, okMax: l?.okMax ?? null, criticalMin: l?.criticalMin ?? null, criticalMax: l?.criticalMax ?? null }]
+      }),
+    }
+  })
+  tasks.sort(
+    (a, b) =>
+      (areaRank.get(a.areaId ?? -1) ?? 99) - (areaRank.get(b.areaId ?? -1) ?? 99) ||
+      a.targetLabel.localeCompare(b.targetLabel) ||
+      a.dueAt.localeCompare(b.dueAt),
+  )
+  return { date: day, timeZone: zone, areas: areas.map(({ id, name, roundOrder, quarantine }) => ({ id, name, roundOrder, quarantine })), tasks }
+}

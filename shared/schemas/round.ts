@@ -1,0 +1,33 @@
+import { z } from 'zod'
+import { TaskSchema } from './task'
+
+export const ReadingSpecSchema = z.object({
+  key: z.string(),
+  name: z.string(),
+  unit: z.string(),
+  decimals: z.number().int(),
+  physicalMin: z.number(),
+  physicalMax: z.number(),
+  okMin: z.number().nullable(),
+  okMax: z.number().nullable(),
+  criticalMin: z.number().nullable(),
+  criticalMax: z.number().nullable(),
+})
+export type ReadingSpec = z.infer<typeof ReadingSpecSchema>
+
+export const RoundTaskSchema = TaskSchema.extend({
+  /** The readings this task needs, with the limits that apply at its tank or system. */
+  readingSpecs: z.array(ReadingSpecSchema),
+  salinitySetpoint: z.number().nullable(),
+})
+export type RoundTask = z.infer<typeof RoundTaskSchema>
+
+export const RoundSchema = z.object({
+  date: z.string(),
+  timeZone: z.string(),
+  areas: z.array(z.object({ id: z.number().int(), name: z.string(), roundOrder: z.number().int(), quarantine: z.boolean() })),
+  tasks: z.array(RoundTaskSchema),
+})
+export type Round = z.infer<typeof RoundSchema>
+
+export const RoundQuerySchema = z.object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD').optional() })
