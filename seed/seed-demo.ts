@@ -4,11 +4,14 @@ import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } fr
 import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
 import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { createPerson } from '#server/modules/people/people.service'
+import { applyShiftPattern } from '#server/modules/roster/roster.service'
+import { generateRotation } from '#server/modules/roster/rotation.service'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
 import { materialise } from '#server/modules/tasks/materialiser'
 import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
 import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
+import { DEMO_ON_CALL, DEMO_SHIFT_PATTERNS } from './demo-roster'
 import { DEMO_ROUTINES } from './demo-routines'
 import { DEMO_AREAS, DEMO_BATCHES, DEMO_EQUIPMENT, DEMO_FACILITY, DEMO_SYSTEMS, DEMO_TANKS } from './demo-structure'
 import { buildPersonInput } from './factories'
@@ -50,6 +53,12 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
     ...DEMO_SYSTEM_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'system' as const, scopeId: systems.get(l.system)!, ...l.bands })),
     ...DEMO_BATCH_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'batch' as const, scopeId: batches.get(l.batch)!, ...l.bands })),
   ])
+
+  const rosterFrom = today.minus({ weeks: 2 }).startOf('week')
+  for (const { email, ...pattern } of DEMO_SHIFT_PATTERNS) {
+    await applyShiftPattern({ ...pattern, personId: people.get(email)!, from: rosterFrom.toISODate()!, to: today.plus({ weeks: 8 }).toISODate()! })
+  }
+  await generateRotation({ personIds: DEMO_ON_CALL.map((e) => people.get(e)!), from: rosterFrom.toISODate()!, weeks: 11 })
 
   const lookup: Record<string, Map<string, number>> = { tank: tanks, system: systems, equipment, area: areas, area_tanks: areas, batch: batches }
   const anchor = today.minus({ weeks: 8 }).toISODate()

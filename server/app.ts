@@ -17,6 +17,7 @@ import { completionsRouter } from './modules/completions/completions.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter } from './modules/people/people.routes'
+import { rosterRouter } from './modules/roster/roster.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
 
@@ -66,6 +67,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/routines', routinesRouter)
   api.use('/tasks', tasksRouter)
   api.use('/', completionsRouter(config))
+  api.use('/', rosterRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

@@ -2,6 +2,7 @@ import { AlertEntity, CompletionEntity, PhotoEntity, ReadingEntity } from '../mo
 import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
+import { HandoverNoteEntity, OnCallEntity, ShiftEntity } from '../modules/roster/roster.entities'
 import { RoutineEntity } from '../modules/routines/routine.entity'
 import { TaskEntity } from '../modules/tasks/task.entity'
 
@@ -9,4 +10,5 @@ import { TaskEntity } from '../modules/tasks/task.entity'
 export const entities = [
   PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
+  ShiftEntity, OnCallEntity, HandoverNoteEntity,
 ]

@@ -78,3 +78,21 @@ export const CreateTaskInputSchema = z.object({
   requiredReadings: z.array(z.string().min(1)).max(30).default([]),
 })
 export type CreateTaskInput = z.input<typeof CreateTaskInputSchema>
+
+export const MoveTaskInputSchema = z
+  .object({
+    version: z.number().int(),
+    assigneeId: z.number().int().positive().nullable().optional(),
+    date: isoDate.optional(),
+  })
+  .refine((m) => m.assigneeId !== undefined || m.date !== undefined, { message: 'Say who to assign or which day to move to' })
+export type MoveTaskInput = z.infer<typeof MoveTaskInputSchema>
+
+export const BulkMoveInputSchema = z
+  .object({
+    tasks: z.array(z.object({ id: z.number().int().positive(), version: z.number().int() })).min(1).max(200),
+    assigneeId: z.number().int().positive().nullable().optional(),
+    date: isoDate.optional(),
+  })
+  .refine((m) => m.assigneeId !== undefined || m.date !== undefined, { message: 'Say who to assign or which day to move to' })
+export type BulkMoveInput = z.infer<typeof BulkMoveInputSchema>

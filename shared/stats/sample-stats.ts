@@ -47,11 +47,12 @@ function requirePositiveFraction(value: number, name: string): void {
 }
 
 /**
- * ceil() that ignores floating-point noise just above a whole number: (1.96 × 5 / 0.2)² should be
- * exactly 2401, and a stray 2401.0000000000005 must not turn into 2402.
+ * Rounds a computed sample size up to whole units, ignoring floating-point noise just above a whole
+ * number: (1.96 × 5 / 0.2)² is exactly 2401 and a stray 2401.0000000000005 must not become 2402.
  */
-function ceilIgnoringRoundoff(value: number): number {
-  return Math.ceil(value - Math.abs(value) * 1e-12)
+export function roundUpSampleSize(value: number): number {
+  if (!Number.isFinite(value) || value < 0) throw new RangeError(`Sample size must be 0 or more, got ${value}`)
+  return Math.ceil(value - value * 1e-12)
 }
 
 /** The smallest n a t-interval may use: n − 1 = 1 degree of freedom is the least that estimates spread. */
@@ -73,7 +74,7 @@ export function normalApproxSampleSize(spread: number, allowedError: number, z: 
 export function nextTBasedSampleSize(n: number, cv: number, relativeError: number, confidence = 0.95): number {
   if (!Number.isInteger(n) || n < MINIMUM_SAMPLE_SIZE) throw new RangeError(`n must be a whole number ≥ 2, got ${n}`)
   const t = studentTQuantile(twoSidedProbability(confidence), n - 1)
-  return Math.max(MINIMUM_SAMPLE_SIZE, ceilIgnoringRoundoff(normalApproxSampleSize(cv, relativeError, t)))
+  return Math.max(MINIMUM_SAMPLE_SIZE, roundUpSampleSize(normalApproxSampleSize(cv, relativeError, t)))
 }
 
 /**
@@ -89,7 +90,7 @@ export function sampleSizeForMean(cv: number, relativeError: number, confidence 
   requirePositiveFraction(cv, 'Coefficient of variation')
   requirePositiveFraction(relativeError, 'Relative error')
   const z = normalQuantile(twoSidedProbability(confidence))
-  let n = Math.max(MINIMUM_SAMPLE_SIZE, ceilIgnoringRoundoff(normalApproxSampleSize(cv, relativeError, z)))
+  let n = Math.max(MINIMUM_SAMPLE_SIZE, roundUpSampleSize(normalApproxSampleSize(cv, relativeError, z)))
   const visited: number[] = []
   // The argument above bounds the loop; the cap only guards against a defect elsewhere.
   for (let step = 0; step < 1000; step++) {

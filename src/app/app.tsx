@@ -2,6 +2,9 @@ import { QueryClientProvider } from '@tanstack/react-query'
 import { useState } from 'react'
 import { RouterProvider } from 'react-router-dom'
 import { Toaster } from 'sonner'
+import { authKeys } from '../features/auth/api/auth-queries'
+import { LiveUpdatesProvider } from '../features/live/components/live-updates-provider'
+import { upsertRoundTask } from '../features/round/api/round-cache'
 import { createQueryClient } from './query-client'
 import { createRouter } from './router'
 
@@ -10,7 +13,9 @@ export function App() {
   const [router] = useState(() => createRouter(queryClient))
   return (
     <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
+      <LiveUpdatesProvider sessionKey={authKeys.me} onTask={upsertRoundTask}>
+        <RouterProvider router={router} />
+      </LiveUpdatesProvider>
       <Toaster position="top-center" richColors closeButton />
     </QueryClientProvider>
   )

@@ -32,11 +32,23 @@ export function createRouter(queryClient: QueryClient) {
         {
           ErrorBoundary: RouteError,
           children: [
-            planned('round', 'round'),
+            {
+              path: 'round',
+              lazy: async () => {
+                const m = await import('./routes/round-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
             planned('board', 'board'),
             planned('calendar', 'calendar'),
             planned('on-call', 'on-call'),
-            planned('tanks', 'tanks'),
+            {
+              path: 'tanks',
+              lazy: async () => {
+                const m = await import('./routes/tanks-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
             {
               path: 'routines',
               children: [

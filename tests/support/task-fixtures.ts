@@ -12,7 +12,7 @@ export async function makeTankTask(tank: Tank, opts: Partial<TaskRow> = {}): Pro
     repo.create({
       routineId: null, eventId: null, title: 'Morning tank check', category: 'welfare', instructions: '', priority: 'welfare_critical',
       targetKind: 'tank', targetId: tank.id, tankId: tank.id, areaId: tank.areaId,
-      localDate: dueAt.toISOString().slice(0, 10), localStart: dueAt.toISOString().slice(0, 19),
+      localDate: dueAt.toISOString().slice(0, 10), localStart: dueAt.toISOString().slice(0, 19), occurrenceStart: dueAt.toISOString().slice(0, 19),
       dueAt, windowStartAt: new Date(dueAt.getTime() - 30 * 60_000), graceUntil: new Date(dueAt.getTime() + 60 * 60_000),
       durationMinutes: 3, status: 'open', assigneeId: null, assignedManually: false, edited: false,
       requiredReadings: ['do_mgL', 'temp_c'], version: 1, ...opts,

@@ -28,6 +28,7 @@ export async function createRecheck(task: TaskRow, personId: number): Promise<Ta
       areaId: task.areaId,
       localDate: localStart.slice(0, 10),
       localStart,
+      occurrenceStart: localStart,
       dueAt: due,
       windowStartAt: new Date(),
       graceUntil: new Date(due.getTime() + 30 * 60_000),

@@ -3,6 +3,7 @@ import { expandRule } from '#shared/schedule/expand-rule'
 import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
+import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { RoutineEntity } from '../routines/routine.entity'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
@@ -37,7 +38,11 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     }
     opts.onProgress?.(index + 1, routines.length, created)
   }
-  if (created) logger.info({ created, routines: routines.length }, 'tasks materialised')
+  if (created) {
+    logger.info({ created, routines: routines.length }, 'tasks materialised')
+    const zone = cat.facility.timeZone
+    await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!)
+  }
   return { created, routines: routines.length }
 }
 
@@ -79,6 +84,7 @@ export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, u
         areaId: target.areaId,
         localDate,
         localStart: occ.local,
+        occurrenceStart: occ.local,
         dueAt: due,
         windowStartAt: new Date(due.getTime() - routine.windowBeforeMinutes * 60_000),
         graceUntil: new Date(due.getTime() + routine.graceMinutes * 60_000),

@@ -18,6 +18,8 @@ export interface TaskRow {
   areaId: number | null
   localDate: string
   localStart: string
+  /** The routine occurrence this task stands for; unchanged when the task is moved to another day. */
+  occurrenceStart: string
   dueAt: Date
   windowStartAt: Date
   graceUntil: Date
@@ -56,6 +58,7 @@ export const TaskEntity = new EntitySchema<TaskRow>({
     areaId: { type: 'int', nullable: true },
     localDate: { type: 'varchar', length: 10 },
     localStart: { type: 'varchar', length: 19 },
+    occurrenceStart: { type: 'varchar', length: 19 },
     dueAt: { type: 'datetime', precision: 3 },
     windowStartAt: { type: 'datetime', precision: 3 },
     graceUntil: { type: 'datetime', precision: 3 },
@@ -76,7 +79,7 @@ export const TaskEntity = new EntitySchema<TaskRow>({
     updatedAt: { type: 'datetime', precision: 3, updateDate: true },
   },
   indices: [
-    { name: 'uq_task_occurrence', columns: ['routineId', 'targetKind', 'targetId', 'localStart'], unique: true },
+    { name: 'uq_task_occurrence', columns: ['routineId', 'targetKind', 'targetId', 'occurrenceStart'], unique: true },
     { columns: ['localDate', 'status'] },
     { columns: ['assigneeId', 'localDate'] },
     { columns: ['tankId', 'localDate'] },

@@ -1,8 +1,12 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RoundQuerySchema } from '#shared/schemas/round'
-import { TaskListQuerySchema } from '#shared/schemas/task'
+import { BulkMoveInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
+import { z } from 'zod'
 import { requireRole, signedIn } from '../auth/require-role'
+import { publishTask } from '../../realtime/task-events'
+import { getBoard } from './board.service'
+import { moveTask } from './move-task.service'
 import { getRound } from './round.service'
 import { createOneOffTask, getTask, listTasks } from './tasks.service'
 
@@ -14,6 +18,31 @@ tasksRouter.get('/', signedIn, async (req, res) => {
 // Registered before '/:id' so "round" is not read as an id.
 tasksRouter.get('/round', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
   res.json(await getRound(req.user!, RoundQuerySchema.parse(req.query).date))
+})
+tasksRouter.get('/board', signedIn, async (req, res) => {
+  const { date } = z.object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD') }).parse(req.query)
+  res.json(await getBoard(date))
+})
+tasksRouter.post('/bulk-move', requireRole('manager', 'supervisor'), async (req, res) => {
+  const { tasks, ...move } = BulkMoveInputSchema.parse(req.body)
+  const moved = []
+  const refused = []
+  // One at a time, so each card gets its own verdict (a stale one does not block the rest).
+  for (const t of tasks) {
+    try {
+      const task = await moveTask(t.id, req.user!, { ...move, version: t.version })
+      publishTask('task:updated', task)
+      moved.push(task)
+    } catch (err) {
+      refused.push({ id: t.id, message: (err as Error).message })
+    }
+  }
+  res.json({ moved, refused })
+})
+tasksRouter.patch('/:id', requireRole('manager', 'supervisor'), async (req, res) => {
+  const task = await moveTask(IdParamSchema.parse(req.params).id, req.user!, req.body)
+  publishTask('task:updated', task)
+  res.json(task)
 })
 tasksRouter.get('/:id', signedIn, async (req, res) => {
   res.json(await getTask(IdParamSchema.parse(req.params).id))

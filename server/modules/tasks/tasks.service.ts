@@ -66,6 +66,7 @@ export async function createOneOffTask(input: unknown): Promise<Task> {
       areaId: target.areaId,
       localDate: local.toISODate()!,
       localStart: local.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      occurrenceStart: local.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
       dueAt: due,
       windowStartAt: new Date(due.getTime() - 30 * 60_000),
       graceUntil: new Date(due.getTime() + data.graceMinutes * 60_000),

@@ -5,8 +5,8 @@ import type { Task } from '#shared/schemas/task'
 import { Button } from '../../../components/ui/button'
 import { ErrorState, LoadingState } from '../../../components/ui/page-state'
 import { routineQueries } from '../api/routine-queries'
-import { addDays, formatLocalDate, longWeekdayOf, todayIn } from '../utils/zone-dates'
-import { TaskStatusLabel } from './task-status-label'
+import { addDays, todayIn } from '../utils/zone-dates'
+import { UpcomingDay } from './upcoming-day'
 
 const DAYS = 14
 
@@ -42,26 +42,7 @@ export function RoutineUpcomingTasks({ routineId, timeZone, paused }: { routineI
       )}
       {tasks.isSuccess && tasks.data.length > 0 && (
         <div className="mt-4 flex flex-col gap-4">
-          {byDate(tasks.data).map(([date, dayTasks]) => (
-            <section key={date} aria-label={`${longWeekdayOf(date)} ${formatLocalDate(date)}`}>
-              <h3 className="flex items-baseline justify-between gap-2 border-b border-tide-200 pb-1 font-semibold text-tide-900">
-                <span>{longWeekdayOf(date)} {formatLocalDate(date)}</span>
-                <span className="text-sm font-normal text-tide-600">{dayTasks.length} {dayTasks.length === 1 ? 'task' : 'tasks'}</span>
-              </h3>
-              <ul className="divide-y divide-tide-100">
-                {dayTasks.map((t) => (
-                  <li key={t.id} className="grid grid-cols-[3.5rem_minmax(0,1fr)] items-center gap-x-3 gap-y-0.5 py-2 sm:grid-cols-[3.5rem_minmax(0,1fr)_auto]">
-                    <span className="font-semibold text-tide-900 tabular-nums">{t.localTime}</span>
-                    <span className="min-w-0 truncate text-tide-800">
-                      {t.targetLabel}
-                      {t.assigneeName && <span className="text-sm text-tide-600"> · {t.assigneeName}</span>}
-                    </span>
-                    <span className="col-start-2 sm:col-start-auto"><TaskStatusLabel status={t.status} /></span>
-                  </li>
-                ))}
-              </ul>
-            </section>
-          ))}
+          {byDate(tasks.data).map(([date, dayTasks]) => <UpcomingDay key={date} date={date} tasks={dayTasks} />)}
         </div>
       )}
     </section>

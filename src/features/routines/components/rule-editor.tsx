@@ -1,5 +1,5 @@
 import { TriangleAlert } from 'lucide-react'
-import { useState } from 'react'
+import { Fragment, useState } from 'react'
 import { useFormContext, useWatch } from 'react-hook-form'
 import { validateRule } from '#shared/schedule/describe-rule'
 import type { RoutineInput } from '#shared/schemas/routine'
@@ -59,19 +59,26 @@ export function RuleEditor() {
           spellCheck={false}
           className="[&_input]:font-mono"
           hint="RFC 5545, e.g. FREQ=MONTHLY;BYDAY=1TU;BYHOUR=10;BYMINUTE=0. Without BYHOUR the start time is used."
+          aria-invalid={message ? true : undefined}
+          aria-describedby={message ? 'routine-rule-error' : undefined}
           {...register('rrule')}
         />
       )}
       <div aria-live="polite">
         {message && (
-          <p className="flex items-start gap-2 rounded-lg bg-alarm-50 p-3 text-sm font-semibold text-alarm-700">
+          <p id="routine-rule-error" className="flex items-start gap-2 rounded-lg bg-alarm-50 p-3 text-sm font-semibold text-alarm-700">
             <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0" /> {message}
           </p>
         )}
       </div>
       {mode === 'builder' && rrule && (
-        <p className="text-sm break-all text-tide-600">
-          Written as <code className="rounded bg-tide-50 px-1 text-tide-800">{rrule}</code>
+        <p className="text-sm text-tide-600">
+          Written as{' '}
+          <code className="rounded bg-tide-50 px-1 text-tide-800">
+            {rrule.split(';').map((part, i) => (
+              <Fragment key={i}>{i > 0 && <>;<wbr /></>}{part}</Fragment>
+            ))}
+          </code>
         </p>
       )}
       <StartFields timeFollowsRule={mode === 'builder'} />

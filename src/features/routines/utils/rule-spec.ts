@@ -110,8 +110,9 @@ export function draftOfRule(rrule: string, startTime: string): RuleDraft | null 
     const parsed = parseRule(rrule)
     const spec = candidate(parsed.parts)
     if (!spec || canonical(parseRule(buildRule(spec)).parts) !== canonical(parsed.parts)) return null
-    const base = defaultDraft(startTime)
-    return { ...base, ...spec, times: spec.times ?? [startTime] } as RuleDraft
+    const draft = { ...defaultDraft(startTime), ...spec, times: spec.times ?? [startTime] } as RuleDraft
+    // a plain FREQ=DAILY reads better as "every day at <start time>" than "every 1 days"
+    return draft.kind === 'everyNDays' && draft.interval === 1 ? { ...draft, kind: 'dailyAtTimes', interval: 2 } : draft
   } catch {
     return null
   }

@@ -1,0 +1,104 @@
+import { DateTime } from 'luxon'
+import { Between, LessThan, MoreThan } from 'typeorm'
+import {
+  OnCallInputSchema, ShiftInputSchema, ShiftPatternInputSchema, WEEKDAYS,
+  type OnCallDuty, type Shift,
+} from '#shared/schemas/roster'
+import { db } from '../../db/data-source'
+import { notFound, validationError } from '../../lib/errors'
+import { getFacility } from '../facility/facility.service'
+import { PersonEntity } from '../people/person.entity'
+import { OnCallEntity, ShiftEntity, type OnCallRow, type ShiftRow } from './roster.entities'
+
+const names = async () => new Map((await db().getRepository(PersonEntity).find({ select: { id: true, name: true } })).map((p) => [p.id, p.name]))
+
+const toShift = (row: ShiftRow, n: Map<number, string>): Shift => ({ ...row, personName: n.get(row.personId) ?? 'Unknown' })
+const toDuty = (row: OnCallRow, n: Map<number, string>): OnCallDuty => ({
+  id: row.id, personId: row.personId, personName: n.get(row.personId) ?? 'Unknown', fromDate: row.fromDate, toDate: row.toDate,
+  startsAt: row.startsAt.toISOString(), endsAt: row.endsAt.toISOString(),
+})
+
+export async function listShifts(from: string, to: string): Promise<Shift[]> {
+  const rows = await db().getRepository(ShiftEntity).find({ where: { date: Between(from, to) }, order: { date: 'ASC', start: 'ASC' } })
+  const n = await names()
+  return rows.map((r) => toShift(r, n))
+}
+
+async function assertPerson(personId: number) {
+  const person = await db().getRepository(PersonEntity).findOneBy({ id: personId })
+  if (!person || !person.active) throw validationError('Choose an active person.', { personId: ['Not an active person'] })
+  return person
+}
+
+export async function createShift(input: unknown): Promise<Shift> {
+  const data = ShiftInputSchema.parse(input)
+  await assertPerson(data.personId)
+  const row = await db().getRepository(ShiftEntity).save(data)
+  return toShift(row, await names())
+}
+
+export async function updateShift(id: number, input: unknown): Promise<Shift> {
+  const repo = db().getRepository(ShiftEntity)
+  const current = await repo.findOneBy({ id })
+  if (!current) throw notFound('That shift')
+  const data = ShiftInputSchema.parse({ ...current, ...(input as object) })
+  await assertPerson(data.personId)
+  return toShift(await repo.save({ ...current, ...data }), await names())
+}
+
+export async function deleteShift(id: number) {
+  const result = await db().getRepository(ShiftEntity).delete(id)
+  if (!result.affected) throw notFound('That shift')
+}
+
+/** A weekly pattern becomes shifts for each matching day; a day the person already works is left alone. */
+export async function applyShiftPattern(input: unknown): Promise<{ created: number; skipped: number }> {
+  const p = ShiftPatternInputSchema.parse(input)
+  await assertPerson(p.personId)
+  const repo = db().getRepository(ShiftEntity)
+  const existing = new Set((await repo.find({ where: { personId: p.personId, date: Between(p.from, p.to) } })).map((s) => s.date))
+  const rows: Array<Omit<ShiftRow, 'id'>> = []
+  let skipped = 0
+  for (let d = DateTime.fromISO(p.from); d <= DateTime.fromISO(p.to); d = d.plus({ days: 1 })) {
+    if (!p.weekdays.includes(WEEKDAYS[d.weekday - 1])) continue
+    const date = d.toISODate()!
+    if (existing.has(date)) skipped++
+    else rows.push({ personId: p.personId, date, start: p.start, end: p.end, kind: p.kind })
+  }
+  if (rows.length) await repo.insert(rows)
+  return { created: rows.length, skipped }
+}
+
+/** The instants a duty covers: handover time on its first day to handover time on its last. */
+export async function dutyInstants(fromDate: string, toDate: string) {
+  const f = await getFacility()
+  const at = (date: string) => DateTime.fromISO(`${date}T${f.handoverTime}`, { zone: f.timeZone }).toJSDate()
+  return { startsAt: at(fromDate), endsAt: at(toDate) }
+}
+
+export async function listOnCall(from: string, to: string): Promise<OnCallDuty[]> {
+  const rows = await db().getRepository(OnCallEntity).find({ where: { fromDate: LessThan(to + 'z'), toDate: MoreThan(from) }, order: { startsAt: 'ASC' } })
+  const n = await names()
+  return rows.map((r) => toDuty(r, n))
+}
+
+export async function createOnCall(input: unknown): Promise<OnCallDuty> {
+  const data = OnCallInputSchema.parse(input)
+  const person = await assertPerson(data.personId)
+  if (!person.onCallEligible) throw validationError(`${person.name} is not set up to hold on-call duty.`, { personId: ['Not eligible for on-call'] })
+  const row = await db().getRepository(OnCallEntity).save({ ...data, ...(await dutyInstants(data.fromDate, data.toDate)) })
+  return toDuty(row, await names())
+}
+
+export async function deleteOnCall(id: number) {
+  const result = await db().getRepository(OnCallEntity).delete(id)
+  if (!result.affected) throw notFound('That on-call duty')
+}
+
+/** Who holds on-call duty at an instant (the latest-starting duty wins an overlap). */
+export async function onCallAt(at: Date): Promise<OnCallDuty | null> {
+  const row = await db()
+    .getRepository(OnCallEntity)
+    .findOne({ where: { startsAt: LessThan(new Date(at.getTime() + 1)), endsAt: MoreThan(at) }, order: { startsAt: 'DESC' } })
+  return row ? toDuty(row, await names()) : null
+}

@@ -1,0 +1,73 @@
+import { useQueryClient, type QueryClient, type QueryKey } from '@tanstack/react-query'
+import { useEffect, useRef, useState, type ReactNode } from 'react'
+import { TaskSchema, type Task } from '#shared/schemas/task'
+import { createLiveSocket, TASK_EVENTS } from '../api/socket-client'
+import { patchTaskLists, TASKS_ROOT } from '../api/task-list-cache'
+import { LiveStatusContext, type LiveStatus } from '../hooks/use-live-status'
+import { useSessionPersonId } from '../hooks/use-session-person-id'
+
+export type TaskEventHandler = (queryClient: QueryClient, task: Task, personId: number) => void
+
+interface Props {
+  /** The query holding the signed-in person; the socket is open only while it has data. */
+  sessionKey: QueryKey
+  /** Extra cache patching for task views that need more than the task (e.g. the round). */
+  onTask?: TaskEventHandler
+  children: ReactNode
+}
+
+/** One socket per signed-in person; task events patch the caches in place, a reconnect refetches once. */
+export function LiveUpdatesProvider({ sessionKey, onTask, children }: Props) {
+  const queryClient = useQueryClient()
+  const personId = useSessionPersonId(sessionKey)
+  const [state, setState] = useState<{ personId: number | null; status: LiveStatus }>({ personId: null, status: 'connecting' })
+  const onTaskRef = useRef(onTask)
+  useEffect(() => {
+    onTaskRef.current = onTask
+  }, [onTask])
+
+  useEffect(() => {
+    if (personId === null) return
+    const socket = createLiveSocket()
+    const report = (status: LiveStatus) => setState({ personId, status })
+    let missed = false
+    const lost = () => {
+      missed = true
+      report(navigator.onLine ? 'reconnecting' : 'offline')
+    }
+    const handle = (payload: unknown) => {
+      const parsed = TaskSchema.safeParse(payload)
+      if (!parsed.success) return
+      patchTaskLists(queryClient, parsed.data)
+      onTaskRef.current?.(queryClient, parsed.data, personId)
+    }
+    for (const event of TASK_EVENTS) socket.on(event, handle)
+    socket.on('connect', () => {
+      report('live')
+      // What changed while we were away came as events nobody heard: catch up once.
+      if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT })
+      missed = false
+    })
+    socket.on('disconnect', lost)
+    socket.on('connect_error', lost)
+    const onOffline = () => !socket.connected && report('offline')
+    const onOnline = () => {
+      if (socket.connected) return
+      report('reconnecting')
+      // Skip the back-off wait: the network is back now.
+      socket.disconnect().connect()
+    }
+    window.addEventListener('offline', onOffline)
+    window.addEventListener('online', onOnline)
+    socket.connect()
+    return () => {
+      window.removeEventListener('offline', onOffline)
+      window.removeEventListener('online', onOnline)
+      socket.removeAllListeners()
+      socket.disconnect()
+    }
+  }, [personId, queryClient])
+
+  const status: LiveStatus = personId === null ? 'signed-out' : state.personId === personId ? state.status : 'connecting'
+  return <LiveStatusContext.Provider value={status}>{children}</LiveStatusContext.Provider>
+}

@@ -1,0 +1,44 @@
+import type { RoundTask } from '#shared/schemas/round'
+import type { CompletionPayload } from '../api/completion-api'
+import type { Draft } from '../state/drafts'
+import { checkReading } from './reading-value'
+
+export type BuiltCompletion = { ok: true; payload: CompletionPayload } | { ok: false; errors: Record<string, string> }
+
+/** Checks the draft the way the server will, so nothing that would be refused is sent or queued. */
+export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' | 'skipped'): BuiltCompletion {
+  const errors: Record<string, string> = {}
+  const readings: Record<string, number> = {}
+  const note = draft.note.trim() || undefined
+  if (outcome === 'done') {
+    for (const spec of task.readingSpecs) {
+      const check = checkReading(draft.readings[spec.key] ?? '', spec)
+      if (check.state === 'empty') errors[`readings.${spec.key}`] = `Enter ${spec.name.toLowerCase()}`
+      else if (check.state === 'invalid') errors[`readings.${spec.key}`] = check.message
+      else readings[spec.key] = check.value
+    }
+  } else {
+    if (!draft.skipReason) errors.skipReason = 'Choose why it could not be done'
+    else if (draft.skipReason === 'other' && !note) errors.note = 'Say why it could not be done'
+  }
+  if (Object.keys(errors).length) return { ok: false, errors }
+  return {
+    ok: true,
+    payload: {
+      completionId: crypto.randomUUID(),
+      outcome,
+      version: task.version,
+      readings,
+      skipReason: outcome === 'skipped' ? (draft.skipReason ?? undefined) : undefined,
+      note,
+      // When it was really done, so lateness is right even if the phone sends it an hour later.
+      doneAt: new Date().toISOString(),
+    },
+  }
+}
+
+/** The server's field errors ("readings.do_mgL": [...]) in the draft's shape. */
+export function draftErrorsFrom(fieldErrors: Record<string, string[]> | undefined, message: string): Record<string, string> {
+  const errors: Record<string, string> = Object.fromEntries(Object.entries(fieldErrors ?? {}).map(([k, v]) => [k, v[0]]))
+  return { ...errors, form: message }
+}
