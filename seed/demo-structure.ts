@@ -2,13 +2,14 @@
 // a plant room and a quarantine room. Names, codes and people are invented.
 import type { Facility } from '#shared/schemas/facility'
 
-export const DEMO_FACILITY: Omit<Facility, 'id'> = {
+export const DEMO_FACILITY: Omit<Facility, 'id' | 'defaultLadderId' | 'fastLadderId'> = {
   name: 'Brackenwater Aquatic Research Station',
   timeZone: 'Australia/Brisbane',
   handoverTime: '08:00',
   quarantineDays: 30,
   arrivalTempDiffLimitC: 2,
   minOxygenHours: 24,
+  digestTime: '07:00',
 }
 
 export const DEMO_AREAS = [

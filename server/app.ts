@@ -14,6 +14,8 @@ import { requireSameOrigin } from './modules/auth/same-origin'
 import { createSessionMiddleware, type SessionStore } from './modules/auth/session'
 import { healthRouter } from './modules/health/health.routes'
 import { completionsRouter } from './modules/completions/completions.routes'
+import { ackRouter } from './modules/escalation/ack-page'
+import { escalationRouter } from './modules/escalation/escalation.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter } from './modules/people/people.routes'
@@ -68,10 +70,12 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/tasks', tasksRouter)
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
+  api.use('/', escalationRouter(config))
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })
   app.use('/api', api)
+  app.use('/ack', express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }))

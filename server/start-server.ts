@@ -5,10 +5,21 @@ import { createDataSource, setDataSource } from './db/data-source'
 import type { AppConfig } from './lib/config'
 import { createSessionStore } from './modules/auth/session'
 import { startScheduler } from './jobs/scheduler'
+import { logger } from './lib/logger'
+import { startLocalSmtp } from './mail/local-smtp'
+import { createTransport } from './modules/escalation/deliver'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
 
 /** Starts the whole server (DB, HTTP, sockets); used by server/index.ts and by browser tests. */
-export async function startServer(config: AppConfig, opts: { clientDir?: string; scheduler?: boolean } = {}) {
+export interface StartOptions {
+  clientDir?: string
+  scheduler?: boolean
+  schedulerIntervalMs?: number
+  /** In local mail mode the app runs its own SMTP server unless told not to (or one already runs). */
+  localSmtp?: boolean
+}
+
+export async function startServer(config: AppConfig, opts: StartOptions = {}) {
   const dataSource = createDataSource(config.db)
   await dataSource.initialize()
   setDataSource(dataSource)
@@ -17,18 +28,37 @@ export async function startServer(config: AppConfig, opts: { clientDir?: string;
   const server = createServer(app)
   attachSocketServer(server, sessionMiddleware, passport)
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve))
-  const scheduler = opts.scheduler === false ? null : startScheduler(dataSource)
+  const smtp = config.mail.mode === 'local' && opts.localSmtp !== false ? await startLocalSmtpIfFree(config.mail.port, config.mail.host) : null
+  // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
+  const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
+  const transport = createTransport(mailConfig)
+  const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {
     url: `http://${config.host}:${port}`,
     port,
     scheduler,
+    smtpPort: smtp?.port ?? null,
     async stop() {
       await scheduler?.stop()
+      transport.close()
+      await smtp?.close()
       await closeSocketServer()
       await new Promise<void>((resolve) => server.close(() => resolve()))
       await sessionStore.close()
       await dataSource.destroy()
     },
+  }
+}
+
+async function startLocalSmtpIfFree(port: number, host: string) {
+  try {
+    const smtp = await startLocalSmtp(port, host)
+    logger.info(`Local SMTP server on ${host}:${smtp.port} (mail is kept for the Outbox page)`)
+    return smtp
+  } catch (err) {
+    // Another Roundtide process on this machine already runs it; send to that one.
+    if ((err as { code?: string }).code === 'EADDRINUSE') return null
+    throw err
   }
 }

@@ -1,4 +1,5 @@
 import { AlertEntity, CompletionEntity, PhotoEntity, ReadingEntity } from '../modules/completions/completion.entities'
+import { DigestEntity, LadderEntity, NotificationEntity, OutboxEntity } from '../modules/escalation/escalation.entities'
 import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
@@ -10,5 +11,5 @@ import { TaskEntity } from '../modules/tasks/task.entity'
 export const entities = [
   PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
-  ShiftEntity, OnCallEntity, HandoverNoteEntity,
+  ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity,
 ]

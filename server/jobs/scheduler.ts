@@ -1,5 +1,9 @@
 import type { DataSource, QueryRunner } from 'typeorm'
+import type { AppConfig } from '../lib/config'
 import { logger } from '../lib/logger'
+import { deliverPending, type Transport } from '../modules/escalation/deliver'
+import { sendDailyDigestIfDue } from '../modules/escalation/digest'
+import { runEscalations } from '../modules/escalation/escalate'
 import { materialise } from '../modules/tasks/materialiser'
 import { getTask } from '../modules/tasks/tasks.service'
 import { publishTask } from '../realtime/task-events'
@@ -13,6 +17,8 @@ export interface SchedulerOptions {
   now?: () => Date
   /** Processes sharing a lock name share one leader; tests use their own name. */
   lockName?: string
+  /** Without mail settings the clock still moves tasks but sends nothing. */
+  mail?: { config: AppConfig; transport: Transport }
 }
 
 /**
@@ -56,6 +62,11 @@ export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
       const at = now()
       const { changed } = await advanceTaskStatuses(ds, at)
       for (const id of changed.slice(0, 500)) publishTask('task:updated', await getTask(id))
+      await runEscalations(at)
+      if (opts.mail) {
+        await deliverPending(opts.mail.config, opts.mail.transport, at)
+        await sendDailyDigestIfDue(opts.mail.config, opts.mail.transport, at).catch((err) => logger.warn({ err }, 'daily digest not sent'))
+      }
       if (at.getTime() - lastHorizon > HORIZON_EVERY_MS) {
         lastHorizon = at.getTime()
         await materialise({ from: at })

@@ -17,6 +17,13 @@ const EnvSchema = z.object({
   ROUNDTIDE_SIGNIN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(8),
   ROUNDTIDE_UPLOAD_DIR: z.string().default('.data/uploads'),
   ROUNDTIDE_DEMO_PASSWORD: z.string().min(8).default('tidepool-demo'),
+  ROUNDTIDE_MAIL_MODE: z.enum(['local', 'smtp']).default('local'),
+  ROUNDTIDE_SMTP_HOST: z.string().default('127.0.0.1'),
+  ROUNDTIDE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  ROUNDTIDE_SMTP_USER: z.string().optional(),
+  ROUNDTIDE_SMTP_PASSWORD: z.string().optional(),
+  ROUNDTIDE_MAIL_FROM: z.string().default('Roundtide <roundtide@localhost>'),
+  ROUNDTIDE_ACK_TTL_HOURS: z.coerce.number().min(1).max(24 * 14).default(72),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })
 
@@ -44,5 +51,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     uploadDir: e.ROUNDTIDE_UPLOAD_DIR,
     demoPassword: e.ROUNDTIDE_DEMO_PASSWORD,
     logLevel: e.LOG_LEVEL,
+    mail: {
+      mode: e.ROUNDTIDE_MAIL_MODE,
+      host: e.ROUNDTIDE_SMTP_HOST,
+      port: e.ROUNDTIDE_SMTP_PORT,
+      user: e.ROUNDTIDE_SMTP_USER,
+      password: e.ROUNDTIDE_SMTP_PASSWORD,
+      from: e.ROUNDTIDE_MAIL_FROM,
+      ackTtlHours: e.ROUNDTIDE_ACK_TTL_HOURS,
+    },
   }
 }

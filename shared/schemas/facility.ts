@@ -22,6 +22,10 @@ export const FacilitySchema = z.object({
   quarantineDays: z.number().int().min(0).max(365),
   arrivalTempDiffLimitC: z.number().min(0).max(10),
   minOxygenHours: z.number().min(0).max(240),
+  /** Ladder for missed routine tasks, and the fast one for welfare-critical tasks and critical readings. */
+  defaultLadderId: z.number().int().nullable(),
+  fastLadderId: z.number().int().nullable(),
+  digestTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour'),
 })
 export type Facility = z.infer<typeof FacilitySchema>
 export const UpdateFacilityInputSchema = FacilitySchema.omit({ id: true }).partial()

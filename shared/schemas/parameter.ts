@@ -14,6 +14,8 @@ export const ParameterSchema = z.object({
   physicalMin: z.number(),
   physicalMax: z.number(),
   derived: z.boolean(),
+  /** The ladder a critical reading of this parameter climbs; the facility's fast ladder when empty. */
+  ladderId: z.number().int().nullable(),
 })
 export type Parameter = z.infer<typeof ParameterSchema>
 

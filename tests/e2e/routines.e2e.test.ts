@@ -6,14 +6,14 @@ import { db } from '#server/db/data-source'
 import { areas, tanks } from '#server/modules/facility/catalogues'
 import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
 import { ParameterEntity } from '#server/modules/parameters/parameter.entities'
-import { createRoutine } from '#server/modules/routines/routines.service'
+import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import type { Parameter } from '#shared/schemas/parameter'
 import type { Task } from '#shared/schemas/task'
 import { DESKTOP, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 
 const NARROW_PHONE = { width: 360, height: 780 }
 
-const READINGS: Array<Omit<Parameter, 'id'>> = [
+const READINGS: Array<Pick<Parameter, 'key' | 'name' | 'unit' | 'decimals' | 'physicalMin' | 'physicalMax' | 'derived'>> = [
   { key: 'do_mgL', name: 'Dissolved oxygen', unit: 'mg/L', decimals: 1, physicalMin: 0, physicalMax: 30, derived: false },
   { key: 'temp_c', name: 'Temperature', unit: '°C', decimals: 1, physicalMin: -2, physicalMax: 45, derived: false },
 ]
@@ -24,13 +24,18 @@ beforeAll(async () => {
 })
 afterAll(() => s?.close())
 
-/** The facility's zone, three fresh tanks in a fresh area, and the two readings the routine needs. */
-async function arrange() {
+/** The shared test DB may already hold a facility in another zone; its zone is read back, not assumed. */
+async function facilityAndTag() {
   const facility = await createFacilityIfMissing({
     name: 'Routine test station', timeZone: 'Australia/Brisbane', handoverTime: '07:00',
     quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 24,
   })
-  const tag = randomUUID().slice(0, 6).toUpperCase()
+  return { facility, tag: randomUUID().slice(0, 6).toUpperCase(), today: DateTime.now().setZone(facility.timeZone).toISODate()! }
+}
+
+/** Three fresh tanks in a fresh area, the two readings the routine needs, and two neighbours for the list. */
+async function arrange() {
+  const { facility, tag, today } = await facilityAndTag()
   const area = await areas.create({ code: `RT${tag}`, name: `Routine hall ${tag}`, roundOrder: 900, quarantine: false })
   const tankCodes = [1, 2, 3].map((n) => `RT${tag}-T${n}`)
   const tankIds: number[] = []
@@ -43,7 +48,6 @@ async function arrange() {
   }
   const parameters = await repo.findBy(READINGS.map(({ key }) => ({ key })))
   // Neighbours for the list: one welfare-critical, one paused.
-  const today = DateTime.now().setZone(facility.timeZone).toISODate()!
   await createRoutine({
     name: `Morning tank check ${tag}`, category: 'welfare', targetKind: 'area_tanks', targetIds: [area.id],
     rrule: 'FREQ=DAILY', dtstart: `${today}T07:30:00`, priority: 'welfare_critical', requiredReadings: ['do_mgL'],
@@ -151,5 +155,30 @@ describe('Routines', () => {
     await phone.page.getByRole('region', { name: longDate(nextMonday) }).waitFor()
     await screenshot(phone.page, 'routine-saved-phone')
     await phone.context.close()
+  })
+
+  test('when someone else saved first, a supervisor is told and can reload their version', async () => {
+    const { tag, today } = await facilityAndTag()
+    const input = { name: `Alarm call-out test ${tag}`, category: 'alarms', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T14:00:00` } as const
+    const routine = await createRoutine(input)
+    const supervisor = await s.createPerson('supervisor')
+    const { page, context } = await s.newPage(DESKTOP)
+    await s.signIn(page, supervisor.email)
+    await page.goto(`/routines/${routine.id}`)
+    await expect.poll(() => page.getByLabel('Default assignee').locator('option').allTextContents()).not.toContain('A named person')
+    await page.getByLabel('Name').fill(`Alarm test, renamed here ${tag}`)
+
+    await updateRoutine(routine.id, { ...input, instructions: 'Changed in the other office', version: routine.version })
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await page.getByText('Someone else changed this routine after you opened it.').waitFor()
+    await screenshot(page, 'routine-conflict-desktop')
+    await page.getByRole('button', { name: 'Reload routine' }).click()
+    await expect.poll(() => page.getByLabel('Instructions').inputValue()).toBe('Changed in the other office')
+    expect(await page.getByLabel('Name').inputValue()).toBe(input.name)
+
+    await page.getByLabel('Name').fill(`Alarm test, renamed here ${tag}`)
+    await page.getByRole('button', { name: 'Save changes' }).click()
+    await page.getByRole('heading', { name: `Alarm test, renamed here ${tag}` }).waitFor()
+    await context.close()
   })
 })

@@ -47,6 +47,14 @@ describe('Tanks page', () => {
       await form.getByRole('button', { name: 'Add area' }).click()
       await page.getByRole('heading', { name: `${area.name} (${area.code})` }).waitFor()
     }
+    await page.getByRole('button', { name: 'Add area' }).click()
+    const again = page.getByRole('form', { name: 'New area' })
+    await again.getByLabel('Code').fill(nursery.code)
+    await again.getByLabel('Name').fill('Second nursery')
+    await again.getByRole('button', { name: 'Add area' }).click()
+    await again.getByText(`Another area already has the code ${nursery.code}.`).waitFor()
+    await again.getByRole('button', { name: 'Cancel' }).click()
+
     const quarantineBranch = page.getByRole('listitem').filter({ has: page.getByRole('heading', { name: quarantine.name }) })
     await quarantineBranch.getByText('Quarantine', { exact: true }).waitFor()
 
@@ -111,6 +119,9 @@ describe('Tanks page', () => {
     await phone.page.getByRole('cell', { name: tank1, exact: true }).waitFor()
     await phone.page.getByRole('button', { name: 'Add tank' }).click()
     await screenshot(phone.page, 'tanks-table-phone')
+    await phone.page.setViewportSize({ width: 360, height: 780 })
+    await phone.page.getByRole('button', { name: 'Cancel' }).click()
+    await screenshot(phone.page, 'tanks-table-phone-360')
     await phone.context.close()
   })
 })

@@ -15,6 +15,9 @@ export const FacilityEntity = new EntitySchema<Facility>({
     quarantineDays: { type: 'int', default: 30 },
     arrivalTempDiffLimitC: { type: 'decimal', precision: 4, scale: 1, default: 2, transformer: decimalAsNumber },
     minOxygenHours: { type: 'decimal', precision: 6, scale: 1, default: 12, transformer: decimalAsNumber },
+    defaultLadderId: { type: 'int', nullable: true },
+    fastLadderId: { type: 'int', nullable: true },
+    digestTime: { type: 'varchar', length: 5, default: '07:00' },
   },
 })
 

@@ -18,7 +18,9 @@ export async function updateFacility(input: unknown): Promise<Facility> {
   return repo().save({ ...current, ...data })
 }
 
-export async function createFacilityIfMissing(facility: Omit<Facility, 'id'>): Promise<Facility> {
+type NewFacility = Omit<Facility, 'id' | 'defaultLadderId' | 'fastLadderId' | 'digestTime'> & Partial<Pick<Facility, 'defaultLadderId' | 'fastLadderId' | 'digestTime'>>
+
+export async function createFacilityIfMissing(facility: NewFacility): Promise<Facility> {
   const [row] = await repo().find({ order: { id: 'ASC' }, take: 1 })
-  return row ?? repo().save(repo().create(facility))
+  return row ?? repo().save(repo().create({ defaultLadderId: null, fastLadderId: null, digestTime: '07:00', ...facility }))
 }

@@ -13,6 +13,7 @@ export const ParameterEntity = new EntitySchema<Parameter>({
     physicalMin: { type: 'double' },
     physicalMax: { type: 'double' },
     derived: { type: 'boolean', default: false },
+    ladderId: { type: 'int', nullable: true },
   },
 })
 

@@ -13,6 +13,9 @@ export interface PersonRow {
   onCallEligible: boolean
   /** Bumped on deactivation or password reset so every older session stops working. */
   sessionVersion: number
+  /** Routine mail waits outside these local hours; critical and welfare-critical mail never waits. */
+  quietStart: string | null
+  quietEnd: string | null
   createdAt: Date
   updatedAt: Date
 }
@@ -31,6 +34,8 @@ export const PersonEntity = new EntitySchema<PersonRow>({
     active: { type: 'boolean', default: true },
     onCallEligible: { type: 'boolean', default: false },
     sessionVersion: { type: 'int', default: 0 },
+    quietStart: { type: 'varchar', length: 5, nullable: true },
+    quietEnd: { type: 'varchar', length: 5, nullable: true },
     createdAt: { type: 'datetime', precision: 3, createDate: true },
     updatedAt: { type: 'datetime', precision: 3, updateDate: true },
   },

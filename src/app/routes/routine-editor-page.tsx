@@ -1,6 +1,7 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { ArrowLeft } from 'lucide-react'
-import { Link, useNavigate, useParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import { Link, redirect, useNavigate, useParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import type { Role } from '#shared/schemas/person'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { routineReferenceQueries } from '../../features/routines/api/routine-reference-queries'
@@ -10,6 +11,8 @@ import { PausedLabel } from '../../features/routines/components/paused-label'
 import { PriorityLabel } from '../../features/routines/components/priority-label'
 import { RoutineForm } from '../../features/routines/components/routine-form'
 import { RoutineUpcomingTasks } from '../../features/routines/components/routine-upcoming-tasks'
+
+const canEditRoutines = (role: Role) => role === 'manager' || role === 'supervisor'
 
 /** null on /routines/new; a 404 for anything that is not a routine id. */
 function routineIdFrom(params: Params): number | null {
@@ -21,6 +24,8 @@ function routineIdFrom(params: Params): number | null {
 
 export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
   const id = routineIdFrom(params)
+  const me = await queryClient.ensureQueryData(authQueries.me())
+  if (id === null && !canEditRoutines(me.role)) return redirect('/routines')
   await Promise.all([
     queryClient.ensureQueryData(routineReferenceQueries.facility()),
     queryClient.ensureQueryData(routineReferenceQueries.parameters()),
@@ -36,7 +41,7 @@ function useEditorContext() {
   return {
     timeZone: facility.timeZone,
     parameters,
-    canEdit: me.role === 'manager' || me.role === 'supervisor',
+    canEdit: canEditRoutines(me.role),
     canPickPerson: me.role === 'manager',
     canDelete: me.role === 'manager',
   }

@@ -5,7 +5,7 @@ import type { Routine } from '#shared/schemas/routine'
 
 // A facility in Berlin: clocks go forward on 2026-03-29 and back on 2026-10-25 (EU rule, common knowledge).
 const catalogue = (timeZone: string): Catalogue => ({
-  facility: { id: 1, name: 'Test station', timeZone, handoverTime: '08:00', quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 12 },
+  facility: { id: 1, name: 'Test station', timeZone, handoverTime: '08:00', quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 12, defaultLadderId: null, fastLadderId: null, digestTime: '07:00' },
   areas: new Map([[1, { id: 1, code: 'A', name: 'Hall', roundOrder: 1, quarantine: false }]]),
   systems: new Map(),
   tanks: new Map([

@@ -29,7 +29,11 @@ export function BatchesTable({ batches, tanks, canEdit, onEdit }: BatchesTablePr
       column.accessor('arrivalDate', { header: 'Arrived', cell: (info) => <span className="whitespace-nowrap tabular-nums">{info.getValue()}</span> }),
       column.accessor('count', { header: 'Fish', cell: (info) => <span className="tabular-nums">{formatNumber(info.getValue(), 0)}</span> }),
       column.accessor('meanWeightG', { header: 'Mean weight', cell: (info) => <span className="whitespace-nowrap tabular-nums">{formatNumber(info.getValue())} g</span> }),
-      column.accessor((b) => b.tankIds.map((id) => codes.get(id) ?? `#${id}`).join(', '), { id: 'tanks', header: 'Tanks' }),
+      column.accessor((b) => b.tankIds.map((id) => codes.get(id) ?? `#${id}`).join(', '), {
+        id: 'tanks',
+        header: 'Tanks',
+        cell: (info) => <span className="block min-w-40 whitespace-normal">{info.getValue() || '—'}</span>,
+      }),
       column.accessor('origin', { header: 'Origin' }),
       ...(canEdit
         ? [
@@ -63,7 +67,7 @@ export function BatchesTable({ batches, tanks, canEdit, onEdit }: BatchesTablePr
         placeholder="Code, species, status, tank or origin"
         shown={table.getFilteredRowModel().rows.length}
         total={batches.length}
-        noun="batches"
+        nouns={['batch', 'batches']}
       />
       <DataTable table={table} caption="Batches" minWidth="min-w-[52rem]" emptyText={batches.length ? 'No batch matches.' : 'No batches yet.'} />
     </div>

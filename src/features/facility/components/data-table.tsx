@@ -11,11 +11,11 @@ interface DataTableProps<T> {
 }
 
 /** Dense, sortable table for desktop that scrolls sideways on a phone. */
-export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[44rem]' }: DataTableProps<T>) {
+export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[40rem]' }: DataTableProps<T>) {
   const rows = table.getRowModel().rows
   return (
     <div className="overflow-x-auto rounded-xl border border-tide-200 bg-white">
-      <table className={clsx('w-full text-left text-sm', minWidth)}>
+      <table className={clsx('w-full whitespace-nowrap text-left text-sm', minWidth)}>
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-tide-100 text-tide-800">
           {table.getHeaderGroups().map((group) => (
@@ -28,7 +28,7 @@ export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[44r
                     key={header.id}
                     scope="col"
                     aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                    className={clsx('whitespace-nowrap px-3 py-2 font-semibold', index === 0 && 'sticky left-0 z-10 bg-tide-100')}
+                    className={clsx('whitespace-nowrap px-3 py-2 font-semibold', index === 0 && 'sticky left-0 z-10 bg-tide-100 shadow-[1px_0_0_#aed3dd]')}
                   >
                     {header.column.getCanSort() ? (
                       <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex min-h-8 items-center gap-1">
@@ -48,7 +48,7 @@ export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[44r
           {rows.map((row) => (
             <tr key={row.id} className="border-t border-tide-100 align-top hover:bg-tide-50/60">
               {row.getVisibleCells().map((cell, index) => (
-                <td key={cell.id} className={clsx('px-3 py-2 md:py-1.5', index === 0 && 'sticky left-0 z-10 bg-white font-semibold text-tide-900')}>
+                <td key={cell.id} className={clsx('px-3 py-2 md:py-1.5', index === 0 && 'sticky left-0 z-10 bg-white font-semibold text-tide-900 shadow-[1px_0_0_#d5e9ee]')}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

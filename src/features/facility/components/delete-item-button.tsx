@@ -36,7 +36,7 @@ export function DeleteItemButton({ name, id, label, blockedReason }: DeleteItemB
   }
 
   return (
-    <div role="group" aria-label={`Delete ${label}`} className="flex min-w-56 flex-col gap-2 rounded-lg border border-alarm-100 bg-alarm-50 p-2 text-sm text-alarm-700">
+    <div role="group" aria-label={`Delete ${label}`} className="flex w-64 flex-col gap-2 whitespace-normal rounded-lg border border-alarm-100 bg-alarm-50 p-2 text-sm text-alarm-700">
       {blockedReason ? (
         <>
           <p className="font-semibold">{blockedReason}</p>

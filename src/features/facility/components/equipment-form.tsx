@@ -2,11 +2,11 @@ import { useId } from 'react'
 import type { Area, Equipment } from '#shared/schemas/facility'
 import { Field } from '../../../components/ui/field'
 import { useCatalogueForm } from '../hooks/use-catalogue-form'
+import { toOptionalNumber } from '../utils/form-values'
 import { FormShell } from './form-shell'
 import { SelectField } from './select-field'
 
 const KIND_SUGGESTIONS = ['pump', 'blower', 'chiller', 'heater', 'UV steriliser', 'biofilter', 'drum filter', 'oxygen cone', 'probe', 'alarm unit']
-const toOptionalId = (v: string) => (v === '' ? null : Number(v))
 
 export function EquipmentForm({ equipment, areas, onDone }: { equipment?: Equipment; areas: Area[]; onDone: () => void }) {
   const listId = useId()
@@ -31,7 +31,7 @@ export function EquipmentForm({ equipment, areas, onDone }: { equipment?: Equipm
       <datalist id={listId}>
         {KIND_SUGGESTIONS.map((k) => <option key={k} value={k} />)}
       </datalist>
-      <SelectField label="Area" {...form.register('areaId', { setValueAs: toOptionalId })} error={errors.areaId?.message}>
+      <SelectField label="Area" {...form.register('areaId', { setValueAs: toOptionalNumber })} error={errors.areaId?.message}>
         <option value="">No single area</option>
         {areas.map((a) => (
           <option key={a.id} value={a.id}>{a.name} ({a.code})</option>

@@ -60,7 +60,7 @@ export function EquipmentTable({ equipment, areas, canEdit, onEdit }: EquipmentT
         placeholder="Code, name, kind or area"
         shown={table.getFilteredRowModel().rows.length}
         total={equipment.length}
-        noun="pieces of equipment"
+        nouns={['piece of equipment', 'pieces of equipment']}
       />
       <DataTable table={table} caption="Equipment" minWidth="min-w-[36rem]" emptyText={equipment.length ? 'Nothing matches.' : 'No equipment yet.'} />
     </div>

@@ -1,10 +1,10 @@
 import type { Area, System } from '#shared/schemas/facility'
 import { Field } from '../../../components/ui/field'
 import { useCatalogueForm } from '../hooks/use-catalogue-form'
+import { toOptionalNumber } from '../utils/form-values'
 import { FormShell } from './form-shell'
 import { SelectField } from './select-field'
 
-const toOptionalNumber = (v: string) => (v === '' ? null : Number(v))
 
 export function SystemForm({ system, areas, onDone }: { system?: System; areas: Area[]; onDone: () => void }) {
   const { form, submit, pending, editing } = useCatalogueForm('systems', {

@@ -79,7 +79,7 @@ export function SystemsTable({ systems, areas, tanks, canEdit, onEdit }: Systems
         placeholder="Code, name or area"
         shown={table.getFilteredRowModel().rows.length}
         total={systems.length}
-        noun="systems"
+        nouns={['system', 'systems']}
       />
       <DataTable table={table} caption="Systems" emptyText={systems.length ? 'No system matches.' : 'No systems yet.'} />
     </div>

@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react'
+import { useId, type ReactNode } from 'react'
 
 interface TableToolbarProps {
   search: string
@@ -7,21 +7,24 @@ interface TableToolbarProps {
   placeholder: string
   shown: number
   total: number
-  noun: string
+  /** Singular and plural, e.g. ['tank', 'tanks']. */
+  nouns: readonly [string, string]
   children?: ReactNode
 }
 
 /** Search box, extra filters and a live "showing n of m" line above a catalogue table. */
-export function TableToolbar({ search, onSearch, searchLabel, placeholder, shown, total, noun, children }: TableToolbarProps) {
+export function TableToolbar({ search, onSearch, searchLabel, placeholder, shown, total, nouns, children }: TableToolbarProps) {
+  const id = useId()
+  const count = (n: number) => `${n} ${n === 1 ? nouns[0] : nouns[1]}`
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-col gap-2 sm:flex-row sm:flex-wrap sm:items-end">
         <div className="flex flex-col gap-1 sm:w-72">
-          <label className="text-sm font-semibold text-tide-800" htmlFor={`${noun}-search`}>
+          <label className="text-sm font-semibold text-tide-800" htmlFor={id}>
             {searchLabel}
           </label>
           <input
-            id={`${noun}-search`}
+            id={id}
             type="search"
             placeholder={placeholder}
             value={search}
@@ -32,7 +35,7 @@ export function TableToolbar({ search, onSearch, searchLabel, placeholder, shown
         {children}
       </div>
       <p aria-live="polite" className="text-sm text-tide-600">
-        {shown === total ? `${total} ${noun}` : `Showing ${shown} of ${total} ${noun}`}
+        {shown === total ? count(total) : `Showing ${shown} of ${count(total)}`}
       </p>
     </div>
   )

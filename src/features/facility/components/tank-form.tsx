@@ -1,6 +1,7 @@
 import { TANK_KINDS, type Area, type System, type Tank } from '#shared/schemas/facility'
 import { Field } from '../../../components/ui/field'
 import { useCatalogueForm } from '../hooks/use-catalogue-form'
+import { toOptionalNumber, toRequiredNumber } from '../utils/form-values'
 import { CheckboxField } from './checkbox-field'
 import { FormShell } from './form-shell'
 import { SelectField } from './select-field'
@@ -13,7 +14,6 @@ interface TankFormProps {
 }
 
 const KIND_LABELS: Record<Tank['kind'], string> = { tank: 'Tank', bin: 'Bin' }
-const toOptionalId = (v: string) => (v === '' ? null : Number(v))
 
 export function TankForm({ tank, areas, systems, onDone }: TankFormProps) {
   const { form, submit, pending, editing } = useCatalogueForm('tanks', {
@@ -33,13 +33,13 @@ export function TankForm({ tank, areas, systems, onDone }: TankFormProps) {
     >
       <Field label="Code" autoComplete="off" hint="Printed on the tank label, e.g. N-04" {...form.register('code')} error={errors.code?.message} />
       <Field label="Name" autoComplete="off" {...form.register('name')} error={errors.name?.message} />
-      <SelectField label="Area" {...form.register('areaId', { setValueAs: (v: string) => (v === '' ? Number.NaN : Number(v)) })} error={errors.areaId && 'Choose an area'}>
+      <SelectField label="Area" {...form.register('areaId', { setValueAs: toRequiredNumber })} error={errors.areaId && 'Choose an area'}>
         {areas.length === 0 && <option value="">Add an area first</option>}
         {areas.map((a) => (
           <option key={a.id} value={a.id}>{a.name} ({a.code})</option>
         ))}
       </SelectField>
-      <SelectField label="System" {...form.register('systemId', { setValueAs: toOptionalId })} error={errors.systemId?.message}>
+      <SelectField label="System" {...form.register('systemId', { setValueAs: toOptionalNumber })} error={errors.systemId?.message}>
         <option value="">Not on a system (standalone)</option>
         {systems.map((s) => (
           <option key={s.id} value={s.id}>{s.name} ({s.code})</option>

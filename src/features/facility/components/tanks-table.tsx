@@ -86,7 +86,7 @@ export function TanksTable({ tanks, areas, systems, canEdit, onEdit }: TanksTabl
         placeholder="Code, name, area or system"
         shown={table.getFilteredRowModel().rows.length}
         total={tanks.length}
-        noun="tanks"
+        nouns={['tank', 'tanks']}
       >
         <label className="flex flex-col gap-1 text-sm font-semibold text-tide-800">
           Area

@@ -45,14 +45,23 @@ export function LiveUpdatesProvider({ sessionKey, onTask, children }: Props) {
     socket.on('connect', () => {
       report('live')
       // What changed while we were away came as events nobody heard: catch up once.
-      if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT })
+      if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
       missed = false
     })
     socket.on('disconnect', lost)
     socket.on('connect_error', lost)
-    const onOffline = () => !socket.connected && report('offline')
+    const onOffline = () => {
+      // The socket may not notice a dead network until its ping times out; the browser knows sooner.
+      missed = true
+      report('offline')
+    }
     const onOnline = () => {
-      if (socket.connected) return
+      if (socket.connected) {
+        report('live')
+        void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
+        missed = false
+        return
+      }
       report('reconnecting')
       // Skip the back-off wait: the network is back now.
       socket.disconnect().connect()

@@ -16,6 +16,8 @@ export type SubmitOutcome = { kind: 'sent'; result: CompletionResult } | { kind:
 export function useSubmitCompletion(personId: number) {
   const queryClient = useQueryClient()
   return useMutation({
+    // It decides itself what to do offline (queue it); TanStack's default would pause it instead.
+    networkMode: 'always',
     mutationFn: async ({ task, payload }: { task: RoundTask; payload: CompletionPayload }): Promise<SubmitOutcome> => {
       const queue = () =>
         addToOutbox({

@@ -1,6 +1,7 @@
 import { RotateCcw } from 'lucide-react'
 import type { CompletionResult } from '#shared/schemas/completion'
 import type { Round, RoundTask } from '#shared/schemas/round'
+import { DERIVED_NAMES } from '../utils/derived-names'
 import { doneAt } from '../utils/format'
 import { BandBadge } from './band-badge'
 
@@ -13,7 +14,7 @@ interface Props {
 /** Who finished the task and when; for a flag, the readings behind it and when the recheck is due. */
 export function CompletedDetails({ task, round, result }: Props) {
   const recheck = round.tasks.find((t) => t.recheckOfTaskId === task.id)
-  const names = new Map(task.readingSpecs.map((s) => [s.key, s.name]))
+  const names = new Map([...Object.entries(DERIVED_NAMES).map(([k, d]) => [k, d.name] as const), ...task.readingSpecs.map((s) => [s.key, s.name] as const)])
   const flagged = result?.readings.filter((r) => r.band !== 'ok') ?? []
   return (
     <div className="flex flex-col gap-2 text-tide-800">
@@ -22,7 +23,7 @@ export function CompletedDetails({ task, round, result }: Props) {
         {task.completedAt && <> at {doneAt(task.completedAt, round.timeZone, round.date)}</>}
         {task.lateMinutes ? <span className="text-ember-700"> ({task.lateMinutes} min late)</span> : null}
       </p>
-      {task.flag && <BandBadge band={task.flag} prefix="Flag" className="self-start" />}
+      {task.flag === 'critical' && <p className="font-semibold text-alarm-700">A critical reading starts the escalation at once. Act on it now, then recheck.</p>}
       {flagged.length > 0 && (
         <ul className="flex flex-col gap-1">
           {flagged.map((r) => (

@@ -1,12 +1,8 @@
 import { Calculator } from 'lucide-react'
 import { deriveReadings } from '#shared/readings/derive'
 import type { ReadingSpec } from '#shared/schemas/round'
+import { DERIVED_NAMES as DERIVED } from '../utils/derived-names'
 import { checkReading } from '../utils/reading-value'
-
-const DERIVED: Record<string, { name: string; unit: string }> = {
-  do_pct: { name: 'DO saturation', unit: '% sat' },
-  nh3_mgL: { name: 'Un-ionised ammonia-N', unit: 'mg/L NH3-N' },
-}
 
 /** Values Roundtide works out from what was typed (DO % saturation, NH3); the server bands them on Done. */
 export function DerivedReadings({ specs, raw, salinitySetpoint }: { specs: ReadingSpec[]; raw: Record<string, string>; salinitySetpoint: number | null }) {

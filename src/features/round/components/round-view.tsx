@@ -1,6 +1,5 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query'
 import { useEffect, useState, type ReactNode } from 'react'
-import { toast } from 'sonner'
 import { Button } from '../../../components/ui/button'
 import { ErrorState, LoadingState } from '../../../components/ui/page-state'
 import { roundQueries } from '../api/round-queries'
@@ -15,6 +14,9 @@ import { OutboxOrphans } from './outbox-orphans'
 import { RoundEmpty } from './round-empty'
 import { RoundHeader } from './round-header'
 import { RoundList } from './round-list'
+
+// One readable column on wide screens; the phone uses the full width.
+const column = 'mx-auto max-w-2xl'
 
 interface Props {
   personId: number
@@ -51,7 +53,9 @@ function RoundContent({ personId, date, status }: Props) {
       return (
         <>
           {header()}
-          <ErrorState title="Could not load your round" message={query.error.message} action={<Button variant="secondary" onClick={() => void query.refetch()}>Try again</Button>} />
+          <div className={column}>
+            <ErrorState title="Could not load your round" message={query.error.message} action={<Button variant="secondary" onClick={() => void query.refetch()}>Try again</Button>} />
+          </div>
         </>
       )
     }
@@ -59,18 +63,19 @@ function RoundContent({ personId, date, status }: Props) {
     return (
       <>
         {header()}
-        {paused ? (
-          <ErrorState title="You are offline" message="This round has not been opened on this phone yet, so there is no copy here. It will load as soon as the connection is back." />
-        ) : (
-          <LoadingState label="Loading your round…" />
-        )}
+        <div className={column}>
+          {paused ? (
+            <ErrorState title="You are offline" message="This round has not been opened on this phone yet, so there is no copy here. It will load as soon as the connection is back." />
+          ) : (
+            <LoadingState label="Loading your round…" />
+          )}
+        </div>
       </>
     )
   }
 
   const counted = round.tasks.filter((t) => t.status !== 'held')
   const onFinished = (taskId: number, outcome: SubmitOutcome) => {
-    if (outcome.kind === 'queued') toast.info('Saved on this phone. It will be sent when the connection is back.')
     // A flag stays open so the person sees the band and the recheck before walking on.
     if (outcome.kind === 'sent' && outcome.result.task.flag) return
     const next = nextOpenTask(round.tasks, taskId, new Set([...outbox.byTask.keys(), taskId]))
@@ -81,24 +86,26 @@ function RoundContent({ personId, date, status }: Props) {
   return (
     <>
       {header(counted.filter(isFinished).length, counted.length)}
-      <OutboxOrphans entries={outbox.entries} round={round} />
-      {round.tasks.length === 0 ? (
-        <RoundEmpty />
-      ) : (
-        <RoundList
-          round={round}
-          personId={personId}
-          online={online}
-          expandedId={expandedId}
-          advancedTo={advancedTo}
-          outboxByTask={outbox.byTask}
-          onToggle={(id) => {
-            setAdvancedTo(null)
-            setExpandedId((current) => (current === id ? null : id))
-          }}
-          onFinished={onFinished}
-        />
-      )}
+      <div className={column}>
+        <OutboxOrphans entries={outbox.entries} round={round} />
+        {round.tasks.length === 0 ? (
+          <RoundEmpty />
+        ) : (
+          <RoundList
+            round={round}
+            personId={personId}
+            online={online}
+            expandedId={expandedId}
+            advancedTo={advancedTo}
+            outboxByTask={outbox.byTask}
+            onToggle={(id) => {
+              setAdvancedTo(null)
+              setExpandedId((current) => (current === id ? null : id))
+            }}
+            onFinished={onFinished}
+          />
+        )}
+      </div>
     </>
   )
 }

@@ -43,17 +43,15 @@ export function TaskForm({ task, personId, online, autoFocus, onFinished }: Prop
       return
     }
     update({ errors: {} })
-    submit.mutate(
-      { task, payload: built.payload },
-      {
-        onSuccess: (outcome) => {
-          clear()
-          onFinished(task.id, outcome)
-        },
-        onError: (error) => {
-          update({ errors: draftErrorsFrom(error instanceof ApiError ? error.fieldErrors : undefined, error.message) })
-          if (error instanceof ApiError && error.status === 409) void queryClient.invalidateQueries({ queryKey: roundKeys.all })
-        },
+    // mutateAsync, not mutate: the form unmounts as soon as the cache or the outbox shows the task finished.
+    submit.mutateAsync({ task, payload: built.payload }).then(
+      (outcome) => {
+        clear()
+        onFinished(task.id, outcome)
+      },
+      (error: Error) => {
+        update({ errors: draftErrorsFrom(error instanceof ApiError ? error.fieldErrors : undefined, error.message) })
+        if (error instanceof ApiError && error.status === 409) void queryClient.invalidateQueries({ queryKey: roundKeys.all })
       },
     )
   }

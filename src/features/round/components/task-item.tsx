@@ -1,5 +1,5 @@
 import { clsx } from 'clsx'
-import { ChevronDown, CirclePause, CloudUpload, RotateCcw, UserRound } from 'lucide-react'
+import { ChevronDown, CirclePause, CloudUpload, RotateCcw } from 'lucide-react'
 import { useEffect, useRef } from 'react'
 import type { Round, RoundTask } from '#shared/schemas/round'
 import type { SubmitOutcome } from '../api/use-submit-completion'
@@ -43,7 +43,7 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
         <span className={clsx('w-14 shrink-0 text-lg font-bold tabular-nums', late ? 'text-alarm-700' : finished ? 'text-tide-500' : 'text-tide-900')}>{task.localTime}</span>
         <span className="flex min-w-0 flex-1 flex-col gap-1">
           <span className={clsx('font-semibold', finished ? 'text-tide-600' : 'text-tide-950')}>
-            {task.recheckOfTaskId && <RotateCcw aria-label="Recheck" className="mr-1 inline size-4 align-[-2px]" />}
+            {task.recheckOfTaskId && <RotateCcw aria-hidden className="mr-1 inline size-4 align-[-2px]" />}
             {task.title}
           </span>
           <span className="flex flex-wrap items-center gap-1.5">
@@ -55,11 +55,6 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
               </span>
             )}
             {entry?.failure && <span className="rounded-md bg-alarm-100 px-1.5 py-0.5 text-sm font-bold text-alarm-700">Not sent</span>}
-            {task.assigneeId === null && !finished && (
-              <span className="inline-flex items-center gap-1 text-sm text-tide-600">
-                <UserRound aria-hidden className="size-4" /> Unassigned
-              </span>
-            )}
           </span>
           {recheck && !expanded && (
             <span className="flex items-center gap-1 text-sm font-semibold text-tide-800">

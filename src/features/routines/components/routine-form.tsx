@@ -108,7 +108,6 @@ export function RoutineForm({ routine, timeZone, parameters, canEdit, canPickPer
   return (
     <FormProvider {...form}>
       <form noValidate onSubmit={submit} aria-label={base ? `Edit ${base.name}` : 'New routine'} className="flex flex-col gap-4">
-        {conflict && <RoutineConflictNotice onReload={reload} reloading={reloading} />}
         <fieldset disabled={!canEdit} className="flex min-w-0 flex-col gap-4">
           <RoutineBasicsFields />
           <TargetPicker />
@@ -123,6 +122,8 @@ export function RoutineForm({ routine, timeZone, parameters, canEdit, canPickPer
           <ReadingPicker parameters={parameters} />
           <ActivePeriodFields />
         </fieldset>
+        {/* next to Save, where the person is looking when it fails */}
+        {conflict && <RoutineConflictNotice onReload={reload} reloading={reloading} />}
         {hasErrors && form.formState.isSubmitted && (
           <p role="alert" className="flex items-start gap-2 font-semibold text-alarm-700">
             <CircleAlert aria-hidden className="mt-0.5 size-5 shrink-0" />

@@ -64,7 +64,7 @@ export function RuleEditor() {
           {...register('rrule')}
         />
       )}
-      <div aria-live="polite">
+      <div aria-live="polite" className="empty:-mt-4">
         {message && (
           <p id="routine-rule-error" className="flex items-start gap-2 rounded-lg bg-alarm-50 p-3 text-sm font-semibold text-alarm-700">
             <TriangleAlert aria-hidden className="mt-0.5 size-4 shrink-0" /> {message}

@@ -10,7 +10,7 @@ const MODES = [
 
 export function RuleModeSwitch({ mode, onChange }: { mode: RuleMode; onChange: (mode: RuleMode) => void }) {
   return (
-    <div role="group" aria-label="How to set the schedule" className="inline-flex rounded-lg bg-tide-100 p-1">
+    <div role="group" aria-label="How to set the schedule" className="inline-flex justify-self-start rounded-lg bg-tide-100 p-1">
       {MODES.map((m) => (
         <button
           key={m.value}

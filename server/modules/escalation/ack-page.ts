@@ -1,0 +1,35 @@
+import { Router } from 'express'
+import type { AppConfig } from '../../lib/config'
+import { acknowledgeByToken } from './escalation.service'
+
+const page = (title: string, body: string) =>
+  `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1"><title>${title} · Roundtide</title>
+<style>body{font-family:system-ui,sans-serif;background:#eef6f8;color:#0b1d26;margin:0;padding:24px}main{max-width:28rem;margin:10vh auto;background:#fff;border-radius:16px;padding:24px}
+button{min-height:48px;padding:0 20px;font-size:1rem;font-weight:600;border:0;border-radius:10px;background:#214e60;color:#fff}a{color:#214e60}</style></head><body><main>${body}</main></body></html>`
+
+const MESSAGES: Record<string, [string, string]> = {
+  acknowledged: ['Acknowledged', 'Thank you. The escalation has stopped and your answer is on the record.'],
+  already: ['Already answered', 'Someone had already acknowledged this; your answer is noted.'],
+  used: ['Link already used', 'This acknowledge link was used before. Open the task in Roundtide to see who answered.'],
+  expired: ['Link expired', 'This acknowledge link has expired. Open Roundtide to acknowledge from the task.'],
+  forged: ['Link not valid', 'This acknowledge link is not valid.'],
+}
+
+/**
+ * The link in an escalation mail. GET only shows a button (mail scanners follow links);
+ * the POST from that button records the answer.
+ */
+export function ackRouter(config: AppConfig) {
+  const router = Router()
+  router.get('/:token', (_req, res) => {
+    res.type('html').send(page('Acknowledge', `<h1>Acknowledge this escalation?</h1><p>This tells Roundtide you are dealing with it and stops further messages.</p>
+<form method="post"><button type="submit">Acknowledge</button></form>`))
+  })
+  router.post('/:token', async (req, res) => {
+    const outcome = await acknowledgeByToken(config.sessionSecret, req.params.token)
+    const [title, text] = MESSAGES[outcome.status]
+    const ok = outcome.status === 'acknowledged' || outcome.status === 'already'
+    res.status(ok ? 200 : outcome.status === 'used' ? 409 : 400).type('html').send(page(title, `<h1>${title}</h1><p>${text}</p>${outcome.taskId ? `<p><a href="/tasks/${outcome.taskId}">Open the task</a></p>` : ''}`))
+  })
+  return router
+}

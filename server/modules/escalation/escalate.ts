@@ -1,0 +1,64 @@
+import { In, IsNull, LessThanOrEqual } from 'typeorm'
+import { db } from '../../db/data-source'
+import { AlertEntity, type AlertRow } from '../completions/completion.entities'
+import { getFacility } from '../facility/facility.service'
+import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { NotificationEntity } from './escalation.entities'
+import { ladderFor } from './ladders.service'
+import { inQuietHours, quietHoursEnd, resolveRecipients } from './recipients'
+
+export const isUrgent = (alert: AlertRow, task: TaskRow) => alert.kind === 'critical_reading' || task.priority === 'welfare_critical'
+
+/**
+ * Climbs every open ladder one tick: closes alerts whose task was answered, and queues the
+ * messages of the step now due. After downtime, when several steps fell due together, only
+ * the latest is sent, so nobody gets a burst of stale messages.
+ */
+export async function runEscalations(now: Date): Promise<{ queued: number; closed: number }> {
+  const alerts = await db().getRepository(AlertEntity).find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull(), startedAt: LessThanOrEqual(now) } })
+  if (!alerts.length) return { queued: 0, closed: 0 }
+  const zone = (await getFacility()).timeZone
+  const tasks = new Map((await db().getRepository(TaskEntity).findBy({ id: In(alerts.map((a) => a.taskId)) })).map((t) => [t.id, t]))
+  let queued = 0
+  let closed = 0
+  for (const alert of alerts) {
+    const task = tasks.get(alert.taskId)
+    if (!task || (await answered(alert, task))) {
+      await db().getRepository(AlertEntity).update(alert.id, { closedAt: now })
+      closed++
+      continue
+    }
+    const ladder = await ladderFor(alert, task)
+    const reached = await db().getRepository(NotificationEntity).createQueryBuilder('n').select('MAX(n.step)', 'max').where('n.alertId = :id', { id: alert.id }).getRawOne<{ max: number | null }>()
+    const highest = reached?.max ?? -1
+    const dueSteps = ladder.steps.map((s, i) => ({ ...s, i })).filter((s) => s.i > highest && alert.startedAt.getTime() + s.afterMinutes * 60_000 <= now.getTime())
+    const step = dueSteps.at(-1)
+    if (!step) continue
+    const people = await resolveRecipients(step.notify, task, now, zone)
+    const urgent = isUrgent(alert, task)
+    const rows = people.map((p) => {
+      const held = !urgent && inQuietHours(p, now, zone)
+      const nextAttemptAt = held ? quietHoursEnd(p, now, zone) : now
+      return { alertId: alert.id, step: step.i, personId: p.id, email: p.email, subject: '', status: held ? ('held' as const) : ('pending' as const), urgent, attempts: 0, nextAttemptAt }
+    })
+    // Record the step even when nobody matched, so the ladder moves on instead of retrying it.
+    const values = rows.length ? rows : [{ alertId: alert.id, step: step.i, personId: 0, email: '', subject: 'Nobody to notify at this step', status: 'superseded' as const, urgent, attempts: 0, nextAttemptAt: now }]
+    const result = await db().getRepository(NotificationEntity).createQueryBuilder().insert().values(values).orIgnore().execute()
+    queued += rows.length ? (result.identifiers.filter(Boolean).length || rows.length) : 0
+  }
+  return { queued, closed }
+}
+
+/** A missed task that was done after all, or a critical reading whose recheck came back out of critical. */
+async function answered(alert: AlertRow, task: TaskRow): Promise<boolean> {
+  if (alert.kind === 'missed_task') return task.status === 'done' || task.status === 'skipped'
+  const recheck = await db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: task.id })
+  return !!recheck && recheck.status === 'done' && recheck.flag !== 'critical'
+}
+
+/** Acknowledging in the app or through a mail link stops the ladder and records who answered. */
+export async function acknowledgeAlert(alertId: number, personId: number, at = new Date()): Promise<boolean> {
+  const result = await db().getRepository(AlertEntity).update({ id: alertId, acknowledgedAt: IsNull() }, { acknowledgedAt: at, acknowledgedById: personId })
+  await db().getRepository(NotificationEntity).update({ alertId, status: In(['pending', 'held', 'failed']) }, { status: 'superseded' })
+  return !!result.affected
+}

@@ -1,0 +1,63 @@
+import { In } from 'typeorm'
+import type { EscalationRecord } from '#shared/schemas/ladder'
+import { db } from '../../db/data-source'
+import { forbidden, notFound } from '../../lib/errors'
+import { verifyAckToken } from '../../mail/ack-token'
+import { AlertEntity } from '../completions/completion.entities'
+import { PersonEntity } from '../people/person.entity'
+import { TaskEntity } from '../tasks/task.entity'
+import { acknowledgeAlert } from './escalate'
+import { NotificationEntity } from './escalation.entities'
+import { ladderFor } from './ladders.service'
+
+/** Each alert on a task: the steps sent, to whom, when, whether delivered, and who answered. */
+export async function escalationRecord(taskId: number): Promise<EscalationRecord[]> {
+  const task = await db().getRepository(TaskEntity).findOneBy({ id: taskId })
+  if (!task) throw notFound('That task')
+  const alerts = await db().getRepository(AlertEntity).find({ where: { taskId }, order: { startedAt: 'ASC' } })
+  if (!alerts.length) return []
+  const notes = await db().getRepository(NotificationEntity).find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { step: 'ASC', id: 'ASC' } })
+  const names = new Map((await db().getRepository(PersonEntity).find()).map((p) => [p.id, p.name]))
+  return Promise.all(
+    alerts.map(async (a) => ({
+      alertId: a.id,
+      kind: a.kind,
+      detail: a.detail,
+      startedAt: a.startedAt.toISOString(),
+      acknowledgedAt: a.acknowledgedAt?.toISOString() ?? null,
+      acknowledgedByName: a.acknowledgedById ? (names.get(a.acknowledgedById) ?? null) : null,
+      closedAt: a.closedAt?.toISOString() ?? null,
+      ladderName: (await ladderFor(a, task)).name,
+      notifications: notes
+        .filter((n) => n.alertId === a.id && n.personId !== 0)
+        .map((n) => ({ step: n.step, personName: names.get(n.personId) ?? n.email, email: n.email, status: n.status, attempts: n.attempts, sentAt: n.sentAt?.toISOString() ?? null, lastError: n.lastError })),
+    })),
+  )
+}
+
+export async function acknowledgeInApp(alertId: number, person: { id: number; role: string }) {
+  if (person.role === 'observer') {
+    // Observers may sit on a ladder; they answer through their mail link, which names them.
+    throw forbidden('Observers acknowledge through the link in their e-mail.')
+  }
+  const alert = await db().getRepository(AlertEntity).findOneBy({ id: alertId })
+  if (!alert) throw notFound('That alert')
+  await acknowledgeAlert(alertId, person.id)
+}
+
+export type AckOutcome = { status: 'acknowledged' | 'already' | 'forged' | 'expired' | 'used'; taskId?: number; byName?: string }
+
+/** What an acknowledge link does: a forged, expired or already-used token changes nothing. */
+export async function acknowledgeByToken(secret: string, token: string, now = new Date()): Promise<AckOutcome> {
+  const check = verifyAckToken(secret, token, now)
+  if (!check.ok) return { status: check.reason }
+  const repo = db().getRepository(NotificationEntity)
+  const row = await repo.findOneBy({ id: check.notificationId })
+  if (!row) return { status: 'forged' }
+  const claimed = await repo.createQueryBuilder().update().set({ ackUsedAt: now }).where('id = :id AND ackUsedAt IS NULL', { id: row.id }).execute()
+  if (!claimed.affected) return { status: 'used' }
+  const alert = await db().getRepository(AlertEntity).findOneByOrFail({ id: row.alertId })
+  const first = await acknowledgeAlert(alert.id, row.personId, now)
+  const person = await db().getRepository(PersonEntity).findOneBy({ id: row.personId })
+  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId, byName: person?.name }
+}

@@ -1,0 +1,57 @@
+import { LadderInputSchema, type Ladder, type LadderStep } from '#shared/schemas/ladder'
+import { db } from '../../db/data-source'
+import { notFound } from '../../lib/errors'
+import type { AlertRow } from '../completions/completion.entities'
+import { getFacility } from '../facility/facility.service'
+import { ParameterEntity } from '../parameters/parameter.entities'
+import { RoutineEntity } from '../routines/routine.entity'
+import type { TaskRow } from '../tasks/task.entity'
+import { LadderEntity } from './escalation.entities'
+
+/** Used when the facility has not chosen ladders yet (common practice: assignee, then on call, then managers). */
+export const BUILT_IN_STANDARD: LadderStep[] = [
+  { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+  { afterMinutes: 30, notify: [{ kind: 'on_call' }] },
+  { afterMinutes: 60, notify: [{ kind: 'managers' }] },
+]
+export const BUILT_IN_FAST: LadderStep[] = [
+  { afterMinutes: 0, notify: [{ kind: 'assignee' }, { kind: 'on_call' }] },
+  { afterMinutes: 15, notify: [{ kind: 'supervisors' }] },
+  { afterMinutes: 30, notify: [{ kind: 'managers' }] },
+]
+
+const repo = () => db().getRepository(LadderEntity)
+export const listLadders = (): Promise<Ladder[]> => repo().find({ order: { id: 'ASC' } })
+
+export async function createLadder(input: unknown): Promise<Ladder> {
+  return repo().save(LadderInputSchema.parse(input))
+}
+
+export async function updateLadder(id: number, input: unknown): Promise<Ladder> {
+  const current = await repo().findOneBy({ id })
+  if (!current) throw notFound('That ladder')
+  return repo().save({ ...current, ...LadderInputSchema.parse(input) })
+}
+
+/**
+ * Which ladder an alert climbs: the routine's own for a missed task, the parameter's for a
+ * critical reading; otherwise the facility's fast ladder for welfare-critical tasks and
+ * critical readings, and its standard ladder for the rest.
+ */
+export async function ladderFor(alert: AlertRow, task: TaskRow): Promise<{ name: string; steps: LadderStep[] }> {
+  let id = alert.ladderId
+  if (!id && alert.kind === 'missed_task' && task.routineId) id = (await db().getRepository(RoutineEntity).findOneBy({ id: task.routineId }))?.ladderId ?? null
+  if (!id && alert.kind === 'critical_reading') {
+    const keys = alert.detail.split(', ').map((part) => part.split(' ')[0])
+    const params = await db().getRepository(ParameterEntity).find()
+    id = params.find((p) => keys.includes(p.key) && p.ladderId)?.ladderId ?? null
+  }
+  const fast = alert.kind === 'critical_reading' || task.priority === 'welfare_critical'
+  if (!id) {
+    const facility = await getFacility()
+    id = fast ? facility.fastLadderId : facility.defaultLadderId
+  }
+  const ladder = id ? await repo().findOneBy({ id }) : null
+  if (ladder) return ladder
+  return fast ? { name: 'Fast (built in)', steps: BUILT_IN_FAST } : { name: 'Standard (built in)', steps: BUILT_IN_STANDARD }
+}

@@ -1,0 +1,42 @@
+import type { AlertRow } from '../completions/completion.entities'
+import type { TaskRow } from '../tasks/task.entity'
+
+export interface MessageInput {
+  alert: AlertRow
+  task: TaskRow
+  targetLabel: string
+  step: number
+  taskUrl: string
+  ackUrl: string
+  now: Date
+}
+
+const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!)
+
+/** Subject says what, where and how late; both parts carry the task link and the acknowledge link. */
+export function composeMessage(m: MessageInput) {
+  const late = Math.max(0, Math.round((m.now.getTime() - m.task.dueAt.getTime()) / 60_000))
+  const lateText = late >= 60 ? `${Math.floor(late / 60)} h${late % 60 ? ` ${late % 60} min` : ''} late` : `${late} min late`
+  const subject =
+    m.alert.kind === 'critical_reading'
+      ? `CRITICAL reading: ${m.alert.detail} at ${m.targetLabel} (${m.task.title})`
+      : `MISSED: ${m.task.title} at ${m.targetLabel}, ${lateText}`
+  const lines = [
+    m.alert.kind === 'critical_reading'
+      ? `A critical reading was recorded: ${m.alert.detail}.`
+      : `This task was not done within its grace time. It was due at ${m.task.localStart.replace('T', ' ').slice(0, 16)} (facility time) and is ${lateText}.`,
+    `Task: ${m.task.title}`,
+    `Where: ${m.targetLabel}`,
+    m.step > 0 ? `This is step ${m.step + 1} of the escalation: nobody has answered yet.` : '',
+    '',
+    `Open the task: ${m.taskUrl}`,
+    `Acknowledge (stops further messages): ${m.ackUrl}`,
+    '',
+    'Roundtide is not an alarm system. If fish are at risk, act on site first.',
+  ].filter((l, i, all) => l !== '' || all[i - 1] !== '')
+  const text = lines.join('\n')
+  const html = `<div style="font-family:sans-serif">${lines
+    .map((l) => (l.startsWith('Open the task:') ? `<p><a href="${escapeHtml(m.taskUrl)}">Open the task</a></p>` : l.startsWith('Acknowledge') ? `<p><a href="${escapeHtml(m.ackUrl)}"><strong>Acknowledge</strong></a> (stops further messages)</p>` : l ? `<p>${escapeHtml(l)}</p>` : ''))
+    .join('')}</div>`
+  return { subject, text, html }
+}
