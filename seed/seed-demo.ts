@@ -1,7 +1,8 @@
 import { DateTime } from 'luxon'
 import { db } from '#server/db/data-source'
 import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } from '#server/modules/facility/facility.entities'
-import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
+import { createLadder } from '#server/modules/escalation/ladders.service'
+import { createFacilityIfMissing, updateFacility } from '#server/modules/facility/facility.service'
 import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { createPerson } from '#server/modules/people/people.service'
 import { applyShiftPattern } from '#server/modules/roster/roster.service'
@@ -59,6 +60,22 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
     await applyShiftPattern({ ...pattern, personId: people.get(email)!, from: rosterFrom.toISODate()!, to: today.plus({ weeks: 8 }).toISODate()! })
   }
   await generateRotation({ personIds: DEMO_ON_CALL.map((e) => people.get(e)!), from: rosterFrom.toISODate()!, weeks: 11 })
+
+  // The station's ladders: a standard one for routine work, a fast one for welfare-critical
+  // checks and critical readings; the welfare officer hears of anything still open after an hour.
+  const ruth = people.get('ruth.amsel@brackenwater.example')!
+  const standard = await createLadder({ name: 'Standard', steps: [
+    { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+    { afterMinutes: 30, notify: [{ kind: 'on_call' }] },
+    { afterMinutes: 120, notify: [{ kind: 'managers' }] },
+  ] })
+  const fast = await createLadder({ name: 'Fast (welfare-critical)', steps: [
+    { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+    { afterMinutes: 15, notify: [{ kind: 'on_call' }, { kind: 'on_shift' }] },
+    { afterMinutes: 45, notify: [{ kind: 'managers' }] },
+    { afterMinutes: 60, notify: [{ kind: 'person', personId: ruth }] },
+  ] })
+  await updateFacility({ defaultLadderId: standard.id, fastLadderId: fast.id })
 
   const lookup: Record<string, Map<string, number>> = { tank: tanks, system: systems, equipment, area: areas, area_tanks: areas, batch: batches }
   const anchor = today.minus({ weeks: 8 }).toISODate()

@@ -18,7 +18,7 @@ import { ackRouter } from './modules/escalation/ack-page'
 import { escalationRouter } from './modules/escalation/escalation.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
-import { peopleRouter } from './modules/people/people.routes'
+import { peopleRouter, staffRouter } from './modules/people/people.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
@@ -64,6 +64,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use(sessionMiddleware, passport.session())
   api.use('/', authRouter(config))
   api.use('/people', peopleRouter)
+  api.use('/staff', staffRouter)
   api.use('/', facilityRouter)
   api.use('/', parametersRouter)
   api.use('/routines', routinesRouter)

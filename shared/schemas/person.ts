@@ -64,3 +64,12 @@ export const ResetPasswordInputSchema = z.object({ password })
 export type ResetPasswordInput = z.infer<typeof ResetPasswordInputSchema>
 
 export const PersonIdParamSchema = z.object({ id: z.coerce.number().int().positive() })
+
+export const StaffMemberSchema = z.object({
+  id: z.number().int(),
+  name: z.string(),
+  role: RoleSchema,
+  onCallEligible: z.boolean(),
+  phone: z.string().nullable(),
+})
+export type StaffMember = z.infer<typeof StaffMemberSchema>

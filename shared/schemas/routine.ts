@@ -25,7 +25,7 @@ export const PrioritySchema = z.enum(PRIORITIES)
 
 export const AssigneeRuleSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('none') }),
-  z.object({ kind: z.literal('person'), personId: z.number().int() }),
+  z.object({ kind: z.literal('person'), personId: z.number().int().positive() }),
   z.object({ kind: z.literal('role_on_shift'), role: RoleSchema }),
   z.object({ kind: z.literal('on_call') }),
 ])

@@ -4,6 +4,7 @@ import { RouterProvider } from 'react-router-dom'
 import { Toaster } from 'sonner'
 import { authKeys } from '../features/auth/api/auth-queries'
 import { LiveUpdatesProvider } from '../features/live/components/live-updates-provider'
+import { forgetOfflineCopies } from '../features/round/api/offline-copies'
 import { upsertRoundTask } from '../features/round/api/round-cache'
 import { createQueryClient } from './query-client'
 import { createRouter } from './router'
@@ -13,7 +14,7 @@ export function App() {
   const [router] = useState(() => createRouter(queryClient))
   return (
     <QueryClientProvider client={queryClient}>
-      <LiveUpdatesProvider sessionKey={authKeys.me} onTask={upsertRoundTask}>
+      <LiveUpdatesProvider sessionKey={authKeys.me} onTask={upsertRoundTask} onSignedOut={forgetOfflineCopies}>
         <RouterProvider router={router} />
       </LiveUpdatesProvider>
       <Toaster position="top-center" richColors closeButton />

@@ -3,6 +3,7 @@ import { DateTime } from 'luxon'
 import type request from 'supertest'
 import { db } from '#server/db/data-source'
 import { applyAssigneeRules } from '#server/modules/roster/assignee-rules.service'
+import { OnCallEntity } from '#server/modules/roster/roster.entities'
 import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
@@ -153,6 +154,8 @@ describe('roster API', () => {
     const holder = await t.createPersonWithRole('technician', { onCallEligible: true, phone: '+61 7 5550 0199' })
     const today = DateTime.now().setZone(zone)
     await supervisor.post('/api/on-call-duties').send({ personId: holder.id, fromDate: today.minus({ days: 1 }).toISODate(), toDate: today.plus({ days: 1 }).toISODate() }).expect(201)
+    // Other tests leave duties too; the one that started last holds the phone, so start ours now.
+    await db().getRepository(OnCallEntity).save({ personId: holder.id, fromDate: today.toISODate()!, toDate: today.plus({ days: 1 }).toISODate()!, startsAt: new Date(Date.now() - 1000), endsAt: new Date(Date.now() + 3_600_000) })
     const { agent } = await t.signedInAgent('technician')
     await agent.post('/api/on-call/notes').send({ text: 'Bin B02 gasping at 16:00, aeration raised.' }).expect(201)
     const { body } = await agent.get('/api/on-call').expect(200)

@@ -49,6 +49,16 @@ describe('facility catalogues', () => {
   })
 })
 
+describe('references between catalogues', () => {
+  test('a tank in an area that does not exist is refused; an area that still holds tanks cannot be deleted', async () => {
+    const res = await manager.post('/api/tanks').send({ code: uniqueCode('T'), name: 'Orphan', areaId: 987654, systemId: null, volumeL: 100, kind: 'tank', inUse: true }).expect(400)
+    expect(res.body.error.fieldErrors).toHaveProperty('areaId')
+    const { area } = await makeAreaWithTanks(1)
+    const refused = await manager.delete(`/api/areas/${area.id}`).expect(409)
+    expect(refused.body.error.message).toMatch(/still holds 1 tank/)
+  })
+})
+
 describe('POST /api/tanks/import', () => {
   const csv = (lines: string[]) => Buffer.from(['code,name,area,system,volume_l,kind,in_use', ...lines].join('\n'))
 

@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core'
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
-import { CompletionEntity } from '#server/modules/completions/completion.entities'
+import { CompletionEntity, PhotoEntity } from '#server/modules/completions/completion.entities'
 import { TEST_PASSWORD } from '#seed/factories'
 import type { Tank } from '#shared/schemas/facility'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
@@ -28,6 +28,8 @@ function taskDueIn(tank: Tank, minutes: number, extra: Parameters<typeof makeTan
     ...extra,
   })
 }
+
+const TINY_PNG = Buffer.from('iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR4nGNgaPj/HwADgQJ/lmA8RwAAAABJRU5ErkJggg==', 'base64')
 
 /** What the phone shows right now (the full-page shots stretch the sticky header mid-scroll). */
 const viewShot = (page: Page, name: string) => page.screenshot({ path: `test-results/${name}.png` })
@@ -123,11 +125,15 @@ describe('the round on a phone', () => {
     // On my screen the task left my round: it is my colleague's now.
     await row(mePage.page, 'Shared DO check').waitFor({ state: 'detached' })
 
+    // While my form is open: a photo goes up at once, then the supervisor completes the task.
+    await row(mePage.page, 'Feed check').click()
+    await mePage.page.locator('input[type=file]').setInputFiles({ name: 'tank.png', mimeType: 'image/png', buffer: TINY_PNG })
+    await mePage.page.getByText('Photo added').waitFor()
+    expect(await db().getRepository(PhotoEntity).countBy({ taskId: mine.id })).toBe(1)
     const agent = await signInAs(supervisor.email)
     await agent.post(`/api/tasks/${mine.id}/completion`).send(completion({ temp_c: 28.1 })).expect(200)
     await expect.poll(() => row(mePage.page, 'Feed check').textContent()).toContain('Done')
-    await row(mePage.page, 'Feed check').click()
-    await mePage.page.getByText('Marla Supervisor').waitFor()
+    await mePage.page.getByText('Done by Marla Supervisor').waitFor()
     await other.context.close()
     await mePage.context.close()
   })
@@ -156,6 +162,29 @@ describe('the round on a phone', () => {
     await page.getByRole('button', { name: 'Dismiss' }).click()
     await page.getByText('1 not sent').waitFor({ state: 'detached' })
     expect(await db().getRepository(CompletionEntity).countBy({ taskId: task.id })).toBe(1)
+    await context.close()
+  })
+
+  test('with the service worker allowed, a round opened once opens again with the network cut', async () => {
+    const tech = await s.createPerson('technician')
+    const { tanks } = await makeAreaWithTanks(1, { roundOrder: 4 })
+    await taskDueIn(tanks[0], 30, { title: 'Night feed', assigneeId: tech.id, requiredReadings: [] })
+    // The other tests block service workers (see tests/support/browser.ts); this one needs it.
+    const context = await s.browser.newContext({ viewport: PHONE, baseURL: s.url, serviceWorkers: 'allow' })
+    const page = await context.newPage()
+    await s.signIn(page, tech.email)
+    await row(page, 'Night feed').waitFor()
+    await page.evaluate(() => navigator.serviceWorker.ready.then(() => undefined))
+    // Load once under the worker's control, so the round and the person pass through its runtime cache.
+    await page.reload()
+    await expect.poll(() => page.evaluate(() => Boolean(navigator.serviceWorker.controller))).toBe(true)
+    await row(page, 'Night feed').waitFor()
+
+    await context.setOffline(true)
+    await page.reload()
+    await row(page, 'Night feed').waitFor()
+    await page.getByRole('status', { name: 'Connection: Offline' }).waitFor()
+    await viewShot(page, 'round-phone-opened-offline')
     await context.close()
   })
 })

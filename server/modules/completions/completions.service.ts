@@ -27,8 +27,9 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     return replay.response as CompletionResult
   }
   const task = await getTaskRow(taskId)
+  // A finished task answers 409 with who finished it, before any question of whose it was.
+  if (person.role !== 'observer') await assertStillOpen(task)
   assertMayComplete(task, person)
-  await assertStillOpen(task)
   if (data.version !== undefined && data.version !== task.version) {
     throw conflict('This task changed since you opened it (it may have been moved or reassigned). Check it and try again.', { currentVersion: task.version })
   }

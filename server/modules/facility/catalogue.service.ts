@@ -13,7 +13,14 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
   entity: EntitySchema<T>,
   inputSchema: S,
   label: string,
-  opts: { order?: Record<string, 'ASC' | 'DESC'>; onChange?: (before: T | null, after: T | null) => Promise<void> } = {},
+  opts: {
+    order?: Record<string, 'ASC' | 'DESC'>
+    onChange?: (before: T | null, after: T | null) => Promise<void>
+    /** Checks references (e.g. a tank's area exists) before a save; throws to refuse. */
+    checkRefs?: (data: Partial<T>) => Promise<void>
+    /** Refuses removing something still in use (e.g. an area that holds tanks). */
+    checkRemovable?: (row: T) => Promise<void>
+  } = {},
 ) {
   const repo = () => db().getRepository(entity)
 
@@ -35,6 +42,7 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
     async create(input: unknown): Promise<T> {
       const data = inputSchema.parse(input) as Omit<T, 'id'>
       await assertCodeFree((data as ObjectLiteral).code)
+      await opts.checkRefs?.(data as Partial<T>)
       const saved = (await repo().save(repo().create(data as never))) as unknown as T
       await opts.onChange?.(null, saved)
       return saved
@@ -43,12 +51,14 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
       const before = await get(id)
       const data = (inputSchema as unknown as z.ZodObject).partial().parse(input) as Partial<T>
       await assertCodeFree((data as ObjectLiteral).code, id)
+      await opts.checkRefs?.(data)
       const after = await repo().save({ ...before, ...data })
       await opts.onChange?.(before, after)
       return after
     },
     async remove(id: number): Promise<void> {
       const before = await get(id)
+      await opts.checkRemovable?.(before)
       try {
         await repo().delete(id)
       } catch (err) {

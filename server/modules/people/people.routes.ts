@@ -6,10 +6,17 @@ import {
   UpdatePersonInputSchema,
 } from '#shared/schemas/person'
 import { requireRole } from '../auth/require-role'
-import { createPerson, listPeople, resetPassword, updatePerson } from './people.service'
+import { createPerson, listPeople, listStaff, resetPassword, updatePerson } from './people.service'
 import { forbidden } from '../../lib/errors'
 
 export const peopleRouter = Router()
+
+// Planners need names to roster and assign; this short list leaves out e-mail and account state.
+export const staffRouter = Router()
+staffRouter.get('/', requireRole('manager', 'supervisor'), async (_req, res) => {
+  res.json(await listStaff())
+})
+
 peopleRouter.use(requireRole('manager'))
 
 peopleRouter.get('/', async (_req, res) => {

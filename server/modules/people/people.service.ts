@@ -1,5 +1,5 @@
 import bcrypt from 'bcryptjs'
-import type { CreatePersonInput, Person, UpdatePersonInput } from '#shared/schemas/person'
+import type { CreatePersonInput, Person, StaffMember, UpdatePersonInput } from '#shared/schemas/person'
 import { CreatePersonInputSchema } from '#shared/schemas/person'
 import { db } from '../../db/data-source'
 import { conflict, notFound } from '../../lib/errors'
@@ -15,6 +15,11 @@ export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_C
 export async function listPeople(): Promise<Person[]> {
   const rows = await repo().find({ order: { active: 'DESC', name: 'ASC' } })
   return rows.map(toPerson)
+}
+
+export async function listStaff(): Promise<StaffMember[]> {
+  const rows = await repo().find({ where: { active: true }, order: { name: 'ASC' } })
+  return rows.map((r) => ({ id: r.id, name: r.name, role: r.role, onCallEligible: r.onCallEligible, phone: r.phone }))
 }
 
 export async function getPersonRow(id: number): Promise<PersonRow> {

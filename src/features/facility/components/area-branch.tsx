@@ -25,22 +25,28 @@ export function AreaBranch({ area, position, systems, tanks, equipment, canEdit,
   const inUse = here.filter((t) => t.inUse).length
   const ownSystems = systems.filter((s) => s.areaId === area.id).length
   const ownEquipment = equipment.filter((e) => e.areaId === area.id).length
-  const blocked = here.length + ownSystems + ownEquipment > 0
-    ? `This area still holds ${here.length} tank(s), ${ownSystems} system(s) and ${ownEquipment} piece(s) of equipment. Move or delete them first.`
-    : undefined
+  const holdings = [
+    [here.length, 'tank', 'tanks'],
+    [ownSystems, 'system', 'systems'],
+    [ownEquipment, 'piece of equipment', 'pieces of equipment'],
+  ] as const
+  const held = holdings.filter(([n]) => n > 0).map(([n, one, many]) => `${n} ${n === 1 ? one : many}`)
+  const blocked = held.length ? `This area still holds ${held.join(' and ')}. Move or delete them first.` : undefined
 
   return (
     <li className="overflow-hidden rounded-xl border border-tide-200 bg-white">
-      <div className="flex flex-wrap items-center gap-x-3 gap-y-1 border-b border-tide-100 bg-tide-50 px-4 py-2">
-        <span aria-hidden className="grid size-8 shrink-0 place-items-center rounded-full bg-tide-800 text-sm font-bold text-white">{position}</span>
-        <h3 className="font-bold text-tide-900">
-          <span className="sr-only">Round stop {position}: </span>
-          {area.name} <span className="font-normal text-tide-600">({area.code})</span>
-        </h3>
-        {area.quarantine && <QuarantineFlag />}
-        <span className="text-sm text-tide-700 sm:ml-auto">
-          {here.length} {here.length === 1 ? 'tank' : 'tanks'} · {inUse} in use
-        </span>
+      <div className="flex items-start justify-between gap-2 border-b border-tide-100 bg-tide-50 px-4 py-2">
+        <div className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1">
+          <span aria-hidden className="grid size-8 shrink-0 place-items-center rounded-full bg-tide-800 text-sm font-bold text-white">{position}</span>
+          <h3 className="font-bold text-tide-900">
+            <span className="sr-only">Round stop {position}: </span>
+            {area.name} <span className="font-normal text-tide-600">({area.code})</span>
+          </h3>
+          {area.quarantine && <QuarantineFlag />}
+          <span className="text-sm text-tide-700">
+            {here.length} {here.length === 1 ? 'tank' : 'tanks'} · {inUse} in use
+          </span>
+        </div>
         {canEdit && <RowActions name="areas" id={area.id} label={`area ${area.code}`} onEdit={() => onEdit(area)} blockedReason={blocked} />}
       </div>
       <div className="flex flex-col gap-4 p-4">

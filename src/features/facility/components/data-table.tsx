@@ -46,7 +46,7 @@ export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[40r
         </thead>
         <tbody>
           {rows.map((row) => (
-            <tr key={row.id} className="border-t border-tide-100 align-top hover:bg-tide-50/60">
+            <tr key={row.id} className="border-t border-tide-100 align-middle hover:bg-tide-50/60">
               {row.getVisibleCells().map((cell, index) => (
                 <td key={cell.id} className={clsx('px-3 py-2 md:py-1.5', index === 0 && 'sticky left-0 z-10 bg-white font-semibold text-tide-900 shadow-[1px_0_0_#d5e9ee]')}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}

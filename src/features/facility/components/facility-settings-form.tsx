@@ -75,7 +75,7 @@ export function FacilitySettingsForm({ facility, canEdit }: { facility: Facility
       {canEdit ? (
         <div className="flex flex-wrap gap-2">
           <Button type="submit" disabled={update.isPending || !form.formState.isDirty}>{update.isPending ? 'Saving…' : 'Save settings'}</Button>
-          <Button type="button" variant="ghost" disabled={!form.formState.isDirty} onClick={() => form.reset()}>Undo changes</Button>
+          {form.formState.isDirty && <Button type="button" variant="ghost" onClick={() => form.reset()}>Undo changes</Button>}
         </div>
       ) : (
         <p className="text-sm text-tide-600">Only a manager can change these settings.</p>

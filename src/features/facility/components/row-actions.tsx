@@ -12,7 +12,7 @@ interface RowActionsProps {
 
 export function RowActions({ name, id, label, onEdit, blockedReason }: RowActionsProps) {
   return (
-    <div className="flex flex-wrap items-start gap-1">
+    <div className="flex items-start gap-1">
       <button
         type="button"
         aria-label={`Edit ${label}`}

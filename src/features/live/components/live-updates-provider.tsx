@@ -13,18 +13,28 @@ interface Props {
   sessionKey: QueryKey
   /** Extra cache patching for task views that need more than the task (e.g. the round). */
   onTask?: TaskEventHandler
+  /** Runs when the signed-in person signs out (e.g. to forget copies kept for offline use). */
+  onSignedOut?: () => void
   children: ReactNode
 }
 
 /** One socket per signed-in person; task events patch the caches in place, a reconnect refetches once. */
-export function LiveUpdatesProvider({ sessionKey, onTask, children }: Props) {
+export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children }: Props) {
   const queryClient = useQueryClient()
   const personId = useSessionPersonId(sessionKey)
   const [state, setState] = useState<{ personId: number | null; status: LiveStatus }>({ personId: null, status: 'connecting' })
   const onTaskRef = useRef(onTask)
+  const onSignedOutRef = useRef(onSignedOut)
+  const lastPersonId = useRef<number | null>(null)
   useEffect(() => {
     onTaskRef.current = onTask
-  }, [onTask])
+    onSignedOutRef.current = onSignedOut
+  }, [onTask, onSignedOut])
+
+  useEffect(() => {
+    if (personId === null && lastPersonId.current !== null) onSignedOutRef.current?.()
+    lastPersonId.current = personId
+  }, [personId])
 
   useEffect(() => {
     if (personId === null) return

@@ -14,7 +14,7 @@ export function checkReading(raw: string, spec: ReadingSpec): ReadingCheck {
   const value = Number(text)
   if (!/^[-+]?(\d+\.?\d*|\.\d+)$/.test(text) || !Number.isFinite(value)) return { state: 'invalid', message: 'Enter a number' }
   if (value < spec.physicalMin || value > spec.physicalMax) {
-    return { state: 'invalid', message: `Not possible: ${spec.name} is ${spec.physicalMin}–${spec.physicalMax} ${spec.unit}` }
+    return { state: 'invalid', message: `Not possible: must be ${spec.physicalMin}–${spec.physicalMax} ${spec.unit}` }
   }
   return { state: 'valid', value, band: bandFor(value, spec) }
 }

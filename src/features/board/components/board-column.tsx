@@ -1,0 +1,49 @@
+import { useDroppable } from '@dnd-kit/core'
+import { clsx } from 'clsx'
+import { useId, type ReactNode } from 'react'
+import type { BoardColumnPerson } from '#shared/schemas/board'
+import type { Task } from '#shared/schemas/task'
+import { columnId, type DropTarget } from '../utils/drop-targets'
+import { ColumnHeader } from './column-header'
+
+interface Props {
+  person: BoardColumnPerson | null
+  /** Every task in the column, filtered or not, for the header's totals. */
+  allTasks: Task[]
+  shownCount: number
+  droppable: boolean
+  children: ReactNode
+}
+
+/** Unassigned, or one person's day: a drop target for cards. */
+export function BoardColumn({ person, allTasks, shownCount, droppable, children }: Props) {
+  const headingId = useId()
+  const target: DropTarget = person ? { kind: 'column', assigneeId: person.personId, name: person.name } : { kind: 'column', assigneeId: null, name: 'Unassigned' }
+  const { setNodeRef, isOver } = useDroppable({ id: columnId(target.assigneeId), data: target, disabled: !droppable })
+  const hidden = allTasks.length - shownCount
+
+  return (
+    <section
+      ref={setNodeRef}
+      aria-labelledby={headingId}
+      className={clsx(
+        'flex min-w-0 flex-col rounded-xl ring-1 transition-colors md:w-64 md:shrink-0',
+        person === null ? 'bg-tide-100/70' : 'bg-tide-50',
+        isOver ? 'ring-2 ring-tide-600 bg-tide-100' : 'ring-tide-200',
+      )}
+    >
+      <ColumnHeader
+        headingId={headingId}
+        person={person}
+        taskCount={allTasks.length}
+        plannedMinutes={allTasks.reduce((sum, t) => sum + t.durationMinutes, 0)}
+      />
+      <ul className="flex flex-1 flex-col gap-2 p-2">{children}</ul>
+      {shownCount === 0 && (
+        <p className="px-3 pb-3 text-sm text-tide-600">
+          {hidden > 0 ? `${hidden} hidden by the filters` : droppable ? 'No tasks. Drop a card here.' : 'No tasks.'}
+        </p>
+      )}
+    </section>
+  )
+}

@@ -1,0 +1,77 @@
+import { DndContext, DragOverlay } from '@dnd-kit/core'
+import { useMemo } from 'react'
+import type { Board } from '#shared/schemas/board'
+import type { Area } from '#shared/schemas/facility'
+import { FINISHED_STATUSES, type Task } from '#shared/schemas/task'
+import { useBoardDnd } from '../hooks/use-board-dnd'
+import { useBoardParams } from '../hooks/use-board-params'
+import { useSelection } from '../hooks/use-selection'
+import { isFiltered, matchesFilters } from '../utils/board-filters'
+import { BoardColumn } from './board-column'
+import { BoardFiltersBar } from './board-filters'
+import { DateNav } from './date-nav'
+import { DragPreview } from './drag-preview'
+import { ReadOnlyNote } from './read-only-note'
+import { SelectionBar } from './selection-bar'
+import { TaskCard } from './task-card'
+import { WeekStrip } from './week-strip'
+
+interface Props {
+  board: Board
+  areas: Area[]
+  /** The facility's today, so past days refuse drops before the server has to. */
+  today: string
+  canEdit: boolean
+}
+
+const byDue = (a: Task, b: Task) => a.dueAt.localeCompare(b.dueAt) || a.id - b.id
+
+export function BoardView({ board, areas, today, canEdit }: Props) {
+  const { filters, setFilters, hrefFor } = useBoardParams()
+  const { selected, toggle, clear } = useSelection()
+  const visible = useMemo(() => board.tasks.filter((t) => matchesFilters(t, filters)).sort(byDue), [board.tasks, filters])
+  const { contextProps, active, movingCount } = useBoardDnd({ date: board.date, visible, selected, clearSelection: clear })
+  const movable = (t: Task) => canEdit && !FINISHED_STATUSES.includes(t.status)
+  const selectedShown = visible.filter((t) => selected.has(t.id)).length
+
+  const column = (assigneeId: number | null) => ({
+    all: board.tasks.filter((t) => t.assigneeId === assigneeId),
+    shown: visible.filter((t) => t.assigneeId === assigneeId),
+  })
+  const cards = (tasks: Task[]) =>
+    tasks.map((t) => <TaskCard key={t.id} task={t} movable={movable(t)} selected={selected.has(t.id)} onToggle={toggle} />)
+  const unassigned = column(null)
+
+  return (
+    <DndContext {...contextProps}>
+      <div className="flex flex-col gap-3">
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <DateNav date={board.date} today={today} hrefFor={hrefFor} />
+          <BoardFiltersBar areas={areas} value={filters} onChange={setFilters} />
+        </div>
+        <WeekStrip date={board.date} today={today} canMove={canEdit} dragging={active !== null} hrefFor={hrefFor} />
+        {!canEdit && <ReadOnlyNote />}
+        {canEdit && selectedShown > 0 && <SelectionBar count={selectedShown} onClear={clear} />}
+        {isFiltered(filters) && (
+          <p className="text-sm text-tide-700">
+            Showing {visible.length} of {board.tasks.length} tasks on this day.
+          </p>
+        )}
+        <div className="flex flex-col gap-3 md:flex-row md:items-stretch md:overflow-x-auto md:pb-2">
+          <BoardColumn person={null} allTasks={unassigned.all} shownCount={unassigned.shown.length} droppable={canEdit}>
+            {cards(unassigned.shown)}
+          </BoardColumn>
+          {board.people.map((person) => {
+            const own = column(person.personId)
+            return (
+              <BoardColumn key={person.personId} person={person} allTasks={own.all} shownCount={own.shown.length} droppable={canEdit}>
+                {cards(own.shown)}
+              </BoardColumn>
+            )
+          })}
+        </div>
+      </div>
+      <DragOverlay dropAnimation={null}>{active && <DragPreview task={active} count={movingCount} />}</DragOverlay>
+    </DndContext>
+  )
+}

@@ -1,0 +1,17 @@
+import type { Task } from '#shared/schemas/task'
+
+/** What a card can be dropped on: a column (who does it) or a day of the week strip (when). */
+export type DropTarget =
+  | { kind: 'column'; assigneeId: number | null; name: string }
+  | { kind: 'day'; date: string }
+
+export interface DragItem {
+  task: Task
+}
+
+export const cardId = (taskId: number) => `task-${taskId}`
+export const columnId = (assigneeId: number | null) => (assigneeId === null ? 'column-unassigned' : `column-person-${assigneeId}`)
+export const dayId = (date: string) => `day-${date}`
+
+export const isColumn = (t: DropTarget | undefined): t is Extract<DropTarget, { kind: 'column' }> => t?.kind === 'column'
+export const isDay = (t: DropTarget | undefined): t is Extract<DropTarget, { kind: 'day' }> => t?.kind === 'day'

@@ -1,0 +1,53 @@
+import { zodResolver } from '@hookform/resolvers/zod'
+import { MoonStar, Save } from 'lucide-react'
+import { useForm } from 'react-hook-form'
+import { toast } from 'sonner'
+import { Button } from '../../../components/ui/button'
+import { Field } from '../../../components/ui/field'
+import { ApiError } from '../../../lib/api-client'
+import type { Preferences } from '../api/escalation-queries'
+import { useUpdatePreferences } from '../api/use-update-preferences'
+import { PreferencesFormSchema, toFormValues, toPreferences, type PreferencesFormValues } from '../utils/preferences-form'
+
+/** My address for escalation mail and the hours in which routine mail waits. */
+export function PreferencesForm({ preferences, timeZone }: { preferences: Preferences; timeZone: string }) {
+  const update = useUpdatePreferences()
+  const form = useForm<PreferencesFormValues>({ resolver: zodResolver(PreferencesFormSchema), defaultValues: toFormValues(preferences) })
+  const errors = form.formState.errors
+
+  const submit = form.handleSubmit((values) =>
+    update.mutate(toPreferences(values), {
+      onSuccess: (saved) => {
+        toast.success('Preferences saved.')
+        form.reset(toFormValues(saved))
+      },
+      onError: (error) => {
+        for (const [field, messages] of Object.entries(error instanceof ApiError ? (error.fieldErrors ?? {}) : {})) {
+          if (field in values) form.setError(field as keyof PreferencesFormValues, { message: messages[0] })
+        }
+      },
+    }),
+  )
+
+  return (
+    <form noValidate onSubmit={submit} aria-label="My preferences" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
+      <Field label="E-mail for escalations" type="email" autoComplete="email" hint="This is also the address you sign in with." {...form.register('email')} error={errors.email?.message} />
+      <fieldset className="flex flex-col gap-2">
+        <legend className="flex items-center gap-2 font-semibold text-tide-900">
+          <MoonStar aria-hidden className="size-5 text-tide-600" /> Quiet hours
+        </legend>
+        <p className="text-sm text-tide-700">
+          Mail about routine work waits until your quiet hours end. Mail about a welfare-critical task or a critical reading never waits.
+          Times are facility time ({timeZone}); leave both empty for no quiet hours.
+        </p>
+        <div className="grid grid-cols-2 gap-3 sm:max-w-sm">
+          <Field label="From" type="time" {...form.register('quietStart')} error={errors.quietStart?.message} />
+          <Field label="Until" type="time" {...form.register('quietEnd')} error={errors.quietEnd?.message} />
+        </div>
+      </fieldset>
+      <Button type="submit" disabled={update.isPending} className="self-start">
+        <Save aria-hidden className="size-5" /> {update.isPending ? 'Saving…' : 'Save preferences'}
+      </Button>
+    </form>
+  )
+}
