@@ -4,7 +4,11 @@ import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } fr
 import { createLadder } from '#server/modules/escalation/ladders.service'
 import { createFacilityIfMissing, updateFacility } from '#server/modules/facility/facility.service'
 import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
-import { createPerson } from '#server/modules/people/people.service'
+import { createPerson, getPersonRow } from '#server/modules/people/people.service'
+import { createCylinder, recordCylinderReading } from '#server/modules/oxygen/oxygen.service'
+import { startEvent } from '#server/modules/playbooks/events.service'
+import { createPlaybook } from '#server/modules/playbooks/playbooks.service'
+import { tanks as tanksCatalogue } from '#server/modules/facility/catalogues'
 import { applyShiftPattern } from '#server/modules/roster/roster.service'
 import { generateRotation } from '#server/modules/roster/rotation.service'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
@@ -12,11 +16,13 @@ import { materialise } from '#server/modules/tasks/materialiser'
 import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
 import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
+import { DEMO_CYLINDERS, DEMO_PLAYBOOKS } from './demo-playbooks'
 import { DEMO_ON_CALL, DEMO_SHIFT_PATTERNS } from './demo-roster'
 import { DEMO_ROUTINES } from './demo-routines'
 import { DEMO_AREAS, DEMO_BATCHES, DEMO_EQUIPMENT, DEMO_FACILITY, DEMO_SYSTEMS, DEMO_TANKS } from './demo-structure'
 import { buildPersonInput } from './factories'
 
+const NURSERY_CODES = ['NUR-T01', 'NUR-T02', 'NUR-T03', 'NUR-T04', 'NUR-T05', 'NUR-T06']
 const idsByCode = <T extends { id: number; code: string }>(rows: T[]) => new Map(rows.map((r) => [r.code, r.id]))
 
 /** Loads the invented demo facility into an empty, migrated database, anchored on today. */
@@ -103,7 +109,20 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
       version: 1,
     })),
   )
+  const playbooks = []
+  for (const p of DEMO_PLAYBOOKS) playbooks.push(await createPlaybook(p))
+  for (const c of DEMO_CYLINDERS) await createCylinder(c)
+  const manager = { ...(await getPersonRow(people.get('maren.holloway@brackenwater.example')!)), createdAt: '' } as never
+
   // The demo starts at the beginning of today, so the morning's round is there whenever it is run.
   const { created } = await materialise({ from: today.toJSDate() })
+  // Coming up: an arrival into quarantine in three days, and a nursery grading (with its fasting window) in five.
+  const spareBins = ['QUA-B03', 'QUA-B04'].map((c) => tanks.get(c)!)
+  await tanksCatalogue.update(spareBins[0], { inUse: true })
+  await tanksCatalogue.update(spareBins[1], { inUse: true })
+  await startEvent({ playbookId: playbooks[0].id, title: 'Arrival of juveniles from Tallowmere', localStart: `${today.plus({ days: 3 }).toISODate()}T09:30`, tankIds: spareBins, notes: 'Veterinarian on site that morning.' }, manager)
+  await startEvent({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }, manager)
+  await recordCylinderReading(1, { pressure: 168, flowLPerMin: 6 })
+
   log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines and ${created} tasks from ${today.toISODate()}.`)
 }

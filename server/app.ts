@@ -20,6 +20,8 @@ import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
+import { oxygenRouter } from './modules/oxygen/oxygen.routes'
+import { playbooksRouter } from './modules/playbooks/playbooks.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
 
@@ -72,6 +74,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
   api.use('/', escalationRouter(config))
+  api.use('/', playbooksRouter)
+  api.use('/', oxygenRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

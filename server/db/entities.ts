@@ -4,6 +4,8 @@ import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity,
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
 import { HandoverNoteEntity, OnCallEntity, ShiftEntity } from '../modules/roster/roster.entities'
+import { CylinderEntity } from '../modules/oxygen/oxygen.entities'
+import { BatchRecordEntity, EventEntity, PlaybookEntity } from '../modules/playbooks/playbook.entities'
 import { RoutineEntity } from '../modules/routines/routine.entity'
 import { TaskEntity } from '../modules/tasks/task.entity'
 
@@ -12,4 +14,5 @@ export const entities = [
   PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
   ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity,
+  PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity,
 ]

@@ -91,6 +91,8 @@ export const BatchSchema = z.object({
   meanWeightG: z.number().min(0).max(100_000),
   tankIds: z.array(z.number().int()),
   status: z.enum(BATCH_STATUSES),
+  /** Feeding rate, % of body weight per day, for the batch's daily ration. */
+  feedRatePct: z.number().min(0).max(30).nullable().default(null),
 })
 export type Batch = z.infer<typeof BatchSchema>
 export const BatchInputSchema = BatchSchema.omit({ id: true })

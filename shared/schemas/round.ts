@@ -19,6 +19,8 @@ export const RoundTaskSchema = TaskSchema.extend({
   /** The readings this task needs, with the limits that apply at its tank or system. */
   readingSpecs: z.array(ReadingSpecSchema),
   salinitySetpoint: z.number().nullable(),
+  /** Feeding tasks: grams for this feed from the batch's biomass and feeding rate. */
+  rationG: z.number().nullable().optional(),
 })
 export type RoundTask = z.infer<typeof RoundTaskSchema>
 

@@ -1,5 +1,5 @@
 import {
-  BarChart3, Bell, CalendarDays, ClipboardCheck, Fish, LayoutGrid, Repeat, Users, CalendarClock,
+  BarChart3, Bell, CalendarDays, ClipboardCheck, Fish, LayoutGrid, Repeat, Users, CalendarClock, Mail, Settings,
   type LucideIcon,
 } from 'lucide-react'
 import type { Role } from '#shared/schemas/person'
@@ -25,6 +25,8 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/roster', label: 'Roster', icon: CalendarClock, roles: ['manager', 'supervisor'] },
   { to: '/reports', label: 'Reports', icon: BarChart3, roles: ['manager', 'supervisor', 'observer'] },
   { to: '/people', label: 'People', icon: Users, roles: ['manager'] },
+  { to: '/outbox', label: 'Outbox', icon: Mail, roles: ['manager'] },
+  { to: '/settings', label: 'Settings', icon: Settings, roles: everyone },
 ]
 
 export const navFor = (role: Role) => NAV_ITEMS.filter((item) => item.roles.includes(role))

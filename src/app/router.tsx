@@ -39,9 +39,21 @@ export function createRouter(queryClient: QueryClient) {
                 return { Component: m.Component, loader: m.loader(queryClient) }
               },
             },
-            planned('board', 'board'),
-            planned('calendar', 'calendar'),
-            planned('on-call', 'on-call'),
+            {
+              path: 'board',
+              lazy: async () => {
+                const m = await import('./routes/board-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            { path: 'calendar', lazy: () => import('./routes/calendar-page') },
+            {
+              path: 'on-call',
+              lazy: async () => {
+                const m = await import('./routes/on-call-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
             {
               path: 'tanks',
               lazy: async () => {
@@ -68,7 +80,34 @@ export function createRouter(queryClient: QueryClient) {
                 })),
               ],
             },
-            planned('roster', 'roster'),
+            {
+              path: 'roster',
+              lazy: async () => {
+                const m = await import('./routes/roster-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'outbox',
+              lazy: async () => {
+                const m = await import('./routes/outbox-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'tasks/:id',
+              lazy: async () => {
+                const m = await import('./routes/task-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'settings',
+              lazy: async () => {
+                const m = await import('./routes/settings-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
             planned('reports', 'reports'),
             {
               path: 'people',

@@ -8,7 +8,7 @@ import { TEST_PASSWORD } from '#seed/factories'
 import type { Tank } from '#shared/schemas/facility'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { completion, makeTankTask } from '#tests/support/task-fixtures'
+import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
@@ -46,7 +46,10 @@ const doneButton = (page: Page) => page.getByRole('button', { name: 'Done', exac
 describe('the round on a phone', () => {
   test('a technician walks three tasks, flags a low DO with a recheck, and completes one offline that is sent once back online', async () => {
     const tech = await s.createPerson('technician')
-    const { area, tanks } = await makeAreaWithTanks(3, { roundOrder: 1 })
+    const { area, system, tanks } = await makeAreaWithTanks(3, { roundOrder: 1 })
+    // The demo's facility limits, pinned on this system: another test file may have made the parameters without them.
+    await setSystemLimit(system.id, 'do_mgL', { okMin: 5, okMax: 10.5, criticalMin: 4, criticalMax: null })
+    await setSystemLimit(system.id, 'temp_c', { okMin: 26.5, okMax: 31, criticalMin: 24, criticalMax: 33 })
     const [t1, t2, t3] = await Promise.all(tanks.map((tank, i) => taskDueIn(tank, 10 + i * 5, { title: `Water check ${i + 1}`, assigneeId: tech.id, instructions: 'Read DO and temperature at the outlet.' })))
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, tech.email)

@@ -87,5 +87,6 @@ export const BatchEntity = new EntitySchema<Batch>({
     meanWeightG: { type: 'double' },
     tankIds: { type: 'json' },
     status: { type: 'enum', enum: [...BATCH_STATUSES], default: 'active' },
+    feedRatePct: { type: 'double', nullable: true },
   },
 })

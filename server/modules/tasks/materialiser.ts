@@ -3,6 +3,7 @@ import { expandRule } from '#shared/schedule/expand-rule'
 import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
+import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { RoutineEntity } from '../routines/routine.entity'
 import { TaskEntity, type TaskRow } from './task.entity'
@@ -42,6 +43,8 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     logger.info({ created, routines: routines.length }, 'tasks materialised')
     const zone = cat.facility.timeZone
     await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!)
+    // New feeding tasks may fall inside a planned event's fasting window.
+    await holdFeedsForAllEvents()
   }
   return { created, routines: routines.length }
 }

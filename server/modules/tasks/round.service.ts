@@ -4,6 +4,7 @@ import type { Person } from '#shared/schemas/person'
 import type { Round, RoundTask } from '#shared/schemas/round'
 import { db } from '../../db/data-source'
 import { LimitEntity, ParameterEntity } from '../parameters/parameter.entities'
+import { rationsForDay } from './rations'
 import { TaskEntity } from './task.entity'
 import { toTask } from './task.mapper'
 import { loadTaskContext } from './tasks.service'
@@ -29,12 +30,14 @@ export async function getRound(person: Person, date?: string): Promise<Round> {
   const areaRank = new Map(areas.map((a, i) => [a.id, i]))
   const batches = [...ctx.cat.batches.values()].filter((b) => b.status === 'active' || b.status === 'quarantine')
 
+  const rations = await rationsForDay(day, [...new Set(rows.filter((r) => r.category === 'feeding' && r.tankId).map((r) => r.tankId!))], ctx.cat)
   const tasks: RoundTask[] = rows.map((row) => {
     const tank = row.tankId ? ctx.cat.tanks.get(row.tankId) : undefined
     const systemId = row.targetKind === 'system' ? row.targetId : (tank?.systemId ?? null)
     const where = { systemId, batchIds: batches.filter((b) => tank && b.tankIds.includes(tank.id)).map((b) => b.id) }
     return {
       ...toTask(row, ctx),
+      rationG: rations.get(row.id) ?? null,
       salinitySetpoint: systemId ? (ctx.cat.systems.get(systemId)?.salinitySetpoint ?? null) : null,
       readingSpecs: row.requiredReadings.flatMap((key) => {
         const p = paramByKey.get(key)

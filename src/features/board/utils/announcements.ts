@@ -33,14 +33,20 @@ export function boardAnnouncements(moving: (task: Task) => Task[]): Announcement
     const n = moving(task).length
     return n > 1 ? `${n} tasks` : task.title
   }
+  // The first "over" after a pick-up is the card's own column; saying so would cut off "Picked up".
+  let justPickedUp = false
   return {
     onDragStart: ({ active }) => {
       const task = taskOf(active)
+      justPickedUp = true
       return task && `Picked up ${what(task)}.`
     },
     onDragOver: ({ active, over }) => {
+      const task = taskOf(active)
       const target = targetOf(over)
-      if (!taskOf(active)) return undefined
+      const first = justPickedUp
+      justPickedUp = false
+      if (!task || (first && target && isOrigin(task, target))) return undefined
       return target ? `Over ${overText(target)}.` : 'Not over a column or a day.'
     },
     onDragEnd: ({ active, over }) => {

@@ -16,11 +16,13 @@ export const rosterKeys = {
 
 const range = (from: string, to: string) => new URLSearchParams({ from, to }).toString()
 
-async function facilityZone() {
+async function facilityTimes() {
   try {
-    return (await apiFetch('/facility', FacilitySchema)).timeZone
+    const { timeZone, handoverTime } = await apiFetch('/facility', FacilitySchema)
+    return { timeZone, handoverTime: handoverTime as string | null }
   } catch (error) {
-    if (error instanceof ApiError && error.status === 404) return Intl.DateTimeFormat().resolvedOptions().timeZone
+    // No facility row yet (fresh database): plan in the browser's zone.
+    if (error instanceof ApiError && error.status === 404) return { timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone, handoverTime: null }
     throw error
   }
 }
@@ -34,5 +36,5 @@ export const rosterQueries = {
     queryOptions({ queryKey: rosterKeys.coverage(from, to), queryFn: () => apiFetch(`/roster/coverage?${range(from, to)}`, z.array(CoverageWarningSchema)) }),
   /** Active people, for planners (GET /api/people is for managers only). */
   staff: () => queryOptions({ queryKey: rosterKeys.staff(), queryFn: () => apiFetch('/staff', z.array(StaffMemberSchema)) }),
-  timeZone: () => queryOptions({ queryKey: rosterKeys.facility(), queryFn: facilityZone, staleTime: 10 * 60_000 }),
+  facility: () => queryOptions({ queryKey: rosterKeys.facility(), queryFn: facilityTimes, staleTime: 10 * 60_000 }),
 }

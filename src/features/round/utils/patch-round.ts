@@ -19,14 +19,17 @@ const sameTarget = (a: Task, b: Task) => a.targetKind === b.targetKind && a.targ
  * same target have the same limits, so they are borrowed from the task it rechecks or a
  * sibling on that target. Null when the round does not know them (then refetch).
  */
-function specsFor(round: Round, task: Task): Pick<RoundTask, 'readingSpecs' | 'salinitySetpoint'> | null {
+type RoundExtras = Pick<RoundTask, 'readingSpecs' | 'salinitySetpoint' | 'rationG'>
+
+function specsFor(round: Round, task: Task): RoundExtras | null {
   const original = round.tasks.find((t) => t.id === task.recheckOfTaskId)
   const pool = original ? [original] : round.tasks.filter((t) => sameTarget(t, task))
   const known = new Map<string, ReadingSpec>()
   for (const t of pool) for (const s of t.readingSpecs) known.set(s.key, s)
   const readingSpecs = task.requiredReadings.map((key) => known.get(key))
   if (readingSpecs.some((s) => !s)) return null
-  return { readingSpecs: readingSpecs as ReadingSpec[], salinitySetpoint: pool[0]?.salinitySetpoint ?? null }
+  // A ration is worked out per task on the server; a task placed from an event shows none until the next fetch.
+  return { readingSpecs: readingSpecs as ReadingSpec[], salinitySetpoint: pool[0]?.salinitySetpoint ?? null, rationG: null }
 }
 
 const sameKeys = (a: string[], b: string[]) => a.length === b.length && a.every((k, i) => k === b[i])
@@ -43,9 +46,9 @@ export function patchRound(round: Round, task: Task, personId: number | null): R
   if (!belongs) return existing ? { ...round, tasks: others } : round
   // Events can overtake each other; never step back to an older version.
   if (existing && existing.version > task.version) return round
-  const specs =
+  const specs: RoundExtras | null =
     existing && sameKeys(existing.requiredReadings, task.requiredReadings)
-      ? { readingSpecs: existing.readingSpecs, salinitySetpoint: existing.salinitySetpoint }
+      ? { readingSpecs: existing.readingSpecs, salinitySetpoint: existing.salinitySetpoint, rationG: existing.rationG }
       : specsFor(round, task)
   if (!specs) return 'refetch'
   return { ...round, tasks: sortRoundTasks(round, [...others, { ...task, ...specs }]) }

@@ -1,0 +1,19 @@
+import { Router } from 'express'
+import { IdParamSchema } from '#shared/schemas/facility'
+import { broadcast } from '../../realtime/socket-server'
+import { requireRole, signedIn } from '../auth/require-role'
+import { createCylinder, listCylinders, recordCylinderReading } from './oxygen.service'
+
+export const oxygenRouter = Router()
+
+oxygenRouter.get('/oxygen/cylinders', signedIn, async (_req, res) => {
+  res.json(await listCylinders())
+})
+oxygenRouter.post('/oxygen/cylinders', requireRole('manager', 'supervisor'), async (req, res) => {
+  res.status(201).json(await createCylinder(req.body))
+})
+oxygenRouter.post('/oxygen/cylinders/:id/readings', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
+  const status = await recordCylinderReading(IdParamSchema.parse(req.params).id, req.body)
+  if (status.replaceTaskId) broadcast('tasks:changed', { reason: 'oxygen' })
+  res.json(status)
+})

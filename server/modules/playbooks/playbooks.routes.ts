@@ -1,0 +1,61 @@
+import { Router } from 'express'
+import { z } from 'zod'
+import { IdParamSchema } from '#shared/schemas/facility'
+import { broadcast } from '../../realtime/socket-server'
+import { requireRole, signedIn } from '../auth/require-role'
+import { addBatchRecord, listBatchRecords } from './batch-records.service'
+import { cancelEvent, endEvent, getEvent, listEvents, startEvent, updateEvent } from './events.service'
+import { createPlaybook, getPlaybook, listPlaybooks, updatePlaybook } from './playbooks.service'
+
+export const playbooksRouter = Router()
+const planners = requireRole('manager', 'supervisor')
+const doers = requireRole('manager', 'supervisor', 'technician')
+const RangeSchema = z.object({ from: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional(), to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional() })
+
+playbooksRouter.get('/playbooks', signedIn, async (_req, res) => {
+  res.json(await listPlaybooks())
+})
+playbooksRouter.get('/playbooks/:id', signedIn, async (req, res) => {
+  res.json(await getPlaybook(IdParamSchema.parse(req.params).id))
+})
+playbooksRouter.post('/playbooks', requireRole('manager'), async (req, res) => {
+  res.status(201).json(await createPlaybook(req.body))
+})
+playbooksRouter.put('/playbooks/:id', requireRole('manager'), async (req, res) => {
+  res.json(await updatePlaybook(IdParamSchema.parse(req.params).id, req.body))
+})
+
+playbooksRouter.get('/events', signedIn, async (req, res) => {
+  const { from, to } = RangeSchema.parse(req.query)
+  res.json(await listEvents(from, to))
+})
+playbooksRouter.get('/events/:id', signedIn, async (req, res) => {
+  res.json(await getEvent(IdParamSchema.parse(req.params).id))
+})
+playbooksRouter.post('/events', planners, async (req, res) => {
+  const event = await startEvent(req.body, req.user!)
+  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
+  res.status(201).json(event)
+})
+playbooksRouter.patch('/events/:id', planners, async (req, res) => {
+  const event = await updateEvent(IdParamSchema.parse(req.params).id, req.body)
+  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
+  res.json(event)
+})
+playbooksRouter.post('/events/:id/cancel', planners, async (req, res) => {
+  const event = await cancelEvent(IdParamSchema.parse(req.params).id)
+  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
+  res.json(event)
+})
+playbooksRouter.post('/events/:id/end', planners, async (req, res) => {
+  const event = await endEvent(IdParamSchema.parse(req.params).id)
+  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
+  res.json(event)
+})
+
+playbooksRouter.get('/batches/:id/records', signedIn, async (req, res) => {
+  res.json(await listBatchRecords(IdParamSchema.parse(req.params).id))
+})
+playbooksRouter.post('/batches/:id/records', doers, async (req, res) => {
+  res.status(201).json(await addBatchRecord(IdParamSchema.parse(req.params).id, req.user!, req.body))
+})

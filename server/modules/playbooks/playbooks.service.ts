@@ -1,0 +1,23 @@
+import { PlaybookInputSchema, type Playbook } from '#shared/schemas/playbook'
+import { db } from '../../db/data-source'
+import { notFound } from '../../lib/errors'
+import { PlaybookEntity } from './playbook.entities'
+
+const repo = () => db().getRepository(PlaybookEntity)
+
+export const listPlaybooks = (): Promise<Playbook[]> => repo().find({ order: { name: 'ASC' } })
+
+export async function getPlaybook(id: number): Promise<Playbook> {
+  const row = await repo().findOneBy({ id })
+  if (!row) throw notFound('That playbook')
+  return row
+}
+
+export async function createPlaybook(input: unknown): Promise<Playbook> {
+  return repo().save(PlaybookInputSchema.parse(input))
+}
+
+export async function updatePlaybook(id: number, input: unknown): Promise<Playbook> {
+  const current = await getPlaybook(id)
+  return repo().save({ ...current, ...PlaybookInputSchema.parse(input) })
+}

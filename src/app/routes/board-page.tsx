@@ -1,0 +1,57 @@
+import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { Loader2 } from 'lucide-react'
+import { redirect, useNavigation, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { PageHeader } from '../../components/ui/page-state'
+import { authQueries } from '../../features/auth/api/auth-queries'
+import { boardQueries } from '../../features/board/api/board-queries'
+import { BoardView } from '../../features/board/components/board-view'
+import { fullDay, ISO_DATE } from '../../features/board/utils/board-dates'
+import { facilityQueries } from '../../features/facility/api/facility-queries'
+
+/** Today on the facility's clock (the browser's own when no facility is set up yet). */
+function todayIn(timeZone: string | undefined) {
+  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date())
+}
+
+const facilityToday = async (queryClient: QueryClient) => todayIn((await queryClient.ensureQueryData(facilityQueries.facility()))?.timeZone)
+
+export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  const url = new URL(request.url)
+  const date = url.searchParams.get('date')
+  if (!date || !ISO_DATE.test(date)) {
+    url.searchParams.set('date', await facilityToday(queryClient))
+    throw redirect(`${url.pathname}?${url.searchParams}`)
+  }
+  void queryClient.prefetchQuery(facilityQueries.areas())
+  await queryClient.ensureQueryData(boardQueries.day(date))
+  return null
+}
+
+export function Component() {
+  const [params] = useSearchParams()
+  const date = params.get('date')!
+  const { data: board } = useSuspenseQuery(boardQueries.day(date))
+  const { data: me } = useSuspenseQuery(authQueries.me())
+  const { data: facility } = useQuery(facilityQueries.facility())
+  const { data: areas = [] } = useQuery(facilityQueries.areas())
+  const navigation = useNavigation()
+  const loadingDay = navigation.state === 'loading' && navigation.location.pathname === '/board'
+
+  return (
+    <section className="flex flex-col">
+      <PageHeader title="Board">
+        <p className="flex items-center gap-2 text-lg font-semibold text-tide-800">
+          {loadingDay && <Loader2 aria-label="Loading the day" className="size-5 animate-spin" />}
+          {fullDay(board.date)}
+        </p>
+      </PageHeader>
+      <BoardView
+        key={board.date}
+        board={board}
+        areas={areas}
+        today={todayIn(facility?.timeZone)}
+        canEdit={me.role === 'manager' || me.role === 'supervisor'}
+      />
+    </section>
+  )
+}

@@ -1,0 +1,200 @@
+import { randomUUID } from 'node:crypto'
+import { DateTime } from 'luxon'
+import type { Locator, Page } from 'playwright-core'
+import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { createShift } from '#server/modules/roster/roster.service'
+import type { Tank } from '#shared/schemas/facility'
+import type { Task } from '#shared/schemas/task'
+import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
+import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { makeTankTask } from '#tests/support/task-fixtures'
+
+const TABLET = { width: 820, height: 1180 }
+
+let s: BrowserSession
+let zone: string
+beforeAll(async () => {
+  s = await startBrowserSession()
+  zone = (await ensureFacilityAndParameters()).timeZone
+})
+afterAll(() => s?.close())
+
+/** A task on a facility day at a local time, unassigned unless told. */
+function taskAt(tank: Tank, date: string, time: string, extra: Parameters<typeof makeTankTask>[1] = {}) {
+  const due = DateTime.fromISO(`${date}T${time}`, { zone })
+  return makeTankTask(tank, { dueAt: due.toJSDate(), localDate: date, localStart: `${date}T${time}:00`, occurrenceStart: `${date}T${time}:00`, status: 'planned', ...extra })
+}
+
+/** A Monday far ahead, so other journeys' tasks never share the board; Tuesday is in the same week. */
+async function arrange() {
+  const tag = randomUUID().slice(0, 5)
+  const monday = DateTime.now().setZone(zone).plus({ days: 320 }).startOf('week').toISODate()!
+  const tuesday = DateTime.fromISO(monday).plus({ days: 1 }).toISODate()!
+  const { area, tanks } = await makeAreaWithTanks(4)
+  const tech = await s.createPerson('technician', { name: `Ana Kowal ${tag}` })
+  const offShift = await s.createPerson('technician', { name: `Rui Duarte ${tag}` })
+  await createShift({ personId: tech.id, date: monday, start: '07:00', end: '15:30', kind: 'day' })
+  const [mouse, keyboard, dayMove, refused, bulkA, bulkB] = await Promise.all([
+    taskAt(tanks[0], monday, '07:30', { title: `Morning feed ${tag}`, category: 'feeding', priority: 'routine' }),
+    taskAt(tanks[1], monday, '08:00', { title: `Tank check ${tag}` }),
+    taskAt(tanks[2], monday, '09:00', { title: `Filter rinse ${tag}`, category: 'maintenance', priority: 'routine' }),
+    taskAt(tanks[3], monday, '10:00', { title: `Afternoon feed ${tag}`, category: 'feeding', priority: 'routine' }),
+    taskAt(tanks[0], monday, '11:00', { title: `Water test A ${tag}`, category: 'water_quality', priority: 'routine' }),
+    taskAt(tanks[1], monday, '11:15', { title: `Water test B ${tag}`, category: 'water_quality', priority: 'routine' }),
+    // Neighbours that show the card's other facts: a held feed, and a finished check with a watch flag.
+    taskAt(tanks[2], monday, '12:00', { title: `Fasted feed ${tag}`, category: 'feeding', status: 'held', heldReason: 'Fasting before dispatch', assigneeId: offShift.id }),
+    taskAt(tanks[3], monday, '06:30', { title: `Dawn check ${tag}`, status: 'done', flag: 'watch', assigneeId: tech.id }),
+  ])
+  return { tag, monday, tuesday, area, tech, offShift, tasks: { mouse, keyboard, dayMove, refused, bulkA, bulkB } }
+}
+
+const column = (page: Page, name: string) => page.getByRole('region', { name, exact: true })
+const card = (page: Page, taskId: number) => page.locator(`li[data-task-id="${taskId}"]`)
+const liveRegion = (page: Page) => page.locator('[id^="DndLiveRegion"]')
+
+async function mouseDrag(page: Page, from: Locator, to: Locator) {
+  const a = (await from.boundingBox())!
+  const b = (await to.boundingBox())!
+  await page.mouse.move(a.x + a.width / 2, a.y + 16)
+  await page.mouse.down()
+  await page.mouse.move(a.x + a.width / 2 + 12, a.y + 24, { steps: 4 })
+  await page.mouse.move(b.x + b.width / 2, b.y + Math.min(b.height / 2, 60), { steps: 12 })
+  await page.mouse.up()
+}
+
+async function apiTask(page: Page, id: number): Promise<Task> {
+  const res = await page.request.get(`/api/tasks/${id}`)
+  expect(res.status()).toBe(200)
+  return (await res.json()) as Task
+}
+
+describe('the board', () => {
+  test('a supervisor assigns by mouse and keyboard, moves a card to Tuesday, drags two together, and sees a refusal explained; the technician sees it live', async () => {
+    const { monday, tuesday, area, tech, offShift, tasks } = await arrange()
+    const boardUrl = `/board?date=${monday}&area=${area.id}`
+
+    // The technician keeps two rounds open: Monday's and Tuesday's.
+    const techSide = await s.newPage(PHONE)
+    await s.signIn(techSide.page, tech.email)
+    const mondayRound = techSide.page
+    await mondayRound.goto(`/round?date=${monday}`)
+    await mondayRound.getByRole('status', { name: 'Connection: Live' }).waitFor()
+    const tuesdayRound = await techSide.context.newPage()
+    await tuesdayRound.goto(`/round?date=${tuesday}`)
+    await tuesdayRound.getByRole('status', { name: 'Connection: Live' }).waitFor()
+    const roundRow = (page: Page, title: string) => page.getByRole('listitem').filter({ has: page.getByRole('button', { name: new RegExp(title) }) })
+    await roundRow(mondayRound, tasks.mouse.title).getByRole('button', { name: 'Unassigned — take it' }).waitFor()
+    expect(await tuesdayRound.getByText(tasks.dayMove.title).count()).toBe(0)
+
+    const supervisor = await s.createPerson('supervisor')
+    const { page, context } = await s.newPage(DESKTOP)
+    await s.signIn(page, supervisor.email)
+    await page.goto(boardUrl)
+    const unassigned = column(page, 'Unassigned')
+    const techColumn = column(page, tech.name)
+    await card(page, tasks.mouse.id).waitFor()
+    await techColumn.getByText('07:00–15:30').waitFor()
+    await column(page, offShift.name).getByText('Not on shift').waitFor()
+    await column(page, offShift.name).getByText('Held: Fasting before dispatch').waitFor()
+    await techColumn.getByText('Flag: watch').waitFor()
+    await screenshot(page, 'board-desktop-start')
+
+    // Mouse: Unassigned -> the technician.
+    await mouseDrag(page, card(page, tasks.mouse.id), techColumn)
+    await techColumn.locator(`li[data-task-id="${tasks.mouse.id}"]`).waitFor()
+    await expect.poll(() => liveRegion(page).textContent()).toContain(`assigned to ${tech.name}`)
+    // Live on the technician's phone: the card is theirs now, no longer up for taking.
+    await expect.poll(() => roundRow(mondayRound, tasks.mouse.title).getByRole('button', { name: 'Unassigned — take it' }).count()).toBe(0)
+    await roundRow(mondayRound, tasks.mouse.title).waitFor()
+
+    // Keyboard: space picks up, the right arrow reaches the next column, space drops.
+    const handle = page.getByRole('button', { name: new RegExp(`^Move ${tasks.keyboard.title}, `) })
+    await handle.focus()
+    await page.keyboard.press('Space')
+    await expect.poll(() => liveRegion(page).textContent()).toMatch(new RegExp(`^Picked up ${tasks.keyboard.title}, .+ at 08:00\\.$`))
+    await page.keyboard.press('ArrowRight')
+    await expect.poll(() => liveRegion(page).textContent()).toBe(`Over ${tech.name}'s column.`)
+    await screenshot(page, 'board-desktop-keyboard-drag')
+    await page.keyboard.press('Space')
+    await techColumn.locator(`li[data-task-id="${tasks.keyboard.id}"]`).waitFor()
+    await expect.poll(() => liveRegion(page).textContent()).toBe(`${tasks.keyboard.title} assigned to ${tech.name}.`)
+
+    // Escape puts a picked-up card back.
+    await page.getByRole('button', { name: new RegExp(`^Move ${tasks.refused.title}, `) }).focus()
+    await page.keyboard.press('Space')
+    await expect.poll(() => liveRegion(page).textContent()).toContain('Picked up')
+    await page.keyboard.press('ArrowRight')
+    await page.keyboard.press('Escape')
+    await expect.poll(() => liveRegion(page).textContent()).toContain('stays where it was')
+    await unassigned.locator(`li[data-task-id="${tasks.refused.id}"]`).waitFor()
+
+    // Week strip: onto Tuesday, which leaves Monday's board and shows up in Tuesday's round.
+    const tuesdayLink = page.getByRole('link', { name: DateTime.fromISO(tuesday).setLocale('en-GB').toFormat('cccc d MMMM'), exact: true })
+    await mouseDrag(page, card(page, tasks.dayMove.id), tuesdayLink)
+    await card(page, tasks.dayMove.id).waitFor({ state: 'detached' })
+    await expect.poll(async () => (await apiTask(page, tasks.dayMove.id)).localDate).toBe(tuesday)
+    await tuesdayRound.getByText(tasks.dayMove.title).waitFor()
+
+    // Two selected cards travel together (one bulk move).
+    await page.getByRole('checkbox', { name: new RegExp(`^Select ${tasks.bulkA.title}, `) }).check()
+    await card(page, tasks.bulkB.id).click({ modifiers: ['Shift'] })
+    await page.getByText('2 selected').waitFor()
+    const bulk = page.waitForRequest((r) => r.url().endsWith('/api/tasks/bulk-move') && r.method() === 'POST')
+    await mouseDrag(page, card(page, tasks.bulkA.id), techColumn)
+    await bulk
+    await techColumn.locator(`li[data-task-id="${tasks.bulkA.id}"]`).waitFor()
+    await techColumn.locator(`li[data-task-id="${tasks.bulkB.id}"]`).waitFor()
+
+    // Refused: the other technician is not on shift that day; the card goes back and the reason shows.
+    await mouseDrag(page, card(page, tasks.refused.id), column(page, offShift.name))
+    await page.getByText(`${offShift.name} is not on shift on ${monday}`).waitFor()
+    await unassigned.locator(`li[data-task-id="${tasks.refused.id}"]`).waitFor()
+    await screenshot(page, 'board-desktop-refused')
+
+    // After a reload the assignments hold, on screen and in the API.
+    await page.reload()
+    for (const t of [tasks.mouse, tasks.keyboard, tasks.bulkA, tasks.bulkB]) {
+      await techColumn.locator(`li[data-task-id="${t.id}"]`).waitFor()
+      expect((await apiTask(page, t.id)).assigneeId).toBe(tech.id)
+    }
+    expect((await apiTask(page, tasks.refused.id)).assigneeId).toBeNull()
+    await techColumn.getByText('5 tasks').waitFor()
+    await screenshot(page, 'board-desktop-after')
+
+    await page.setViewportSize(TABLET)
+    await techColumn.waitFor()
+    await screenshot(page, 'board-tablet')
+    await context.close()
+
+    // The technician reads the same board on the phone, without handles or checkboxes.
+    await mondayRound.goto(boardUrl)
+    await column(mondayRound, tech.name).locator(`li[data-task-id="${tasks.mouse.id}"]`).waitFor()
+    await mondayRound.getByText('You can read this board').waitFor()
+    expect(await mondayRound.getByRole('button', { name: /^Move / }).count()).toBe(0)
+    expect(await mondayRound.getByRole('checkbox').count()).toBe(0)
+    await screenshot(mondayRound, 'board-phone-read-only')
+    await techSide.context.close()
+  })
+
+  test('without a date the board opens on the facility today, and the filters narrow the cards', async () => {
+    const { monday, area, tasks } = await arrange()
+    const observer = await s.createPerson('observer')
+    const { page, context } = await s.newPage(DESKTOP)
+    await s.signIn(page, observer.email)
+    await page.goto('/board')
+    await page.waitForURL(/\/board\?date=\d{4}-\d{2}-\d{2}$/)
+    expect(new URL(page.url()).searchParams.get('date')).toBe(DateTime.now().setZone(zone).toISODate())
+
+    await page.goto(`/board?date=${monday}`)
+    await page.getByLabel('Area').selectOption(String(area.id))
+    await page.getByLabel('Category').selectOption('water_quality')
+    await card(page, tasks.bulkA.id).waitFor()
+    await card(page, tasks.mouse.id).waitFor({ state: 'detached' })
+    expect(new URL(page.url()).searchParams.get('category')).toBe('water_quality')
+    await page.getByRole('button', { name: 'Clear filters' }).click()
+    await card(page, tasks.mouse.id).waitFor()
+    await page.getByRole('link', { name: 'Next day' }).click()
+    await page.waitForURL(`**/board?date=${DateTime.fromISO(monday).plus({ days: 1 }).toISODate()}`)
+    await context.close()
+  })
+})
