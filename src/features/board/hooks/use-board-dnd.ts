@@ -36,7 +36,8 @@ export function useBoardDnd({ date, visible, selected, clearSelection }: Options
     (task: Task) => (selected.has(task.id) && selected.size > 1 ? [task, ...visible.filter((t) => t.id !== task.id && selected.has(t.id))] : [task]),
     [selected, visible],
   )
-  const announcements = useMemo(() => boardAnnouncements(moving), [moving])
+  const [pickup] = useState(() => ({ fresh: false }))
+  const announcements = useMemo(() => boardAnnouncements(moving, pickup), [moving, pickup])
 
   const onDragStart = useCallback(
     (event: DragStartEvent) => {

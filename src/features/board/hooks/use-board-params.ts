@@ -1,11 +1,11 @@
-import { useCallback } from 'react'
+import { useCallback, useMemo } from 'react'
 import { useSearchParams } from 'react-router-dom'
 import { readFilters, writeFilters, type BoardFilters } from '../utils/board-filters'
 
 /** The board's filters live in the address, so a link or a reload shows the same board. */
 export function useBoardParams() {
   const [params, setParams] = useSearchParams()
-  const filters = readFilters(params)
+  const filters = useMemo(() => readFilters(params), [params])
   const setFilters = useCallback(
     (next: BoardFilters) => setParams((current) => writeFilters(current, next), { replace: true }),
     [setParams],

@@ -22,9 +22,9 @@ export const isOrigin = (task: Task, t: DropTarget) =>
 
 /**
  * Words for screen readers, never ids. `moving` gives the tasks that travel with the one picked
- * up (a selection); the card's own task is always first.
+ * up (a selection); the card's own task is always first. `pickup` outlives re-renders mid-drag.
  */
-export function boardAnnouncements(moving: (task: Task) => Task[]): Announcements {
+export function boardAnnouncements(moving: (task: Task) => Task[], pickup: { fresh: boolean }): Announcements {
   const what = (task: Task) => {
     const all = moving(task)
     return all.length > 1 ? `${all.length} tasks, starting with ${taskPhrase(task)}` : taskPhrase(task)
@@ -33,19 +33,18 @@ export function boardAnnouncements(moving: (task: Task) => Task[]): Announcement
     const n = moving(task).length
     return n > 1 ? `${n} tasks` : task.title
   }
-  // The first "over" after a pick-up is the card's own column; saying so would cut off "Picked up".
-  let justPickedUp = false
   return {
     onDragStart: ({ active }) => {
       const task = taskOf(active)
-      justPickedUp = true
+      pickup.fresh = true
       return task && `Picked up ${what(task)}.`
     },
     onDragOver: ({ active, over }) => {
       const task = taskOf(active)
       const target = targetOf(over)
-      const first = justPickedUp
-      justPickedUp = false
+      // The first "over" after a pick-up is the card's own column; saying so would cut off "Picked up".
+      const first = pickup.fresh
+      pickup.fresh = false
       if (!task || (first && target && isOrigin(task, target))) return undefined
       return target ? `Over ${overText(target)}.` : 'Not over a column or a day.'
     },

@@ -1,5 +1,5 @@
 import { clsx } from 'clsx'
-import { ChevronDown, CirclePause, CloudUpload, RotateCcw } from 'lucide-react'
+import { ChevronDown, CirclePause, CloudUpload, RotateCcw, Scale } from 'lucide-react'
 import { useEffect, useRef } from 'react'
 import type { Round, RoundTask } from '#shared/schemas/round'
 import type { SubmitOutcome } from '../api/use-submit-completion'
@@ -72,6 +72,12 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
       {expanded && (
         <div className="flex flex-col gap-4 border-t border-tide-100 p-3">
           {task.instructions && <p className="whitespace-pre-line text-tide-800">{task.instructions}</p>}
+          {task.rationG != null && (
+            <p className="flex items-center gap-2 font-semibold text-tide-900">
+              <Scale aria-hidden className="size-5 shrink-0 text-tide-600" /> Ration: {task.rationG} g
+              <span className="font-normal text-tide-600">from the batch's biomass and feeding rate</span>
+            </p>
+          )}
           {entry && <OutboxNotice entry={entry} round={round} />}
           {task.status === 'held' ? (
             <p className="flex items-center gap-2 text-tide-800">
