@@ -7,6 +7,7 @@ import path from 'node:path'
 import type { AppConfig } from './lib/config'
 import { errorHandler } from './lib/error-handler'
 import { notFound } from './lib/errors'
+import { requestContext } from './lib/request-context'
 import { logger } from './lib/logger'
 import { authRouter } from './modules/auth/auth.routes'
 import { configurePassport } from './modules/auth/passport'
@@ -22,6 +23,7 @@ import { peopleRouter, staffRouter } from './modules/people/people.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
 import { oxygenRouter } from './modules/oxygen/oxygen.routes'
 import { playbooksRouter } from './modules/playbooks/playbooks.routes'
+import { reportsRouter } from './modules/reports/reports.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
 
@@ -63,7 +65,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use(express.json({ limit: '256kb' }))
   api.use(requireSameOrigin(config.allowedOrigins))
   api.use('/health', healthRouter)
-  api.use(sessionMiddleware, passport.session())
+  api.use(sessionMiddleware, passport.session(), requestContext)
   api.use('/', authRouter(config))
   api.use('/people', peopleRouter)
   api.use('/staff', staffRouter)
@@ -76,6 +78,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', escalationRouter(config))
   api.use('/', playbooksRouter)
   api.use('/', oxygenRouter)
+  api.use('/', reportsRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

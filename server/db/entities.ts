@@ -1,5 +1,7 @@
 import { AlertEntity, CompletionEntity, PhotoEntity, ReadingEntity } from '../modules/completions/completion.entities'
 import { DigestEntity, LadderEntity, NotificationEntity, OutboxEntity } from '../modules/escalation/escalation.entities'
+import { AuditEntity } from '../modules/audit/audit.entity'
+import { AmendmentEntity } from '../modules/completions/amendment.entity'
 import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
@@ -14,5 +16,5 @@ export const entities = [
   PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
   ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity,
-  PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity,
+  PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity, AuditEntity, AmendmentEntity,
 ]

@@ -23,6 +23,8 @@ export const CompletionInputSchema = z
     note: z.string().trim().max(2000).optional(),
     /** When the work was really done (typing in a paper sheet later); defaults to now. */
     doneAt: z.string().datetime().optional(),
+    /** Typing in a paper round sheet: who really did it (supervisors and managers only). */
+    performedById: z.number().int().positive().optional(),
   })
   .superRefine((c, ctx) => {
     if (c.outcome === 'skipped' && !c.skipReason) ctx.addIssue({ code: 'custom', path: ['skipReason'], message: 'Choose why it could not be done' })
@@ -46,3 +48,10 @@ export const CompletionResultSchema = z.object({
   notes: z.array(z.string()),
 })
 export type CompletionResult = z.infer<typeof CompletionResultSchema>
+
+export const AmendmentInputSchema = z.object({
+  reason: z.string().trim().min(5, 'Say why the record is corrected').max(1000),
+  readings: z.record(z.string().min(1).max(40), z.number({ error: 'Enter a number' }).finite()).default({}),
+  note: z.string().trim().max(2000).optional(),
+})
+export type AmendmentInput = z.input<typeof AmendmentInputSchema>

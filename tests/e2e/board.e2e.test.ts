@@ -114,7 +114,8 @@ describe('the board', () => {
     await expect.poll(() => liveRegion(page).textContent()).toMatch(new RegExp(`^Picked up ${tasks.keyboard.title}, .+ at 08:00\\.$`))
     await page.keyboard.press('ArrowRight')
     await expect.poll(() => liveRegion(page).textContent()).toBe(`Over ${tech.name}'s column.`)
-    await screenshot(page, 'board-desktop-keyboard-drag')
+    // Viewport only: a full-page shot resizes the window, and a resize cancels a keyboard drag.
+    await page.screenshot({ path: 'test-results/board-desktop-keyboard-drag.png' })
     await page.keyboard.press('Space')
     await techColumn.locator(`li[data-task-id="${tasks.keyboard.id}"]`).waitFor()
     await expect.poll(() => liveRegion(page).textContent()).toBe(`${tasks.keyboard.title} assigned to ${tech.name}.`)

@@ -93,6 +93,7 @@ describe('the calendar', () => {
     await page.getByRole('button', { name: 'Month' }).click()
 
     await page.setViewportSize(TABLET)
+    await page.reload()
     await busy.getByText(onCall.name).waitFor()
     await screenshot(page, 'calendar-month-tablet')
     await page.setViewportSize(DESKTOP)

@@ -10,6 +10,8 @@ export interface CompletionRow {
   note: string | null
   doneAt: Date
   lateMinutes: number | null
+  /** Who typed it in, when not the person who did the work (a paper sheet entered later). */
+  enteredById: number | null
   /** The first answer, returned again to a replay of the same completion id. */
   response: unknown
   createdAt: Date
@@ -27,6 +29,7 @@ export const CompletionEntity = new EntitySchema<CompletionRow>({
     note: { type: 'text', nullable: true },
     doneAt: { type: 'datetime', precision: 3 },
     lateMinutes: { type: 'int', nullable: true },
+    enteredById: { type: 'int', nullable: true },
     response: { type: 'json', nullable: true },
     createdAt: { type: 'datetime', precision: 3, createDate: true },
   },
@@ -46,6 +49,9 @@ export interface ReadingRow {
   derived: boolean
   takenAt: Date
   personId: number
+  /** Set on a reading an amendment corrected; the amendment's own readings carry its id. */
+  supersededAt: Date | null
+  amendmentId: number | null
 }
 
 export const ReadingEntity = new EntitySchema<ReadingRow>({
@@ -64,6 +70,8 @@ export const ReadingEntity = new EntitySchema<ReadingRow>({
     derived: { type: 'boolean', default: false },
     takenAt: { type: 'datetime', precision: 3 },
     personId: { type: 'int' },
+    supersededAt: { type: 'datetime', precision: 3, nullable: true },
+    amendmentId: { type: 'int', nullable: true },
   },
   indices: [{ columns: ['tankId', 'parameterKey', 'takenAt'] }, { columns: ['systemId', 'parameterKey', 'takenAt'] }, { columns: ['completionId'] }],
 })

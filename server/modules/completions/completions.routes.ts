@@ -8,6 +8,7 @@ import { publishTask } from '../../realtime/task-events'
 import { requireRole, signedIn } from '../auth/require-role'
 import { getTask } from '../tasks/tasks.service'
 import { takeTask } from '../tasks/take-task.service'
+import { amendCompletion, completionHistory } from './amendments.service'
 import { completeTask } from './completions.service'
 import { PHOTO_MAX_BYTES, listPhotos, photoFile, savePhoto } from './photos.service'
 
@@ -23,6 +24,15 @@ export function completionsRouter(config: AppConfig) {
     publishTask('task:updated', result.task)
     if (result.recheckTaskId) publishTask('task:created', await getTask(result.recheckTaskId))
     res.json(result)
+  })
+
+  router.get('/tasks/:id/completion', signedIn, async (req, res) => {
+    res.json(await completionHistory(IdParamSchema.parse(req.params).id))
+  })
+
+  router.post('/completions/:completionId/amendments', doers, async (req, res) => {
+    const { completionId } = z.object({ completionId: z.string().uuid() }).parse(req.params)
+    res.status(201).json(await amendCompletion(completionId, req.user!, req.body))
   })
 
   router.post('/tasks/:id/take', doers, async (req, res) => {

@@ -3,7 +3,9 @@ import { deriveReadings } from '#shared/readings/derive'
 import { CompletionInputSchema, type CompletionResult, type Reading } from '#shared/schemas/completion'
 import type { Person } from '#shared/schemas/person'
 import { db } from '../../db/data-source'
-import { conflict, validationError } from '../../lib/errors'
+import { conflict, forbidden, validationError } from '../../lib/errors'
+import { PersonEntity } from '../people/person.entity'
+import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
@@ -35,6 +37,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   }
 
   const doneAt = data.doneAt ? new Date(data.doneAt) : new Date()
+  const performer = await performerFor(person, data.performedById)
+  if (doneAt.getTime() > Date.now() + 60_000) throw validationError('A task cannot be completed in the future.', { doneAt: ['In the future'] })
   const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings) : { rows: [] as Reading[], notes: [] as string[] }
   const flag = data.outcome === 'done' ? worstBand(readings.rows.map((r) => r.band)) : 'ok'
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
@@ -49,8 +53,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
         flag: flag === 'ok' ? null : flag,
         lateMinutes,
         completedAt: doneAt,
-        completedById: person.id,
-        assigneeId: task.assigneeId ?? person.id,
+        completedById: performer.id,
+        assigneeId: task.assigneeId ?? performer.id,
         version: () => 'version + 1',
       })
       .where('id = :id AND version = :version', { id: task.id, version: task.version })
@@ -58,14 +62,14 @@ export async function completeTask(taskId: number, person: Person, input: unknow
       .execute()
     if (!claimed.affected) return null
     await manager.getRepository(CompletionEntity).insert({
-      id: data.completionId, taskId: task.id, personId: person.id, outcome: data.outcome,
+      id: data.completionId, taskId: task.id, personId: performer.id, enteredById: performer.id === person.id ? null : person.id, outcome: data.outcome,
       skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
     })
     if (readings.rows.length) {
       await manager.getRepository(ReadingEntity).insert(
         readings.rows.map((r) => ({
           completionId: data.completionId, taskId: task.id, tankId: context.tankId, systemId: context.systemId,
-          parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: doneAt, personId: person.id,
+          parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: doneAt, personId: performer.id,
         })),
       )
     }
@@ -78,11 +82,20 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   }
 
   const updated = await getTaskRow(taskId)
-  const recheckTaskId = flag === 'ok' ? null : (await createRecheck(updated, person.id)).id
+  // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
+  const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
   if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
   const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
   await db().getRepository(CompletionEntity).update(data.completionId, { response: response as never })
   return response
+}
+
+async function performerFor(person: Person, performedById: number | undefined): Promise<Person> {
+  if (performedById === undefined || performedById === person.id) return person
+  if (person.role !== 'manager' && person.role !== 'supervisor') throw forbidden('Only supervisors and managers can enter work done by someone else.')
+  const row = await db().getRepository(PersonEntity).findOneBy({ id: performedById })
+  if (!row) throw validationError('That person does not exist.', { performedById: ['Choose who did the work'] })
+  return toPerson(row)
 }
 
 async function assertStillOpen(task: TaskRow) {

@@ -1,4 +1,5 @@
 import { LadderInputSchema, type Ladder, type LadderStep } from '#shared/schemas/ladder'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import type { AlertRow } from '../completions/completion.entities'
@@ -24,13 +25,17 @@ const repo = () => db().getRepository(LadderEntity)
 export const listLadders = (): Promise<Ladder[]> => repo().find({ order: { id: 'ASC' } })
 
 export async function createLadder(input: unknown): Promise<Ladder> {
-  return repo().save(LadderInputSchema.parse(input))
+  const saved = await repo().save(LadderInputSchema.parse(input))
+  await audit('ladder', saved.id, 'create', null, saved)
+  return saved
 }
 
 export async function updateLadder(id: number, input: unknown): Promise<Ladder> {
   const current = await repo().findOneBy({ id })
   if (!current) throw notFound('That ladder')
-  return repo().save({ ...current, ...LadderInputSchema.parse(input) })
+  const saved = await repo().save({ ...current, ...LadderInputSchema.parse(input) })
+  await audit('ladder', id, 'update', current, saved)
+  return saved
 }
 
 /**

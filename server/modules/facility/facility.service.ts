@@ -1,4 +1,5 @@
 import { UpdateFacilityInputSchema, type Facility } from '#shared/schemas/facility'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import { FacilityEntity } from './facility.entities'
@@ -15,7 +16,9 @@ export async function getFacility(): Promise<Facility> {
 export async function updateFacility(input: unknown): Promise<Facility> {
   const data = UpdateFacilityInputSchema.parse(input)
   const current = await getFacility()
-  return repo().save({ ...current, ...data })
+  const saved = await repo().save({ ...current, ...data })
+  await audit('facility', current.id, 'update', current, saved)
+  return saved
 }
 
 type NewFacility = Omit<Facility, 'id' | 'defaultLadderId' | 'fastLadderId' | 'digestTime'> & Partial<Pick<Facility, 'defaultLadderId' | 'fastLadderId' | 'digestTime'>>

@@ -1,4 +1,5 @@
 import { LimitInputSchema, type Limit, type Parameter } from '#shared/schemas/parameter'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import { LimitEntity, ParameterEntity } from './parameter.entities'
@@ -12,10 +13,14 @@ export async function upsertLimit(input: unknown): Promise<Limit> {
   const repo = db().getRepository(LimitEntity)
   if (!(await db().getRepository(ParameterEntity).findOneBy({ key: data.parameterKey }))) throw notFound(`The parameter ${data.parameterKey}`)
   const existing = await repo.findOneBy({ parameterKey: data.parameterKey, scope: data.scope, scopeId: data.scopeId ?? 0 } as never)
-  return repo.save({ ...(existing ?? {}), ...data })
+  const saved = await repo.save({ ...(existing ?? {}), ...data })
+  await audit('limit', saved.id, existing ? 'update' : 'create', existing, saved)
+  return saved
 }
 
 export async function deleteLimit(id: number) {
-  const result = await db().getRepository(LimitEntity).delete(id)
-  if (!result.affected) throw notFound('That limit')
+  const before = await db().getRepository(LimitEntity).findOneBy({ id })
+  if (!before) throw notFound('That limit')
+  await db().getRepository(LimitEntity).delete(id)
+  await audit('limit', id, 'delete', before, null)
 }

@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs'
 import type { CreatePersonInput, Person, StaffMember, UpdatePersonInput } from '#shared/schemas/person'
 import { CreatePersonInputSchema } from '#shared/schemas/person'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound } from '../../lib/errors'
 import { PersonEntity, type PersonRow } from './person.entity'
@@ -46,22 +47,29 @@ export async function createPerson(input: CreatePersonInput): Promise<Person> {
     active: true,
     sessionVersion: 0,
   })
-  return toPerson(await repo().save(row))
+  const saved = toPerson(await repo().save(row))
+  await audit('person', saved.id, 'create', null, saved)
+  return saved
 }
 
 export async function updatePerson(id: number, input: UpdatePersonInput): Promise<Person> {
   const row = await getPersonRow(id)
+  const before = toPerson(row)
   const endsSessions = input.active === false && row.active
   Object.assign(row, input)
   if (endsSessions) row.sessionVersion += 1
-  return toPerson(await repo().save(row))
+  const saved = toPerson(await repo().save(row))
+  await audit('person', id, 'update', before, saved)
+  return saved
 }
 
 export async function resetPassword(id: number, password: string): Promise<Person> {
   const row = await getPersonRow(id)
   row.passwordHash = await hashPassword(password)
   row.sessionVersion += 1
-  return toPerson(await repo().save(row))
+  const saved = toPerson(await repo().save(row))
+  await audit('person', id, 'update', null, { passwordReset: true })
+  return saved
 }
 
 /** Checks a password; returns the person only when active and the password matches. */

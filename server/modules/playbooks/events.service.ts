@@ -2,6 +2,7 @@ import { DateTime } from 'luxon'
 import { In } from 'typeorm'
 import { EventInputSchema, FASTING_KINDS, UpdateEventInputSchema, type FacilityEvent } from '#shared/schemas/playbook'
 import type { Person } from '#shared/schemas/person'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { TaskEntity } from '../tasks/task.entity'
@@ -74,6 +75,7 @@ export async function startEvent(input: unknown, person: Person): Promise<Facili
     await holdFeedsForEvent(row, manager)
     return row
   })
+  await audit('event', saved.id, 'create', null, saved)
   return toEvent(saved)
 }
 
@@ -97,6 +99,7 @@ export async function updateEvent(id: number, input: unknown): Promise<FacilityE
     for (let i = 0; i < rows.length; i += 500) await manager.getRepository(TaskEntity).insert(rows.slice(i, i + 500))
     await holdFeedsForEvent(next, manager)
   })
+  await audit('event', id, 'update', current, next)
   return getEvent(id)
 }
 
@@ -118,6 +121,7 @@ export async function cancelEvent(id: number): Promise<FacilityEvent> {
   await releaseFeedsForEvent(current)
   await removeUntouchedEventTasks(id)
   await events().update(id, { status: 'cancelled', version: current.version + 1 })
+  await audit('event', id, 'update', { status: current.status }, { status: 'cancelled' })
   return getEvent(id)
 }
 
@@ -128,5 +132,6 @@ export async function endEvent(id: number): Promise<FacilityEvent> {
   if (current.status !== 'planned') throw conflict(`This event is already ${current.status}.`)
   await releaseFeedsForEvent(current)
   await events().update(id, { status: 'ended', version: current.version + 1 })
+  await audit('event', id, 'update', { status: current.status }, { status: 'ended' })
   return getEvent(id)
 }

@@ -1,4 +1,5 @@
 import { PlaybookInputSchema, type Playbook } from '#shared/schemas/playbook'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import { PlaybookEntity } from './playbook.entities'
@@ -14,10 +15,14 @@ export async function getPlaybook(id: number): Promise<Playbook> {
 }
 
 export async function createPlaybook(input: unknown): Promise<Playbook> {
-  return repo().save(PlaybookInputSchema.parse(input))
+  const saved = await repo().save(PlaybookInputSchema.parse(input))
+  await audit('playbook', saved.id, 'create', null, saved)
+  return saved
 }
 
 export async function updatePlaybook(id: number, input: unknown): Promise<Playbook> {
   const current = await getPlaybook(id)
-  return repo().save({ ...current, ...PlaybookInputSchema.parse(input) })
+  const saved = await repo().save({ ...current, ...PlaybookInputSchema.parse(input) })
+  await audit('playbook', id, 'update', current, saved)
+  return saved
 }

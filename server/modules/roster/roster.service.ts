@@ -4,6 +4,7 @@ import {
   OnCallInputSchema, ShiftInputSchema, ShiftPatternInputSchema, WEEKDAYS,
   type OnCallDuty, type Shift,
 } from '#shared/schemas/roster'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
@@ -34,6 +35,7 @@ export async function createShift(input: unknown): Promise<Shift> {
   const data = ShiftInputSchema.parse(input)
   await assertPerson(data.personId)
   const row = await db().getRepository(ShiftEntity).save(data)
+  await audit('shift', row.id, 'create', null, row)
   return toShift(row, await names())
 }
 
@@ -43,12 +45,16 @@ export async function updateShift(id: number, input: unknown): Promise<Shift> {
   if (!current) throw notFound('That shift')
   const data = ShiftInputSchema.parse({ ...current, ...(input as object) })
   await assertPerson(data.personId)
-  return toShift(await repo.save({ ...current, ...data }), await names())
+  const saved = await repo.save({ ...current, ...data })
+  await audit('shift', id, 'update', current, saved)
+  return toShift(saved, await names())
 }
 
 export async function deleteShift(id: number) {
-  const result = await db().getRepository(ShiftEntity).delete(id)
-  if (!result.affected) throw notFound('That shift')
+  const before = await db().getRepository(ShiftEntity).findOneBy({ id })
+  if (!before) throw notFound('That shift')
+  await db().getRepository(ShiftEntity).delete(id)
+  await audit('shift', id, 'delete', before, null)
 }
 
 /** A weekly pattern becomes shifts for each matching day; a day the person already works is left alone. */
@@ -66,6 +72,7 @@ export async function applyShiftPattern(input: unknown): Promise<{ created: numb
     else rows.push({ personId: p.personId, date, start: p.start, end: p.end, kind: p.kind })
   }
   if (rows.length) await repo.insert(rows)
+  if (rows.length) await audit('shift', `pattern:${p.personId}`, 'create', null, { pattern: p, created: rows.length })
   return { created: rows.length, skipped }
 }
 
@@ -87,12 +94,15 @@ export async function createOnCall(input: unknown): Promise<OnCallDuty> {
   const person = await assertPerson(data.personId)
   if (!person.onCallEligible) throw validationError(`${person.name} is not set up to hold on-call duty.`, { personId: ['Not eligible for on-call'] })
   const row = await db().getRepository(OnCallEntity).save({ ...data, ...(await dutyInstants(data.fromDate, data.toDate)) })
+  await audit('on_call', row.id, 'create', null, row)
   return toDuty(row, await names())
 }
 
 export async function deleteOnCall(id: number) {
-  const result = await db().getRepository(OnCallEntity).delete(id)
-  if (!result.affected) throw notFound('That on-call duty')
+  const before = await db().getRepository(OnCallEntity).findOneBy({ id })
+  if (!before) throw notFound('That on-call duty')
+  await db().getRepository(OnCallEntity).delete(id)
+  await audit('on_call', id, 'delete', before, null)
 }
 
 /** Who holds on-call duty at an instant (the latest-starting duty wins an overlap). */

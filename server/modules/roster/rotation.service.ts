@@ -1,6 +1,7 @@
 import { DateTime } from 'luxon'
 import { planRotation } from '#shared/roster/rotation'
 import { RotationInputSchema, type RotationResult } from '#shared/schemas/roster'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
 import { PersonEntity } from '../people/person.entity'
@@ -33,6 +34,7 @@ export async function generateRotation(input: unknown): Promise<RotationResult> 
     }
   })
   const duties = await listOnCall(data.from, end.toISODate()!)
+  await audit('on_call', `rotation:${data.from}`, 'create', null, { personIds: data.personIds, weeks: data.weeks, plan })
   const names = new Map(people.map((p) => [p.id, p.name]))
   return {
     duties,

@@ -1,6 +1,7 @@
 import { validateRule } from '#shared/schedule/describe-rule'
 import { expandRule } from '#shared/schedule/expand-rule'
 import { RoutineInputSchema, UpdateRoutineInputSchema, type Routine, type RoutineData } from '#shared/schemas/routine'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
@@ -45,6 +46,7 @@ export async function createRoutine(input: unknown): Promise<Routine> {
   const data = RoutineInputSchema.parse(input)
   await checkRoutine(data)
   const saved = await repo().save(repo().create({ ...data, version: 1 }))
+  await audit('routine', saved.id, 'create', null, toRoutine(saved))
   if (!saved.paused) await materialise({ routineIds: [saved.id], from: new Date() })
   return toRoutine(saved)
 }
@@ -58,13 +60,14 @@ export async function updateRoutine(id: number, input: unknown): Promise<Routine
   }
   await checkRoutine(data)
   const saved = await repo().save({ ...current, ...data, version: current.version + 1 })
+  await audit('routine', id, 'update', toRoutine(current), toRoutine(saved))
   if (saved.paused) await removeUntouchedFutureTasks({ routineId: id })
   else await rematerialiseRoutine(id)
   return toRoutine(saved)
 }
 
 export async function deleteRoutine(id: number): Promise<void> {
-  await getRoutine(id)
+  await audit('routine', id, 'delete', await getRoutine(id), null)
   await removeUntouchedFutureTasks({ routineId: id })
   // Past and kept tasks stay as records; they keep the routine id for history.
   await repo().delete(id)

@@ -2,6 +2,7 @@ import { DateTime } from 'luxon'
 import { Between, type EntityManager } from 'typeorm'
 import type { Person } from '#shared/schemas/person'
 import { MoveTaskInputSchema, type Task } from '#shared/schemas/task'
+import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
@@ -43,6 +44,7 @@ export async function moveTask(taskId: number, actor: Person, input: unknown): P
       .execute(),
   )
   if (!result.affected) throw conflict('Someone changed this task a moment ago; the board has been refreshed.')
+  await audit('assignment', task.id, 'update', { assigneeId: task.assigneeId, localDate: task.localDate }, { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate })
   return getTask(task.id)
 }
 

@@ -5,7 +5,8 @@ import type { Round, RoundTask } from '#shared/schemas/round'
 import { db } from '../../db/data-source'
 import { LimitEntity, ParameterEntity } from '../parameters/parameter.entities'
 import { rationsForDay } from './rations'
-import { TaskEntity } from './task.entity'
+import type { SelectQueryBuilder } from 'typeorm'
+import { TaskEntity, type TaskRow } from './task.entity'
 import { toTask } from './task.mapper'
 import { loadTaskContext } from './tasks.service'
 
@@ -14,16 +15,25 @@ import { loadTaskContext } from './tasks.service'
  * in walking order (areas by round order, quarantine last), then by tank and time.
  */
 export async function getRound(person: Person, date?: string): Promise<Round> {
+  return roundFor(date, (qb) => qb.andWhere('(t.assigneeId = :me OR t.assigneeId IS NULL)', { me: person.id }))
+}
+
+/** The paper backup: one person's or one area's tasks of a day, in walking order. */
+export async function getRoundSheet(date: string, filter: { personId?: number; areaId?: number }): Promise<Round> {
+  return roundFor(date, (qb) => {
+    if (filter.personId) qb.andWhere('t.assigneeId = :personId', { personId: filter.personId })
+    if (filter.areaId) qb.andWhere('t.areaId = :areaId', { areaId: filter.areaId })
+    qb.andWhere("t.status <> 'held'")
+  })
+}
+
+async function roundFor(date: string | undefined, narrow: (qb: SelectQueryBuilder<TaskRow>) => void): Promise<Round> {
   const ctx = await loadTaskContext()
   const zone = ctx.cat.facility.timeZone
   const day = date ?? DateTime.now().setZone(zone).toISODate()!
-  const rows = await db()
-    .getRepository(TaskEntity)
-    .createQueryBuilder('t')
-    .where('t.localDate = :day', { day })
-    .andWhere('(t.assigneeId = :me OR t.assigneeId IS NULL)', { me: person.id })
-    .orderBy('t.dueAt', 'ASC')
-    .getMany()
+  const qb = db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate = :day', { day })
+  narrow(qb)
+  const rows = await qb.orderBy('t.dueAt', 'ASC').getMany()
   const [parameters, limits] = await Promise.all([db().getRepository(ParameterEntity).find(), db().getRepository(LimitEntity).find()])
   const paramByKey = new Map(parameters.map((p) => [p.key, p]))
   const areas = [...ctx.cat.areas.values()].sort((a, b) => Number(a.quarantine) - Number(b.quarantine) || a.roundOrder - b.roundOrder)

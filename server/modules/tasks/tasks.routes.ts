@@ -7,7 +7,7 @@ import { requireRole, signedIn } from '../auth/require-role'
 import { publishTask } from '../../realtime/task-events'
 import { getBoard } from './board.service'
 import { moveTask } from './move-task.service'
-import { getRound } from './round.service'
+import { getRound, getRoundSheet } from './round.service'
 import { createOneOffTask, getTask, listTasks } from './tasks.service'
 
 export const tasksRouter = Router()
@@ -18,6 +18,13 @@ tasksRouter.get('/', signedIn, async (req, res) => {
 // Registered before '/:id' so "round" is not read as an id.
 tasksRouter.get('/round', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
   res.json(await getRound(req.user!, RoundQuerySchema.parse(req.query).date))
+})
+tasksRouter.get('/round-sheet', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
+  const q = z
+    .object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD'), personId: z.coerce.number().int().positive().optional(), areaId: z.coerce.number().int().positive().optional() })
+    .refine((x) => x.personId || x.areaId, { message: 'Choose a person or an area', path: ['personId'] })
+    .parse(req.query)
+  res.json(await getRoundSheet(q.date, q))
 })
 tasksRouter.get('/board', signedIn, async (req, res) => {
   const { date } = z.object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD') }).parse(req.query)

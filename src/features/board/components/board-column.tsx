@@ -27,7 +27,7 @@ export function BoardColumn({ person, allTasks, shownCount, droppable, children 
       ref={setNodeRef}
       aria-labelledby={headingId}
       className={clsx(
-        'flex min-w-0 flex-col rounded-xl ring-1 transition-colors md:w-64 md:shrink-0',
+        'flex min-w-0 flex-col rounded-xl ring-1 transition-colors md:w-60 md:shrink-0 xl:w-64',
         person === null ? 'bg-tide-100/70' : 'bg-tide-50',
         isOver ? 'ring-2 ring-tide-600 bg-tide-100' : 'ring-tide-200',
       )}

@@ -11,11 +11,11 @@ interface Props {
   onChange: (next: BoardFilters) => void
 }
 
-const selectClass = 'min-h-11 w-full rounded-lg border border-tide-200 bg-white px-2 sm:w-44'
+const selectClass = 'min-h-11 w-full rounded-lg border border-tide-200 bg-white px-2 sm:w-36 xl:w-44'
 
 export function BoardFiltersBar({ areas, value, onChange }: Props) {
   return (
-    <fieldset className="flex flex-wrap items-end gap-2">
+    <fieldset className="grid w-full grid-cols-2 items-end gap-2 sm:flex sm:w-auto sm:flex-wrap">
       <legend className="sr-only">Filter the cards</legend>
       <label className="flex min-w-0 flex-col gap-1 text-sm font-semibold text-tide-800">
         Area

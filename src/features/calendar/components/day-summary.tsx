@@ -1,3 +1,4 @@
+import { clsx } from 'clsx'
 import { Phone, Users } from 'lucide-react'
 import type { CalendarDay } from '#shared/schemas/board'
 import { CATEGORY_LABELS, type Category } from '#shared/schemas/routine'
@@ -21,7 +22,7 @@ const topCategories = (byCategory: Record<string, number>, n: number) =>
 export function DaySummary({ dayNumber, day, roomy }: Props) {
   const total = day ? Object.values(day.counts).reduce((a, b) => a + b, 0) : 0
   return (
-    <div className="@container flex w-full flex-col gap-0.5 text-left text-xs leading-snug font-normal text-tide-800">
+    <div className={clsx('@container flex w-full flex-col gap-0.5 text-left leading-snug font-normal text-tide-800', roomy ? 'text-sm' : 'text-xs')}>
       <span className="flex items-baseline justify-between gap-1">
         <span className="text-sm font-bold text-tide-900">{dayNumber}</span>
         {total > 0 && <span className="text-tide-600 @max-[7.5rem]:hidden">{total === 1 ? '1 task' : `${total} tasks`}</span>}
@@ -33,7 +34,7 @@ export function DaySummary({ dayNumber, day, roomy }: Props) {
         </p>
       )}
       {day && (
-        <div className="flex flex-col gap-0.5 break-words @max-[4rem]:hidden">
+        <div className="flex flex-col gap-0.5 break-words">
           <PeopleLine icon={Users} label="On shift" names={day.onShift} limit={roomy ? undefined : 2} />
           <PeopleLine icon={Phone} label="On call" names={day.onCall} limit={roomy ? undefined : 2} />
         </div>

@@ -1,4 +1,5 @@
 import type { DatesSetArg, DayCellContentArg } from '@fullcalendar/core'
+import enGbLocale from '@fullcalendar/core/locales/en-gb'
 import dayGridPlugin from '@fullcalendar/daygrid'
 import interactionPlugin, { type DateClickArg } from '@fullcalendar/interaction'
 import FullCalendar from '@fullcalendar/react'
@@ -88,7 +89,7 @@ export function WorkloadCalendar({ initialDate, initialView, onOpenDay, onShown 
           plugins={PLUGINS}
           initialView={CALENDAR_VIEWS[initialView]}
           initialDate={initialDate ?? undefined}
-          firstDay={1}
+          locale={enGbLocale}
           height="auto"
           headerToolbar={false}
           fixedWeekCount={false}

@@ -23,7 +23,7 @@ export function WeekendTasks({ from, to, tasks }: { from: string; to: string; ta
               )
             })}
           </ul>
-          <ul aria-label="Weekend tasks" className="max-h-96 divide-y divide-tide-100 overflow-y-auto">
+          <ul aria-label="Weekend tasks" className="divide-y divide-tide-100 lg:max-h-[32rem] lg:overflow-y-auto">
             {tasks.map((t) => (
               <li key={t.id} className="flex items-start justify-between gap-3 py-2">
                 <span className="min-w-0">

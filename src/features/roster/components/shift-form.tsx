@@ -46,6 +46,11 @@ export function ShiftForm({ shift, initial, staff, onDone }: {
 
   return (
     <form noValidate onSubmit={submit} aria-label={shift ? `Edit shift of ${shift.personName}` : 'Add a shift'} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-5">
+      {shift && (
+        <p className="font-semibold text-tide-900 sm:col-span-full">
+          Editing {shift.personName}’s {SHIFT_KIND_LOOK[shift.kind].label.toLowerCase()} shift on {longDay(shift.date)}
+        </p>
+      )}
       <SelectField label="Person" {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })} error={personError(errors.personId)}>
         <PersonOptions staff={staff} extra={shift ? { id: shift.personId, name: shift.personName } : undefined} />
       </SelectField>

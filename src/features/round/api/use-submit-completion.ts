@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import type { CompletionResult } from '#shared/schemas/completion'
 import type { RoundTask } from '#shared/schemas/round'
-import { addToOutbox } from '../outbox/outbox-store'
+import { addToOutbox, loadOutbox } from '../outbox/outbox-store'
 import { flushOutbox, waitingEntries } from '../outbox/outbox-sender'
 import { rememberResult } from '../state/result-store'
 import { isTransient, postCompletion, type CompletionPayload } from './completion-api'
@@ -24,6 +24,7 @@ export function useSubmitCompletion(personId: number) {
           completionId: payload.completionId, taskId: task.id, personId, taskTitle: task.title, targetLabel: task.targetLabel,
           input: payload, queuedAt: Date.now(), failure: null,
         })
+      await loadOutbox()
       if (!navigator.onLine || waitingEntries(personId).length > 0) {
         await queue()
         void flushOutbox()

@@ -16,7 +16,6 @@ interface Props {
   task: RoundTask
   personId: number
   online: boolean
-  autoFocus: boolean
   onFinished: (taskId: number, outcome: SubmitOutcome) => void
 }
 
@@ -24,15 +23,16 @@ const without = (errors: Record<string, string>, key: string) => Object.fromEntr
 
 const big = 'inline-flex min-h-14 items-center justify-center gap-2 rounded-xl px-5 text-lg font-bold disabled:opacity-60'
 
-export function TaskForm({ task, personId, online, autoFocus, onFinished }: Props) {
+export function TaskForm({ task, personId, online, onFinished }: Props) {
   const { draft, update, clear } = useDraft(task.id)
   const submit = useSubmitCompletion(personId)
   const queryClient = useQueryClient()
   const inputs = useRef<Array<HTMLInputElement | null>>([])
 
+  // Opening a task puts the cursor in its first reading: tap to open, type, tap Done.
   useEffect(() => {
-    if (autoFocus) inputs.current[0]?.focus({ preventScroll: true })
-  }, [autoFocus])
+    inputs.current[0]?.focus({ preventScroll: true })
+  }, [])
 
   const send = (outcome: 'done' | 'skipped') => {
     const built = buildCompletion(task, draft, outcome)

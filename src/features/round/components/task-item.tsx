@@ -73,7 +73,7 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
         <div className="flex flex-col gap-4 border-t border-tide-100 p-3">
           {task.instructions && <p className="whitespace-pre-line text-tide-800">{task.instructions}</p>}
           {task.rationG != null && (
-            <p className="flex items-center gap-2 font-semibold text-tide-900">
+            <p className="flex flex-wrap items-center gap-x-2 font-semibold text-tide-900">
               <Scale aria-hidden className="size-5 shrink-0 text-tide-600" /> Ration: {task.rationG} g
               <span className="font-normal text-tide-600">from the batch's biomass and feeding rate</span>
             </p>
@@ -86,7 +86,7 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
           ) : finished ? (
             <CompletedDetails task={task} round={round} result={result} />
           ) : entry ? null : (
-            <TaskForm task={task} personId={personId} online={online} autoFocus={advancedTo} onFinished={onFinished} />
+            <TaskForm task={task} personId={personId} online={online} onFinished={onFinished} />
           )}
         </div>
       )}
