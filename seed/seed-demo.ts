@@ -17,6 +17,7 @@ import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
 import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
 import { DEMO_CYLINDERS, DEMO_PLAYBOOKS } from './demo-playbooks'
+import { seedHistory } from './demo-history'
 import { DEMO_ON_CALL, DEMO_SHIFT_PATTERNS } from './demo-roster'
 import { DEMO_ROUTINES } from './demo-routines'
 import { DEMO_AREAS, DEMO_BATCHES, DEMO_EQUIPMENT, DEMO_FACILITY, DEMO_SYSTEMS, DEMO_TANKS } from './demo-structure'
@@ -114,8 +115,9 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   for (const c of DEMO_CYLINDERS) await createCylinder(c)
   const manager = { ...(await getPersonRow(people.get('maren.holloway@brackenwater.example')!)), createdAt: '' } as never
 
-  // The demo starts at the beginning of today, so the morning's round is there whenever it is run.
-  const { created } = await materialise({ from: today.toJSDate() })
+  // Two weeks of history, then today from its start, so the morning's round is there whenever it is run.
+  const { created } = await materialise({ from: today.minus({ days: 14 }).toJSDate(), horizonDays: 14 + 42 })
+  const history = await seedHistory(14, facility.timeZone)
   // Coming up: an arrival into quarantine in three days, and a nursery grading (with its fasting window) in five.
   const spareBins = ['QUA-B03', 'QUA-B04'].map((c) => tanks.get(c)!)
   await tanksCatalogue.update(spareBins[0], { inUse: true })
@@ -124,5 +126,5 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   await startEvent({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }, manager)
   await recordCylinderReading(1, { pressure: 168, flowLPerMin: 6 })
 
-  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines and ${created} tasks from ${today.toISODate()}.`)
+  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks and ${history} past completions (today is ${today.toISODate()}).`)
 }

@@ -83,6 +83,8 @@ describe('the outbox in local mail mode', () => {
     await phone.page.getByRole('link', { name: new RegExp(`^MISSED: ${title} at `) }).click()
     await phone.page.getByRole('link', { name: 'Open acknowledge link' }).waitFor()
     await phone.page.frameLocator('iframe').getByRole('link', { name: 'Acknowledge' }).waitFor()
+    // Chromium paints a frame below the first screen only once it has been scrolled to.
+    await phone.page.locator('iframe').scrollIntoViewIfNeeded()
     await screenshot(phone.page, 'outbox-phone')
     await phone.context.close()
   })

@@ -2,9 +2,13 @@ import { zodResolver } from '@hookform/resolvers/zod'
 import { useForm, type DefaultValues, type FieldPath, type FieldValues } from 'react-hook-form'
 import { toast } from 'sonner'
 import type { z } from 'zod'
-import type { BatchRecord, BatchRecordInput } from '#shared/schemas/batch-record'
+import type {
+  BathRecordSchema, BatchRecord, NoteRecordSchema, TransportBoxRecordSchema, TransportWaterRecordSchema,
+} from '#shared/schemas/batch-record'
 import { ApiError } from '../../../lib/api-client'
 import { useAddRecord } from '../api/use-add-record'
+
+type RecordData = z.input<typeof TransportBoxRecordSchema | typeof TransportWaterRecordSchema | typeof BathRecordSchema | typeof NoteRecordSchema>
 
 type Options<V extends FieldValues> = {
   batchId: number
@@ -16,12 +20,12 @@ type Options<V extends FieldValues> = {
 }
 
 /** A record form whose inputs are strings, checked by `schema` and posted with the event it belongs to. */
-export function useRecordForm<V extends FieldValues, Out extends object>(schema: z.ZodType<Out, V>, options: Options<V>) {
+export function useRecordForm<V extends FieldValues, Out extends RecordData>(schema: z.ZodType<Out, V>, options: Options<V>) {
   const add = useAddRecord(options.batchId)
   const form = useForm<V, unknown, Out>({ resolver: zodResolver(schema), defaultValues: options.defaultValues })
 
   const submit = form.handleSubmit((out) =>
-    add.mutate({ ...out, eventId: options.eventId } as BatchRecordInput, {
+    add.mutate({ ...out, eventId: options.eventId }, {
       onSuccess: (record) => {
         toast.success(options.saved(record))
         form.reset(options.next ? options.next(form.getValues()) : options.defaultValues)

@@ -39,7 +39,7 @@ export function TaskCard({ task, movable, selected, onToggle }: Props) {
       onMouseDown={(e) => !fromControl(e) && onMouseDown?.(e)}
       onClick={(e) => movable && e.shiftKey && !fromControl(e) && onToggle(task.id)}
       className={clsx(
-        'flex items-start gap-1.5 rounded-lg bg-white p-2 shadow-sm ring-1 select-none',
+        'relative flex items-start gap-1.5 rounded-lg bg-white p-2 shadow-sm ring-1 select-none',
         selected ? 'ring-2 ring-tide-600' : 'ring-tide-200',
         task.status === 'missed' && !selected && 'ring-2 ring-alarm-500',
         movable && 'cursor-grab',
@@ -54,14 +54,14 @@ export function TaskCard({ task, movable, selected, onToggle }: Props) {
           onKeyDown={listeners?.onKeyDown as KeyboardEventHandler | undefined}
           onTouchStart={listeners?.onTouchStart as TouchEventHandler | undefined}
           aria-label={`Move ${phrase}`}
-          className="-my-1 -ml-1 flex min-h-11 w-8 shrink-0 touch-none items-center justify-center rounded text-tide-500 hover:bg-tide-50 hover:text-tide-800"
+          className="-my-1 -ml-1 flex min-h-11 w-8 shrink-0 self-stretch touch-none items-center justify-center rounded text-tide-500 hover:bg-tide-50 hover:text-tide-800"
         >
           <GripVertical aria-hidden className="size-5" />
         </button>
       )}
-      <TaskCardBody task={task} />
+      <TaskCardBody task={task} cornerTaken={movable} />
       {movable && (
-        <label className="-my-1 -mr-1 flex size-11 shrink-0 cursor-pointer items-center justify-center">
+        <label className="absolute top-0.5 right-0.5 flex size-9 cursor-pointer items-center justify-center rounded hover:bg-tide-50">
           <input
             type="checkbox"
             checked={selected}

@@ -1,0 +1,34 @@
+import { queryOptions } from '@tanstack/react-query'
+import { z } from 'zod'
+import { apiFetch } from '../../../lib/api-client'
+import { TankOverviewSchema, TankReadingsSchema } from './tank-page-schemas'
+
+export const TREND_RANGES = [7, 30, 90] as const
+export type TrendRange = (typeof TREND_RANGES)[number]
+
+export const tankPageKeys = {
+  all: ['tank-page'] as const,
+  overview: (id: number) => [...tankPageKeys.all, 'overview', id] as const,
+  readings: (id: number, days: TrendRange) => [...tankPageKeys.all, 'readings', id, days] as const,
+  facility: () => [...tankPageKeys.all, 'facility'] as const,
+}
+
+/** The window ends now and is worked out when fetched, so a refetch moves it along. */
+async function fetchReadings(id: number, days: TrendRange) {
+  const to = new Date()
+  const from = new Date(to.getTime() - days * 86_400_000)
+  const search = new URLSearchParams({ from: from.toISOString(), to: to.toISOString() })
+  const readings = await apiFetch(`/tanks/${id}/readings?${search}`, TankReadingsSchema)
+  return { ...readings, from: from.getTime(), to: to.getTime() }
+}
+
+export const tankPageQueries = {
+  overview: (id: number) => queryOptions({ queryKey: tankPageKeys.overview(id), queryFn: () => apiFetch(`/tanks/${id}/overview`, TankOverviewSchema) }),
+  readings: (id: number, days: TrendRange) => queryOptions({ queryKey: tankPageKeys.readings(id, days), queryFn: () => fetchReadings(id, days) }),
+  facility: () =>
+    queryOptions({
+      queryKey: tankPageKeys.facility(),
+      queryFn: () => apiFetch('/facility', z.object({ name: z.string(), timeZone: z.string() })),
+      staleTime: 5 * 60_000,
+    }),
+}
