@@ -86,7 +86,16 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   app.use('/ack', express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
-    app.use(express.static(clientDir, { index: false, maxAge: '1h' }))
+    app.use(
+      express.static(clientDir, {
+        index: false,
+        maxAge: '1h',
+        // The service worker must be re-checked on every visit, or updates reach phones an hour late.
+        setHeaders: (res, file) => {
+          if (/(?:^|\/)(sw|registerSW|workbox-[\w-]+)\.js$/.test(file) || file.endsWith('.webmanifest')) res.setHeader('cache-control', 'no-cache')
+        },
+      }),
+    )
     app.get(/^\/(?!api\/|socket\.io\/).*/, (_req, res) => {
       res.setHeader('cache-control', 'no-cache')
       res.sendFile(path.join(clientDir, 'index.html'))

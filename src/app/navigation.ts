@@ -1,6 +1,6 @@
 import {
-  BarChart3, Bell, CalendarDays, ClipboardCheck, Fish, LayoutGrid, Repeat, Users, CalendarClock, Mail, Settings,
-  type LucideIcon,
+  BarChart3, Bell, BookOpen, CalendarDays, ClipboardCheck, Cylinder, Fish, LayoutGrid, Repeat, Users, CalendarClock, Mail, Settings,
+  Printer, type LucideIcon,
 } from 'lucide-react'
 import type { Role } from '#shared/schemas/person'
 
@@ -22,8 +22,11 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/on-call', label: 'On call', icon: Bell, roles: everyone, primary: true },
   { to: '/tanks', label: 'Tanks', icon: Fish, roles: everyone },
   { to: '/routines', label: 'Routines', icon: Repeat, roles: ['manager', 'supervisor', 'observer'] },
+  { to: '/playbooks', label: 'Playbooks', icon: BookOpen, roles: ['manager', 'supervisor', 'observer'] },
+  { to: '/oxygen', label: 'Oxygen', icon: Cylinder, roles: ['manager', 'supervisor', 'technician'] },
   { to: '/roster', label: 'Roster', icon: CalendarClock, roles: ['manager', 'supervisor'] },
   { to: '/reports', label: 'Reports', icon: BarChart3, roles: ['manager', 'supervisor', 'observer'] },
+  { to: '/round-sheet', label: 'Round sheet', icon: Printer, roles: ['manager', 'supervisor', 'technician'] },
   { to: '/people', label: 'People', icon: Users, roles: ['manager'] },
   { to: '/outbox', label: 'Outbox', icon: Mail, roles: ['manager'] },
   { to: '/settings', label: 'Settings', icon: Settings, roles: everyone },

@@ -14,6 +14,8 @@ export function createQueryClient() {
     defaultOptions: {
       queries: {
         staleTime: 30_000,
+        // Ask anyway when the phone says it is offline: the service worker may hold an answer.
+        networkMode: 'offlineFirst',
         retry: (count, error) => !(error instanceof ApiError && error.status >= 400 && error.status < 500) && count < 2,
       },
     },

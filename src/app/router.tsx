@@ -5,16 +5,6 @@ import { homeFor } from './navigation'
 import { AppLayout, loader as appLoader } from './routes/app-layout'
 import { NotFound, RouteError } from './routes/route-error'
 
-type PlannedArea = Parameters<typeof import('./routes/coming-soon').ComingSoon>[0]['area']
-
-const planned = (path: string, area: PlannedArea) => ({
-  path,
-  lazy: async () => {
-    const { ComingSoon } = await import('./routes/coming-soon')
-    return { Component: () => <ComingSoon area={area} /> }
-  },
-})
-
 export function createRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     { path: '/sign-in', lazy: () => import('./routes/sign-in-page'), ErrorBoundary: RouteError },
@@ -62,6 +52,13 @@ export function createRouter(queryClient: QueryClient) {
               },
             },
             {
+              path: 'tanks/:id',
+              lazy: async () => {
+                const m = await import('./routes/tank-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
               path: 'routines',
               children: [
                 {
@@ -94,6 +91,19 @@ export function createRouter(queryClient: QueryClient) {
                 return { Component: m.Component, loader: m.loader(queryClient) }
               },
             },
+            ...(['playbooks', 'events/:id', 'batches/:id', 'oxygen'] as const).map((path) => ({
+              path,
+              lazy: async () => {
+                const m = await {
+                  playbooks: () => import('./routes/playbooks-page'),
+                  'events/:id': () => import('./routes/event-page'),
+                  'batches/:id': () => import('./routes/batch-page'),
+                  oxygen: () => import('./routes/oxygen-page'),
+                }[path]()
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            })),
+            { path: 'calculators', lazy: () => import('./routes/calculators-page') },
             {
               path: 'tasks/:id',
               lazy: async () => {
@@ -108,7 +118,34 @@ export function createRouter(queryClient: QueryClient) {
                 return { Component: m.Component, loader: m.loader(queryClient) }
               },
             },
-            planned('reports', 'reports'),
+            {
+              path: 'reports',
+              lazy: async () => {
+                const m = await import('./routes/reports-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'audit',
+              lazy: async () => {
+                const m = await import('./routes/audit-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'round-sheet',
+              lazy: async () => {
+                const m = await import('./routes/round-sheet-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'labels',
+              lazy: async () => {
+                const m = await import('./routes/labels-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
             {
               path: 'people',
               lazy: async () => {

@@ -72,6 +72,7 @@ describe('the board', () => {
   test('a supervisor assigns by mouse and keyboard, moves a card to Tuesday, drags two together, and sees a refusal explained; the technician sees it live', async () => {
     const { monday, tuesday, area, tech, offShift, tasks } = await arrange()
     const boardUrl = `/board?date=${monday}&area=${area.id}`
+    const tuesdayName = DateTime.fromISO(tuesday).setLocale('en-GB').toFormat('cccc d MMMM')
 
     // The technician keeps two rounds open: Monday's and Tuesday's.
     const techSide = await s.newPage(PHONE)
@@ -88,6 +89,9 @@ describe('the board', () => {
 
     const supervisor = await s.createPerson('supervisor')
     const { page, context } = await s.newPage(DESKTOP)
+    const errors: string[] = []
+    // The refused move answers 409, which the browser logs as a failed resource; anything else is a fault.
+    page.on('console', (m) => m.type() === 'error' && !/status of 409/.test(m.text()) && errors.push(m.text()))
     await s.signIn(page, supervisor.email)
     await page.goto(boardUrl)
     const unassigned = column(page, 'Unassigned')
@@ -112,6 +116,7 @@ describe('the board', () => {
     await handle.focus()
     await page.keyboard.press('Space')
     await expect.poll(() => liveRegion(page).textContent()).toMatch(new RegExp(`^Picked up ${tasks.keyboard.title}, .+ at 08:00\\.$`))
+    await settleKeyboardDrag(page)
     await page.keyboard.press('ArrowRight')
     await expect.poll(() => liveRegion(page).textContent()).toBe(`Over ${tech.name}'s column.`)
     // Viewport only: a full-page shot resizes the window, and a resize cancels a keyboard drag.
@@ -120,17 +125,23 @@ describe('the board', () => {
     await techColumn.locator(`li[data-task-id="${tasks.keyboard.id}"]`).waitFor()
     await expect.poll(() => liveRegion(page).textContent()).toBe(`${tasks.keyboard.title} assigned to ${tech.name}.`)
 
-    // Escape puts a picked-up card back.
+    // Up reaches the week strip (the nearest day that takes cards), down comes back; escape puts the card back.
     await page.getByRole('button', { name: new RegExp(`^Move ${tasks.refused.title}, `) }).focus()
     await page.keyboard.press('Space')
     await expect.poll(() => liveRegion(page).textContent()).toContain('Picked up')
+    await settleKeyboardDrag(page)
+    await page.keyboard.press('ArrowUp')
+    await expect.poll(() => liveRegion(page).textContent()).toBe(`Over ${tuesdayName}.`)
     await page.keyboard.press('ArrowRight')
+    await expect.poll(() => liveRegion(page).textContent()).toMatch(/^Over Wednesday /)
+    await page.keyboard.press('ArrowDown')
+    await expect.poll(() => liveRegion(page).textContent()).toMatch(/^Over (Unassigned|.+'s column)\.$/)
     await page.keyboard.press('Escape')
     await expect.poll(() => liveRegion(page).textContent()).toContain('stays where it was')
     await unassigned.locator(`li[data-task-id="${tasks.refused.id}"]`).waitFor()
 
     // Week strip: onto Tuesday, which leaves Monday's board and shows up in Tuesday's round.
-    const tuesdayLink = page.getByRole('link', { name: DateTime.fromISO(tuesday).setLocale('en-GB').toFormat('cccc d MMMM'), exact: true })
+    const tuesdayLink = page.getByRole('link', { name: tuesdayName, exact: true })
     await mouseDrag(page, card(page, tasks.dayMove.id), tuesdayLink)
     await card(page, tasks.dayMove.id).waitFor({ state: 'detached' })
     await expect.poll(async () => (await apiTask(page, tasks.dayMove.id)).localDate).toBe(tuesday)
@@ -162,6 +173,7 @@ describe('the board', () => {
     await techColumn.getByText('5 tasks').waitFor()
     await screenshot(page, 'board-desktop-after')
 
+    expect(errors).toEqual([])
     await page.setViewportSize(TABLET)
     await techColumn.waitFor()
     await screenshot(page, 'board-tablet')
@@ -199,3 +211,8 @@ describe('the board', () => {
     await context.close()
   })
 })
+
+/** dnd-kit's keyboard sensor starts listening for arrows a tick after the pick-up is announced. */
+async function settleKeyboardDrag(page: import('playwright-core').Page) {
+  await page.waitForTimeout(200)
+}

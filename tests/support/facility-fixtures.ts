@@ -13,14 +13,11 @@ export const uniqueCode = (prefix: string) => `${prefix}-${randomUUID().slice(0,
 /** The one facility row the test database shares; made once, in the demo's time zone. */
 export async function ensureFacilityAndParameters() {
   const facility = await createFacilityIfMissing(DEMO_FACILITY)
-  const repo = db().getRepository(ParameterEntity)
-  if ((await repo.count()) === 0) {
-    // Two test files may race here; the unique key on `key` keeps one copy of each.
-    await repo.createQueryBuilder().insert().values(DEMO_PARAMETERS.map(({ bands: _b, ...p }) => ({ ...p, derived: p.derived ?? false }))).orIgnore().execute()
-    await db().getRepository(LimitEntity).createQueryBuilder().insert().values(
-      DEMO_PARAMETERS.filter((p) => p.bands).map((p) => ({ parameterKey: p.key, scope: 'facility' as const, scopeId: null, ...p.bands! })),
-    ).orIgnore().execute()
-  }
+  // Every call fills in whatever is missing; the unique keys keep one copy when test files race.
+  await db().getRepository(ParameterEntity).createQueryBuilder().insert().values(DEMO_PARAMETERS.map(({ bands: _b, ...p }) => ({ ...p, derived: p.derived ?? false, ladderId: null }))).orIgnore().execute()
+  await db().getRepository(LimitEntity).createQueryBuilder().insert().values(
+    DEMO_PARAMETERS.filter((p) => p.bands).map((p) => ({ parameterKey: p.key, scope: 'facility' as const, scopeId: 0, ...p.bands! })),
+  ).orIgnore().execute()
   return facility
 }
 

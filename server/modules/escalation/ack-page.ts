@@ -21,6 +21,12 @@ const MESSAGES: Record<string, [string, string]> = {
  */
 export function ackRouter(config: AppConfig) {
   const router = Router()
+  // With helmet's default no-referrer, browsers send `Origin: null` on the form post below,
+  // which the same-origin check must refuse; same-origin keeps the real origin on it.
+  router.use((_req, res, next) => {
+    res.setHeader('Referrer-Policy', 'same-origin')
+    next()
+  })
   router.get('/:token', (_req, res) => {
     res.type('html').send(page('Acknowledge', `<h1>Acknowledge this escalation?</h1><p>This tells Roundtide you are dealing with it and stops further messages.</p>
 <form method="post"><button type="submit">Acknowledge</button></form>`))

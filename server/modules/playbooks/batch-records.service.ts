@@ -25,10 +25,11 @@ export async function addBatchRecord(batchId: number, person: Person, input: unk
     stored = { ...data, ...compareWater({ tempC: data.tempC, pH: data.pH, doMgL: data.doMgL }, { tempC: data.receivingTempC, pH: data.receivingPH }, facility.arrivalTempDiffLimitC) }
   }
   if (data.kind === 'transport_water') {
-    let nh3: number | null = null
+    let nh3: number | null
     try {
       nh3 = unionizedAmmoniaMgL(data.tanMgL, data.pH, data.tempC, data.salinity)
     } catch {
+      // Outside the method's valid range: the record keeps the inputs without a computed NH3.
       nh3 = null
     }
     stored = { ...data, nh3MgL: nh3 === null ? null : Math.round(nh3 * 10000) / 10000 }

@@ -2,6 +2,8 @@ import { DateTime } from 'luxon'
 import type { CalendarDay } from '#shared/schemas/board'
 import { db } from '../../db/data-source'
 import { getFacility } from '../facility/facility.service'
+import { Not } from 'typeorm'
+import { EventEntity } from '../playbooks/playbook.entities'
 import { TaskEntity } from '../tasks/task.entity'
 import { listOnCall, listShifts } from './roster.service'
 
@@ -10,7 +12,7 @@ const OPEN = new Set(['planned', 'open', 'overdue'])
 /** Per day in a range: task counts by status and category, who is on shift and on call. */
 export async function getCalendar(from: string, to: string): Promise<CalendarDay[]> {
   const zone = (await getFacility()).timeZone
-  const [counts, shifts, duties] = await Promise.all([
+  const [counts, shifts, duties, events] = await Promise.all([
     db()
       .getRepository(TaskEntity)
       .createQueryBuilder('t')
@@ -20,6 +22,7 @@ export async function getCalendar(from: string, to: string): Promise<CalendarDay
       .getRawMany<{ date: string; status: string; category: string; n: string }>(),
     listShifts(from, to),
     listOnCall(from, to),
+    db().getRepository(EventEntity).find({ where: { status: Not('cancelled') } }),
   ])
   const days: CalendarDay[] = []
   for (let d = DateTime.fromISO(from, { zone }); d.toISODate()! <= to; d = d.plus({ days: 1 })) {
@@ -36,7 +39,12 @@ export async function getCalendar(from: string, to: string): Promise<CalendarDay
       byCategory,
       onShift: [...new Set(shifts.filter((s) => s.date === date).map((s) => s.personName))],
       onCall: [...new Set(duties.filter((x) => Date.parse(x.startsAt) < end && Date.parse(x.endsAt) > start).map((x) => x.personName))],
-      events: [],
+      events: [
+        ...events.filter((e) => e.localStart.slice(0, 10) === date).map((e) => ({ id: e.id, title: e.title, kind: e.kind as string })),
+        ...events
+          .filter((e) => e.fastingFrom && e.fastingTo && e.fastingFrom.getTime() < end && e.fastingTo.getTime() > start)
+          .map((e) => ({ id: e.id, title: `Feeding held before ${e.title}`, kind: 'fasting' })),
+      ],
     })
   }
   return days

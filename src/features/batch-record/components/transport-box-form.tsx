@@ -17,7 +17,10 @@ const nextBox = (v: TransportBoxValues): TransportBoxValues => {
 export function TransportBoxForm({ batchId, eventId, tempLimitC }: { batchId: number; eventId: number | null; tempLimitC: number }) {
   const { form, submit, saving } = useRecordForm(transportBoxForm, {
     batchId, eventId, defaultValues: empty, next: nextBox,
-    saved: (r) => `Saved ${String(r.data.box)}${Array.isArray(r.data.warnings) && r.data.warnings.length ? ` with ${r.data.warnings.length} warning(s)` : ''}.`,
+    saved: (r) => {
+      const warnings = Array.isArray(r.data.warnings) ? r.data.warnings.length : 0
+      return `Saved the check of ${String(r.data.box)}${warnings ? ` with ${warnings} ${warnings === 1 ? 'warning' : 'warnings'}` : ''}.`
+    },
   })
   const { register, watch, formState: { errors } } = form
   const v = watch()
@@ -30,13 +33,13 @@ export function TransportBoxForm({ batchId, eventId, tempLimitC }: { batchId: nu
   return (
     <FormCard title="Transport box check" description="Each box beside the receiving water, before any fish go in." onSubmit={submit} saving={saving} saveLabel="Save box check">
       <Field label="Box" error={errors.box?.message} {...register('box')} />
-      <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+      <fieldset className="grid grid-cols-2 items-end gap-3 sm:grid-cols-3">
         <legend className="mb-1 text-sm font-bold text-tide-900">Box water</legend>
         <Field label="Temperature (°C)" {...num} error={errors.tempC?.message} {...register('tempC')} />
         <Field label="pH" {...num} error={errors.pH?.message} {...register('pH')} />
         <Field label="DO (mg/L)" {...num} error={errors.doMgL?.message} {...register('doMgL')} />
       </fieldset>
-      <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+      <fieldset className="grid grid-cols-2 items-end gap-3 sm:grid-cols-3">
         <legend className="mb-1 text-sm font-bold text-tide-900">Receiving water</legend>
         <Field label="Receiving temperature (°C)" {...num} error={errors.receivingTempC?.message} {...register('receivingTempC')} />
         <Field label="Receiving pH" {...num} error={errors.receivingPH?.message} {...register('receivingPH')} />

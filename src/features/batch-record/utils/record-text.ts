@@ -11,7 +11,7 @@ export function describeRecord(r: BatchRecord): RecordText {
   switch (r.kind) {
     case 'transport_box':
       return {
-        title: `Transport box ${String(d.box ?? '')}`.trim(),
+        title: `Transport box check: ${String(d.box ?? '')}`,
         lines: [`Box ${n(d.tempC)} °C, pH ${n(d.pH)}, DO ${n(d.doMgL)} mg/L`, `Receiving ${n(d.receivingTempC)} °C, pH ${n(d.receivingPH)}`],
         warnings: Array.isArray(d.warnings) ? d.warnings.map(String) : [],
       }

@@ -57,6 +57,9 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
             Showing {visible.length} of {board.tasks.length} tasks on this day.
           </p>
         )}
+        {board.people.length === 0 && (
+          <p className="text-sm text-tide-700">Nobody is on shift on this day yet. Add shifts on the roster to give people a column here.</p>
+        )}
         <div className="flex flex-col gap-3 md:flex-row md:items-stretch md:overflow-x-auto md:pb-2">
           <BoardColumn person={null} allTasks={unassigned.all} shownCount={unassigned.shown.length} droppable={canEdit}>
             {cards(unassigned.shown)}

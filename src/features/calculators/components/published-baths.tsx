@@ -8,7 +8,7 @@ const figure = (mgPerL: number | null, upTo: number | null) =>
 export function PublishedBaths() {
   const sources = [...new Set(PUBLISHED_PERMANGANATE_BATHS.map((b) => b.source))]
   return (
-    <section aria-labelledby="published-heading" className="rounded-xl border border-tide-200 bg-white p-4">
+    <section aria-labelledby="published-heading" className="rounded-xl border border-tide-200 bg-white p-4 lg:self-start">
       <h3 id="published-heading" className="flex items-center gap-2 font-bold text-tide-900">
         <BookMarked aria-hidden className="size-5 text-tide-600" /> Published figures: potassium permanganate
       </h3>

@@ -2,6 +2,7 @@ import { clsx } from 'clsx'
 import { Phone, Users } from 'lucide-react'
 import type { CalendarDay } from '#shared/schemas/board'
 import { CATEGORY_LABELS, type Category } from '#shared/schemas/routine'
+import { DayEvents } from './day-events'
 import { PeopleLine } from './people-line'
 import { StatusCounts } from './status-counts'
 
@@ -27,6 +28,7 @@ export function DaySummary({ dayNumber, day, roomy }: Props) {
         <span className="text-sm font-bold text-tide-900">{dayNumber}</span>
         {total > 0 && <span className="text-tide-600 @max-[7.5rem]:hidden">{total === 1 ? '1 task' : `${total} tasks`}</span>}
       </span>
+      {day && <DayEvents events={day.events} />}
       {day && total > 0 && <StatusCounts counts={day.counts} />}
       {day && total > 0 && (
         <p className="flex flex-wrap gap-x-1.5 text-tide-700 @max-[6rem]:hidden">

@@ -52,6 +52,8 @@ export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children 
       onTaskRef.current?.(queryClient, parsed.data, personId)
     }
     for (const event of TASK_EVENTS) socket.on(event, handle)
+    // Bulk changes (a roster change re-assigning, an event holding feeds) come without tasks: refetch once.
+    socket.on('tasks:changed', () => void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false }))
     socket.on('connect', () => {
       report('live')
       // What changed while we were away came as events nobody heard: catch up once.

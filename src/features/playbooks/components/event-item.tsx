@@ -21,7 +21,7 @@ export function EventItem({ event, tanks, batches, zone, canManage }: Props) {
         <p className="mt-1"><EventStatusLabel status={event.status} /></p>
       </div>
       <div className="flex min-w-0 flex-col gap-1 text-sm text-tide-800">
-        <p>{batch ? `Batch ${batch.code} · ` : ''}{tankCodes(event.tankIds, tanks)}</p>
+        <p>{batch ? `Batch ${batch.code} · ` : ''}Tanks: {tankCodes(event.tankIds, tanks)}</p>
         <FastingWindow from={event.fastingFrom} to={event.fastingTo} zone={zone} />
         <p className="flex items-center gap-2">
           <ListChecks aria-hidden className="size-4 text-tide-600" /> {event.taskCount} {event.taskCount === 1 ? 'task' : 'tasks'}

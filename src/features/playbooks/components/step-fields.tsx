@@ -23,7 +23,7 @@ export function StepFields({ index, count, onMove, onRemove }: Props) {
     <fieldset className="rounded-lg border border-tide-200 p-3 md:p-4">
       <legend className="px-1 font-semibold text-tide-900">Step {n}</legend>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <p className="text-sm text-tide-700" aria-live="polite">
+        <p className="font-semibold text-tide-800" aria-live="polite">
           {timingOk ? describeStepTiming({ dayOffset: v(step.dayOffset), time: step.time ?? null, minutesOffset: v(step.minutesOffset), repeatDays: v(step.repeatDays) }) : 'Timing incomplete'}
         </p>
         <div className="flex">

@@ -1,0 +1,60 @@
+import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { BarChart3 } from 'lucide-react'
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { ErrorState, PageHeader } from '../../components/ui/page-state'
+import { reportQueries } from '../../features/reports/api/report-queries'
+import { AuditKindSelect } from '../../features/reports/components/audit-kind-select'
+import { AuditList } from '../../features/reports/components/audit-list'
+import { PrintHeading } from '../../features/reports/components/print-heading'
+import { RangeForm } from '../../features/reports/components/range-form'
+import { ReportActions } from '../../features/reports/components/report-actions'
+import { describeRange, rangeFrom, rangeProblem } from '../../features/reports/utils/date-range'
+import { csvHref, type AuditFilter } from '../../features/reports/utils/report-paths'
+import '../../features/reports/report-print.css'
+
+const filterFrom = (search: URLSearchParams, timeZone: string): AuditFilter => ({ ...rangeFrom(search, timeZone), entity: search.get('entity') ?? '' })
+
+export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  const facility = await queryClient.ensureQueryData(reportQueries.facility())
+  const filter = filterFrom(new URL(request.url).searchParams, facility.timeZone)
+  if (!rangeProblem(filter)) await queryClient.ensureQueryData(reportQueries.audit(filter))
+  return null
+}
+
+export function Component() {
+  const [search, setSearch] = useSearchParams()
+  const { data: facility } = useSuspenseQuery(reportQueries.facility())
+  const filter = filterFrom(search, facility.timeZone)
+  const problem = rangeProblem(filter)
+  const update = (changes: Record<string, string>) =>
+    setSearch((current) => {
+      const next = new URLSearchParams(current)
+      for (const [k, v] of Object.entries(changes)) {
+        if (v) next.set(k, v)
+        else next.delete(k)
+      }
+      return next
+    })
+
+  return (
+    <section data-print-layout className="flex flex-col gap-4">
+      <PageHeader title="Audit trail">
+        <Link to={`/reports?from=${filter.from}&to=${filter.to}`} className="inline-flex min-h-11 items-center gap-2 font-semibold text-tide-700 underline print:hidden">
+          <BarChart3 aria-hidden className="size-4" /> Reports
+        </Link>
+      </PageHeader>
+      <PrintHeading facility={facility.name} title="Audit trail" range={describeRange(filter)} />
+      <p className="max-w-2xl text-sm text-tide-800 print:hidden">
+        Every change to routines, limits, ladders, the roster, people, events and completed records, with the values before and after. Nothing here is ever deleted.
+      </p>
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div className="flex flex-wrap items-end gap-3 print:hidden">
+          <RangeForm key={`${filter.from}|${filter.to}`} range={filter} onChange={(r) => update({ from: r.from, to: r.to })} />
+          <AuditKindSelect value={filter.entity} onChange={(entity) => update({ entity })} />
+        </div>
+        {!problem && <ReportActions csvHref={csvHref('audit', filter)} label="audit trail" />}
+      </div>
+      {problem ? <ErrorState title="Choose another range" message={problem} /> : <AuditList filter={filter} timeZone={facility.timeZone} />}
+    </section>
+  )
+}

@@ -1,0 +1,17 @@
+/** An instant as facility wall time: "Wed 3 Dec, 09:00". */
+export const formatInstant = (iso: string, zone: string) =>
+  new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone: zone }).format(new Date(iso))
+
+/** 31.5 h as "31 h 30 min"; whole days beyond two days. */
+export function formatHours(hours: number): string {
+  if (hours >= 48) return `${Math.floor(hours / 24)} d ${Math.floor(hours % 24)} h`
+  const minutes = Math.floor(hours * 60)
+  const h = Math.floor(minutes / 60)
+  return h === 0 ? `${minutes % 60} min` : `${h} h ${minutes % 60} min`
+}
+
+export function parseDecimal(text: string): number | null {
+  const t = text.trim().replace(',', '.')
+  if (!/^-?(\d+\.?\d*|\.\d+)$/.test(t)) return null
+  return Number(t)
+}

@@ -1,0 +1,17 @@
+import { rangeFrom } from './date-range'
+import { GROUPINGS, PERIODS, type ComplianceFilter, type DateRange, type WelfareFilter } from './report-paths'
+
+export interface ReportFilters {
+  range: DateRange
+  compliance: ComplianceFilter
+  welfare: WelfareFilter
+}
+
+/** Everything the reports page shows, read from its address so it can be bookmarked and printed again. */
+export function reportFilters(search: URLSearchParams, timeZone: string): ReportFilters {
+  const range = rangeFrom(search, timeZone)
+  const by = GROUPINGS.find((g) => g === search.get('by')) ?? 'category'
+  const period = PERIODS.find((p) => p === search.get('period')) ?? 'day'
+  const tankIds = (search.get('tankIds') ?? '').split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0)
+  return { range, compliance: { ...range, by, period }, welfare: { ...range, tankIds } }
+}

@@ -1,0 +1,28 @@
+export interface DateRange {
+  from: string
+  to: string
+}
+export const GROUPINGS = ['category', 'area', 'person'] as const
+export const PERIODS = ['day', 'week'] as const
+export type ComplianceFilter = DateRange & { by: (typeof GROUPINGS)[number]; period: (typeof PERIODS)[number] }
+export type WelfareFilter = DateRange & { tankIds: number[] }
+export type AuditFilter = DateRange & { entity: string }
+
+type Filters = { compliance: ComplianceFilter; responses: DateRange; welfare: WelfareFilter; audit: AuditFilter }
+
+function search(filter: object) {
+  const params = new URLSearchParams()
+  for (const [key, value] of Object.entries(filter)) {
+    const text = Array.isArray(value) ? value.join(',') : String(value)
+    if (text !== '') params.set(key, text)
+  }
+  return params
+}
+
+/** The API path of a report, as apiFetch takes it (without the /api prefix). */
+export function reportPath<K extends keyof Filters>(name: K, filter: Filters[K]) {
+  return `${name === 'audit' ? '/audit' : `/reports/${name}`}?${search(filter)}`
+}
+
+/** The same report as a CSV file: a plain same-origin link, so the session cookie goes with it. */
+export const csvHref = <K extends keyof Filters>(name: K, filter: Filters[K]) => `/api${reportPath(name, filter)}&format=csv`
