@@ -52,7 +52,8 @@ function fakeValue(key: string, r: ReturnType<typeof generator>, salinity: numbe
 export async function seedHistory(days: number, zone: string): Promise<number> {
   const r = generator(20261202)
   const start = DateTime.now().setZone(zone).startOf('day').minus({ days })
-  const cutoff = DateTime.now().minus({ hours: 1 }).toJSDate()
+  // Today is left for the person trying the demo: its round is theirs to walk.
+  const cutoff = DateTime.now().setZone(zone).startOf('day').toJSDate()
   const [cat, parameters, limits] = await Promise.all([loadCatalogue(), db().getRepository(ParameterEntity).find(), db().getRepository(LimitEntity).find()])
   const units = new Map(parameters.map((p) => [p.key, p.unit]))
   const fallbackDoer = (await db().query("SELECT id FROM people WHERE role = 'technician' ORDER BY id LIMIT 1"))[0]?.id as number

@@ -93,6 +93,7 @@ describe('the tank page', () => {
     expect(await page.getByRole('list', { name: 'Recent tasks' }).getByRole('link').count()).toBe(10)
     await page.getByRole('list', { name: 'Recent tasks' }).getByText('Flag: Critical').waitFor()
     await screenshot(page, 'tank-page-desktop')
+    await oxygen.screenshot({ path: 'test-results/tank-page-oxygen-chart.png' })
 
     await page.getByRole('button', { name: '7 days' }).click()
     // Seven days back from now: days 1 to 6 for sure, day 7's 08:06 depending on the hour the test runs.
@@ -115,8 +116,11 @@ describe('the tank page', () => {
     const phone = await s.newPage(PHONE)
     await s.signIn(phone.page, observer.email)
     await phone.page.goto(`/tanks/${tank.id}?days=90`)
-    await phone.page.getByRole('region', { name: /^Dissolved oxygen/ }).locator('.band-area-critical').waitFor()
+    const phoneOxygen = phone.page.getByRole('region', { name: /^Dissolved oxygen/ })
+    await phoneOxygen.locator('.band-area-critical').waitFor()
     await screenshot(phone.page, 'tank-page-phone')
+    await phoneOxygen.scrollIntoViewIfNeeded()
+    await phone.page.screenshot({ path: 'test-results/tank-page-phone-chart.png' })
     await phone.context.close()
   })
 })

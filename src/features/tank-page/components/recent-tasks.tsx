@@ -13,15 +13,13 @@ export function RecentTasks({ tasks }: { tasks: Task[] }) {
       {tasks.map((t) => (
         <li key={t.id}>
           <Link to={`/tasks/${t.id}`} className="flex min-h-11 items-center gap-3 px-3 py-2 hover:bg-tide-50 md:py-1.5">
-            <span className="flex min-w-0 flex-1 flex-col gap-0.5 md:flex-row md:items-center md:gap-3">
-              <span className="w-36 shrink-0 text-sm tabular-nums text-tide-700">
-                {formatLocalDay(t.localDate)} {t.localTime}
-              </span>
-              <span className="min-w-0 flex-1 truncate font-semibold text-tide-900">{t.title}</span>
-              <span className="flex flex-wrap items-center gap-2">
+            <span className="flex min-w-0 flex-1 flex-col gap-0.5">
+              <span className="font-semibold text-tide-900">{t.title}</span>
+              <span className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
+                <span className="tabular-nums text-tide-700">{formatLocalDay(t.localDate)}, {t.localTime}</span>
                 <TaskStatusLabel status={t.status} />
                 {t.flag && <BandBadge band={t.flag} prefix="Flag" />}
-                {t.completedByName && <span className="text-sm text-tide-700">by {t.completedByName}</span>}
+                {t.completedByName && <span className="text-tide-700">by {t.completedByName}</span>}
               </span>
             </span>
             <ChevronRight aria-hidden className="size-4 shrink-0 text-tide-500 print:hidden" />

@@ -1,9 +1,10 @@
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, XAxis, YAxis } from 'recharts'
 import type { DotItemDotProps } from 'recharts'
 import type { TankLimit } from '../api/tank-page-schemas'
-import { bandAreas, valueDomain } from '../utils/band-areas'
+import { bandAreas, valueScale } from '../utils/band-areas'
 import { BAND_FILL_OPACITY, CHART_COLOURS } from '../utils/chart-colours'
 import { formatTick, formatValue } from '../utils/format'
+import { dayTicks } from '../utils/time-ticks'
 import type { TrendPoint } from '../utils/trend-series'
 import { DotShape } from './dot-shape'
 
@@ -24,7 +25,7 @@ const dot = (hollow: boolean) =>
 
 /** One parameter over time: the ok, watch and critical bands shaded behind the tank's and the system's readings. */
 export function TrendChart({ limit, tank, system, from, to, timeZone }: TrendChartProps) {
-  const domain = valueDomain([...tank, ...system].map((p) => p.value), limit)
+  const { domain, ticks } = valueScale([...tank, ...system].map((p) => p.value), limit)
   return (
     <ComposedChart
       responsive
@@ -39,13 +40,14 @@ export function TrendChart({ limit, tank, system, from, to, timeZone }: TrendCha
         scale="time"
         domain={[from, to]}
         allowDataOverflow
+        ticks={dayTicks(from, to, timeZone)}
         tickFormatter={(v: number) => formatTick(v, timeZone)}
         stroke={CHART_COLOURS.axis}
         fontSize={12}
         minTickGap={24}
       />
-      <YAxis type="number" domain={domain} allowDataOverflow tickFormatter={formatValue} stroke={CHART_COLOURS.axis} fontSize={12} width={52} />
-      {bandAreas(limit).map((a, i) => (
+      <YAxis type="number" domain={domain} ticks={ticks} allowDataOverflow tickFormatter={formatValue} stroke={CHART_COLOURS.axis} fontSize={12} width={52} />
+      {bandAreas(limit, domain).map((a, i) => (
         <ReferenceArea
           key={i}
           y1={a.y1}

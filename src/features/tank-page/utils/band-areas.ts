@@ -7,37 +7,49 @@ export interface Bounds {
   criticalMax: number | null
 }
 
-/** One shaded strip of a chart; a missing edge runs to the edge of the plot. */
+/** One shaded strip of a chart, in data units, bottom to top. */
 export interface BandArea {
   band: Band
-  y1?: number
-  y2?: number
+  y1: number
+  y2: number
 }
 
 const limitsOf = (b: Bounds) => [b.okMin, b.okMax, b.criticalMin, b.criticalMax].filter((v): v is number => v != null)
 
-/** The strips from bottom to top: critical, watch, ok, watch, critical, as far as the limits go. */
-export function bandAreas(b: Bounds | undefined): BandArea[] {
+/**
+ * The strips from bottom to top: critical, watch, ok, watch, critical, as far as the limits go.
+ * Every edge is a number: recharts reads a missing y1 as the top of the plot, not the bottom.
+ */
+export function bandAreas(b: Bounds | undefined, [lo, hi]: [number, number]): BandArea[] {
   if (!b || limitsOf(b).length === 0) return []
   const areas: BandArea[] = []
-  if (b.criticalMin != null) areas.push({ band: 'critical', y2: b.criticalMin })
-  if (b.okMin != null) areas.push({ band: 'watch', y1: b.criticalMin ?? undefined, y2: b.okMin })
-  areas.push({ band: 'ok', y1: b.okMin ?? undefined, y2: b.okMax ?? undefined })
-  if (b.okMax != null) areas.push({ band: 'watch', y1: b.okMax, y2: b.criticalMax ?? undefined })
-  if (b.criticalMax != null) areas.push({ band: 'critical', y1: b.criticalMax })
-  // A limit at or beyond the next one (e.g. critical = ok) leaves an empty strip.
-  return areas.filter((a) => a.y1 === undefined || a.y2 === undefined || a.y2 > a.y1)
+  if (b.criticalMin != null) areas.push({ band: 'critical', y1: lo, y2: b.criticalMin })
+  if (b.okMin != null) areas.push({ band: 'watch', y1: b.criticalMin ?? lo, y2: b.okMin })
+  areas.push({ band: 'ok', y1: b.okMin ?? lo, y2: b.okMax ?? hi })
+  if (b.okMax != null) areas.push({ band: 'watch', y1: b.okMax, y2: b.criticalMax ?? hi })
+  if (b.criticalMax != null) areas.push({ band: 'critical', y1: b.criticalMax, y2: hi })
+  // A limit at the next one (e.g. critical = ok) or at the axis's end leaves an empty strip.
+  return areas.map((a) => ({ ...a, y1: Math.max(lo, a.y1), y2: Math.min(hi, a.y2) })).filter((a) => a.y2 > a.y1)
 }
 
-/** A value axis that shows every reading and every limit, with a little room around them. */
-export function valueDomain(values: number[], b: Bounds | undefined): [number, number] {
+function niceStep(rough: number) {
+  const power = 10 ** Math.floor(Math.log10(rough))
+  const fraction = rough / power
+  return (fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 2.5 ? 2.5 : fraction <= 5 ? 5 : 10) * power
+}
+
+const tidy = (v: number) => Number(v.toPrecision(12))
+
+/** A value axis on round numbers that shows every reading and every limit, with a little room around them. */
+export function valueScale(values: number[], b: Bounds | undefined): { domain: [number, number]; ticks: number[] } {
   const marks = [...values, ...(b ? limitsOf(b) : [])]
-  if (marks.length === 0) return [0, 1]
-  const lo = Math.min(...marks)
-  const hi = Math.max(...marks)
-  const pad = (hi - lo || Math.abs(hi) || 1) * 0.12
-  const niceLo = lo >= 0 ? Math.max(0, lo - pad) : lo - pad
-  return [round(niceLo), round(hi + pad)]
+  const lo = marks.length ? Math.min(...marks) : 0
+  const hi = marks.length ? Math.max(...marks) : 1
+  const pad = (hi - lo || Math.abs(hi) || 1) * 0.08
+  const step = niceStep((hi - lo + 2 * pad) / 5)
+  const start = lo >= 0 ? Math.max(0, Math.floor((lo - pad) / step) * step) : Math.floor((lo - pad) / step) * step
+  const end = Math.ceil((hi + pad) / step) * step
+  const ticks: number[] = []
+  for (let v = start; v <= end + step / 2; v += step) ticks.push(tidy(v))
+  return { domain: [tidy(start), tidy(end)], ticks }
 }
-
-const round = (v: number) => Number(v.toPrecision(3))
