@@ -7,7 +7,7 @@ export default defineConfig({
       {
         test: {
           name: 'api',
-          include: ['tests/api/**/*.test.ts'],
+          include: ['tests/api/**/*.test.ts', 'tests/security/**/*.test.ts'],
           fileParallelism: false,
           testTimeout: 20000,
           hookTimeout: 60000,

@@ -7,7 +7,7 @@ import { startServer } from './start-server'
 process.env.TZ = 'UTC'
 
 const config = loadConfig()
-const running = await startServer(config, { clientDir: path.resolve('dist') })
+const running = await startServer(config, { clientDir: path.resolve('dist'), schedulerIntervalMs: config.schedulerIntervalMs })
 logger.info(`Roundtide is running at ${running.url}`)
 console.log(`\nRoundtide is running at ${running.url}`)
 console.log(`Demo sign-ins (password "${config.demoPassword}"): maren.holloway@brackenwater.example (manager),`)

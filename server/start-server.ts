@@ -8,6 +8,7 @@ import { startScheduler } from './jobs/scheduler'
 import { logger } from './lib/logger'
 import { startLocalSmtp } from './mail/local-smtp'
 import { createTransport } from './modules/escalation/deliver'
+import { createRedisAdapter } from './realtime/redis-adapter'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
 
 /** Starts the whole server (DB, HTTP, sockets); used by server/index.ts and by browser tests. */
@@ -26,7 +27,8 @@ export async function startServer(config: AppConfig, opts: StartOptions = {}) {
   const sessionStore = createSessionStore(config)
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)
-  attachSocketServer(server, sessionMiddleware, passport)
+  const redis = config.redisUrl ? await createRedisAdapter(config.redisUrl) : null
+  attachSocketServer(server, sessionMiddleware, passport, redis?.adapter)
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve))
   const smtp = config.mail.mode === 'local' && opts.localSmtp !== false ? await startLocalSmtpIfFree(config.mail.port, config.mail.host) : null
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
@@ -44,6 +46,7 @@ export async function startServer(config: AppConfig, opts: StartOptions = {}) {
       transport.close()
       await smtp?.close()
       await closeSocketServer()
+      await redis?.close()
       await new Promise<void>((resolve) => server.close(() => resolve()))
       await sessionStore.close()
       await dataSource.destroy()

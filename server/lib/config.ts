@@ -24,6 +24,10 @@ const EnvSchema = z.object({
   ROUNDTIDE_SMTP_PASSWORD: z.string().optional(),
   ROUNDTIDE_MAIL_FROM: z.string().default('Roundtide <roundtide@localhost>'),
   ROUNDTIDE_ACK_TTL_HOURS: z.coerce.number().min(1).max(24 * 14).default(72),
+  /** Set to share live events between several app processes (socket.io's Redis adapter). */
+  ROUNDTIDE_REDIS_URL: z.string().url().optional(),
+  /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
+  ROUNDTIDE_SCHEDULER_INTERVAL_MS: z.coerce.number().int().min(100).max(3_600_000).default(30_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })
 
@@ -51,6 +55,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     uploadDir: e.ROUNDTIDE_UPLOAD_DIR,
     demoPassword: e.ROUNDTIDE_DEMO_PASSWORD,
     logLevel: e.LOG_LEVEL,
+    redisUrl: e.ROUNDTIDE_REDIS_URL ?? null,
+    schedulerIntervalMs: e.ROUNDTIDE_SCHEDULER_INTERVAL_MS,
     mail: {
       mode: e.ROUNDTIDE_MAIL_MODE,
       host: e.ROUNDTIDE_SMTP_HOST,

@@ -15,8 +15,8 @@ const onlyForHandshake = (mw: RequestHandler): RequestHandler => (req, res, next
 export const FACILITY_ROOM = 'facility'
 
 /** Socket.io on the app's own HTTP server; a connection without a signed-in session is refused. */
-export function attachSocketServer(server: HttpServer, sessionMiddleware: RequestHandler, passport: PassportStatic) {
-  io = new Server(server, { serveClient: false })
+export function attachSocketServer(server: HttpServer, sessionMiddleware: RequestHandler, passport: PassportStatic, adapter?: Parameters<Server['adapter']>[0]) {
+  io = new Server(server, { serveClient: false, ...(adapter ? { adapter } : {}) })
   io.engine.use(onlyForHandshake(sessionMiddleware))
   io.engine.use(onlyForHandshake(passport.session() as RequestHandler))
   io.engine.use(

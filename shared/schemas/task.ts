@@ -12,6 +12,8 @@ const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
 export const TaskSchema = z.object({
   id: z.number().int(),
   routineId: z.number().int().nullable(),
+  /** The playbook event that made it, if any. */
+  eventId: z.number().int().nullable().optional(),
   title: z.string(),
   category: CategorySchema,
   instructions: z.string(),
@@ -52,6 +54,7 @@ export const TaskListQuerySchema = z
     assigneeId: z.union([z.coerce.number().int().positive(), z.literal('none')]).optional(),
     status: TaskStatusSchema.optional(),
     routineId: z.coerce.number().int().positive().optional(),
+    eventId: z.coerce.number().int().positive().optional(),
     tankId: z.coerce.number().int().positive().optional(),
   })
   .superRefine((q, ctx) => {

@@ -2,10 +2,11 @@ import { DateTime } from 'luxon'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { completeTask } from '#server/modules/completions/completions.service'
+import { batches } from '#server/modules/facility/catalogues'
 import { ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { DEMO_PARAMETERS } from '#seed/demo-parameters'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
 import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 const KEYS = ['do_mgL', 'do_pct', 'temp_c', 'ph', 'mortalities']
@@ -29,6 +30,10 @@ async function arrange() {
   const tech = await s.createPerson('technician', { name: 'Rua Tane' })
   const { area, system, tanks } = await makeAreaWithTanks(1, { roundOrder: 5 })
   const tank = tanks[0]
+  const batch = await batches.create({
+    code: uniqueCode('B'), species: 'Barramundi (Lates calcarifer)', origin: 'Northside hatchery', arrivalDate: DateTime.now().setZone(zone).minus({ days: 40 }).toISODate(),
+    count: 180, meanWeightG: 12.5, tankIds: [tank.id], status: 'active', feedRatePct: 3,
+  })
   // The demo's limits, pinned on this system so the test does not lean on the facility's.
   for (const p of DEMO_PARAMETERS.filter((d) => KEYS.includes(d.key) && d.bands)) await setSystemLimit(system.id, p.key, p.bands!)
   const doByDay = [6.8, 7.1, 6.5, 3.2, 6.9, 7.4, 4.6, 7, 6.6, 7.2]
@@ -49,12 +54,12 @@ async function arrange() {
     })
     await completeTask(task.id, supervisor, completion({ ph: 7.4 + i * 0.05, temp_c: 28.2 }, { doneAt: due.plus({ minutes: 3 }).toUTC().toISO(), performedById: tech.id }))
   }
-  return { area, system, tank }
+  return { area, system, tank, batch }
 }
 
 describe('the tank page', () => {
   test('shows trend charts with the bands drawn, lists the critical DO reading, and links to the QR label', async () => {
-    const { area, system, tank } = await arrange()
+    const { area, system, tank, batch } = await arrange()
     const observer = await s.createPerson('observer')
     const { page, context } = await s.newPage(DESKTOP)
     await s.signIn(page, observer.email)
@@ -92,6 +97,8 @@ describe('the tank page', () => {
     expect(await deaths.getByRole('list', { name: 'Days with losses' }).getByRole('listitem').allTextContents()).toEqual(Array(3).fill(expect.stringMatching(/: 2$/)))
     expect(await page.getByRole('list', { name: 'Recent tasks' }).getByRole('link').count()).toBe(10)
     await page.getByRole('list', { name: 'Recent tasks' }).getByText('Flag: Critical').waitFor()
+    await page.getByRole('link', { name: batch.code }).waitFor()
+    await page.getByText('180 fish · mean 12.5 g', { exact: false }).waitFor()
     await screenshot(page, 'tank-page-desktop')
     await oxygen.screenshot({ path: 'test-results/tank-page-oxygen-chart.png' })
 

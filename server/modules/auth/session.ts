@@ -1,6 +1,7 @@
 import session from 'express-session'
 import MySQLStoreFactory from 'express-mysql-session'
 import type { AppConfig } from '../../lib/config'
+import { logger } from '../../lib/logger'
 
 const MySQLStore = MySQLStoreFactory(session)
 
@@ -8,7 +9,7 @@ export type SessionStore = InstanceType<typeof MySQLStore>
 
 /** Sessions live in MariaDB so they survive a restart and are shared by every app process. */
 export function createSessionStore(config: AppConfig): SessionStore {
-  return new MySQLStore({
+  const store = new MySQLStore({
     host: config.db.host,
     port: config.db.port,
     user: config.db.username,
@@ -19,6 +20,15 @@ export function createSessionStore(config: AppConfig): SessionStore {
     checkExpirationInterval: 15 * 60 * 1000,
     expiration: 7 * 24 * 60 * 60 * 1000,
   })
+  // express-session refreshes the expiry (rolling) after the answer is already written; a failed
+  // refresh (the database just went away) would make it cut the connection, so a stored completion
+  // reached the phone as a dropped request. The session simply keeps its previous expiry.
+  const touch = store.touch.bind(store) as (sid: string, data: unknown) => Promise<void>
+  store.touch = ((sid: string, data: unknown, callback?: (error: unknown) => void) => {
+    const done = touch(sid, data).catch((err: unknown) => logger.warn({ err }, 'session expiry not refreshed'))
+    return callback ? void done.then(() => callback(null)) : done
+  }) as SessionStore['touch']
+  return store
 }
 
 export function createSessionMiddleware(config: AppConfig, store: SessionStore) {

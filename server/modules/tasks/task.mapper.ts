@@ -11,6 +11,7 @@ export function toTask(row: TaskRow, ctx: TaskContext): Task {
   return {
     id: row.id,
     routineId: row.routineId,
+    eventId: row.eventId,
     title: row.title,
     category: row.category,
     instructions: row.instructions,

@@ -22,6 +22,7 @@ export async function listTasks(query: TaskListQuery): Promise<Task[]> {
   if (query.category) qb.andWhere('t.category = :category', { category: query.category })
   if (query.status) qb.andWhere('t.status = :status', { status: query.status })
   if (query.routineId) qb.andWhere('t.routineId = :routineId', { routineId: query.routineId })
+  if (query.eventId) qb.andWhere('t.eventId = :eventId', { eventId: query.eventId })
   if (query.tankId) qb.andWhere('t.tankId = :tankId', { tankId: query.tankId })
   if (query.assigneeId === 'none') qb.andWhere('t.assigneeId IS NULL')
   else if (query.assigneeId) qb.andWhere('t.assigneeId = :assigneeId', { assigneeId: query.assigneeId })

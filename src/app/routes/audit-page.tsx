@@ -2,6 +2,7 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { BarChart3 } from 'lucide-react'
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
 import { ErrorState, PageHeader } from '../../components/ui/page-state'
+import { authQueries } from '../../features/auth/api/auth-queries'
 import { reportQueries } from '../../features/reports/api/report-queries'
 import { AuditKindSelect } from '../../features/reports/components/audit-kind-select'
 import { AuditList } from '../../features/reports/components/audit-list'
@@ -15,15 +16,20 @@ import '../../features/reports/report-print.css'
 const filterFrom = (search: URLSearchParams, timeZone: string): AuditFilter => ({ ...rangeFrom(search, timeZone), entity: search.get('entity') ?? '' })
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const facility = await queryClient.ensureQueryData(reportQueries.facility())
+  const [facility, me] = await Promise.all([queryClient.ensureQueryData(reportQueries.facility()), queryClient.ensureQueryData(authQueries.me())])
   const filter = filterFrom(new URL(request.url).searchParams, facility.timeZone)
-  if (!rangeProblem(filter)) await queryClient.ensureQueryData(reportQueries.audit(filter))
+  await Promise.all([
+    rangeProblem(filter) ? null : queryClient.ensureQueryData(reportQueries.audit(filter)),
+    // Observers may not read the staff list; they see person numbers instead.
+    me.role === 'manager' || me.role === 'supervisor' ? queryClient.ensureQueryData(reportQueries.staff()) : null,
+  ])
   return null
 }
 
 export function Component() {
   const [search, setSearch] = useSearchParams()
   const { data: facility } = useSuspenseQuery(reportQueries.facility())
+  const { data: me } = useSuspenseQuery(authQueries.me())
   const filter = filterFrom(search, facility.timeZone)
   const problem = rangeProblem(filter)
   const update = (changes: Record<string, string>) =>
@@ -54,7 +60,7 @@ export function Component() {
         </div>
         {!problem && <ReportActions csvHref={csvHref('audit', filter)} label="audit trail" />}
       </div>
-      {problem ? <ErrorState title="Choose another range" message={problem} /> : <AuditList filter={filter} timeZone={facility.timeZone} />}
+      {problem ? <ErrorState title="Choose another range" message={problem} /> : <AuditList filter={filter} timeZone={facility.timeZone} canReadStaff={me.role === 'manager' || me.role === 'supervisor'} />}
     </section>
   )
 }

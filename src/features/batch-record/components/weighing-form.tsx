@@ -3,7 +3,8 @@ import { useRef, useState } from 'react'
 import { toast } from 'sonner'
 import { Button } from '../../../components/ui/button'
 import { useAddRecord } from '../api/use-add-record'
-import { MAX_FISH, type WeightEntry } from '../utils/weights'
+import { useWeighingDraft } from '../hooks/use-weighing-draft'
+import { MAX_FISH } from '../utils/weights'
 import { WeighingStats } from './weighing-stats'
 import { WeightEntryField } from './weight-entry'
 import { WeightList } from './weight-list'
@@ -11,8 +12,8 @@ import { WeightList } from './weight-list'
 /** Sample weighing: 20–30 fish typed one after another, the statistics live, then one save. */
 export function WeighingForm({ batchId, eventId }: { batchId: number; eventId: number | null }) {
   const add = useAddRecord(batchId)
-  const nextId = useRef(1)
-  const [entries, setEntries] = useState<WeightEntry[]>([])
+  const [entries, setEntries] = useWeighingDraft(batchId)
+  const nextId = useRef(Math.max(0, ...entries.map((e) => e.id)) + 1)
   const [allowedErrorPct, setAllowedErrorPct] = useState(10)
   const [updateBatchMean, setUpdateBatchMean] = useState(true)
 

@@ -7,9 +7,9 @@ const when = (iso: string, timeZone: string) =>
   new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso))
 
 /** Who changed what, newest first; names when this role may read the staff list, numbers otherwise. */
-export function AuditList({ filter, timeZone }: { filter: AuditFilter; timeZone: string }) {
+export function AuditList({ filter, timeZone, canReadStaff }: { filter: AuditFilter; timeZone: string; canReadStaff: boolean }) {
   const { data: rows } = useSuspenseQuery(reportQueries.audit(filter))
-  const staff = useQuery(reportQueries.staff())
+  const staff = useQuery({ ...reportQueries.staff(), enabled: canReadStaff })
   const names = new Map((staff.data ?? []).map((p) => [p.id, p.name]))
   const who = (id: number | null) => (id === null ? 'Roundtide (scheduler)' : (names.get(id) ?? `Person #${id}`))
   if (rows.length === 0) return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No changes recorded in this range.</p>

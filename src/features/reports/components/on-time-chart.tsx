@@ -15,7 +15,7 @@ export function OnTimeChart({ rows }: { rows: ComplianceRow[] }) {
       {points.length > 1 && (
         <LineChart responsive style={{ width: '100%', height: 150 }} data={points} margin={{ top: 8, right: 16, bottom: 0, left: 0 }} title="On-time rate per period">
           <CartesianGrid stroke="#d5e9ee" strokeDasharray="3 3" />
-          <XAxis dataKey="period" stroke="#265f75" fontSize={12} minTickGap={16} />
+          <XAxis dataKey="period" stroke="#265f75" fontSize={12} minTickGap={16} padding={{ left: 16, right: 16 }} />
           <YAxis domain={[0, 100]} ticks={[0, 50, 100]} unit="%" stroke="#265f75" fontSize={12} width={44} />
           <Line dataKey="rate" name="On time" stroke="#214e60" strokeWidth={2} dot={{ r: 3, fill: '#214e60' }} isAnimationActive={false} />
         </LineChart>

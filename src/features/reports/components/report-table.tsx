@@ -5,6 +5,8 @@ export interface ReportColumn<T> {
   label: string
   cell: (row: T) => ReactNode
   numeric?: boolean
+  /** Long text that may wrap; everything else stays on one line. */
+  wrap?: boolean
 }
 
 interface ReportTableProps<T> {
@@ -34,7 +36,7 @@ export function ReportTable<T>({ caption, columns, rows, rowKey, emptyText }: Re
           {rows.map((row, r) => (
             <tr key={rowKey(row, r)} className="border-t border-tide-100 align-top">
               {columns.map((c, i) => (
-                <td key={c.label} className={clsx('px-3 py-1.5', c.numeric && 'text-right tabular-nums', i === 0 && 'sticky left-0 bg-white font-semibold text-tide-900')}>
+                <td key={c.label} className={clsx('px-3 py-1.5', c.wrap ? 'min-w-40 whitespace-normal' : 'whitespace-nowrap', c.numeric && 'text-right tabular-nums', i === 0 && 'sticky left-0 bg-white font-semibold text-tide-900')}>
                   {c.cell(row)}
                 </td>
               ))}

@@ -7,13 +7,13 @@ import { ReportActions } from './report-actions'
 import { ReportTable, type ReportColumn } from './report-table'
 
 const minutes = (m: number | null) => (m === null ? '—' : `${m} min`)
-const ALERTS: Record<string, string> = { missed: 'Missed task', critical: 'Critical reading' }
+const ALERTS: Record<string, string> = { missed_task: 'Missed task', critical_reading: 'Critical reading' }
 
 const COLUMNS: ReadonlyArray<ReportColumn<ResponseRow>> = [
   { label: 'Date', cell: (r) => r.date },
   { label: 'Due', cell: (r) => r.time },
-  { label: 'Task', cell: (r) => r.task },
-  { label: 'Where', cell: (r) => r.where },
+  { label: 'Task', cell: (r) => r.task, wrap: true },
+  { label: 'Where', cell: (r) => r.where, wrap: true },
   { label: 'Flag', cell: (r) => <FlagText flag={r.flag} /> },
   { label: 'Escalation', cell: (r) => (r.alert ? (ALERTS[r.alert] ?? r.alert) : 'None') },
   { label: 'Answered by', cell: (r) => r.acknowledgedBy || (r.alert ? 'Not answered' : '—') },

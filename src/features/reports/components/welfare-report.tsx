@@ -12,12 +12,12 @@ const STATUS: Record<string, string> = { done: 'Done', missed: 'Missed', skipped
 const COLUMNS: ReadonlyArray<ReportColumn<WelfareRow>> = [
   { label: 'Date', cell: (r) => r.date },
   { label: 'Due', cell: (r) => r.due },
-  { label: 'Check', cell: (r) => r.task },
-  { label: 'Tank', cell: (r) => r.tank },
+  { label: 'Check', cell: (r) => r.task, wrap: true },
+  { label: 'Tank', cell: (r) => r.tank, wrap: true },
   { label: 'Status', cell: (r) => (r.status === 'missed' ? <FlagText flag="missed" /> : (STATUS[r.status] ?? r.status)) },
   { label: 'Done by', cell: (r) => r.doneBy || '—' },
   { label: 'Late', cell: (r) => (r.lateMinutes === '' ? '—' : `${r.lateMinutes} min`), numeric: true },
-  { label: 'Readings', cell: (r) => <span className="whitespace-normal">{r.readings || '—'}</span> },
+  { label: 'Readings', cell: (r) => r.readings || '—', wrap: true },
   { label: 'Flag', cell: (r) => <FlagText flag={r.flag} /> },
 ]
 
@@ -38,7 +38,7 @@ export function WelfareReport({ filter, onTanksChange }: WelfareReportProps) {
         <ReportActions csvHref={csvHref('welfare', filter)} label="welfare checks" />
       </div>
       <p className="text-sm text-tide-800">{chosen.length ? `Tanks ${chosen.join(', ')}` : 'All tanks'} · {rows.length} checks</p>
-      <TankFilter tanks={tanks} selected={filter.tankIds} onChange={onTanksChange} />
+      <TankFilter key={filter.tankIds.join(',')} tanks={tanks} selected={filter.tankIds} onChange={onTanksChange} />
       <ReportTable caption="Welfare checks" columns={COLUMNS} rows={rows} rowKey={(r, i) => `${r.date}-${r.due}-${r.tank}-${i}`} emptyText="No welfare checks in this range." />
     </section>
   )

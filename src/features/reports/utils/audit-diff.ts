@@ -14,7 +14,7 @@ function parse(text: string): unknown {
 }
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v)
-const show = (v: unknown) => (v === undefined ? '' : typeof v === 'string' ? v : JSON.stringify(v))
+const show = (v: unknown) => (v === undefined || v === null ? '' : typeof v === 'string' ? v : JSON.stringify(v))
 
 /** Before and after side by side, one row per field; a whole value when either side is not an object. */
 export function auditDiff(beforeText: string, afterText: string): DiffRow[] {

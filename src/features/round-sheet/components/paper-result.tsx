@@ -1,10 +1,15 @@
 import { CircleCheck, OctagonAlert, TriangleAlert } from 'lucide-react'
 import type { CompletionResult } from '#shared/schemas/completion'
+import type { ReadingSpec } from '#shared/schemas/round'
 import { clockTime } from '../utils/sheet-format'
 
 /** What the server made of a typed-in task: saved, and flagged if a reading was out of range. */
-export function PaperResult({ result, timeZone }: { result: CompletionResult; timeZone: string }) {
+// Worked out by the server, so not among the task's reading specs.
+const DERIVED_NAMES: Record<string, string> = { do_pct: 'DO saturation', nh3_mgL: 'Un-ionised ammonia-N' }
+
+export function PaperResult({ result, specs, timeZone }: { result: CompletionResult; specs: ReadingSpec[]; timeZone: string }) {
   const { task } = result
+  const name = (key: string) => specs.find((s) => s.key === key)?.name ?? DERIVED_NAMES[key] ?? key
   const flagged = result.readings.filter((r) => r.band !== 'ok')
   return (
     <div role="status" className="flex flex-col gap-1 rounded-lg bg-kelp-50 p-3 text-sm text-kelp-700">
@@ -16,7 +21,7 @@ export function PaperResult({ result, timeZone }: { result: CompletionResult; ti
       {task.flag && (
         <p className={`flex items-center gap-1.5 font-semibold ${task.flag === 'critical' ? 'text-alarm-700' : 'text-ember-700'}`}>
           {task.flag === 'critical' ? <OctagonAlert aria-hidden className="size-4" /> : <TriangleAlert aria-hidden className="size-4" />}
-          Flag: {task.flag === 'critical' ? 'Critical' : 'Watch'} ({flagged.map((r) => `${r.parameterKey} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a
+          Flag: {task.flag === 'critical' ? 'Critical' : 'Watch'} ({flagged.map((r) => `${name(r.parameterKey)} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a
           sheet typed in later raises no recheck.
         </p>
       )}

@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button'
 import { ApiError } from '../../../lib/api-client'
 import { useEnterPaperCompletion } from '../api/use-enter-paper-completion'
 import { isFinished } from '../utils/group-by-area'
-import { checkPaperDraft, serverFieldErrors, type PaperDraft } from '../utils/paper-form'
+import { checkPaperDraft, refusal, serverFieldErrors, type PaperDraft } from '../utils/paper-form'
 import { clockTime } from '../utils/sheet-format'
 import { PaperPersonTime } from './paper-person-time'
 import { PaperReadingField } from './paper-reading-field'
@@ -41,7 +41,7 @@ export function PaperTaskForm({ task, date, timeZone, people, defaultPersonId }:
       <span className="tabular-nums">{task.localTime}</span> {task.targetLabel} <span className="font-normal">{task.title}</span>
     </h3>
   )
-  if (enter.data) return <li className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-3">{heading}<PaperResult result={enter.data} timeZone={timeZone} /></li>
+  if (enter.data) return <li className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-3">{heading}<PaperResult result={enter.data} specs={task.readingSpecs} timeZone={timeZone} /></li>
   if (isFinished(task)) {
     return (
       <li className="flex flex-col gap-1 rounded-xl border border-tide-200 bg-white p-3">
@@ -68,7 +68,7 @@ export function PaperTaskForm({ task, date, timeZone, people, defaultPersonId }:
         <PaperPersonTime draft={draft} people={people} errors={shownErrors} onChange={(change) => setDraft((d) => ({ ...d, ...change }))} />
         {enter.isError && (
           <p role="alert" className="flex items-center gap-1.5 text-sm font-semibold text-alarm-700">
-            <CircleAlert aria-hidden className="size-4" /> Not saved: {enter.error.message}
+            <CircleAlert aria-hidden className="size-4" /> Not saved: {refusal(enter.error, timeZone)}
           </p>
         )}
         <Button type="submit" variant="secondary" disabled={enter.isPending} className="self-start">

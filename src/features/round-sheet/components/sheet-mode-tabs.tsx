@@ -13,7 +13,7 @@ export const parseSheetMode = (value: string | null): SheetMode => SHEET_MODES.f
 
 export function SheetModeTabs({ current, onChange }: { current: SheetMode; onChange: (mode: SheetMode) => void }) {
   return (
-    <div role="group" aria-label="Mode" className="inline-flex flex-wrap gap-1 rounded-lg bg-white p-1 ring-1 ring-tide-200 print:hidden">
+    <div role="group" aria-label="Mode" className="inline-flex flex-wrap gap-1 self-start rounded-lg bg-white p-1 ring-1 ring-tide-200 print:hidden">
       {SHEET_MODES.map((mode) => {
         const { label, icon: Icon } = MODES[mode]
         return (

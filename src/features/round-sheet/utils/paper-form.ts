@@ -1,5 +1,6 @@
 import type { RoundTask } from '#shared/schemas/round'
-import { paperTime } from './sheet-format'
+import { ApiError } from '../../../lib/api-client'
+import { clockTime, paperTime } from './sheet-format'
 
 export interface PaperDraft {
   values: Record<string, string>
@@ -37,4 +38,13 @@ export function serverFieldErrors(fieldErrors: Record<string, string[]> | undefi
     out[key] = messages[0]
   }
   return out
+}
+
+/** The server's refusal in the sheet's words; a task finished meanwhile names who and when in the facility's time. */
+export function refusal(error: Error, timeZone: string): string {
+  const details = error instanceof ApiError ? error.details : undefined
+  if (error instanceof ApiError && error.status === 409 && typeof details?.completedByName === 'string' && typeof details.completedAt === 'string') {
+    return `already done in Roundtide by ${details.completedByName} at ${clockTime(details.completedAt, timeZone)}.`
+  }
+  return error.message
 }

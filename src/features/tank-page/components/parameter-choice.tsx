@@ -1,27 +1,10 @@
-import { clsx } from 'clsx'
-import { Check } from 'lucide-react'
 import type { TrendParameter } from '../utils/trend-series'
+import { ToggleChip } from './toggle-chip'
 
 interface ParameterChoiceProps {
   parameters: TrendParameter[]
   selected: string[]
   onChange: (keys: string[]) => void
-}
-
-function Chip({ label, pressed, onClick }: { label: string; pressed: boolean; onClick: () => void }) {
-  return (
-    <button
-      type="button"
-      aria-pressed={pressed}
-      onClick={onClick}
-      className={clsx(
-        'inline-flex min-h-11 items-center gap-1.5 rounded-full px-3 text-sm font-semibold ring-1',
-        pressed ? 'bg-tide-700 text-white ring-tide-700' : 'bg-white text-tide-800 ring-tide-200 hover:bg-tide-50',
-      )}
-    >
-      {pressed && <Check aria-hidden className="size-4" />} {label}
-    </button>
-  )
 }
 
 /** Which parameters get a chart: measured ones, and the values Roundtide works out from them. */
@@ -37,7 +20,7 @@ export function ParameterChoice({ parameters, selected, onChange }: ParameterCho
         <div key={g.label} role="group" aria-label={`${g.label} readings`} className="flex flex-wrap items-center gap-2">
           <span className="w-24 text-sm font-semibold text-tide-800">{g.label}</span>
           {g.items.map((p) => (
-            <Chip key={p.limit.key} label={p.limit.name} pressed={selected.includes(p.limit.key)} onClick={() => toggle(p.limit.key)} />
+            <ToggleChip key={p.limit.key} label={p.limit.name} pressed={selected.includes(p.limit.key)} onClick={() => toggle(p.limit.key)} />
           ))}
         </div>
       ))}

@@ -1,0 +1,45 @@
+import { readFileSync, writeFileSync } from 'node:fs'
+import path from 'node:path'
+import { runCommand } from './run-command'
+import { log, ms, seconds, type Row } from './stats'
+
+interface LighthouseReport {
+  categories: Record<string, { score: number | null }>
+  audits: Record<string, { id: string; numericValue?: number; details?: { type?: string; overallSavingsMs?: number } }>
+}
+
+/** Measurement 6: Lighthouse (default mobile settings) on the signed-in Round page. */
+export async function measureLighthouse(url: string, cookie: string, workDir: string): Promise<Row> {
+  const headers = path.join(workDir, 'lighthouse-headers.json')
+  const report = path.join(workDir, 'lighthouse-round.json')
+  writeFileSync(headers, JSON.stringify({ Cookie: cookie }))
+  const start = performance.now()
+  log('lighthouse: Round page')
+  await runCommand(
+    'npx',
+    [
+      'lighthouse', `${url}/round`, '--output=json', `--output-path=${report}`, '--quiet', '--only-categories=performance,accessibility',
+      `--extra-headers=${headers}`, '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking',
+    ],
+    { env: { ...process.env, CHROME_PATH: process.env.CHROME_PATH ?? '/usr/bin/chromium' }, timeoutMs: 180_000 },
+  )
+  const lh = JSON.parse(readFileSync(report, 'utf8')) as LighthouseReport
+  const score = (key: string) => {
+    const s = lh.categories[key]?.score
+    return s === null || s === undefined ? 'n/a' : String(Math.round(s * 100))
+  }
+  const metric = (key: string) => {
+    const v = lh.audits[key]?.numericValue
+    return v === undefined ? 'n/a' : ms(v)
+  }
+  const savings = Object.values(lh.audits)
+    .filter((a) => a.details?.type === 'opportunity' && (a.details.overallSavingsMs ?? 0) > 0)
+    .sort((a, b) => b.details!.overallSavingsMs! - a.details!.overallSavingsMs!)
+    .slice(0, 3)
+    .map((a) => `${a.id} ${ms(a.details!.overallSavingsMs!)}`)
+  return {
+    measurement: '6 Lighthouse Round page (mobile)',
+    result: `performance ${score('performance')}, accessibility ${score('accessibility')}`,
+    detail: `FCP ${metric('first-contentful-paint')}, LCP ${metric('largest-contentful-paint')}, TBT ${metric('total-blocking-time')}, CLS ${lh.audits['cumulative-layout-shift']?.numericValue?.toFixed(3) ?? 'n/a'}; savings: ${savings.join(', ') || 'none listed'}; run ${seconds(performance.now() - start)}`,
+  }
+}
