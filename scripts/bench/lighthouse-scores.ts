@@ -15,14 +15,16 @@ export async function measureLighthouse(url: string, cookie: string, workDir: st
   writeFileSync(headers, JSON.stringify({ Cookie: cookie }))
   const start = performance.now()
   log('lighthouse: Round page')
-  await runCommand(
-    'npx',
-    [
-      'lighthouse', `${url}/round`, '--output=json', `--output-path=${report}`, '--quiet', '--only-categories=performance,accessibility',
-      `--extra-headers=${headers}`, '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking',
-    ],
-    { env: { ...process.env, CHROME_PATH: process.env.CHROME_PATH ?? '/usr/bin/chromium' }, timeoutMs: 180_000 },
-  )
+  const args = [
+    'lighthouse', `${url}/round`, '--output=json', `--output-path=${report}`, '--quiet', '--only-categories=performance,accessibility',
+    `--extra-headers=${headers}`, '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking',
+  ]
+  const env = { ...process.env, CHROME_PATH: process.env.CHROME_PATH ?? '/usr/bin/chromium' }
+  // On a busy machine Lighthouse sometimes loses its trace (NO_NAVSTART) and asks to be run again: once more.
+  await runCommand('npx', args, { env, timeoutMs: 150_000 }).catch((err: Error) => {
+    log(`lighthouse failed (${err.message}); running it once more`)
+    return runCommand('npx', args, { env, timeoutMs: 150_000 })
+  })
   const lh = JSON.parse(readFileSync(report, 'utf8')) as LighthouseReport
   const score = (key: string) => {
     const s = lh.categories[key]?.score

@@ -1,8 +1,10 @@
 import { spawn } from 'node:child_process'
 
 export class CommandError extends Error {
-  constructor(message: string, readonly output: string) {
+  readonly output: string
+  constructor(message: string, output: string) {
     super(message)
+    this.output = output
   }
 }
 

@@ -56,7 +56,7 @@ async function step(label: string, fn: () => Promise<Row | Row[]> | Row | Row[])
     const result = await fn()
     rows.push(...(Array.isArray(result) ? result : [result]))
   } catch (err) {
-    rows.push({ measurement: label, result: `failed: ${reason(err)}` })
+    rows.push({ measurement: label, result: 'failed', detail: `failed: ${reason(err)}` })
     log(`${label} failed: ${err instanceof Error ? (err.stack ?? err.message) : String(err)}`)
   }
   log(`${label} took ${seconds(performance.now() - t)}`)
@@ -102,6 +102,6 @@ try {
 
 rows.push({ measurement: '8 total bench time', result: seconds(performance.now() - started), detail: `setup, all measurements and clean-up; load average at end ${os.loadavg()[0].toFixed(2)}` })
 const order = (r: Row) => (r.measurement.startsWith('setup') ? 0.5 : Number(/^\d+/.exec(r.measurement)?.[0] ?? 99))
-const table = rows.filter((r) => !r.measurement.startsWith('setup') || r.result.startsWith('failed')).sort((a, b) => order(a) - order(b))
+const table = rows.filter((r) => !r.measurement.startsWith('setup') || r.result === 'failed').sort((a, b) => order(a) - order(b))
 console.log(formatTable(table))
-process.exit(table.some((r) => r.result.startsWith('failed')) ? 1 : 0)
+process.exit(table.some((r) => r.result === 'failed') ? 1 : 0)

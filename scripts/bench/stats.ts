@@ -42,4 +42,10 @@ export function formatTable(rows: Row[]): string {
   return [line(head), rule, ...rows.map(line)].join('\n')
 }
 
-export const reason = (err: unknown) => (err instanceof Error ? err.message : String(err)).split('\n')[0].slice(0, 160)
+/** One line for a failed row; for a command, with the last line it printed. */
+export function reason(err: unknown): string {
+  const message = (err instanceof Error ? err.message : String(err)).split('\n')[0]
+  const output = err && typeof err === 'object' ? (err as { output?: unknown }).output : undefined
+  const last = typeof output === 'string' ? output.trim().split('\n').pop()?.trim() : undefined
+  return (last ? `${message} (${last})` : message).slice(0, 200)
+}

@@ -20,6 +20,8 @@ afterAll(async () => {
 
 const SECONDS = Number(process.env.RELIABILITY_LOAD_SECONDS ?? 60)
 const POOL = 6000
+/** A request unanswered this long counts as hung (generous: a loaded 2-core machine is slow, not stuck). */
+const CLIENT_TIMEOUT_S = 30
 const CONNECTIONS = { board: 20, round: 15, completion: 30, assignment: 10 }
 type Kind = keyof typeof CONNECTIONS
 
@@ -34,6 +36,7 @@ describe('mixed load', () => {
     const days = [today.toISODate()!, today.plus({ days: 1 }).toISODate()!]
     const { ids: pool } = await makeTaskPool(POOL, poolDate, `Load check ${tag()}`)
     expect(pool).toHaveLength(POOL)
+    expect(days).not.toContain(poolDate)
 
     app = await startApp('app', { smtpPort: await freePort(), schedulerIntervalMs: 5000 })
     const cookies: Record<string, string> = {}
@@ -71,7 +74,7 @@ describe('mixed load', () => {
     const started = Date.now()
     const failures: Record<string, number> = {}
     const run = (kind: Kind, request: Parameters<typeof autocannon>[0]['requests'][number]) => {
-      const instance = autocannon({ url: app!.url, connections: CONNECTIONS[kind], duration: SECONDS, timeout: 10, requests: [request] })
+      const instance = autocannon({ url: app!.url, connections: CONNECTIONS[kind], duration: SECONDS, timeout: CLIENT_TIMEOUT_S, requests: [request] })
       instance.on('reqError', (error) => {
         const key = `${kind}: ${error.message} at ${((Date.now() - started) / 1000).toFixed(1)} s`
         failures[key] = (failures[key] ?? 0) + 1
@@ -144,6 +147,7 @@ describe('mixed load', () => {
       }),
     ])) as CannonResult[]
     const elapsedS = (Date.now() - started) / 1000
+
     const results: Record<Kind, CannonResult> = { board, round, completion, assignment }
 
     // The app stayed up and answered everything, never with a 5xx, never too slowly.

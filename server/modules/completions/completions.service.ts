@@ -2,6 +2,7 @@ import { bandFor, pickLimit, worstBand } from '#shared/readings/band'
 import { deriveReadings } from '#shared/readings/derive'
 import { CompletionInputSchema, type CompletionResult, type Reading } from '#shared/schemas/completion'
 import type { Person } from '#shared/schemas/person'
+import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { PersonEntity } from '../people/person.entity'
@@ -10,7 +11,7 @@ import { ParameterEntity } from '../parameters/parameter.entities'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
-import { CompletionEntity, ReadingEntity } from './completion.entities'
+import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
 import { createRecheck, startCriticalAlert } from './follow-ups'
 import { readingContextFor } from './reading-context'
 import { assertMayComplete } from './who-may-complete'
@@ -26,7 +27,9 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
   if (replay) {
     if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
-    return replay.response as CompletionResult
+    // The first attempt may have been cut off between its commit and recording its answer
+    // (the database went away): answer the retry from the stored completion instead.
+    return (replay.response as CompletionResult | null) ?? answerFromRecord(replay)
   }
   const task = await getTaskRow(taskId)
   // A finished task answers 409 with who finished it, before any question of whose it was.
@@ -88,6 +91,20 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
   await db().getRepository(CompletionEntity).update(data.completionId, { response: response as never })
   return response
+}
+
+async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
+  const [task, readings, recheck] = await Promise.all([
+    getTaskRow(row.taskId),
+    db().getRepository(ReadingEntity).find({ where: { completionId: row.id, amendmentId: IsNull() }, order: { id: 'ASC' } }),
+    db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: row.taskId }),
+  ])
+  return {
+    task: toTask(task, await loadTaskContext()),
+    readings: readings.map(({ parameterKey, value, unit, band, derived }) => ({ parameterKey, value, unit, band, derived })),
+    recheckTaskId: recheck?.id ?? null,
+    notes: [],
+  }
 }
 
 async function performerFor(person: Person, performedById: number | undefined): Promise<Person> {

@@ -55,6 +55,8 @@ reportsRouter.get('/audit', requireRole('manager', 'supervisor', 'observer'), as
   const q = ReportRangeSchema.and(z.object({ entity: z.string().max(20).optional() })).parse(req.query)
   const qb = db().getRepository(AuditEntity).createQueryBuilder('a').where('a.at BETWEEN :from AND :to', { from: new Date(`${q.from}T00:00:00Z`), to: new Date(`${q.to}T23:59:59.999Z`) })
   if (q.entity) qb.andWhere('a.entity = :entity', { entity: q.entity })
-  const rows = (await qb.orderBy('a.id', 'DESC').take(1000).getMany()).map((r) => ({ ...r, at: r.at.toISOString(), before: JSON.stringify(r.before), after: JSON.stringify(r.after) }))
+  const found = await qb.orderBy('a.id', 'DESC').take(1000).getMany()
+  // before/after travel as JSON text, the same in the JSON answer and in a CSV cell.
+  const rows = found.map((r) => ({ ...r, at: r.at.toISOString(), before: JSON.stringify(r.before), after: JSON.stringify(r.after) }))
   send(res, q.format, `audit-${q.from}-${q.to}`, rows, ['id', 'at', 'personId', 'entity', 'entityId', 'action', 'before', 'after'])
 })

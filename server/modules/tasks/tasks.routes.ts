@@ -3,6 +3,7 @@ import { IdParamSchema } from '#shared/schemas/facility'
 import { RoundQuerySchema } from '#shared/schemas/round'
 import { BulkMoveInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
 import { z } from 'zod'
+import { forbidden } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
 import { publishTask } from '../../realtime/task-events'
 import { getBoard } from './board.service'
@@ -24,6 +25,8 @@ tasksRouter.get('/round-sheet', requireRole('manager', 'supervisor', 'technician
     .object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD'), personId: z.coerce.number().int().positive().optional(), areaId: z.coerce.number().int().positive().optional() })
     .refine((x) => x.personId || x.areaId, { message: 'Choose a person or an area', path: ['personId'] })
     .parse(req.query)
+  // A technician prints their own sheet or an area's, not a colleague's.
+  if (req.user!.role === 'technician' && q.personId && q.personId !== req.user!.id) throw forbidden('Technicians can print their own round sheet or an area’s.')
   res.json(await getRoundSheet(q.date, q))
 })
 tasksRouter.get('/board', signedIn, async (req, res) => {

@@ -28,10 +28,13 @@ export async function facilityToday(): Promise<DateTime> {
   return DateTime.now().setZone((await getFacility()).timeZone).startOf('day')
 }
 
-/** The first day after today on which every one of these people has a shift (so they can be assigned). */
-export async function dayWithShifts(ids: number[]): Promise<string> {
+/**
+ * The first day from `fromDays` after today on which every one of these people has a shift (so
+ * they can be assigned). Later than the boards the load reads, so a task pool does not swell them.
+ */
+export async function dayWithShifts(ids: number[], fromDays = 3): Promise<string> {
   const today = await facilityToday()
-  for (let d = 1; d <= 28; d++) {
+  for (let d = fromDays; d <= 28; d++) {
     const date = today.plus({ days: d }).toISODate()!
     const onShift = new Set((await db().getRepository(ShiftEntity).find({ where: { date, personId: In(ids) } })).map((s) => s.personId))
     if (ids.every((id) => onShift.has(id))) return date

@@ -3,6 +3,7 @@ import {
   type ColumnFiltersState, type SortingState,
 } from '@tanstack/react-table'
 import { useMemo, useState } from 'react'
+import { Link } from 'react-router-dom'
 import type { Area, System, Tank } from '#shared/schemas/facility'
 import { formatLitres, nameById } from '../utils/format'
 import { DataTable } from './data-table'
@@ -33,7 +34,14 @@ export function TanksTable({ tanks, areas, systems, canEdit, onEdit }: TanksTabl
     const areaName = nameById(areas)
     const systemName = nameById(systems)
     return [
-      column.accessor('code', { header: 'Code' }),
+      column.accessor('code', {
+        header: 'Code',
+        cell: (info) => (
+          <Link to={`/tanks/${info.row.original.id}`} className="font-semibold text-tide-800 underline">
+            {info.getValue()}
+          </Link>
+        ),
+      }),
       column.accessor('name', { header: 'Name' }),
       column.accessor((t) => areaName(t.areaId), {
         id: 'area',

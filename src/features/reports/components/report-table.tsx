@@ -20,7 +20,7 @@ interface ReportTableProps<T> {
 /** A dense table for desktop and paper that scrolls sideways on a phone, first column kept in view. */
 export function ReportTable<T>({ caption, columns, rows, rowKey, emptyText }: ReportTableProps<T>) {
   return (
-    <div className="overflow-x-auto rounded-xl border border-tide-200 bg-white print:overflow-visible print:border-0">
+    <div tabIndex={0} role="region" aria-label="Report table" className="overflow-x-auto rounded-xl border border-tide-200 bg-white print:overflow-visible print:border-0">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead className="bg-tide-100 text-tide-800">

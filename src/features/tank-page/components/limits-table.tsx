@@ -8,7 +8,7 @@ export function LimitsTable({ limits }: { limits: TankLimit[] }) {
   const rows = limits.filter(hasLimits)
   if (rows.length === 0) return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No limits apply here yet.</p>
   return (
-    <div className="overflow-x-auto rounded-xl border border-tide-200 bg-white">
+    <div tabIndex={0} role="region" aria-label="Limits for this tank" className="overflow-x-auto rounded-xl border border-tide-200 bg-white">
       <table className="w-full min-w-[34rem] text-left text-sm">
         <caption className="sr-only">Limits that apply at this tank</caption>
         <thead className="bg-tide-100 text-tide-800">
