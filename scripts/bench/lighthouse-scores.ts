@@ -9,7 +9,7 @@ interface LighthouseReport {
 }
 
 /** Measurement 6: Lighthouse (default mobile settings) on the signed-in Round page. */
-export async function measureLighthouse(url: string, cookie: string, workDir: string): Promise<Row> {
+export async function measureLighthouse(url: string, cookie: string, workDir: string, client: string): Promise<Row> {
   const headers = path.join(workDir, 'lighthouse-headers.json')
   const report = path.join(workDir, 'lighthouse-round.json')
   writeFileSync(headers, JSON.stringify({ Cookie: cookie }))
@@ -42,6 +42,6 @@ export async function measureLighthouse(url: string, cookie: string, workDir: st
   return {
     measurement: '6 Lighthouse Round page (mobile)',
     result: `performance ${score('performance')}, accessibility ${score('accessibility')}`,
-    detail: `FCP ${metric('first-contentful-paint')}, LCP ${metric('largest-contentful-paint')}, TBT ${metric('total-blocking-time')}, CLS ${lh.audits['cumulative-layout-shift']?.numericValue?.toFixed(3) ?? 'n/a'}; savings: ${savings.join(', ') || 'none listed'}; run ${seconds(performance.now() - start)}`,
+    detail: `FCP ${metric('first-contentful-paint')}, LCP ${metric('largest-contentful-paint')}, TBT ${metric('total-blocking-time')}, CLS ${lh.audits['cumulative-layout-shift']?.numericValue?.toFixed(3) ?? 'n/a'}; savings: ${savings.join(', ') || 'none listed'}; ${client}; run ${seconds(performance.now() - start)}`,
   }
 }

@@ -25,6 +25,6 @@ export async function measureMaterialise(zone: string): Promise<Row> {
   return {
     measurement: `1 materialise ${HORIZON_DAYS}-day horizon`,
     result: `${seconds(wall)}, ${Math.round(created / (wall / 1000)).toLocaleString('en')} tasks/s`,
-    detail: `${created.toLocaleString('en')} tasks from ${routines} routines (${Math.round(created / HORIZON_DAYS).toLocaleString('en')}/day): inserts ${seconds(insertsDone - start)}, then assignee rules and fasting holds ${seconds(wall - (insertsDone - start))}`,
+    detail: `${created.toLocaleString('en')} tasks from ${routines} routines (${Math.round(created / HORIZON_DAYS).toLocaleString('en')}/day): planning and inserts ${seconds(insertsDone - start)}, then assignee rules and fasting holds ${seconds(wall - (insertsDone - start))}`,
   }
 }

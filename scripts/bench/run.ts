@@ -94,7 +94,7 @@ try {
   await step('2 board', () => measureBoard(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1)))
   await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2)))
   await step('4 socket fan-out', () => measureSocketFanout(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(3)))
-  await step('6 lighthouse', () => measureLighthouse(url(), need(cookies.technician, 'a signed-in technician'), workDir))
+  await step('6 lighthouse', () => measureLighthouse(url(), need(cookies.technician, 'a signed-in technician'), workDir, clientDir ? 'fresh build' : 'dist/ (the fresh build failed)'))
   await step('7 morning round', () => measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')))
 } finally {
   await cleanUp()

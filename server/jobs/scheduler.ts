@@ -42,6 +42,12 @@ export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
         runner = ds.createQueryRunner()
         holding = false
       }
+      if (holding) {
+        // The lock lives and dies with its connection: after a database restart it is gone (and
+        // another process may hold it), so check it is still ours before every tick.
+        const [row] = await runner.query('SELECT IS_USED_LOCK(?) = CONNECTION_ID() AS mine', [lockName])
+        holding = Number(row?.mine) === 1
+      }
       if (!holding) {
         const [row] = await runner.query('SELECT GET_LOCK(?, 0) AS got', [lockName])
         holding = Number(row?.got) === 1

@@ -2,7 +2,7 @@
 // be killed), the private MariaDB of scripts/reliability.sh (so it can be killed and restarted),
 // a Redis server for the two-process test, and a small HTTP client with a hard time limit.
 import { spawn, type ChildProcess } from 'node:child_process'
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs'
+import { existsSync, mkdirSync, readFileSync, readdirSync, readlinkSync, rmSync } from 'node:fs'
 import net from 'node:net'
 import path from 'node:path'
 import { setTimeout as sleep } from 'node:timers/promises'
@@ -337,4 +337,40 @@ export const percentile = (values: number[], p: number) => {
   if (!values.length) return 0
   const sorted = [...values].sort((a, b) => a - b)
   return Math.round(sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))])
+}
+
+// ---------------------------------------------------------------- the scheduler's leader
+
+/**
+ * Which of these processes holds the scheduler's GET_LOCK: MariaDB names the holder's connection,
+ * the process list gives that connection's client port, and /proc says which process owns it.
+ */
+export async function schedulerLeader(ds: DataSource, processes: AppProcess[], lockName = 'roundtide_scheduler'): Promise<AppProcess | null> {
+  const [row] = (await ds.query('SELECT p.HOST AS host FROM information_schema.PROCESSLIST p WHERE p.ID = IS_USED_LOCK(?)', [lockName])) as Array<{ host: string }>
+  const port = Number(row?.host?.split(':').at(-1))
+  if (!port) return null
+  const hexPort = port.toString(16).toUpperCase().padStart(4, '0')
+  const inodes = new Set<string>()
+  for (const table of ['/proc/net/tcp', '/proc/net/tcp6']) {
+    if (!existsSync(table)) continue
+    for (const line of readFileSync(table, 'utf8').split('\n').slice(1)) {
+      const cols = line.trim().split(/\s+/)
+      if (cols[1]?.endsWith(`:${hexPort}`)) inodes.add(cols[9])
+    }
+  }
+  for (const p of processes) {
+    if (!p.alive()) continue
+    for (const fd of readdirSync(`/proc/${p.pid}/fd`)) {
+      const target = (() => {
+        try {
+          return readlinkSync(`/proc/${p.pid}/fd/${fd}`)
+        } catch {
+          return ''
+        }
+      })()
+      const inode = /^socket:\[(\d+)\]$/.exec(target)?.[1]
+      if (inode && inodes.has(inode)) return p
+    }
+  }
+  return null
 }

@@ -7,7 +7,7 @@ import { bathForm, type BathValues } from '../utils/record-schemas'
 import { BathCautions } from './bath-cautions'
 import { FormCard } from './form-card'
 import { Notice } from './notice'
-import { TextAreaField } from './text-area-field'
+import { TextAreaField } from '../../../components/ui/text-area-field'
 
 const empty: BathValues = { product: '', targetMgL: '', volumeL: '', purityPct: '100', gramsWeighed: '', minutes: '', observations: '' }
 

@@ -1,7 +1,7 @@
 import { useRecordForm } from '../hooks/use-record-form'
 import { noteForm, type NoteValues } from '../utils/record-schemas'
 import { FormCard } from './form-card'
-import { TextAreaField } from './text-area-field'
+import { TextAreaField } from '../../../components/ui/text-area-field'
 
 /** A free note; a manager can file it as a review (e.g. clearing quarantine). */
 export function NoteForm({ batchId, eventId, canReview }: { batchId: number; eventId: number | null; canReview: boolean }) {

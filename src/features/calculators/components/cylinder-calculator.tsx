@@ -1,6 +1,6 @@
 import { useState } from 'react'
 import { estimateSupply, PUBLISHED_PSI_FACTORS, PUBLISHED_SAFE_RESIDUAL_PSI, type CylinderSettings } from '#shared/oxygen-supply/cylinder'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 import { attempt, formatHours, parseDecimal } from '../utils/numbers'
 import { NumberInput } from './number-input'
 import { ResultBox } from './result-box'

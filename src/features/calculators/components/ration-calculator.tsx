@@ -3,7 +3,7 @@ import { planDailyRation } from '#shared/feeding/ration'
 import { attempt, formatAmount, parseDecimal } from '../utils/numbers'
 import { NumberInput } from './number-input'
 import { ResultBox } from './result-box'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 /** A day's feed from head count, mean weight and feeding rate, split into equal feeds. */
 export function RationCalculator() {

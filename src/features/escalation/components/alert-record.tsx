@@ -3,7 +3,7 @@ import { toast } from 'sonner'
 import type { EscalationRecord } from '#shared/schemas/ladder'
 import { Button } from '../../../components/ui/button'
 import { useAcknowledge } from '../api/use-acknowledge'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 import { NotificationList } from './notification-list'
 
 const KIND_TEXT: Record<string, string> = { missed_task: 'Missed task', critical_reading: 'Critical reading' }

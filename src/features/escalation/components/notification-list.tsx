@@ -1,5 +1,5 @@
 import type { EscalationRecord } from '#shared/schemas/ladder'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 import { DeliveryStatus } from './delivery-status'
 
 type Notification = EscalationRecord['notifications'][number]

@@ -1,9 +1,9 @@
 import { Clock, Crosshair, HeartPulse, UserRound } from 'lucide-react'
 import type { ReactNode } from 'react'
 import type { Task } from '#shared/schemas/task'
-import { formatDay, formatWhen } from '../utils/zone-format'
+import { formatDay, formatWhen } from '../../../lib/zone-format'
 import { BandLabel } from './band-label'
-import { TaskStatusLabel } from './task-status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (

@@ -1,7 +1,7 @@
 import { Mail, Phone, PhoneOff, UserRound } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OnCallSummary } from '../api/on-call-queries'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 
 const bigLink = 'inline-flex min-h-12 items-center justify-center gap-2 rounded-lg px-4 font-semibold'
 

@@ -1,6 +1,6 @@
 import { NotebookPen } from 'lucide-react'
 import type { HandoverNote } from '#shared/schemas/roster'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 import { HandoverNoteForm } from './handover-note-form'
 import { OnCallSection } from './on-call-section'
 

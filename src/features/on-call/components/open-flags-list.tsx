@@ -1,10 +1,10 @@
 import { Flag } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OpenFlag } from '../api/on-call-queries'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 import { BandLabel } from './band-label'
 import { OnCallSection } from './on-call-section'
-import { TaskStatusLabel } from './task-status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 /** Flags from the last three days, each with how its recheck stands. */
 export function OpenFlagsList({ flags, timeZone }: { flags: OpenFlag[]; timeZone: string }) {

@@ -4,7 +4,7 @@ import { toast } from 'sonner'
 import { Button } from '../../../components/ui/button'
 import type { WaitingAlert } from '../api/on-call-queries'
 import { useAcknowledgeAlert } from '../api/use-acknowledge-alert'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 import { OnCallSection } from './on-call-section'
 
 const KIND_TEXT: Record<string, string> = { missed_task: 'Missed task', critical_reading: 'Critical reading' }

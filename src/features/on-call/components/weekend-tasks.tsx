@@ -1,8 +1,8 @@
 import { CalendarRange } from 'lucide-react'
 import { TASK_STATUSES, type Task } from '#shared/schemas/task'
-import { formatDay } from '../utils/zone-format'
+import { formatDay } from '../../../lib/zone-format'
 import { OnCallSection } from './on-call-section'
-import { STATUS_LOOK, TaskStatusLabel } from './task-status-label'
+import { STATUS_LOOK, TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 /** The weekend's work: how much is in each state, then each task in time order. */
 export function WeekendTasks({ from, to, tasks }: { from: string; to: string; tasks: Task[] }) {

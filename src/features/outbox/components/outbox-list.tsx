@@ -2,7 +2,7 @@ import { clsx } from 'clsx'
 import { Inbox, Mail } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OutboxMessage } from '#shared/schemas/ladder'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 
 /** The mail the app sent, newest first; choosing one puts its id in the address. */
 export function OutboxList({ messages, selectedId, timeZone }: { messages: OutboxMessage[]; selectedId: number | null; timeZone: string }) {

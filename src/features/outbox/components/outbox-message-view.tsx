@@ -2,7 +2,7 @@ import { ArrowLeft, ExternalLink, SquareCheckBig } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OutboxMessage } from '#shared/schemas/ladder'
 import { messageLinks } from '../utils/message-links'
-import { formatWhen } from '../utils/zone-format'
+import { formatWhen } from '../../../lib/zone-format'
 
 const linkButton = 'inline-flex min-h-11 items-center gap-2 rounded-lg px-4 font-semibold'
 

@@ -7,7 +7,7 @@ import { Field } from '../../../components/ui/field'
 import { ApiError } from '../../../lib/api-client'
 import { useAddCylinder } from '../api/use-oxygen-mutations'
 import { parseDecimal } from '../utils/format'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 const blank = { code: '', label: '', method: 'metric' as 'metric' | 'psi-factor', size: '', reserve: '20', flow: '' }
 

@@ -1,7 +1,7 @@
 import { Controller, useFormContext } from 'react-hook-form'
 import type { Area, Batch, Tank } from '#shared/schemas/facility'
 import type { EventFormValues } from '../utils/event-form'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 import { TankChecklist } from './tank-checklist'
 
 const choice = 'flex min-h-11 cursor-pointer items-center gap-2 rounded-lg border border-tide-200 px-3 has-[:checked]:border-tide-600 has-[:checked]:bg-tide-50'

@@ -7,7 +7,7 @@ import { Button } from '../../../components/ui/button'
 import { ErrorState, LoadingState } from '../../../components/ui/page-state'
 import { playbookQueries } from '../api/playbook-queries'
 import { formatLongDate } from '../utils/zone-format'
-import { TaskStatusLabel } from './task-status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 function byDate(tasks: Task[]) {
   const days = new Map<string, Task[]>()

@@ -4,8 +4,8 @@ import { Field } from '../../../components/ui/field'
 import { EVENT_KIND_LABELS } from '../utils/kind-labels'
 import { asNumber } from '../utils/playbook-form-values'
 import { FastingCaution } from './fasting-caution'
-import { SelectField } from './select-field'
-import { TextAreaField } from './text-area-field'
+import { SelectField } from '../../../components/ui/select-field'
+import { TextAreaField } from '../../../components/ui/text-area-field'
 
 export function PlaybookBasicsFields() {
   const { register, watch, formState: { errors } } = useFormContext<PlaybookInput>()

@@ -11,8 +11,8 @@ import { defaultEventValues, eventFormSchema, LOCAL_START, type EventFormValues 
 import { EventTargetFields } from './event-target-fields'
 import { EventTaskPreview } from './event-task-preview'
 import { FastingCaution } from './fasting-caution'
-import { SelectField } from './select-field'
-import { TextAreaField } from './text-area-field'
+import { SelectField } from '../../../components/ui/select-field'
+import { TextAreaField } from '../../../components/ui/text-area-field'
 
 type Props = { playbooks: Playbook[]; tanks: Tank[]; areas: Area[]; batches: Batch[]; zone: string; onStarted: (event: FacilityEvent) => void; onClose: () => void }
 

@@ -5,8 +5,8 @@ import type { PlaybookInput } from '#shared/schemas/playbook'
 import { Field } from '../../../components/ui/field'
 import { asNumber, asTimeOrNull } from '../utils/playbook-form-values'
 import { describeStepTiming } from '../utils/step-words'
-import { SelectField } from './select-field'
-import { TextAreaField } from './text-area-field'
+import { SelectField } from '../../../components/ui/select-field'
+import { TextAreaField } from '../../../components/ui/text-area-field'
 
 type Props = { index: number; count: number; onMove: (to: number) => void; onRemove: () => void }
 

@@ -4,7 +4,7 @@ import { ROLES, ROLE_LABELS, type Role } from '#shared/schemas/person'
 import type { AssigneeRule, RoutineInput } from '#shared/schemas/routine'
 import { routineReferenceQueries } from '../api/routine-reference-queries'
 import { FormSection } from './form-section'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 type Kind = AssigneeRule['kind']
 

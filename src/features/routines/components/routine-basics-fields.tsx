@@ -3,7 +3,7 @@ import { CATEGORY_LABELS, ROUTINE_CATEGORIES, type RoutineInput } from '#shared/
 import { Field } from '../../../components/ui/field'
 import { FormSection } from './form-section'
 import { PriorityChoice } from './priority-choice'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 export function RoutineBasicsFields() {
   const { register, formState: { errors } } = useFormContext<RoutineInput>()

@@ -1,7 +1,7 @@
 import type { Weekday } from '#shared/schedule/build-rule'
 import { Field } from '../../../components/ui/field'
 import { RULE_KIND_LABELS, WEEKDAYS, type NthWeek, type RuleDraft, type RuleKind } from '../utils/rule-spec'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 import { TimeList } from './time-list'
 import { WeekdayPicker } from './weekday-picker'
 

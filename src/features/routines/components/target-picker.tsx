@@ -6,7 +6,7 @@ import { useTargetOptions } from '../api/use-target-options'
 import { TARGET_KIND_LABELS } from '../utils/target-text'
 import { CheckboxList } from './checkbox-list'
 import { FormSection } from './form-section'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 export function TargetPicker() {
   const { register, setValue, formState: { errors } } = useFormContext<RoutineInput>()

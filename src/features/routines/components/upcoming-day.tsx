@@ -1,7 +1,7 @@
 import { useState } from 'react'
 import type { Task } from '#shared/schemas/task'
 import { formatLocalDate, longWeekdayOf } from '../utils/zone-dates'
-import { TaskStatusLabel } from './task-status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 // A routine over many tanks makes dozens of tasks a day; the first few show the pattern.
 const FIRST_FEW = 8

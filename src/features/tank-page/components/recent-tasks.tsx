@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom'
 import type { Task } from '#shared/schemas/task'
 import { formatLocalDay } from '../utils/format'
 import { BandBadge } from './band-badge'
-import { TaskStatusLabel } from './task-status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 /** The tank's latest tasks, newest first, each opening its own record. */
 export function RecentTasks({ tasks }: { tasks: Task[] }) {

@@ -3,6 +3,7 @@ import { forwardRef, useId, type TextareaHTMLAttributes } from 'react'
 
 type Props = TextareaHTMLAttributes<HTMLTextAreaElement> & { label: string; error?: string }
 
+/** A labelled text area with its error under it, like the Field input. */
 export const TextAreaField = forwardRef<HTMLTextAreaElement, Props>(function TextAreaField({ label, error, className, ...props }, ref) {
   const id = useId()
   return (

@@ -3,7 +3,7 @@ import { forwardRef, useId, type ReactNode, type SelectHTMLAttributes } from 're
 
 type SelectFieldProps = SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string; hint?: ReactNode }
 
-/** A labelled select with its error under it, like ui/field's input. */
+/** A labelled select with its error under it, like the Field input. */
 export const SelectField = forwardRef<HTMLSelectElement, SelectFieldProps>(function SelectField(
   { label, error, hint, className, children, ...props }, ref,
 ) {
