@@ -1,3 +1,4 @@
+import compression from 'compression'
 import express from 'express'
 import helmet from 'helmet'
 import { pinoHttp } from 'pino-http'
@@ -49,6 +50,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
       },
     }),
   )
+  // The board of a large facility is megabytes of JSON and the client bundle is half a megabyte: gzip both.
+  app.use(compression())
   app.use(
     pinoHttp({
       logger,

@@ -41,6 +41,12 @@ async function signInAs(email: string) {
 }
 
 const row = (page: Page, title: string) => page.getByRole('button', { name: new RegExp(`^\\d\\d:\\d\\d ${title} `) })
+/** Opens a task unless it is open already (the round opens the first task due by itself). */
+async function openTask(page: Page, title: string) {
+  const button = row(page, title)
+  await button.waitFor()
+  if ((await button.getAttribute('aria-expanded')) !== 'true') await button.click()
+}
 const doneButton = (page: Page) => page.getByRole('button', { name: 'Done', exact: true })
 
 describe('the round on a phone', () => {
@@ -61,7 +67,7 @@ describe('the round on a phone', () => {
     await screenshot(page, 'round-phone-start')
 
     // Task 1: tap, type two readings, tap Done.
-    await row(page, 'Water check 1').click()
+    await openTask(page, 'Water check 1')
     await page.getByLabel('Dissolved oxygen').fill('6.8')
     await page.getByLabel('Temperature').fill('28.4')
     await page.getByText('DO saturation').waitFor()
@@ -85,7 +91,7 @@ describe('the round on a phone', () => {
     // Task 3 with the network cut: kept on the phone, then sent when the network is back.
     await context.setOffline(true)
     await page.getByRole('status', { name: 'Connection: Offline' }).waitFor()
-    await row(page, 'Water check 3').click()
+    await openTask(page, 'Water check 3')
     await page.getByLabel('Dissolved oxygen').fill('7.1')
     await page.getByLabel('Temperature').fill('27.9')
     await doneButton(page).click()
@@ -129,7 +135,7 @@ describe('the round on a phone', () => {
     await row(mePage.page, 'Shared DO check').waitFor({ state: 'detached' })
 
     // While my form is open: a photo goes up at once, then the supervisor completes the task.
-    await row(mePage.page, 'Feed check').click()
+    await openTask(mePage.page, 'Feed check')
     await mePage.page.locator('input[type=file]').setInputFiles({ name: 'tank.png', mimeType: 'image/png', buffer: TINY_PNG })
     await mePage.page.getByText('Photo added').waitFor()
     expect(await db().getRepository(PhotoEntity).countBy({ taskId: mine.id })).toBe(1)
@@ -149,7 +155,7 @@ describe('the round on a phone', () => {
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, tech.email)
     await context.setOffline(true)
-    await row(page, 'Evening temperature').click()
+    await openTask(page, 'Evening temperature')
     await page.getByLabel('Temperature').fill('27.5')
     await doneButton(page).click()
     await page.getByText('1 waiting to send').waitFor()
@@ -158,7 +164,7 @@ describe('the round on a phone', () => {
     await agent.post(`/api/tasks/${task.id}/completion`).send(completion({ temp_c: 28.0 })).expect(200)
     await context.setOffline(false)
     await page.getByText('1 not sent').waitFor({ timeout: 15_000 })
-    await row(page, 'Evening temperature').click()
+    await openTask(page, 'Evening temperature')
     await page.getByRole('alert').filter({ hasText: 'Odile Supervisor already finished this task' }).waitFor()
     await page.getByText('Done by Odile Supervisor').waitFor()
     await viewShot(page, 'round-phone-conflict')

@@ -13,7 +13,7 @@ import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
 import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
 import { createRecheck, startCriticalAlert } from './follow-ups'
-import { readingContextFor } from './reading-context'
+import { readingContextFor, type ReadingContext } from './reading-context'
 import { assertMayComplete } from './who-may-complete'
 
 /**
@@ -39,13 +39,13 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     throw conflict('This task changed since you opened it (it may have been moved or reassigned). Check it and try again.', { currentVersion: task.version })
   }
 
+  const context = await readingContextFor(task)
   const doneAt = data.doneAt ? new Date(data.doneAt) : new Date()
   const performer = await performerFor(person, data.performedById)
   if (doneAt.getTime() > Date.now() + 60_000) throw validationError('A task cannot be completed in the future.', { doneAt: ['In the future'] })
-  const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings) : { rows: [] as Reading[], notes: [] as string[] }
+  const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings, context) : { rows: [] as Reading[], notes: [] as string[] }
   const flag = data.outcome === 'done' ? worstBand(readings.rows.map((r) => r.band)) : 'ok'
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
-  const context = await readingContextFor(task)
 
   const result = await db().transaction(async (manager) => {
     const claimed = await manager
@@ -126,7 +126,7 @@ async function assertStillOpen(task: TaskRow) {
   })
 }
 
-async function judgeReadings(task: TaskRow, values: Record<string, number>) {
+async function judgeReadings(task: TaskRow, values: Record<string, number>, context: ReadingContext) {
   const parameters = new Map((await db().getRepository(ParameterEntity).find()).map((p) => [p.key, p]))
   const fieldErrors: Record<string, string[]> = {}
   for (const key of task.requiredReadings) {
@@ -144,7 +144,6 @@ async function judgeReadings(task: TaskRow, values: Record<string, number>) {
     const first = Object.values(fieldErrors)[0][0]
     throw validationError(`Nothing was saved: ${first}.`, fieldErrors)
   }
-  const context = await readingContextFor(task)
   const derived = deriveReadings(values, context.salinitySetpoint)
   const rows: Reading[] = [...Object.entries(values).map(([k, v]) => [k, v, false] as const), ...Object.entries(derived.values).map(([k, v]) => [k, v, true] as const)].map(
     ([parameterKey, value, isDerived]) => ({

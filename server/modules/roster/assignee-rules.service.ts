@@ -63,7 +63,11 @@ export async function applyAssigneeRules(from: string, to: string): Promise<numb
     if (assignee !== task.assigneeId) updates.set(task.id, assignee)
   }
   const byAssignee = new Map<number | null, number[]>()
-  for (const [id, assigneeId] of updates) byAssignee.set(assigneeId, [...(byAssignee.get(assigneeId) ?? []), id])
+  for (const [id, assigneeId] of updates) {
+    const ids = byAssignee.get(assigneeId) ?? []
+    ids.push(id)
+    byAssignee.set(assigneeId, ids)
+  }
   for (const [assigneeId, ids] of byAssignee) {
     for (let i = 0; i < ids.length; i += 1000) {
       await db().getRepository(TaskEntity).update({ id: In(ids.slice(i, i + 1000)), assignedManually: false }, { assigneeId, version: () => 'version + 1' })

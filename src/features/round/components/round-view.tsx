@@ -44,6 +44,17 @@ function RoundContent({ personId, date, status }: Props) {
   useEffect(() => startOutbox(queryClient, personId), [queryClient, personId])
 
   const round = query.data
+  // Open the first task due now when a day's round first arrives, so the walk starts with typing
+  // (React's "adjust state while rendering" pattern: runs once per day shown).
+  const [autoOpenedFor, setAutoOpenedFor] = useState<string | null>(null)
+  if (round && autoOpenedFor !== round.date) {
+    setAutoOpenedFor(round.date)
+    const first = round.tasks.find((t) => (t.status === 'open' || t.status === 'overdue') && t.assigneeId === personId && !t.recheckOfTaskId && !outbox.byTask.has(t.id))
+    if (first) {
+      setExpandedId(first.id)
+      setAdvancedTo(first.id)
+    }
+  }
   const header = (done = 0, total = 0) => (
     <RoundHeader date={round?.date ?? date} done={done} total={total} waiting={outbox.waiting} failed={outbox.failed} status={status} />
   )
