@@ -11,7 +11,7 @@ import { runEscalations } from '#server/modules/escalation/escalate'
 import { createLadder } from '#server/modules/escalation/ladders.service'
 import { NotificationEntity } from '#server/modules/escalation/escalation.entities'
 import { OnCallEntity } from '#server/modules/roster/roster.entities'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
 import { messagesTo, startMailCatcher } from '#tests/support/mail-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
@@ -38,11 +38,14 @@ async function missedTask(missedAt: Date) {
   // The on-call duty covers only this alert's window, so the on-call step reaches exactly them.
   await db().getRepository(OnCallEntity).save({ personId: onCall.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(missedAt.getTime() - 60 * MIN), endsAt: new Date(missedAt.getTime() + 600 * MIN) })
   const due = new Date(missedAt.getTime() - 60 * MIN)
-  const task = await makeTankTask(tanks[0], { assigneeId: assignee.id, dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2031-01-01T07:30:00' })
+  const task = await makeTankTask(tanks[0], { title: `Morning tank check ${uniqueCode('m')}`, assigneeId: assignee.id, dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2031-01-01T07:30:00' })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
   const alert = await db().getRepository(AlertEntity).findOneByOrFail({ taskId: task.id, kind: 'missed_task' })
   return { task, assignee, onCall, alert }
 }
+
+/** Mail about this test's own task: other files' alerts may reach the same on-call person. */
+const mailsAbout = async (task: { title: string }, email: string) => (await messagesTo(email)).filter((m) => m.subject.includes(task.title))
 
 const tick = async (at: Date) => {
   await runEscalations(at)
@@ -56,27 +59,27 @@ describe('missed-task escalation by e-mail', () => {
     const ladder = await createLadder({ name: 'Assignee then on call', steps: [{ afterMinutes: 0, notify: [{ kind: 'assignee' }] }, { afterMinutes: 20, notify: [{ kind: 'on_call' }] }] })
     await db().getRepository(AlertEntity).update(alert.id, { ladderId: ladder.id })
     await tick(new Date(missedAt.getTime() + 2000))
-    const first = await messagesTo(assignee.email)
+    const first = await mailsAbout(task, assignee.email)
     expect(first).toHaveLength(1)
-    expect(first[0].subject).toMatch(/^MISSED: Morning tank check at .+, 1 h late$/)
+    expect(first[0].subject).toMatch(new RegExp(`^MISSED: ${task.title} at .+, 1 h late$`))
     expect(first[0].text).toContain(`/tasks/${task.id}`)
     expect(first[0].text).toMatch(/\/ack\/\d+\.\d+\./)
     expect(first[0].html).toContain('Acknowledge')
-    expect(await messagesTo(onCall.email)).toHaveLength(0)
+    expect(await mailsAbout(task, onCall.email)).toHaveLength(0)
     await tick(new Date(missedAt.getTime() + 19 * MIN))
-    expect(await messagesTo(onCall.email)).toHaveLength(0)
+    expect(await mailsAbout(task, onCall.email)).toHaveLength(0)
     await tick(new Date(missedAt.getTime() + 21 * MIN))
-    const second = await messagesTo(onCall.email)
+    const second = await mailsAbout(task, onCall.email)
     expect(second).toHaveLength(1)
     expect(second[0].text).toContain('step 2 of the escalation')
-    expect(await messagesTo(assignee.email)).toHaveLength(1)
+    expect(await mailsAbout(task, assignee.email)).toHaveLength(1)
   })
 
   test('following the acknowledge link records who answered and stops further steps; reuse and forgery are refused', async () => {
     const missedAt = new Date(Date.now() + 9000 * MIN)
-    const { assignee, alert } = await missedTask(missedAt)
+    const { assignee, alert, task } = await missedTask(missedAt)
     await tick(new Date(missedAt.getTime() + 1000))
-    const [message] = await messagesTo(assignee.email)
+    const [message] = await mailsAbout(task, assignee.email)
     const path = /\/ack\/[\w.-]+/.exec(message.text)![0]
     await request(t.app).get(path).expect(200)
     const res = await request(t.app).post(path).type('form').send({}).expect(200)
@@ -103,7 +106,7 @@ describe('missed-task escalation by e-mail', () => {
 
   test('two schedulers against one database send each message once', async () => {
     const missedAt = new Date(Date.now() - 2 * MIN)
-    const { assignee } = await missedTask(missedAt)
+    const { assignee, task } = await missedTask(missedAt)
     const lockName = `escalation_${Date.now()}`
     const a = startScheduler(db(), { intervalMs: 3_600_000, lockName, mail })
     const b = startScheduler(db(), { intervalMs: 3_600_000, lockName, mail })
@@ -111,12 +114,12 @@ describe('missed-task escalation by e-mail', () => {
     await Promise.all([a.stop(), b.stop()])
     // Both also race deliveries directly: the claim on each row still lets only one send it.
     await Promise.all([deliverPending(mail.config, mail.transport, new Date()), deliverPending(mail.config, mail.transport, new Date())])
-    expect(await messagesTo(assignee.email)).toHaveLength(1)
+    expect(await mailsAbout(task, assignee.email)).toHaveLength(1)
   })
 
   test('when the mail server is down, the message is kept, retried with back-off, and sent when it returns', async () => {
     const missedAt = new Date(Date.now() + 17000 * MIN)
-    const { assignee, alert } = await missedTask(missedAt)
+    const { assignee, alert, task } = await missedTask(missedAt)
     const down = await startLocalSmtp(0)
     const port = down.port
     await down.close()
@@ -132,7 +135,7 @@ describe('missed-task escalation by e-mail', () => {
     try {
       const retried = await deliverPending(deadConfig, deadTransport, new Date(missedAt.getTime() + 5 * MIN))
       expect(retried.sent).toBeGreaterThan(0)
-      expect(await messagesTo(assignee.email)).toHaveLength(1)
+      expect(await mailsAbout(task, assignee.email)).toHaveLength(1)
     } finally {
       deadTransport.close()
       await back.close()
