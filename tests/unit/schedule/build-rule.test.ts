@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest'
-import { buildRule } from '../../../shared/schedule/build-rule'
-import type { RuleSpec } from '../../../shared/schedule/build-rule'
-import { expandRule } from '../../../shared/schedule/expand-rule'
+import { buildRule } from '#shared/schedule/build-rule'
+import type { RuleSpec } from '#shared/schedule/build-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
 
 // Starts on Thursday 2 January 2025, 08:00 in Berlin (UTC+01:00). Expected dates are
 // common practice / computed by hand from a 2025 calendar.

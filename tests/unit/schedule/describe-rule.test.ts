@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { describeRule, validateRule } from '../../../shared/schedule/describe-rule'
+import { describeRule, validateRule } from '#shared/schedule/describe-rule'
 
 describe('describeRule', () => {
   it.each([

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { expandRule } from '../../../shared/schedule/expand-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
 import { dstScenarios } from './support/dst-scenarios'
 
 // Expected values and their sources are in ./support/dst-scenarios.ts

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import { expandRule } from '../../../shared/schedule/expand-rule'
-import type { ExpandRuleInput } from '../../../shared/schedule/expand-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
+import type { ExpandRuleInput } from '#shared/schedule/expand-rule'
 
 const berlinMorning = { dtstart: '2025-01-01T09:00:00', tzid: 'Europe/Berlin' }
 const localsOf = (input: ExpandRuleInput) => expandRule(input).map((occurrence) => occurrence.local)

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest'
-import { expandRule } from '../../../shared/schedule/expand-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
 import fixture from '../../fixtures/rrule_rfc5545.json' with { type: 'json' }
 import { inputForPrintedList, rfcExamples, rfcFixtureNote } from './support/rfc5545-examples'
 

@@ -1,4 +1,4 @@
-import type { ExpandRuleInput, Occurrence } from '../../../../shared/schedule/expand-rule'
+import type { ExpandRuleInput, Occurrence } from '#shared/schedule/expand-rule'
 
 export type DstScenario = { story: string; input: ExpandRuleInput; expected: Occurrence[] }
 

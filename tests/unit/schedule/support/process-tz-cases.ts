@@ -1,5 +1,5 @@
-import { expandRule } from '../../../../shared/schedule/expand-rule'
-import type { ExpandRuleInput, Occurrence } from '../../../../shared/schedule/expand-rule'
+import { expandRule } from '#shared/schedule/expand-rule'
+import type { ExpandRuleInput, Occurrence } from '#shared/schedule/expand-rule'
 import { dstScenarios } from './dst-scenarios'
 import { inputForPrintedList, rfcExamples } from './rfc5545-examples'
 

@@ -1,5 +1,5 @@
 import fixture from '../../../fixtures/rrule_rfc5545.json' with { type: 'json' }
-import type { ExpandRuleInput, Occurrence } from '../../../../shared/schedule/expand-rule'
+import type { ExpandRuleInput, Occurrence } from '#shared/schedule/expand-rule'
 
 /** One RFC 5545 §3.8.5.3 example, turned into expandRule's input. */
 export type RfcExample = {
