@@ -1,4 +1,5 @@
 import { EntitySchema } from 'typeorm'
+import { createdAtColumn } from '../../db/timestamps'
 
 export interface AmendmentRow {
   id: number
@@ -21,7 +22,7 @@ export const AmendmentEntity = new EntitySchema<AmendmentRow>({
     reason: { type: 'varchar', length: 1000 },
     readings: { type: 'json' },
     note: { type: 'text', nullable: true },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
   indices: [{ columns: ['completionId'] }],
 })

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { BANDS, type Band } from '#shared/schemas/parameter'
+import { createdAtColumn } from '../../db/timestamps'
 
 export interface CompletionRow {
   id: string
@@ -31,7 +32,7 @@ export const CompletionEntity = new EntitySchema<CompletionRow>({
     lateMinutes: { type: 'int', nullable: true },
     enteredById: { type: 'int', nullable: true },
     response: { type: 'json', nullable: true },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
   indices: [{ columns: ['taskId'] }],
 })
@@ -128,7 +129,7 @@ export const PhotoEntity = new EntitySchema<PhotoRow>({
     fileName: { type: 'varchar', length: 80 },
     mimeType: { type: 'varchar', length: 40 },
     sizeBytes: { type: 'int' },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
   indices: [{ columns: ['taskId'] }],
 })

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { NOTIFICATION_STATUSES, type LadderStep } from '#shared/schemas/ladder'
+import { createdAtColumn } from '../../db/timestamps'
 
 export interface LadderRow {
   id: number
@@ -52,7 +53,7 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
     lastError: { type: 'varchar', length: 500, nullable: true },
     sentAt: { type: 'datetime', precision: 3, nullable: true },
     ackUsedAt: { type: 'datetime', precision: 3, nullable: true },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
   // One message per alert, step and person, however many processes try.
   indices: [{ columns: ['alertId', 'step', 'personId'], unique: true }, { columns: ['status', 'nextAttemptAt'] }],

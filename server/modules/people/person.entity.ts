@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { ROLES, type Role } from '#shared/schemas/person'
+import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
 
 export interface PersonRow {
   id: number
@@ -36,7 +37,7 @@ export const PersonEntity = new EntitySchema<PersonRow>({
     sessionVersion: { type: 'int', default: 0 },
     quietStart: { type: 'varchar', length: 5, nullable: true },
     quietEnd: { type: 'varchar', length: 5, nullable: true },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
-    updatedAt: { type: 'datetime', precision: 3, updateDate: true },
+    createdAt: createdAtColumn,
+    updatedAt: updatedAtColumn,
   },
 })

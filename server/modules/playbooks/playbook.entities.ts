@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { EVENT_KINDS, EVENT_STATUSES, type EventKind, type PlaybookStep } from '#shared/schemas/playbook'
+import { createdAtColumn } from '../../db/timestamps'
 
 export interface PlaybookRow {
   id: number
@@ -84,7 +85,7 @@ export const BatchRecordEntity = new EntitySchema<BatchRecordRow>({
     kind: { type: 'enum', enum: [...BATCH_RECORD_KINDS] },
     data: { type: 'json' },
     personId: { type: 'int' },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
   indices: [{ columns: ['batchId'] }],
 })

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { SHIFT_KINDS } from '#shared/schemas/roster'
+import { createdAtColumn } from '../../db/timestamps'
 
 export interface ShiftRow {
   id: number
@@ -61,6 +62,6 @@ export const HandoverNoteEntity = new EntitySchema<HandoverNoteRow>({
     id: { type: 'int', primary: true, generated: 'increment' },
     personId: { type: 'int' },
     text: { type: 'text' },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
+    createdAt: createdAtColumn,
   },
 })

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { PRIORITIES, ROUTINE_CATEGORIES, TARGET_KINDS, type Routine } from '#shared/schemas/routine'
+import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
 
 export interface RoutineRow extends Routine {
   createdAt: Date
@@ -31,7 +32,7 @@ export const RoutineEntity = new EntitySchema<RoutineRow>({
     skipDates: { type: 'json' },
     ladderId: { type: 'int', nullable: true },
     version: { type: 'int', default: 1 },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
-    updatedAt: { type: 'datetime', precision: 3, updateDate: true },
+    createdAt: createdAtColumn,
+    updatedAt: updatedAtColumn,
   },
 })

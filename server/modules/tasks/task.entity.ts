@@ -2,6 +2,7 @@ import { EntitySchema } from 'typeorm'
 import { BANDS, type Band } from '#shared/schemas/parameter'
 import { PRIORITIES, ROUTINE_CATEGORIES, TARGET_KINDS, type Category, type TargetKind } from '#shared/schemas/routine'
 import { TASK_STATUSES, type TaskStatus } from '#shared/schemas/task'
+import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
 
 export interface TaskRow {
   id: number
@@ -75,8 +76,8 @@ export const TaskEntity = new EntitySchema<TaskRow>({
     heldReason: { type: 'varchar', length: 300, nullable: true },
     recheckOfTaskId: { type: 'int', nullable: true },
     version: { type: 'int', default: 1 },
-    createdAt: { type: 'datetime', precision: 3, createDate: true },
-    updatedAt: { type: 'datetime', precision: 3, updateDate: true },
+    createdAt: createdAtColumn,
+    updatedAt: updatedAtColumn,
   },
   indices: [
     { name: 'uq_task_occurrence', columns: ['routineId', 'targetKind', 'targetId', 'occurrenceStart'], unique: true },

@@ -1,8 +1,9 @@
-import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table'
-import { useMemo, useState } from 'react'
+import { createColumnHelper } from '@tanstack/react-table'
+import { useMemo } from 'react'
 import type { Batch, Tank } from '#shared/schemas/facility'
 import { formatNumber } from '../utils/format'
 import { BatchStatus, BATCH_STATUS_LABELS } from './batch-status'
+import { useSearchableTable } from '../hooks/use-searchable-table'
 import { DataTable } from './data-table'
 import { RowActions } from './row-actions'
 import { TableToolbar } from './table-toolbar'
@@ -17,9 +18,6 @@ interface BatchesTableProps {
 const column = createColumnHelper<Batch>()
 
 export function BatchesTable({ batches, tanks, canEdit, onEdit }: BatchesTableProps) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'arrivalDate', desc: true }])
-  const [search, setSearch] = useState('')
-
   const columns = useMemo(() => {
     const codes = new Map(tanks.map((t) => [t.id, t.code]))
     return [
@@ -47,16 +45,7 @@ export function BatchesTable({ batches, tanks, canEdit, onEdit }: BatchesTablePr
     ]
   }, [tanks, canEdit, onEdit])
 
-  const table = useReactTable({
-    data: batches,
-    columns,
-    state: { sorting, globalFilter: search },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setSearch,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  })
+  const { table, search, setSearch } = useSearchableTable(batches, columns, [{ id: 'arrivalDate', desc: true }])
 
   return (
     <div className="flex flex-col gap-3">

@@ -1,7 +1,8 @@
-import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table'
-import { useMemo, useState } from 'react'
+import { createColumnHelper } from '@tanstack/react-table'
+import { useMemo } from 'react'
 import type { Area, Equipment } from '#shared/schemas/facility'
 import { nameById } from '../utils/format'
+import { useSearchableTable } from '../hooks/use-searchable-table'
 import { DataTable } from './data-table'
 import { RowActions } from './row-actions'
 import { TableToolbar } from './table-toolbar'
@@ -16,9 +17,6 @@ interface EquipmentTableProps {
 const column = createColumnHelper<Equipment>()
 
 export function EquipmentTable({ equipment, areas, canEdit, onEdit }: EquipmentTableProps) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'code', desc: false }])
-  const [search, setSearch] = useState('')
-
   const columns = useMemo(() => {
     const areaName = nameById(areas)
     return [
@@ -40,16 +38,7 @@ export function EquipmentTable({ equipment, areas, canEdit, onEdit }: EquipmentT
     ]
   }, [areas, canEdit, onEdit])
 
-  const table = useReactTable({
-    data: equipment,
-    columns,
-    state: { sorting, globalFilter: search },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setSearch,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  })
+  const { table, search, setSearch } = useSearchableTable(equipment, columns, [{ id: 'code', desc: false }])
 
   return (
     <div className="flex flex-col gap-3">

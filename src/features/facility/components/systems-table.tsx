@@ -1,7 +1,8 @@
-import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table'
-import { useMemo, useState } from 'react'
+import { createColumnHelper } from '@tanstack/react-table'
+import { useMemo } from 'react'
 import type { Area, System, Tank } from '#shared/schemas/facility'
 import { formatLitres, formatNumber, nameById } from '../utils/format'
+import { useSearchableTable } from '../hooks/use-searchable-table'
 import { DataTable } from './data-table'
 import { RowActions } from './row-actions'
 import { TableToolbar } from './table-toolbar'
@@ -17,9 +18,6 @@ interface SystemsTableProps {
 const column = createColumnHelper<System>()
 
 export function SystemsTable({ systems, areas, tanks, canEdit, onEdit }: SystemsTableProps) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'code', desc: false }])
-  const [search, setSearch] = useState('')
-
   const columns = useMemo(() => {
     const areaName = nameById(areas)
     const tankCount = (id: number) => tanks.filter((t) => t.systemId === id).length
@@ -59,16 +57,7 @@ export function SystemsTable({ systems, areas, tanks, canEdit, onEdit }: Systems
     ]
   }, [areas, tanks, canEdit, onEdit])
 
-  const table = useReactTable({
-    data: systems,
-    columns,
-    state: { sorting, globalFilter: search },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setSearch,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-  })
+  const { table, search, setSearch } = useSearchableTable(systems, columns, [{ id: 'code', desc: false }])
 
   return (
     <div className="flex flex-col gap-3">
