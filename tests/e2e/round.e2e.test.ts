@@ -103,7 +103,8 @@ describe('the round on a phone', () => {
     await context.setOffline(false)
     await page.getByText('3 of 4 done').waitFor({ timeout: 15_000 })
     await expect.poll(() => row(page, 'Water check 3').textContent()).toContain('Done')
-    expect(await page.getByText('waiting to send').count()).toBe(0)
+    // The queue badge clears once the outbox has drained, a moment after the row turns Done.
+    await expect.poll(() => page.getByText('waiting to send').count()).toBe(0)
     await page.getByRole('status', { name: 'Connection: Live' }).waitFor()
     await screenshot(page, 'round-phone-sent')
 
