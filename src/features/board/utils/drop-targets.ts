@@ -13,5 +13,3 @@ export const cardId = (taskId: number) => `task-${taskId}`
 export const columnId = (assigneeId: number | null) => (assigneeId === null ? 'column-unassigned' : `column-person-${assigneeId}`)
 export const dayId = (date: string) => `day-${date}`
 
-export const isColumn = (t: DropTarget | undefined): t is Extract<DropTarget, { kind: 'column' }> => t?.kind === 'column'
-export const isDay = (t: DropTarget | undefined): t is Extract<DropTarget, { kind: 'day' }> => t?.kind === 'day'
