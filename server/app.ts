@@ -26,6 +26,7 @@ import { oxygenRouter } from './modules/oxygen/oxygen.routes'
 import { playbooksRouter } from './modules/playbooks/playbooks.routes'
 import { reportsRouter } from './modules/reports/reports.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
+import { stockRouter } from './modules/stock/stock.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
 
 export interface AppDeps {
@@ -82,6 +83,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', playbooksRouter)
   api.use('/', oxygenRouter)
   api.use('/', reportsRouter)
+  api.use('/', stockRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

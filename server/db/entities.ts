@@ -9,6 +9,7 @@ import { HandoverNoteEntity, OnCallEntity, ShiftEntity } from '../modules/roster
 import { CylinderEntity } from '../modules/oxygen/oxygen.entities'
 import { BatchRecordEntity, EventEntity, PlaybookEntity } from '../modules/playbooks/playbook.entities'
 import { RoutineEntity } from '../modules/routines/routine.entity'
+import { MovementEntity, StockSettingsEntity } from '../modules/stock/stock.entities'
 import { TaskEntity } from '../modules/tasks/task.entity'
 
 /** Every table the app maps; a migration must match these. */
@@ -17,4 +18,5 @@ export const entities = [
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
   ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity,
   PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity, AuditEntity, AmendmentEntity,
+  MovementEntity, StockSettingsEntity,
 ]

@@ -97,6 +97,12 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/tanks/:id/overview': ALL,
   'GET /api/tanks/:id/readings': ALL,
   'GET /api/audit': MSO,
+  'GET /api/stock/movements': ALL,
+  'POST /api/stock/movements': MST,
+  'GET /api/tanks/:id/stock': ALL,
+  'GET /api/batches/:id/stock': ALL,
+  'GET /api/stock/settings': ALL,
+  'PATCH /api/stock/settings': M,
 }
 
 function catalogue(name: string, editors: Role[]): Record<string, Role[]> {

@@ -1,0 +1,26 @@
+import { Router } from 'express'
+import { IdParamSchema } from '#shared/schemas/facility'
+import { requireRole, signedIn } from '../auth/require-role'
+import { getStockSettings, updateStockSettings } from './stock-settings.service'
+import { batchStock, listMovements, recordMovement, tankStock } from './stock.service'
+
+export const stockRouter = Router()
+
+stockRouter.get('/stock/movements', signedIn, async (req, res) => {
+  res.json(await listMovements(req.query))
+})
+stockRouter.post('/stock/movements', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
+  res.status(201).json(await recordMovement(req.user!, req.body))
+})
+stockRouter.get('/tanks/:id/stock', signedIn, async (req, res) => {
+  res.json(await tankStock(IdParamSchema.parse(req.params).id))
+})
+stockRouter.get('/batches/:id/stock', signedIn, async (req, res) => {
+  res.json(await batchStock(IdParamSchema.parse(req.params).id))
+})
+stockRouter.get('/stock/settings', signedIn, async (_req, res) => {
+  res.json(await getStockSettings())
+})
+stockRouter.patch('/stock/settings', requireRole('manager'), async (req, res) => {
+  res.json(await updateStockSettings(req.body))
+})
