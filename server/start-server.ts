@@ -28,7 +28,7 @@ export async function startServer(config: AppConfig, opts: StartOptions = {}) {
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)
   const redis = config.redisUrl ? await createRedisAdapter(config.redisUrl) : null
-  attachSocketServer(server, sessionMiddleware, passport, redis?.adapter)
+  attachSocketServer(server, { sessionMiddleware, passport, allowedOrigins: config.allowedOrigins, behindProxy: config.cookieSecure }, redis?.adapter)
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve))
   const smtp = config.mail.mode === 'local' && opts.localSmtp !== false ? await startLocalSmtpIfFree(config.mail.port, config.mail.host) : null
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.

@@ -3,6 +3,7 @@ import type { Request } from 'express'
 import { PersonSchema, SignInInputSchema, type Person } from '#shared/schemas/person'
 import type { AppConfig } from '../../lib/config'
 import { unauthenticated } from '../../lib/errors'
+import { disconnectSession } from '../../realtime/socket-server'
 import { configurePassport } from './passport'
 import { signedIn } from './require-role'
 import { signInLimiters } from './sign-in-limits'
@@ -29,8 +30,10 @@ export function authRouter(config: AppConfig) {
   })
 
   router.delete('/session', async (req, res) => {
+    const sessionId = req.sessionID
     await new Promise<void>((resolve, reject) => req.logout((e) => (e ? reject(e) : resolve())))
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()))
+    disconnectSession(sessionId)
     res.clearCookie('roundtide.sid')
     res.status(204).end()
   })

@@ -3,6 +3,11 @@ import { forbidden } from '../../lib/errors'
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS'])
 
+/** True when a browser's Origin is this site itself or one of the configured extra origins. */
+export function isAllowedOrigin(origin: string, ownOrigin: string, allowedOrigins: readonly string[]) {
+  return origin === ownOrigin || allowedOrigins.includes(origin)
+}
+
 /**
  * CSRF defence, part two (part one is the SameSite=Lax session cookie): a state-changing
  * request that names an Origin (or, failing that, a Referer) must come from this site.
@@ -14,8 +19,7 @@ export function requireSameOrigin(allowedOrigins: string[]): RequestHandler {
     if (SAFE_METHODS.has(req.method)) return next()
     const origin = req.get('origin') ?? originOf(req.get('referer'))
     if (!origin) return next()
-    const own = `${req.protocol}://${req.get('host')}`
-    if (origin === own || allowedOrigins.includes(origin)) return next()
+    if (isAllowedOrigin(origin, `${req.protocol}://${req.get('host')}`, allowedOrigins)) return next()
     next(forbidden('This request came from another site and was refused.'))
   }
 }

@@ -4,6 +4,7 @@ import { CreatePersonInputSchema } from '#shared/schemas/person'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound } from '../../lib/errors'
+import { disconnectPerson } from '../../realtime/socket-server'
 import { PersonEntity, type PersonRow } from './person.entity'
 import { toPerson } from './person.mapper'
 
@@ -60,6 +61,7 @@ export async function updatePerson(id: number, input: UpdatePersonInput): Promis
   if (endsSessions) row.sessionVersion += 1
   const saved = toPerson(await repo().save(row))
   await audit('person', id, 'update', before, saved)
+  if (endsSessions) disconnectPerson(id)
   return saved
 }
 
@@ -69,6 +71,8 @@ export async function resetPassword(id: number, password: string): Promise<Perso
   row.sessionVersion += 1
   const saved = toPerson(await repo().save(row))
   await audit('person', id, 'update', null, { passwordReset: true })
+  // Older sessions end on their next request; their open live feeds end now.
+  disconnectPerson(id)
   return saved
 }
 
