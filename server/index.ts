@@ -1,13 +1,19 @@
 import path from 'node:path'
 import { loadConfig } from './lib/config'
 import { logger } from './lib/logger'
+import { UnsafeConfigError } from './lib/secrets'
 import { startServer } from './start-server'
 
 // Every date computation assumes a UTC process; facility time zones are applied explicitly.
 process.env.TZ = 'UTC'
 
 const config = loadConfig()
-const running = await startServer(config, { clientDir: path.resolve('dist'), schedulerIntervalMs: config.schedulerIntervalMs })
+const running = await startServer(config, { clientDir: path.resolve('dist'), schedulerIntervalMs: config.schedulerIntervalMs }).catch((err: unknown) => {
+  // An unsafe configuration is the operator's to fix: say what, without a stack trace.
+  if (!(err instanceof UnsafeConfigError)) throw err
+  console.error(`\n${err.message}\n`)
+  process.exit(1)
+})
 logger.info(`Roundtide is running at ${running.url}`)
 console.log(`\nRoundtide is running at ${running.url}`)
 console.log(`Demo sign-ins (password "${config.demoPassword}"): maren.holloway@brackenwater.example (manager),`)

@@ -6,6 +6,7 @@ import type { AppConfig } from './lib/config'
 import { createSessionStore } from './modules/auth/session'
 import { startScheduler } from './jobs/scheduler'
 import { logger } from './lib/logger'
+import { withStoredSecrets } from './lib/secrets'
 import { startLocalSmtp } from './mail/local-smtp'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
@@ -20,10 +21,14 @@ export interface StartOptions {
   localSmtp?: boolean
 }
 
-export async function startServer(config: AppConfig, opts: StartOptions = {}) {
-  const dataSource = createDataSource(config.db)
+export async function startServer(given: AppConfig, opts: StartOptions = {}) {
+  const dataSource = createDataSource(given.db)
   await dataSource.initialize()
   setDataSource(dataSource)
+  const config = await withStoredSecrets(given, dataSource).catch(async (err: unknown) => {
+    await dataSource.destroy()
+    throw err
+  })
   const sessionStore = createSessionStore(config)
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)

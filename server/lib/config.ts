@@ -10,7 +10,9 @@ const EnvSchema = z.object({
   ROUNDTIDE_DB_NAME: z.string().default('roundtide'),
   ROUNDTIDE_DB_USER: z.string().default('roundtide'),
   ROUNDTIDE_DB_PASSWORD: z.string().default('roundtide-local'),
-  ROUNDTIDE_SESSION_SECRET: z.string().min(16).default('roundtide-local-session-secret-change-me'),
+  /** Unset (the usual case): Roundtide generates strong secrets on first start and keeps them in the database. */
+  ROUNDTIDE_SESSION_SECRET: z.string().optional(),
+  ROUNDTIDE_ACK_SECRET: z.string().optional(),
   ROUNDTIDE_COOKIE_SECURE: z.enum(['true', 'false']).default('false'),
   ROUNDTIDE_ALLOWED_ORIGINS: z.string().default(''),
   ROUNDTIDE_SIGNIN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(50),
@@ -47,7 +49,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       username: e.ROUNDTIDE_DB_USER,
       password: e.ROUNDTIDE_DB_PASSWORD,
     },
-    sessionSecret: e.ROUNDTIDE_SESSION_SECRET,
+    /** Signs session cookies; empty until `withStoredSecrets` fills it from the database. */
+    sessionSecret: e.ROUNDTIDE_SESSION_SECRET ?? '',
+    /** Signs acknowledge links in mail; a key of its own, so a cookie key never signs an acknowledgement. */
+    ackSecret: e.ROUNDTIDE_ACK_SECRET ?? '',
     cookieSecure: e.ROUNDTIDE_COOKIE_SECURE === 'true',
     allowedOrigins: e.ROUNDTIDE_ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
     signInLimitPerAddress: e.ROUNDTIDE_SIGNIN_LIMIT_PER_ADDRESS,

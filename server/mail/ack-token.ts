@@ -2,9 +2,10 @@ import { createHmac, timingSafeEqual } from 'node:crypto'
 
 /**
  * An acknowledge link's token: notification id and expiry, signed with HMAC-SHA256 under the
- * session secret. Single use is enforced by the notification row (`ackUsedAt`), not the token.
+ * acknowledge key (never the cookie key). Single use is enforced by the notification row (`ackUsedAt`), not the token.
  */
 export function signAckToken(secret: string, notificationId: number, expiresAt: Date): string {
+  if (!secret) throw new Error('The acknowledge key is not set.')
   const payload = `${notificationId}.${Math.floor(expiresAt.getTime() / 1000)}`
   return `${payload}.${mac(secret, payload)}`
 }

@@ -99,7 +99,7 @@ describe('missed-task escalation by e-mail', () => {
     const { alert } = await missedTask(missedAt)
     await tick(new Date(missedAt.getTime() + 1000))
     const [row] = await db().getRepository(NotificationEntity).find({ where: { alertId: alert.id } })
-    const token = signAckToken(t.config.sessionSecret, row.id, new Date(Date.now() - 1000))
+    const token = signAckToken(t.config.ackSecret, row.id, new Date(Date.now() - 1000))
     const res = await request(t.app).post(`/ack/${token}`).type('form').send({}).expect(400)
     expect(res.text).toContain('expired')
   })

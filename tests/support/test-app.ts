@@ -3,6 +3,7 @@ import type { Role } from '#shared/schemas/person'
 import { createApp } from '#server/app'
 import { createDataSource, setDataSource } from '#server/db/data-source'
 import { loadConfig, type AppConfig } from '#server/lib/config'
+import { withStoredSecrets } from '#server/lib/secrets'
 import { createSessionStore } from '#server/modules/auth/session'
 import { createPerson } from '#server/modules/people/people.service'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
@@ -13,10 +14,10 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
 
 /** One in-process app on the test database, with helpers to sign people in. */
 export async function startTestApp(overrides: Partial<AppConfig> = {}) {
-  const config = testConfig(overrides)
-  const dataSource = createDataSource(config.db)
+  const dataSource = createDataSource(testConfig(overrides).db)
   await dataSource.initialize()
   setDataSource(dataSource)
+  const config = await withStoredSecrets(testConfig(overrides), dataSource)
   const stores: Array<ReturnType<typeof createSessionStore>> = []
 
   function newApp() {

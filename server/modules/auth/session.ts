@@ -32,6 +32,8 @@ export function createSessionStore(config: AppConfig): SessionStore {
 }
 
 export function createSessionMiddleware(config: AppConfig, store: SessionStore) {
+  // Never sign cookies with an empty key: the secrets are filled in by withStoredSecrets at start.
+  if (!config.sessionSecret) throw new Error('The session secret is not set; start through startServer or withStoredSecrets.')
   return session({
     name: 'roundtide.sid',
     secret: config.sessionSecret,

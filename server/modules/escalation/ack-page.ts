@@ -13,6 +13,7 @@ const MESSAGES: Record<string, [string, string]> = {
   used: ['Link already used', 'This acknowledge link was used before. Open the task in Roundtide to see who answered.'],
   expired: ['Link expired', 'This acknowledge link has expired. Open Roundtide to acknowledge from the task.'],
   forged: ['Link not valid', 'This acknowledge link is not valid.'],
+  inactive: ['Account not active', 'This link belongs to an account that is no longer active, so it cannot acknowledge. Open Roundtide and acknowledge from the task.'],
 }
 
 /**
@@ -32,10 +33,10 @@ export function ackRouter(config: AppConfig) {
 <form method="post"><button type="submit">Acknowledge</button></form>`))
   })
   router.post('/:token', async (req, res) => {
-    const outcome = await acknowledgeByToken(config.sessionSecret, req.params.token)
+    const outcome = await acknowledgeByToken(config.ackSecret, req.params.token)
     const [title, text] = MESSAGES[outcome.status]
     const ok = outcome.status === 'acknowledged' || outcome.status === 'already'
-    res.status(ok ? 200 : outcome.status === 'used' ? 409 : 400).type('html').send(page(title, `<h1>${title}</h1><p>${text}</p>${outcome.taskId ? `<p><a href="/tasks/${outcome.taskId}">Open the task</a></p>` : ''}`))
+    res.status(ok ? 200 : outcome.status === 'used' ? 409 : outcome.status === 'inactive' ? 403 : 400).type('html').send(page(title, `<h1>${title}</h1><p>${text}</p>${outcome.taskId ? `<p><a href="/tasks/${outcome.taskId}">Open the task</a></p>` : ''}`))
   })
   return router
 }

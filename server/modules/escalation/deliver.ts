@@ -46,7 +46,7 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
       await repo.update(row.id, { status: 'superseded' })
       continue
     }
-    const token = signAckToken(config.sessionSecret, row.id, new Date(now.getTime() + config.mail.ackTtlHours * 3_600_000))
+    const token = signAckToken(config.ackSecret, row.id, new Date(now.getTime() + config.mail.ackTtlHours * 3_600_000))
     const message = composeMessage({
       alert, task, step: row.step, now,
       targetLabel: targetLabel(task.targetKind, task.targetId, cat!),

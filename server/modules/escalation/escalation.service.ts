@@ -45,7 +45,7 @@ export async function acknowledgeInApp(alertId: number, person: { id: number; ro
   await acknowledgeAlert(alertId, person.id)
 }
 
-export type AckOutcome = { status: 'acknowledged' | 'already' | 'forged' | 'expired' | 'used'; taskId?: number; byName?: string }
+export type AckOutcome = { status: 'acknowledged' | 'already' | 'forged' | 'expired' | 'used' | 'inactive'; taskId?: number; byName?: string }
 
 /** What an acknowledge link does: a forged, expired or already-used token changes nothing. */
 export async function acknowledgeByToken(secret: string, token: string, now = new Date()): Promise<AckOutcome> {
@@ -54,10 +54,12 @@ export async function acknowledgeByToken(secret: string, token: string, now = ne
   const repo = db().getRepository(NotificationEntity)
   const row = await repo.findOneBy({ id: check.notificationId })
   if (!row) return { status: 'forged' }
+  // A link mailed to someone who has since left must not silence an escalation in their name.
+  const person = await db().getRepository(PersonEntity).findOneBy({ id: row.personId })
+  if (!person?.active) return { status: 'inactive' }
   const claimed = await repo.createQueryBuilder().update().set({ ackUsedAt: now }).where('id = :id AND ackUsedAt IS NULL', { id: row.id }).execute()
   if (!claimed.affected) return { status: 'used' }
   const alert = await db().getRepository(AlertEntity).findOneByOrFail({ id: row.alertId })
   const first = await acknowledgeAlert(alert.id, row.personId, now)
-  const person = await db().getRepository(PersonEntity).findOneBy({ id: row.personId })
-  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId, byName: person?.name }
+  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId, byName: person.name }
 }
