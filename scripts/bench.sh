@@ -1,12 +1,15 @@
 #!/usr/bin/env bash
 # `npm run bench`: the private MariaDB and Debian's chromium (as scripts/test-env.sh ensures them),
-# then scripts/bench/run.ts, which creates and drops its own database roundtide_bench.
-# The test database is left alone, so the bench can run beside `npm test`.
+# then scripts/bench/run.ts, which creates and drops its own database (ROUNDTIDE_BENCH_DB_NAME,
+# roundtide_bench by default) and serves the app on ROUNDTIDE_BENCH_PORT (a free port by default).
+# The test database is left alone, so the bench can run beside `npm test`; two benches at once
+# (two worktrees) need two names.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 export TZ=UTC NODE_ENV=production LOG_LEVEL="${LOG_LEVEL:-warn}"
-export ROUNDTIDE_DB_NAME=roundtide_bench
+export ROUNDTIDE_BENCH_DB_NAME="${ROUNDTIDE_BENCH_DB_NAME:-roundtide_bench}"
+export ROUNDTIDE_DB_NAME="$ROUNDTIDE_BENCH_DB_NAME"
 export CHROMIUM_PATH="${CHROMIUM_PATH:-/usr/bin/chromium}"
 export CHROME_PATH="${CHROME_PATH:-$CHROMIUM_PATH}"
 
@@ -20,6 +23,6 @@ if [ ! -x "$CHROMIUM_PATH" ]; then
   fi
 fi
 
-# Creates roundtide_bench and grants the app user on it; run.ts recreates it empty.
+# Creates the bench database and grants the app user on it; run.ts recreates it empty.
 bash scripts/db.sh ensure >&2
 exec npx tsx scripts/bench/run.ts

@@ -3,11 +3,13 @@ import type { DataSource } from 'typeorm'
 import { createDataSource, setDataSource } from '#server/db/data-source'
 import { loadConfig, type AppConfig } from '#server/lib/config'
 
-export const BENCH_DB = 'roundtide_bench'
+/** The throwaway database; another name per worktree lets two benches run at once. */
+export const BENCH_DB = process.env.ROUNDTIDE_BENCH_DB_NAME || 'roundtide_bench'
+if (!/^roundtide_bench\w*$/.test(BENCH_DB)) throw new Error(`ROUNDTIDE_BENCH_DB_NAME must start with roundtide_bench (got ${BENCH_DB}): the bench drops it`)
 
-/** The app's config pointed at the throwaway bench database, on a free port. */
+/** The app's config pointed at the throwaway bench database, on ROUNDTIDE_BENCH_PORT or a free port. */
 export function benchConfig(): AppConfig {
-  const base = loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: BENCH_DB, PORT: '0', HOST: '127.0.0.1' })
+  const base = loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: BENCH_DB, PORT: process.env.ROUNDTIDE_BENCH_PORT || '0', HOST: '127.0.0.1' })
   return { ...base, db: { ...base.db, database: BENCH_DB } }
 }
 

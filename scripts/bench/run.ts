@@ -6,6 +6,7 @@ import path from 'node:path'
 import { DateTime } from 'luxon'
 import type { DataSource } from 'typeorm'
 import { createBenchDatabase, dropBenchDatabase } from './bench-db'
+import { measureBoardDrag } from './board-drag'
 import { measureBoard } from './board-latency'
 import { buildClient, measureBundle } from './bundle-size'
 import { measureCompletions } from './completion-load'
@@ -49,7 +50,12 @@ function need<T>(value: T | undefined | null, what: string): T {
   return value
 }
 
+// ROUNDTIDE_BENCH_ONLY="2,6" runs only those measurements (setup and materialising always run), for quick checks.
+const only = process.env.ROUNDTIDE_BENCH_ONLY?.split(',').map((x) => x.trim()).filter(Boolean)
+const wanted = (label: string) => !only || label.startsWith('setup') || label.startsWith('1 ') || only.some((n) => label.startsWith(`${n} `))
+
 async function step(label: string, fn: () => Promise<Row | Row[]> | Row | Row[]) {
+  if (!wanted(label)) return
   const t = performance.now()
   log(`${label}…`)
   try {
@@ -61,6 +67,8 @@ async function step(label: string, fn: () => Promise<Row | Row[]> | Row | Row[])
   }
   log(`${label} took ${seconds(performance.now() - t)}`)
 }
+
+const tasksOn = async (date: string) => Number(((await need(ds, 'the database').query('SELECT COUNT(*) AS n FROM tasks WHERE localDate = ?', [date])) as Array<{ n: number | string }>)[0].n)
 
 let facility: BenchFacility | undefined
 let roundTaskIds: number[] = []
@@ -92,6 +100,7 @@ try {
   })
   const url = () => need(server, 'the server').url
   await step('2 board', () => measureBoard(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1)))
+  await step('2 board drag', async () => measureBoardDrag(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1), await tasksOn(day(1))))
   await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2)))
   await step('4 socket fan-out', () => measureSocketFanout(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(3)))
   await step('6 lighthouse', () => measureLighthouse(url(), need(cookies.technician, 'a signed-in technician'), workDir, clientDir ? 'fresh build' : 'dist/ (the fresh build failed)'))

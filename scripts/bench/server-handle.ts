@@ -21,7 +21,8 @@ const exited = (child: ChildProcess, ms: number) =>
 /** Starts scripts/bench/serve.ts in a child process and waits for its URL. */
 export async function startBenchServer(clientDir: string | null): Promise<BenchServer> {
   const child = fork(path.resolve('scripts/bench/serve.ts'), clientDir ? [clientDir] : [], {
-    execArgv: ['--import', 'tsx'],
+    // ROUNDTIDE_BENCH_CPU_PROF=<dir>: the server writes a V8 CPU profile there when it stops.
+    execArgv: ['--import', 'tsx', ...(process.env.ROUNDTIDE_BENCH_CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${process.env.ROUNDTIDE_BENCH_CPU_PROF}`] : [])],
     // The server's logs go to our stderr, keeping stdout for the table.
     stdio: ['ignore', 2, 2, 'ipc'],
   })

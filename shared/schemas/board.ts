@@ -1,5 +1,7 @@
 import { z } from 'zod'
-import { TaskSchema } from './task'
+import { BandSchema } from './parameter'
+import { CategorySchema, PrioritySchema } from './routine'
+import { TaskStatusSchema, type Task } from './task'
 
 export const BoardColumnPersonSchema = z.object({
   personId: z.number().int(),
@@ -11,12 +13,91 @@ export const BoardColumnPersonSchema = z.object({
 })
 export type BoardColumnPerson = z.infer<typeof BoardColumnPersonSchema>
 
-export const BoardSchema = z.object({
+/** What many cards share: a routine's title, category, priority and length. */
+export const BoardKindSchema = z.object({
+  title: z.string(),
+  category: CategorySchema,
+  priority: PrioritySchema,
+  durationMinutes: z.number().int(),
+})
+
+export const BoardTargetSchema = z.object({
+  label: z.string(),
+  tankId: z.number().int().nullable(),
+  areaId: z.number().int().nullable(),
+})
+
+/**
+ * One card as sent: what differs from card to card, with indexes into the day's `kinds` and
+ * `targets`. Empty fields are left out, so a day of 6,000 cards stays near 500 kB of JSON.
+ */
+export const BoardCardWireSchema = z.object({
+  id: z.number().int(),
+  kind: z.number().int().nonnegative(),
+  target: z.number().int().nonnegative(),
+  /** Local "HH:mm" on the board's day. */
+  time: z.string(),
+  status: TaskStatusSchema,
+  assignee: z.number().int().optional(),
+  flag: BandSchema.optional(),
+  held: z.string().optional(),
+  version: z.number().int(),
+})
+export type BoardCardWire = z.infer<typeof BoardCardWireSchema>
+
+/** GET /tasks/board: one day's cards, with each kind, target and person once. */
+export const BoardWireSchema = z.object({
   date: z.string(),
   people: z.array(BoardColumnPersonSchema),
-  tasks: z.array(TaskSchema),
+  kinds: z.array(BoardKindSchema),
+  targets: z.array(BoardTargetSchema),
+  cards: z.array(BoardCardWireSchema),
 })
-export type Board = z.infer<typeof BoardSchema>
+export type BoardWire = z.infer<typeof BoardWireSchema>
+
+/** A card as the board draws it; a full task (from a live event or a move) is one too. */
+export type BoardCard = Pick<
+  Task,
+  | 'id' | 'title' | 'category' | 'priority' | 'durationMinutes' | 'targetLabel' | 'tankId' | 'areaId' | 'localDate' | 'localTime'
+  | 'status' | 'assigneeId' | 'assigneeName' | 'flag' | 'heldReason' | 'version'
+>
+
+export interface Board {
+  date: string
+  people: BoardColumnPerson[]
+  tasks: BoardCard[]
+}
+
+/** The wire shape unfolded into cards, so the board and its cache patchers read one kind of object. */
+export function unfoldBoard(wire: BoardWire): Board {
+  const names = new Map(wire.people.map((p) => [p.personId, p.name]))
+  return {
+    date: wire.date,
+    people: wire.people,
+    tasks: wire.cards.map((c) => {
+      const kind = wire.kinds[c.kind]
+      const target = wire.targets[c.target]
+      return {
+        id: c.id,
+        title: kind.title,
+        category: kind.category,
+        priority: kind.priority,
+        durationMinutes: kind.durationMinutes,
+        targetLabel: target.label,
+        tankId: target.tankId,
+        areaId: target.areaId,
+        localDate: wire.date,
+        localTime: c.time,
+        status: c.status,
+        assigneeId: c.assignee ?? null,
+        assigneeName: c.assignee === undefined ? null : (names.get(c.assignee) ?? null),
+        flag: c.flag ?? null,
+        heldReason: c.held ?? null,
+        version: c.version,
+      }
+    }),
+  }
+}
 
 export const CalendarDaySchema = z.object({
   date: z.string(),

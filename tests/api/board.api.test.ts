@@ -7,6 +7,7 @@ import { OnCallEntity } from '#server/modules/roster/roster.entities'
 import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
+import { BoardWireSchema, unfoldBoard } from '#shared/schemas/board'
 import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
@@ -29,6 +30,35 @@ async function technicianOnShift(date: string) {
   await createShift({ personId: person.id, date, start: '06:00', end: '18:00', kind: 'day' })
   return person
 }
+
+describe('the day as the board receives it', () => {
+  test('each card names its kind and target once for the day, and unfolds into what the task itself says', async () => {
+    const { tanks } = await makeAreaWithTanks(2)
+    const date = inDays(9)
+    const tech = await technicianOnShift(date)
+    const made = await Promise.all([
+      makeTankTask(tanks[0], { localDate: date, localStart: `${date}T07:30:00`, assigneeId: tech.id }),
+      makeTankTask(tanks[1], { localDate: date, localStart: `${date}T07:45:00`, flag: 'watch' }),
+      makeTankTask(tanks[0], { localDate: date, localStart: `${date}T08:00:00`, status: 'held', heldReason: 'Fasting before grading' }),
+    ])
+    const { body } = await supervisor.get(`/api/tasks/board?date=${date}`).expect(200)
+    const wire = BoardWireSchema.parse(body)
+    const ours = wire.cards.filter((c) => made.some((m) => m.id === c.id))
+    expect(ours).toHaveLength(3)
+    // Three cards of one routine-like kind on two tanks: the kind once, each tank once.
+    expect(new Set(ours.map((c) => c.kind)).size).toBe(1)
+    expect(new Set(ours.map((c) => c.target)).size).toBe(2)
+    expect(ours[0]).not.toHaveProperty('flag')
+    const board = unfoldBoard(wire)
+    for (const m of made) {
+      const { body: task } = await supervisor.get(`/api/tasks/${m.id}`).expect(200)
+      const card = board.tasks.find((c) => c.id === m.id)!
+      const { id, title, category, priority, durationMinutes, targetLabel, tankId, areaId, localDate, localTime, status, assigneeId, assigneeName, flag, heldReason, version } = task
+      expect(card).toEqual({ id, title, category, priority, durationMinutes, targetLabel, tankId, areaId, localDate, localTime, status, assigneeId, assigneeName, flag, heldReason, version })
+    }
+    expect(board.people.find((p) => p.personId === tech.id)).toMatchObject({ name: tech.name, taskCount: 1, plannedMinutes: 3 })
+  })
+})
 
 describe('assigning on the board', () => {
   test('when a supervisor assigns a card to a technician on shift, then it is theirs; unassigning puts it back', async () => {

@@ -2,7 +2,9 @@ import { randomUUID } from 'node:crypto'
 import { DateTime } from 'luxon'
 import type { Locator, Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { db } from '#server/db/data-source'
 import { createShift } from '#server/modules/roster/roster.service'
+import { TaskEntity } from '#server/modules/tasks/task.entity'
 import type { Tank } from '#shared/schemas/facility'
 import type { Task } from '#shared/schemas/task'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
@@ -10,6 +12,8 @@ import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/f
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const TABLET = { width: 820, height: 1180 }
+/** A day long enough that a column draws only a window of its cards. */
+const CARDS = 400
 
 let s: BrowserSession
 let zone: string
@@ -216,3 +220,64 @@ describe('the board', () => {
 async function settleKeyboardDrag(page: import('playwright-core').Page) {
   await page.waitForTimeout(200)
 }
+
+/** A long day for one technician: four hundred feeds, one a minute from 06:00, in one insert. */
+async function longDay() {
+  const { area, tanks } = await makeAreaWithTanks(4)
+  const date = DateTime.now().setZone(zone).plus({ days: 340 }).startOf('week').toISODate()!
+  const tech = await s.createPerson('technician', { name: 'Noor Haddad' })
+  await createShift({ personId: tech.id, date, start: '06:00', end: '14:00', kind: 'day' })
+  const start = DateTime.fromISO(`${date}T06:00`, { zone })
+  const rows = Array.from({ length: CARDS }, (_, i) => {
+    const due = start.plus({ minutes: i })
+    const tank = tanks[i % tanks.length]
+    const local = due.toFormat("yyyy-MM-dd'T'HH:mm:ss")
+    return {
+      routineId: null, eventId: null, title: `Feed ${String(i + 1).padStart(3, '0')}`, category: 'feeding' as const, instructions: '', priority: 'routine' as const,
+      targetKind: 'tank' as const, targetId: tank.id, tankId: tank.id, areaId: area.id, localDate: date, localStart: local, occurrenceStart: local,
+      dueAt: due.toJSDate(), windowStartAt: due.minus({ minutes: 30 }).toJSDate(), graceUntil: due.plus({ hours: 1 }).toJSDate(),
+      durationMinutes: 2, status: 'planned' as const, assigneeId: tech.id, assignedManually: true, edited: false, requiredReadings: [], version: 1,
+    }
+  })
+  await db().getRepository(TaskEntity).insert(rows)
+  const saved = await db().getRepository(TaskEntity).find({ where: { localDate: date, assigneeId: tech.id }, order: { dueAt: 'ASC' } })
+  return { date, area, tech, tasks: saved }
+}
+
+describe('a full day on the board', () => {
+  test('a supervisor sees all four hundred of a technician’s cards counted, scrolls to the last and drags it to Unassigned', async () => {
+    const { date, area, tech, tasks } = await longDay()
+    const supervisor = await s.createPerson('supervisor')
+    const { page } = await s.newPage(DESKTOP)
+    await s.signIn(page, supervisor.email)
+    await page.goto(`/board?date=${date}&area=${area.id}`)
+    const techColumn = page.getByRole('region', { name: tech.name, exact: true })
+    await techColumn.getByText(`${CARDS} tasks`).waitFor()
+    await techColumn.locator(`li[data-task-id="${tasks[0].id}"]`).waitFor()
+    // Only a window of the column is drawn; the rest appear as the column scrolls.
+    const drawn = await techColumn.locator('li[data-task-id]').count()
+    expect(drawn).toBeGreaterThan(3)
+    expect(drawn).toBeLessThan(CARDS / 4)
+    const last = tasks[CARDS - 1]
+    expect(await techColumn.locator(`li[data-task-id="${last.id}"]`).count()).toBe(0)
+    await techColumn.locator('li[data-task-id]').first().hover()
+    for (let i = 0; i < 60 && (await techColumn.locator(`li[data-task-id="${last.id}"]`).count()) === 0; i++) await page.mouse.wheel(0, 4000)
+    const card = techColumn.locator(`li[data-task-id="${last.id}"]`)
+    await card.waitFor()
+    await expect.poll(() => card.textContent()).toContain(`Feed ${CARDS}`)
+    await screenshot(page, 'board-full-day-scrolled')
+
+    const unassigned = page.getByRole('region', { name: 'Unassigned', exact: true })
+    const a = (await card.boundingBox())!
+    const b = (await unassigned.boundingBox())!
+    await page.mouse.move(a.x + a.width / 2, a.y + 16)
+    await page.mouse.down()
+    await page.mouse.move(a.x + a.width / 2 + 12, a.y + 24, { steps: 4 })
+    await page.mouse.move(b.x + b.width / 2, b.y + 80, { steps: 16 })
+    await page.mouse.up()
+    await unassigned.locator(`li[data-task-id="${last.id}"]`).waitFor()
+    await techColumn.getByText(`${CARDS - 1} tasks`).waitFor()
+    const res = await page.request.get(`/api/tasks/${last.id}`)
+    expect((await res.json()).assigneeId).toBeNull()
+  })
+})

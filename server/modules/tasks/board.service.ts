@@ -1,36 +1,115 @@
-import type { Board } from '#shared/schemas/board'
+import type { BoardCardWire, BoardColumnPerson, BoardWire } from '#shared/schemas/board'
+import type { Band } from '#shared/schemas/parameter'
+import type { Category, TargetKind } from '#shared/schemas/routine'
+import type { Task, TaskStatus } from '#shared/schemas/task'
 import { db } from '../../db/data-source'
-import { PersonEntity } from '../people/person.entity'
-import { ShiftEntity } from '../roster/roster.entities'
-import { TaskEntity } from './task.entity'
-import { toTask } from './task.mapper'
-import { loadTaskContext } from './tasks.service'
+import { loadCatalogue, targetLabel } from './targets'
 
-/** One day's tasks and a column per person on shift (or holding tasks) that day. */
-export async function getBoard(date: string): Promise<Board> {
-  const [rows, shifts, ctx] = await Promise.all([
-    db().getRepository(TaskEntity).find({ where: { localDate: date }, order: { dueAt: 'ASC', id: 'ASC' } }),
-    db().getRepository(ShiftEntity).find({ where: { date }, order: { start: 'ASC' } }),
-    loadTaskContext(),
-  ])
-  const personIds = [...new Set([...shifts.map((s) => s.personId), ...rows.flatMap((r) => (r.assigneeId ? [r.assigneeId] : []))])]
-  const people = personIds.length ? await db().getRepository(PersonEntity).findBy(personIds.map((id) => ({ id }))) : []
-  const tasks = rows.map((r) => toTask(r, ctx))
-  return {
-    date,
-    tasks,
-    people: people
-      .map((p) => {
-        const own = tasks.filter((t) => t.assigneeId === p.id)
-        return {
-          personId: p.id,
-          name: p.name,
-          role: p.role,
-          shifts: shifts.filter((s) => s.personId === p.id).map(({ start, end, kind }) => ({ start, end, kind })),
-          taskCount: own.length,
-          plannedMinutes: own.reduce((sum, t) => sum + t.durationMinutes, 0),
-        }
-      })
-      .sort((a, b) => (a.shifts[0]?.start ?? '99').localeCompare(b.shifts[0]?.start ?? '99') || a.name.localeCompare(b.name)),
+interface CardRow {
+  id: number
+  title: string
+  category: Category
+  priority: Task['priority']
+  durationMinutes: number
+  targetKind: TargetKind
+  targetId: number
+  tankId: number | null
+  areaId: number | null
+  time: string
+  status: TaskStatus
+  assigneeId: number | null
+  flag: Band | null
+  heldReason: string | null
+  version: number
+}
+
+// Only the columns a card draws: a day can hold 6,000 tasks, and each unused column costs parsing.
+const CARDS_SQL = `SELECT id, title, category, priority, durationMinutes, targetKind, targetId, tankId, areaId,
+  SUBSTRING(localStart, 12, 5) AS time, status, assigneeId, flag, heldReason, version
+  FROM tasks WHERE localDate = ? ORDER BY dueAt, id`
+
+const SHIFTS_SQL =
+  'SELECT s.personId, s.`start`, s.`end`, s.kind, p.name, p.role FROM shifts s JOIN people p ON p.id = s.personId ' +
+  'WHERE s.date = ? ORDER BY s.`start`, s.id'
+
+interface ShiftRow {
+  personId: number
+  start: string
+  end: string
+  kind: string
+  name: string
+  role: string
+}
+
+/** Gives each distinct value an index in `list`, the first time it is seen. */
+function indexer<T>(list: T[]) {
+  const seen = new Map<string, number>()
+  return (key: string, make: () => T) => {
+    let i = seen.get(key)
+    if (i === undefined) {
+      i = list.push(make()) - 1
+      seen.set(key, i)
+    }
+    return i
   }
+}
+
+/** One day's cards and a column per person on shift (or holding tasks) that day. */
+export async function getBoard(date: string): Promise<BoardWire> {
+  const [rows, shifts, cat] = await Promise.all([
+    db().query(CARDS_SQL, [date]) as Promise<CardRow[]>,
+    db().query(SHIFTS_SQL, [date]) as Promise<ShiftRow[]>,
+    loadCatalogue(),
+  ])
+  const kinds: BoardWire['kinds'] = []
+  const targets: BoardWire['targets'] = []
+  const kindOf = indexer(kinds)
+  const targetOf = indexer(targets)
+  const load = new Map<number, { taskCount: number; plannedMinutes: number }>()
+  const cards = rows.map((r): BoardCardWire => {
+    const card: BoardCardWire = {
+      id: r.id,
+      kind: kindOf(`${r.title}\u0000${r.category}\u0000${r.priority}\u0000${r.durationMinutes}`, () => ({
+        title: r.title, category: r.category, priority: r.priority, durationMinutes: r.durationMinutes,
+      })),
+      target: targetOf(`${r.targetKind}:${r.targetId}:${r.tankId}:${r.areaId}`, () => ({
+        label: targetLabel(r.targetKind, r.targetId, cat), tankId: r.tankId, areaId: r.areaId,
+      })),
+      time: r.time,
+      status: r.status,
+      version: r.version,
+    }
+    if (r.assigneeId !== null) {
+      card.assignee = r.assigneeId
+      const l = load.get(r.assigneeId) ?? { taskCount: 0, plannedMinutes: 0 }
+      l.taskCount++
+      l.plannedMinutes += r.durationMinutes
+      load.set(r.assigneeId, l)
+    }
+    if (r.flag !== null) card.flag = r.flag
+    if (r.heldReason !== null) card.held = r.heldReason
+    return card
+  })
+  return { date, people: await columns(shifts, load), kinds, targets, cards }
+}
+
+/** People on shift, in shift order, then anyone else holding tasks that day. */
+async function columns(shifts: ShiftRow[], load: Map<number, { taskCount: number; plannedMinutes: number }>): Promise<BoardColumnPerson[]> {
+  const byPerson = new Map<number, BoardColumnPerson>()
+  const column = (personId: number, name: string, role: string): BoardColumnPerson => ({
+    personId, name, role, shifts: [], taskCount: load.get(personId)?.taskCount ?? 0, plannedMinutes: load.get(personId)?.plannedMinutes ?? 0,
+  })
+  for (const s of shifts) {
+    const c = byPerson.get(s.personId) ?? column(s.personId, s.name, s.role)
+    c.shifts.push({ start: s.start, end: s.end, kind: s.kind })
+    byPerson.set(s.personId, c)
+  }
+  const offShift = [...load.keys()].filter((id) => !byPerson.has(id))
+  if (offShift.length) {
+    const people = (await db().query(`SELECT id, name, role FROM people WHERE id IN (${offShift.map(() => '?').join(',')})`, offShift)) as Array<{ id: number; name: string; role: string }>
+    for (const p of people) byPerson.set(p.id, column(p.id, p.name, p.role))
+  }
+  return [...byPerson.values()].sort(
+    (a, b) => (a.shifts[0]?.start ?? '99').localeCompare(b.shifts[0]?.start ?? '99') || a.name.localeCompare(b.name),
+  )
 }

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query'
-import type { Board } from '#shared/schemas/board'
+import type { Board, BoardCard } from '#shared/schemas/board'
 import type { Task } from '#shared/schemas/task'
 import { boardKeys } from './board-queries'
 
@@ -9,7 +9,15 @@ export interface MoveTarget {
   date?: string
 }
 
-const byDue = (a: Task, b: Task) => a.dueAt.localeCompare(b.dueAt) || a.id - b.id
+/** Board order within a day: local time, then id (the server sorts by due instant, which agrees but for a repeated hour). */
+export const byTime = (a: BoardCard, b: BoardCard) => a.localTime.localeCompare(b.localTime) || a.id - b.id
+
+/** The part of a full task a card draws, so the cache never keeps a task's whole record. */
+export const toBoardCard = (t: BoardCard): BoardCard => ({
+  id: t.id, title: t.title, category: t.category, priority: t.priority, durationMinutes: t.durationMinutes,
+  targetLabel: t.targetLabel, tankId: t.tankId, areaId: t.areaId, localDate: t.localDate, localTime: t.localTime,
+  status: t.status, assigneeId: t.assigneeId, assigneeName: t.assigneeName, flag: t.flag, heldReason: t.heldReason, version: t.version,
+})
 
 /** The board as it will look once the server accepts the move; tasks moved to another day leave it. */
 export function applyMove(board: Board, ids: ReadonlySet<number>, target: MoveTarget): Board {
@@ -35,7 +43,7 @@ export function placeTasks(board: Board, changed: Task[]): Board | 'refetch' {
     }
     // A column for someone the board does not know yet needs the server's person list.
     if (task.assigneeId !== null && !board.people.some((p) => p.personId === task.assigneeId)) return 'refetch'
-    tasks = [...others, task].sort(byDue)
+    tasks = [...others, toBoardCard(task)].sort(byTime)
   }
   return tasks === board.tasks ? board : { ...board, tasks }
 }

@@ -1,5 +1,5 @@
 import { queryOptions } from '@tanstack/react-query'
-import { BoardSchema } from '#shared/schemas/board'
+import { BoardWireSchema, unfoldBoard } from '#shared/schemas/board'
 import { apiFetch } from '../../../lib/api-client'
 
 // Under the shared "tasks" root, so a generic tasks invalidation (a reconnect, a move) reaches the board.
@@ -10,5 +10,9 @@ export const boardKeys = {
 
 export const boardQueries = {
   day: (date: string) =>
-    queryOptions({ queryKey: boardKeys.day(date), queryFn: () => apiFetch(`/tasks/board?date=${date}`, BoardSchema) }),
+    queryOptions({
+      queryKey: boardKeys.day(date),
+      // Sent compact (each kind and target once); the cache holds plain cards.
+      queryFn: async () => unfoldBoard(await apiFetch(`/tasks/board?date=${date}`, BoardWireSchema)),
+    }),
 }

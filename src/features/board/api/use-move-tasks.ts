@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { toast } from 'sonner'
 import { z } from 'zod'
-import type { Board } from '#shared/schemas/board'
-import { TaskSchema, type Task } from '#shared/schemas/task'
+import type { Board, BoardCard } from '#shared/schemas/board'
+import { TaskSchema } from '#shared/schemas/task'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 import { applyMove, placeTasks, type MoveTarget } from './board-cache'
 import { boardKeys } from './board-queries'
@@ -14,7 +14,7 @@ const BulkMoveResultSchema = z.object({
 type MoveResult = z.infer<typeof BulkMoveResultSchema>
 
 export interface MoveRequest extends MoveTarget {
-  tasks: Task[]
+  tasks: BoardCard[]
 }
 
 const MOVE_KEY = ['board', 'move'] as const
@@ -29,7 +29,7 @@ async function sendMove({ tasks, assigneeId, date }: MoveRequest): Promise<MoveR
   return apiFetch('/tasks/bulk-move', BulkMoveResultSchema, { method: 'POST', ...jsonBody(body) })
 }
 
-function refusalText(result: MoveResult, tasks: Task[]) {
+function refusalText(result: MoveResult, tasks: BoardCard[]) {
   const title = (id: number) => tasks.find((t) => t.id === id)?.title ?? 'A task'
   if (result.refused.length === 1) return `${title(result.refused[0].id)} stayed where it was: ${result.refused[0].message}`
   return `${result.refused.length} tasks stayed where they were: ${result.refused.map((r) => `${title(r.id)}: ${r.message}`).join(' ')}`

@@ -1,26 +1,27 @@
 import { useDroppable } from '@dnd-kit/core'
 import { clsx } from 'clsx'
 import { useId, type ReactNode } from 'react'
-import type { BoardColumnPerson } from '#shared/schemas/board'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard, BoardColumnPerson } from '#shared/schemas/board'
 import { columnId, type DropTarget } from '../utils/drop-targets'
+import { CardList, type CardPlacement } from './card-list'
 import { ColumnHeader } from './column-header'
 
 interface Props {
   person: BoardColumnPerson | null
   /** Every task in the column, filtered or not, for the header's totals. */
-  allTasks: Task[]
-  shownCount: number
+  allTasks: BoardCard[]
+  shown: BoardCard[]
   droppable: boolean
-  children: ReactNode
+  activeId: number | null
+  renderCard: (task: BoardCard, placement?: CardPlacement) => ReactNode
 }
 
 /** Unassigned, or one person's day: a drop target for cards. */
-export function BoardColumn({ person, allTasks, shownCount, droppable, children }: Props) {
+export function BoardColumn({ person, allTasks, shown, droppable, activeId, renderCard }: Props) {
   const headingId = useId()
   const target: DropTarget = person ? { kind: 'column', assigneeId: person.personId, name: person.name } : { kind: 'column', assigneeId: null, name: 'Unassigned' }
   const { setNodeRef, isOver } = useDroppable({ id: columnId(target.assigneeId), data: target, disabled: !droppable })
-  const hidden = allTasks.length - shownCount
+  const hidden = allTasks.length - shown.length
 
   return (
     <section
@@ -38,8 +39,8 @@ export function BoardColumn({ person, allTasks, shownCount, droppable, children 
         taskCount={allTasks.length}
         plannedMinutes={allTasks.reduce((sum, t) => sum + t.durationMinutes, 0)}
       />
-      <ul className="flex flex-1 flex-col gap-2 p-2">{children}</ul>
-      {shownCount === 0 && (
+      <CardList cards={shown} activeId={activeId} renderCard={renderCard} />
+      {shown.length === 0 && (
         <p className="px-3 pb-3 text-sm text-tide-600">
           {hidden > 0 ? `${hidden} hidden by the filters` : droppable ? 'No tasks. Drop a card here.' : 'No tasks.'}
         </p>

@@ -1,13 +1,15 @@
 import { DndContext, DragOverlay } from '@dnd-kit/core'
 import { useMemo } from 'react'
-import type { Board } from '#shared/schemas/board'
+import type { Board, BoardCard } from '#shared/schemas/board'
 import type { Area } from '#shared/schemas/facility'
-import { FINISHED_STATUSES, type Task } from '#shared/schemas/task'
+import { FINISHED_STATUSES } from '#shared/schemas/task'
+import { byTime } from '../api/board-cache'
 import { useBoardDnd } from '../hooks/use-board-dnd'
 import { useBoardParams } from '../hooks/use-board-params'
 import { useSelection } from '../hooks/use-selection'
 import { isFiltered, matchesFilters } from '../utils/board-filters'
 import { BoardColumn } from './board-column'
+import type { CardPlacement } from './card-list'
 import { BoardFiltersBar } from './board-filters'
 import { DateNav } from './date-nav'
 import { DragPreview } from './drag-preview'
@@ -24,22 +26,34 @@ interface Props {
   canEdit: boolean
 }
 
-const byDue = (a: Task, b: Task) => a.dueAt.localeCompare(b.dueAt) || a.id - b.id
+/** Each column's cards, all and after the filters, in one pass over the day. */
+function byColumn(all: BoardCard[], shown: ReadonlySet<BoardCard>) {
+  const columns = new Map<number | null, { all: BoardCard[]; shown: BoardCard[] }>()
+  for (const t of all) {
+    let c = columns.get(t.assigneeId)
+    if (!c) columns.set(t.assigneeId, (c = { all: [], shown: [] }))
+    c.all.push(t)
+    if (shown.has(t)) c.shown.push(t)
+  }
+  return columns
+}
+const EMPTY = { all: [], shown: [] }
 
 export function BoardView({ board, areas, today, canEdit }: Props) {
   const { filters, setFilters, hrefFor } = useBoardParams()
   const { selected, toggle, clear } = useSelection()
-  const visible = useMemo(() => board.tasks.filter((t) => matchesFilters(t, filters)).sort(byDue), [board.tasks, filters])
+  const sorted = useMemo(() => [...board.tasks].sort(byTime), [board.tasks])
+  const visible = useMemo(() => sorted.filter((t) => matchesFilters(t, filters)), [sorted, filters])
+  const columns = useMemo(() => byColumn(sorted, new Set(visible)), [sorted, visible])
   const { contextProps, active, movingCount } = useBoardDnd({ date: board.date, visible, selected, clearSelection: clear })
-  const movable = (t: Task) => canEdit && !FINISHED_STATUSES.includes(t.status)
+  const movable = (t: BoardCard) => canEdit && !FINISHED_STATUSES.includes(t.status)
   const selectedShown = visible.filter((t) => selected.has(t.id)).length
 
-  const column = (assigneeId: number | null) => ({
-    all: board.tasks.filter((t) => t.assigneeId === assigneeId),
-    shown: visible.filter((t) => t.assigneeId === assigneeId),
-  })
-  const cards = (tasks: Task[]) =>
-    tasks.map((t) => <TaskCard key={t.id} task={t} movable={movable(t)} selected={selected.has(t.id)} onToggle={toggle} />)
+  const column = (assigneeId: number | null) => columns.get(assigneeId) ?? EMPTY
+  const renderCard = (t: BoardCard, placement?: CardPlacement) => (
+    <TaskCard key={t.id} task={t} movable={movable(t)} selected={selected.has(t.id)} onToggle={toggle} placement={placement} />
+  )
+  const activeId = active?.id ?? null
   const unassigned = column(null)
 
   return (
@@ -61,15 +75,11 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
           <p className="text-sm text-tide-700">Nobody is on shift on this day yet. Add shifts on the roster to give people a column here.</p>
         )}
         <div className="flex flex-col gap-3 md:flex-row md:items-stretch md:overflow-x-auto md:pb-2">
-          <BoardColumn person={null} allTasks={unassigned.all} shownCount={unassigned.shown.length} droppable={canEdit}>
-            {cards(unassigned.shown)}
-          </BoardColumn>
+          <BoardColumn person={null} allTasks={unassigned.all} shown={unassigned.shown} droppable={canEdit} activeId={activeId} renderCard={renderCard} />
           {board.people.map((person) => {
             const own = column(person.personId)
             return (
-              <BoardColumn key={person.personId} person={person} allTasks={own.all} shownCount={own.shown.length} droppable={canEdit}>
-                {cards(own.shown)}
-              </BoardColumn>
+              <BoardColumn key={person.personId} person={person} allTasks={own.all} shown={own.shown} droppable={canEdit} activeId={activeId} renderCard={renderCard} />
             )
           })}
         </div>

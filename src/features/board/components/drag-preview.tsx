@@ -1,9 +1,9 @@
 import { Layers } from 'lucide-react'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 import { TaskCardBody } from './task-card-body'
 
 /** Follows the pointer or the arrow keys while a card (or a selection) is on the move. */
-export function DragPreview({ task, count }: { task: Task; count: number }) {
+export function DragPreview({ task, count }: { task: BoardCard; count: number }) {
   return (
     <div className="relative w-60 cursor-grabbing xl:w-64 rounded-lg bg-white p-2 shadow-xl ring-2 ring-tide-600">
       {count > 1 && (

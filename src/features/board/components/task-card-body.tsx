@@ -1,11 +1,11 @@
 import { clsx } from 'clsx'
 import { CirclePause } from 'lucide-react'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 import { FlagLabel, WelfareLabel } from './flag-label'
 import { StatusLabel } from './status-label'
 
 /** What a card says about its task; shared by the card and the preview that follows a drag. */
-export function TaskCardBody({ task, cornerTaken = false }: { task: Task; cornerTaken?: boolean }) {
+export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; cornerTaken?: boolean }) {
   const flagged = task.flag === 'watch' || task.flag === 'critical'
   return (
     <div className="flex min-w-0 flex-1 flex-col gap-0.5">

@@ -2,17 +2,20 @@ import { useDraggable } from '@dnd-kit/core'
 import { clsx } from 'clsx'
 import { GripVertical } from 'lucide-react'
 import type { KeyboardEventHandler, MouseEvent, MouseEventHandler, TouchEventHandler } from 'react'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 import { cardId, type DragItem } from '../utils/drop-targets'
 import { taskPhrase } from '../utils/task-text'
+import type { CardPlacement } from './card-list'
 import { TaskCardBody } from './task-card-body'
 
 interface Props {
-  task: Task
+  task: BoardCard
   /** Supervisors and managers move unfinished cards; everyone else reads. */
   movable: boolean
   selected: boolean
   onToggle: (taskId: number) => void
+  /** Set when the column draws only a window of its cards. */
+  placement?: CardPlacement
 }
 
 const fromControl = (e: MouseEvent) => (e.target as HTMLElement).closest('input, label, a') !== null
@@ -21,7 +24,7 @@ const fromControl = (e: MouseEvent) => (e.target as HTMLElement).closest('input,
  * One task on the board. A mouse drags the whole card; touch and keyboard use the handle,
  * which alone has `touch-action: none`, so a swipe over the card still scrolls the page.
  */
-export function TaskCard({ task, movable, selected, onToggle }: Props) {
+export function TaskCard({ task, movable, selected, onToggle, placement }: Props) {
   const item: DragItem = { task }
   const { setNodeRef, setActivatorNodeRef, listeners, attributes, isDragging } = useDraggable({
     id: cardId(task.id),
@@ -34,8 +37,13 @@ export function TaskCard({ task, movable, selected, onToggle }: Props) {
 
   return (
     <li
-      ref={setNodeRef}
+      ref={(el) => {
+        setNodeRef(el)
+        placement?.measure(el)
+      }}
       data-task-id={task.id}
+      data-index={placement?.index}
+      style={placement && { position: 'absolute', top: 0, left: 8, right: 8, transform: `translateY(${placement.start}px)` }}
       onMouseDown={(e) => !fromControl(e) && onMouseDown?.(e)}
       onClick={(e) => movable && e.shiftKey && !fromControl(e) && onToggle(task.id)}
       className={clsx(

@@ -3,7 +3,7 @@ import {
   type DndContextProps, type DragEndEvent, type DragStartEvent,
 } from '@dnd-kit/core'
 import { useCallback, useMemo, useState } from 'react'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 import { useMoveTasks } from '../api/use-move-tasks'
 import { boardAnnouncements, isOrigin, screenReaderInstructions } from '../utils/announcements'
 import { columnId, type DragItem, type DropTarget } from '../utils/drop-targets'
@@ -12,7 +12,7 @@ import { createKeyboardNavigation } from '../utils/keyboard-navigation'
 interface Options {
   date: string
   /** The cards on screen, in board order; a selection moves only those still shown. */
-  visible: Task[]
+  visible: BoardCard[]
   selected: ReadonlySet<number>
   clearSelection: () => void
 }
@@ -23,7 +23,7 @@ const taskOf = (event: { active: { data: { current?: unknown } } }) => (event.ac
 export function useBoardDnd({ date, visible, selected, clearSelection }: Options) {
   const { mutate: move } = useMoveTasks(date)
   const [nav] = useState(createKeyboardNavigation)
-  const [active, setActive] = useState<Task | null>(null)
+  const [active, setActive] = useState<BoardCard | null>(null)
 
   const sensors = useSensors(
     useSensor(MouseSensor, { activationConstraint: { distance: 5 } }),
@@ -33,7 +33,7 @@ export function useBoardDnd({ date, visible, selected, clearSelection }: Options
   )
 
   const moving = useCallback(
-    (task: Task) => (selected.has(task.id) && selected.size > 1 ? [task, ...visible.filter((t) => t.id !== task.id && selected.has(t.id))] : [task]),
+    (task: BoardCard) => (selected.has(task.id) && selected.size > 1 ? [task, ...visible.filter((t) => t.id !== task.id && selected.has(t.id))] : [task]),
     [selected, visible],
   )
   const [pickup] = useState(() => ({ fresh: false }))

@@ -1,5 +1,5 @@
 import type { Active, Announcements, Over, ScreenReaderInstructions } from '@dnd-kit/core'
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 import { longDay } from './board-dates'
 import type { DragItem, DropTarget } from './drop-targets'
 import { taskPhrase } from './task-text'
@@ -17,19 +17,19 @@ const overText = (t: DropTarget) =>
   t.kind === 'day' ? longDay(t.date) : t.assigneeId === null ? 'Unassigned' : `${t.name}'s column`
 
 /** Whether dropping here changes nothing for this task. */
-export const isOrigin = (task: Task, t: DropTarget) =>
+export const isOrigin = (task: BoardCard, t: DropTarget) =>
   t.kind === 'day' ? t.date === task.localDate : t.assigneeId === task.assigneeId
 
 /**
  * Words for screen readers, never ids. `moving` gives the tasks that travel with the one picked
  * up (a selection); the card's own task is always first. `pickup` outlives re-renders mid-drag.
  */
-export function boardAnnouncements(moving: (task: Task) => Task[], pickup: { fresh: boolean }): Announcements {
-  const what = (task: Task) => {
+export function boardAnnouncements(moving: (task: BoardCard) => BoardCard[], pickup: { fresh: boolean }): Announcements {
+  const what = (task: BoardCard) => {
     const all = moving(task)
     return all.length > 1 ? `${all.length} tasks, starting with ${taskPhrase(task)}` : taskPhrase(task)
   }
-  const count = (task: Task) => {
+  const count = (task: BoardCard) => {
     const n = moving(task).length
     return n > 1 ? `${n} tasks` : task.title
   }

@@ -1,5 +1,6 @@
 import { CategorySchema, type Category } from '#shared/schemas/routine'
-import { TaskStatusSchema, type Task, type TaskStatus } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
+import { TaskStatusSchema, type TaskStatus } from '#shared/schemas/task'
 
 export interface BoardFilters {
   areaId: number | null
@@ -27,7 +28,7 @@ export function writeFilters(params: URLSearchParams, filters: BoardFilters): UR
 
 export const isFiltered = (f: BoardFilters) => f.areaId !== null || f.category !== null || f.status !== null
 
-export const matchesFilters = (task: Task, f: BoardFilters) =>
+export const matchesFilters = (task: BoardCard, f: BoardFilters) =>
   (f.areaId === null || task.areaId === f.areaId) &&
   (f.category === null || task.category === f.category) &&
   (f.status === null || task.status === f.status)

@@ -1,4 +1,4 @@
-import type { Task } from '#shared/schemas/task'
+import type { BoardCard } from '#shared/schemas/board'
 
 /** What a card can be dropped on: a column (who does it) or a day of the week strip (when). */
 export type DropTarget =
@@ -6,7 +6,7 @@ export type DropTarget =
   | { kind: 'day'; date: string }
 
 export interface DragItem {
-  task: Task
+  task: BoardCard
 }
 
 export const cardId = (taskId: number) => `task-${taskId}`
