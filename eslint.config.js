@@ -36,7 +36,6 @@ const ENTITY_IMPORTS_BEING_REMOVED = {
   'roster/roster.service.ts': ['people/person.entity.ts'],
   'roster/rotation.service.ts': ['people/person.entity.ts'],
   'routines/routines.service.ts': ['parameters/parameter.entities.ts'],
-  'tasks/board.service.ts': ['people/person.entity.ts', 'roster/roster.entities.ts'],
   'tasks/materialiser.ts': ['routines/routine.entity.ts'],
   'tasks/move-task.service.ts': ['people/person.entity.ts', 'roster/roster.entities.ts'],
   'tasks/round.service.ts': ['parameters/parameter.entities.ts'],
