@@ -1,6 +1,8 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { tanks } from '#server/modules/facility/catalogues'
+import { PersonEntity } from '#server/modules/people/person.entity'
+import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { materialise } from '#server/modules/tasks/materialiser'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
@@ -17,6 +19,24 @@ afterAll(() => t.close())
 const tasksOf = (routineId: number) => db().getRepository(TaskEntity).find({ where: { routineId }, order: { dueAt: 'ASC' } })
 
 describe('materialiser', () => {
+  test('a routine naming a person who has left makes unassigned tasks; one for whoever is on shift gives them to the rostered technician', async () => {
+    const { tanks: made } = await makeAreaWithTanks(1)
+    const left = await t.createPersonWithRole('technician')
+    await db().getRepository(PersonEntity).update(left.id, { active: false })
+    const named = await createRoutine(routineInput({ targetIds: [made[0].id], assigneeRule: { kind: 'person', personId: left.id } }))
+    expect((await tasksOf(named.id)).every((x) => x.assigneeId === null)).toBe(true)
+
+    const rostered = await t.createPersonWithRole('technician')
+    const farDay = new Date(Date.now() + 500 * 86_400_000).toISOString().slice(0, 10)
+    await createShift({ personId: rostered.id, date: farDay, start: '00:00', end: '23:59', kind: 'day' })
+    const onShift = await createRoutine(routineInput({ targetIds: [made[0].id], dtstart: `${farDay}T10:00:00`, rrule: 'FREQ=DAILY;COUNT=1', assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
+    await materialise({ routineIds: [onShift.id], from: new Date(Date.parse(farDay) - 86_400_000), horizonDays: 3 })
+    const [task] = await tasksOf(onShift.id)
+    expect(task.localDate).toBe(farDay)
+    // Other tests roster technicians on other days only; this far day is ours.
+    expect(task.assigneeId).toBe(rostered.id)
+  })
+
   test('when it runs twice, then the second run creates nothing', async () => {
     const { tanks: made } = await makeAreaWithTanks(2)
     const routine = await createRoutine(routineInput({ targetIds: made.map((x) => x.id) }))

@@ -20,9 +20,13 @@ const covers = (s: ShiftRow, hhmm: string) => {
  * stretch of the walking order), or whoever is on call then. Tasks a supervisor assigned by
  * hand, and finished ones, are never touched.
  */
-export async function applyAssigneeRules(from: string, to: string): Promise<number> {
+export async function applyAssigneeRules(from: string, to: string, opts: { routineIds?: number[] } = {}): Promise<number> {
   const tasks = await db().getRepository(TaskEntity).find({
-    where: { localDate: Between(from, to), assignedManually: false, status: In(['planned', 'open', 'overdue']) },
+    select: { id: true, routineId: true, localDate: true, localStart: true, dueAt: true, areaId: true, targetKind: true, targetId: true, assigneeId: true },
+    where: {
+      localDate: Between(from, to), assignedManually: false, status: In(['planned', 'open', 'overdue']),
+      ...(opts.routineIds ? { routineId: In(opts.routineIds) } : {}),
+    },
   })
   const withRoutine = tasks.filter((t) => t.routineId !== null)
   if (!withRoutine.length) return 0

@@ -10,7 +10,14 @@ import { TaskEntity, type TaskRow } from './task.entity'
 import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
 
 export const DEFAULT_HORIZON_DAYS = 42
-const CHUNK = 1000
+// Rows per INSERT: ~400 bytes each, so a statement stays far below max_allowed_packet.
+const CHUNK = 2000
+// Columns the materialiser writes; the rest take their defaults.
+const INSERT_COLUMNS = [
+  'routineId', 'title', 'category', 'instructions', 'priority', 'targetKind', 'targetId', 'tankId', 'areaId', 'localDate', 'localStart',
+  'occurrenceStart', 'dueAt', 'windowStartAt', 'graceUntil', 'durationMinutes', 'status', 'assigneeId', 'requiredReadings', 'version',
+] as const
+const ROW_PLACEHOLDER = `(${INSERT_COLUMNS.map(() => '?').join(',')})`
 
 export interface MaterialiseOptions {
   routineIds?: number[]
@@ -25,39 +32,62 @@ export interface MaterialiseOptions {
  * (routine, target, local start) plus INSERT IGNORE means a second run creates nothing.
  */
 export async function materialise(opts: MaterialiseOptions = {}): Promise<{ created: number; routines: number }> {
-  const cat = await loadCatalogue()
+  const [cat, activePeople] = await Promise.all([loadCatalogue(), activePersonIds()])
   const repo = db().getRepository(RoutineEntity)
   const routines = (opts.routineIds ? await repo.findBy(opts.routineIds.map((id) => ({ id }))) : await repo.find()).filter((r) => !r.paused)
   // From now on by default: earlier occurrences of a new rule would be born overdue.
   const from = opts.from ?? new Date()
   const until = new Date(from.getTime() + (opts.horizonDays ?? DEFAULT_HORIZON_DAYS) * 86_400_000)
   let created = 0
+  // Rows wait in one batch across routines, so small routines share a statement.
+  let batch: Array<Partial<TaskRow>> = []
   for (const [index, routine] of routines.entries()) {
-    const rows = planRoutineTasks(routine, cat, from, until).filter((r) => opts.tankId === undefined || r.tankId === opts.tankId)
-    for (let i = 0; i < rows.length; i += CHUNK) {
-      created += await insertIgnoringDuplicates(rows.slice(i, i + CHUNK))
+    for (const row of planRoutineTasks(routine, cat, from, until, activePeople)) {
+      if (opts.tankId !== undefined && row.tankId !== opts.tankId) continue
+      batch.push(row)
+      if (batch.length === CHUNK) {
+        created += await insertIgnoringDuplicates(batch)
+        batch = []
+      }
     }
+    if (index === routines.length - 1 && batch.length) created += await insertIgnoringDuplicates(batch)
     opts.onProgress?.(index + 1, routines.length, created)
   }
   if (created) {
     logger.info({ created, routines: routines.length }, 'tasks materialised')
     const zone = cat.facility.timeZone
-    await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!)
+    // A named person was set while planning; only rules that read the roster need a pass over the tasks.
+    const rosterBound = routines.filter((r) => r.assigneeRule.kind === 'on_call' || r.assigneeRule.kind === 'role_on_shift').map((r) => r.id)
+    if (rosterBound.length) {
+      await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!, { routineIds: rosterBound })
+    }
     // New feeding tasks may fall inside a planned event's fasting window.
     await holdFeedsForAllEvents()
   }
   return { created, routines: routines.length }
 }
 
-/** INSERT IGNORE through the driver, which reports how many rows were really new. */
+async function activePersonIds(): Promise<Set<number>> {
+  const rows = (await db().query('SELECT id FROM people WHERE active = 1')) as Array<{ id: number }>
+  return new Set(rows.map((r) => r.id))
+}
+
+/**
+ * One multi-row INSERT IGNORE, written by hand: the query builder spends longer building a
+ * 2,000-row statement than the database spends on it. The driver reports the rows really new.
+ */
 async function insertIgnoringDuplicates(rows: Array<Partial<TaskRow>>): Promise<number> {
-  const [sql, params] = db().createQueryBuilder().insert().into(TaskEntity).values(rows).orIgnore().getQueryAndParameters()
+  const params: unknown[] = []
+  for (const row of rows) {
+    for (const c of INSERT_COLUMNS) params.push(c === 'requiredReadings' ? JSON.stringify(row[c] ?? []) : (row[c] ?? null))
+  }
+  const sql = `INSERT IGNORE INTO tasks (${INSERT_COLUMNS.map((c) => `\`${c}\``).join(',')}) VALUES ${rows.map(() => ROW_PLACEHOLDER).join(',')}`
   const result = (await db().query(sql, params)) as { affectedRows?: number }
   return result.affectedRows ?? 0
 }
 
 /** The task rows one routine should have between two instants, in the facility's zone. */
-export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, until: Date): Array<Partial<TaskRow>> {
+export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, until: Date, activePeople?: ReadonlySet<number>): Array<Partial<TaskRow>> {
   const zone = cat.facility.timeZone
   const startOfDay = (d: string) => DateTime.fromISO(d, { zone }).startOf('day').toJSDate()
   const endOfDay = (d: string) => DateTime.fromISO(d, { zone }).endOf('day').toJSDate()
@@ -68,7 +98,9 @@ export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, u
   if (!targets.length) return []
   const skip = new Set(routine.skipDates)
   const occurrences = expandRule({ rrule: routine.rrule, dtstart: routine.dtstart, tzid: zone, from: lower.toISOString(), to: upper.toISOString(), limit: 100_000 })
-  const assigneeId = routine.assigneeRule.kind === 'person' ? routine.assigneeRule.personId : null
+  // A named person who is no longer active leaves the task unassigned, as the rule pass would.
+  const named = routine.assigneeRule.kind === 'person' ? routine.assigneeRule.personId : null
+  const assigneeId = named !== null && (!activePeople || activePeople.has(named)) ? named : null
   const rows: Array<Partial<TaskRow>> = []
   for (const occ of occurrences) {
     const localDate = occ.local.slice(0, 10)
