@@ -103,7 +103,11 @@ try {
   await step('2 board drag', async () => measureBoardDrag(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1), await tasksOn(day(1))))
   await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2)))
   await step('4 socket fan-out', () => measureSocketFanout(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(3)))
-  await step('6 lighthouse', () => measureLighthouse(url(), need(cookies.technician, 'a signed-in technician'), workDir, clientDir ? 'fresh build' : 'dist/ (the fresh build failed)'))
+  const served = () => (clientDir ? 'fresh build' : 'dist/ (the fresh build failed)')
+  await step('6 lighthouse Round', () => measureLighthouse(url(), { name: 'Round page', path: '/round', slug: 'round' }, need(cookies.technician, 'a signed-in technician'), workDir, served()))
+  await step('6 lighthouse board', () =>
+    measureLighthouse(url(), { name: `board (${day(1)}, full day)`, path: `/board?date=${day(1)}`, slug: 'board' }, need(cookies.supervisor, 'a signed-in supervisor'), workDir, served()),
+  )
   await step('7 morning round', () => measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')))
 } finally {
   await cleanUp()
@@ -113,4 +117,6 @@ rows.push({ measurement: '8 total bench time', result: seconds(performance.now()
 const order = (r: Row) => (r.measurement.startsWith('setup') ? 0.5 : Number(/^\d+/.exec(r.measurement)?.[0] ?? 99))
 const table = rows.filter((r) => !r.measurement.startsWith('setup') || r.result === 'failed').sort((a, b) => order(a) - order(b))
 console.log(formatTable(table))
-process.exit(table.some((r) => r.result === 'failed') ? 1 : 0)
+const failed = table.filter((r) => r.result === 'failed')
+if (failed.length) console.error(`\nBENCH FAILED: ${failed.map((r) => `${r.measurement}: ${r.detail}`).join('; ')}`)
+process.exit(failed.length ? 1 : 0)

@@ -15,7 +15,8 @@ import { log } from './stats'
 
 export const BENCH_PASSWORD = TEST_PASSWORD
 export const AREA_COUNT = 8
-export const TANKS_PER_AREA = 25
+/** ROUNDTIDE_BENCH_TANKS (200 by default) sets the facility's size for the growth table; tasks a day grow with it (30 per tank). */
+export const TANKS_PER_AREA = Math.max(1, Math.round(Number(process.env.ROUNDTIDE_BENCH_TANKS || 200) / 8))
 export const SYSTEM_COUNT = 6
 export const ROUND_SIZE = 24
 
@@ -79,7 +80,7 @@ export async function buildSyntheticFacility(): Promise<BenchFacility> {
   const madeTanks: Tank[] = []
   for (const [a, area] of madeAreas.entries()) {
     for (let t = 1; t <= TANKS_PER_AREA; t++) {
-      const code = `B${a + 1}-${String(t).padStart(2, '0')}`
+      const code = `B${a + 1}-${String(t).padStart(3, '0')}`
       madeTanks.push(await tanks.create({ code, name: `Tank ${code}`, areaId: area.id, systemId: madeSystems[a % SYSTEM_COUNT].id, volumeL: 1200, kind: 'tank', inUse: true }))
     }
   }

@@ -1,7 +1,7 @@
 import { useQueryClient, type QueryClient, type QueryKey } from '@tanstack/react-query'
 import { useEffect, useRef, useState, type ReactNode } from 'react'
+import type { Socket } from 'socket.io-client'
 import { TaskSchema, type Task } from '#shared/schemas/task'
-import { createLiveSocket, TASK_EVENTS } from '../api/socket-client'
 import { patchTaskLists, TASKS_ROOT } from '../api/task-list-cache'
 import { LiveStatusContext, type LiveStatus } from '../hooks/use-live-status'
 import { useSessionPersonId } from '../hooks/use-session-person-id'
@@ -38,54 +38,65 @@ export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children 
 
   useEffect(() => {
     if (personId === null) return
-    const socket = createLiveSocket()
-    const report = (status: LiveStatus) => setState({ personId, status })
-    let missed = false
-    const lost = () => {
-      missed = true
-      report(navigator.onLine ? 'reconnecting' : 'offline')
-    }
-    const handle = (payload: unknown) => {
-      const parsed = TaskSchema.safeParse(payload)
-      if (!parsed.success) return
-      patchTaskLists(queryClient, parsed.data)
-      onTaskRef.current?.(queryClient, parsed.data, personId)
-    }
-    for (const event of TASK_EVENTS) socket.on(event, handle)
-    // Bulk changes (a roster change re-assigning, an event holding feeds) come without tasks: refetch once.
-    socket.on('tasks:changed', () => void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false }))
-    socket.on('connect', () => {
-      report('live')
-      // What changed while we were away came as events nobody heard: catch up once.
-      if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
-      missed = false
-    })
-    socket.on('disconnect', lost)
-    socket.on('connect_error', lost)
-    const onOffline = () => {
-      // The socket may not notice a dead network until its ping times out; the browser knows sooner.
-      missed = true
-      report('offline')
-    }
-    const onOnline = () => {
-      if (socket.connected) {
-        report('live')
-        void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
-        missed = false
-        return
+    // socket.io-client loads after the first paint: the page needs its data first, live changes next.
+    let cancelled = false
+    let teardown: (() => void) | undefined
+    void import('../api/socket-client').then(({ createLiveSocket, TASK_EVENTS }) => {
+      if (!cancelled) teardown = connect(createLiveSocket(), TASK_EVENTS)
+    }, () => !cancelled && setState({ personId, status: 'offline' }))
+    const connect = (socket: Socket, taskEvents: readonly string[]) => {
+      const report = (status: LiveStatus) => setState({ personId, status })
+      let missed = false
+      const lost = () => {
+        missed = true
+        report(navigator.onLine ? 'reconnecting' : 'offline')
       }
-      report('reconnecting')
-      // Skip the back-off wait: the network is back now.
-      socket.disconnect().connect()
+      const handle = (payload: unknown) => {
+        const parsed = TaskSchema.safeParse(payload)
+        if (!parsed.success) return
+        patchTaskLists(queryClient, parsed.data)
+        onTaskRef.current?.(queryClient, parsed.data, personId)
+      }
+      for (const event of taskEvents) socket.on(event, handle)
+      // Bulk changes (a roster change re-assigning, an event holding feeds) come without tasks: refetch once.
+      socket.on('tasks:changed', () => void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false }))
+      socket.on('connect', () => {
+        report('live')
+        // What changed while we were away came as events nobody heard: catch up once.
+        if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
+        missed = false
+      })
+      socket.on('disconnect', lost)
+      socket.on('connect_error', lost)
+      const onOffline = () => {
+        // The socket may not notice a dead network until its ping times out; the browser knows sooner.
+        missed = true
+        report('offline')
+      }
+      const onOnline = () => {
+        if (socket.connected) {
+          report('live')
+          void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
+          missed = false
+          return
+        }
+        report('reconnecting')
+        // Skip the back-off wait: the network is back now.
+        socket.disconnect().connect()
+      }
+      window.addEventListener('offline', onOffline)
+      window.addEventListener('online', onOnline)
+      socket.connect()
+      return () => {
+        window.removeEventListener('offline', onOffline)
+        window.removeEventListener('online', onOnline)
+        socket.removeAllListeners()
+        socket.disconnect()
+      }
     }
-    window.addEventListener('offline', onOffline)
-    window.addEventListener('online', onOnline)
-    socket.connect()
     return () => {
-      window.removeEventListener('offline', onOffline)
-      window.removeEventListener('online', onOnline)
-      socket.removeAllListeners()
-      socket.disconnect()
+      cancelled = true
+      teardown?.()
     }
   }, [personId, queryClient])
 
