@@ -43,7 +43,7 @@ export async function dropBenchDatabase(ds: DataSource | undefined) {
 }
 
 /** A plain mysql2 pool on the bench database, for the hand-written floor query. */
-export function floorPool() {
+export function floorPool(connectionLimit = 2) {
   const { db } = benchConfig()
-  return mysql.createPool({ host: db.host, port: db.port, user: db.username, password: db.password, database: BENCH_DB, timezone: 'Z', connectionLimit: 2 })
+  return mysql.createPool({ host: db.host, port: db.port, user: db.username, password: db.password, database: BENCH_DB, timezone: 'Z', connectionLimit })
 }

@@ -101,7 +101,7 @@ try {
   const url = () => need(server, 'the server').url
   await step('2 board', () => measureBoard(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1)))
   await step('2 board drag', async () => measureBoardDrag(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(1), await tasksOn(day(1))))
-  await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2)))
+  await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2), day(5), facility!.supervisor.id))
   await step('4 socket fan-out', () => measureSocketFanout(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(3)))
   const served = () => (clientDir ? 'fresh build' : 'dist/ (the fresh build failed)')
   await step('6 lighthouse Round', () => measureLighthouse(url(), { name: 'Round page', path: '/round', slug: 'round' }, need(cookies.technician, 'a signed-in technician'), workDir, served()))

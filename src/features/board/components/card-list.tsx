@@ -42,7 +42,7 @@ function WindowedCards({ cards, activeId, renderCard }: Props) {
     getScrollElement: () => scrollRef.current,
     estimateSize: () => 96,
     getItemKey: (i) => cards[i].id,
-    overscan: 6,
+    overscan: 3,
     gap: GAP,
     paddingStart: GAP,
     paddingEnd: GAP,
