@@ -33,21 +33,23 @@ async function technicianOnShift(date: string) {
 
 describe('the day as the board receives it', () => {
   test('each card names its kind and target once for the day, and unfolds into what the task itself says', async () => {
-    const { tanks } = await makeAreaWithTanks(2)
+    const { area, tanks } = await makeAreaWithTanks(2)
     const date = inDays(9)
     const tech = await technicianOnShift(date)
     const made = await Promise.all([
       makeTankTask(tanks[0], { localDate: date, localStart: `${date}T07:30:00`, assigneeId: tech.id }),
       makeTankTask(tanks[1], { localDate: date, localStart: `${date}T07:45:00`, flag: 'watch' }),
       makeTankTask(tanks[0], { localDate: date, localStart: `${date}T08:00:00`, status: 'held', heldReason: 'Fasting before grading' }),
+      // A whole area's check: its label comes from the catalogue, not the tank.
+      makeTankTask(tanks[1], { localDate: date, localStart: `${date}T09:00:00`, targetKind: 'area', targetId: area.id, tankId: null }),
     ])
     const { body } = await supervisor.get(`/api/tasks/board?date=${date}`).expect(200)
     const wire = BoardWireSchema.parse(body)
     const ours = wire.cards.filter((c) => made.some((m) => m.id === c.id))
-    expect(ours).toHaveLength(3)
-    // Three cards of one routine-like kind on two tanks: the kind once, each tank once.
+    expect(ours).toHaveLength(4)
+    // Four cards of one routine-like kind on two tanks and an area: the kind once, each target once.
     expect(new Set(ours.map((c) => c.kind)).size).toBe(1)
-    expect(new Set(ours.map((c) => c.target)).size).toBe(2)
+    expect(new Set(ours.map((c) => c.target)).size).toBe(3)
     expect(ours[0]).not.toHaveProperty('flag')
     const board = unfoldBoard(wire)
     for (const m of made) {

@@ -21,12 +21,16 @@ interface CardRow {
   flag: Band | null
   heldReason: string | null
   version: number
+  tankLabel: string | null
 }
 
 // Only the columns a card draws: a day can hold 6,000 tasks, and each unused column costs parsing.
-const CARDS_SQL = `SELECT id, title, category, priority, durationMinutes, targetKind, targetId, tankId, areaId,
-  SUBSTRING(localStart, 12, 5) AS time, status, assigneeId, flag, heldReason, version
-  FROM tasks WHERE localDate = ? ORDER BY dueAt, id`
+// A tank's label comes with the row; other targets (rare on a busy day) need the catalogue.
+const CARDS_SQL = `SELECT t.id, t.title, t.category, t.priority, t.durationMinutes, t.targetKind, t.targetId, t.tankId, t.areaId,
+  SUBSTRING(t.localStart, 12, 5) AS time, t.status, t.assigneeId, t.flag, t.heldReason, t.version,
+  CONCAT(k.code, ' · ', k.name) AS tankLabel
+  FROM tasks t LEFT JOIN tanks k ON k.id = t.targetId AND t.targetKind IN ('tank', 'area_tanks')
+  WHERE t.localDate = ? ORDER BY t.dueAt, t.id`
 
 const SHIFTS_SQL =
   'SELECT s.personId, s.`start`, s.`end`, s.kind, p.name, p.role FROM shifts s JOIN people p ON p.id = s.personId ' +
@@ -56,11 +60,8 @@ function indexer<T>(list: T[]) {
 
 /** One day's cards and a column per person on shift (or holding tasks) that day. */
 export async function getBoard(date: string): Promise<BoardWire> {
-  const [rows, shifts, cat] = await Promise.all([
-    db().query(CARDS_SQL, [date]) as Promise<CardRow[]>,
-    db().query(SHIFTS_SQL, [date]) as Promise<ShiftRow[]>,
-    loadCatalogue(),
-  ])
+  const [rows, shifts] = await Promise.all([db().query(CARDS_SQL, [date]) as Promise<CardRow[]>, db().query(SHIFTS_SQL, [date]) as Promise<ShiftRow[]>])
+  const cat = rows.some((r) => r.tankLabel === null) ? await loadCatalogue() : null
   const kinds: BoardWire['kinds'] = []
   const targets: BoardWire['targets'] = []
   const kindOf = indexer(kinds)
@@ -73,7 +74,7 @@ export async function getBoard(date: string): Promise<BoardWire> {
         title: r.title, category: r.category, priority: r.priority, durationMinutes: r.durationMinutes,
       })),
       target: targetOf(`${r.targetKind}:${r.targetId}:${r.tankId}:${r.areaId}`, () => ({
-        label: targetLabel(r.targetKind, r.targetId, cat), tankId: r.tankId, areaId: r.areaId,
+        label: r.tankLabel ?? targetLabel(r.targetKind, r.targetId, cat!), tankId: r.tankId, areaId: r.areaId,
       })),
       time: r.time,
       status: r.status,
