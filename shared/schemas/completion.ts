@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { BandSchema } from './parameter'
+import { RoundMortalityDetailSchema } from './stock'
 import { TaskSchema } from './task'
 
 export const SKIP_REASONS = ['no_access', 'tank_empty', 'equipment_fault', 'fish_stressed', 'not_enough_time', 'other'] as const
@@ -25,6 +26,8 @@ export const CompletionInputSchema = z
     doneAt: z.string().datetime().optional(),
     /** Typing in a paper round sheet: who really did it (supervisors and managers only). */
     performedById: z.number().int().positive().optional(),
+    /** What is known about the fish counted in the mortalities reading. */
+    mortality: RoundMortalityDetailSchema.optional(),
   })
   .superRefine((c, ctx) => {
     if (c.outcome === 'skipped' && !c.skipReason) ctx.addIssue({ code: 'custom', path: ['skipReason'], message: 'Choose why it could not be done' })

@@ -13,8 +13,22 @@ export const MOVEMENT_KIND_LABELS: Record<MovementKind, string> = {
   dispatch: 'Dispatch / release',
   correction: 'Count correction',
 }
-/** The cause kept when nobody knows why a fish died. */
+/** The cause kept when nobody knows why a fish died; "other" asks for the cause in words. */
 export const UNKNOWN_CAUSE = 'unknown'
+export const OTHER_CAUSE = 'other'
+/** The round's reading whose value becomes a mortality movement. */
+export const MORTALITY_READING = 'mortalities'
+
+export const RoundMortalityDetailSchema = z
+  .object({
+    cause: z.string().trim().min(1).max(80).default(UNKNOWN_CAUSE),
+    causeText: z.string().trim().max(500).optional(),
+    necropsy: z.boolean().default(false),
+  })
+  .superRefine((d, ctx) => {
+    if (d.cause === OTHER_CAUSE && !d.causeText) ctx.addIssue({ code: 'custom', path: ['causeText'], message: 'Say what the cause was' })
+  })
+export type RoundMortalityDetail = z.input<typeof RoundMortalityDetailSchema>
 
 const id = z.number().int().positive()
 const count = z.number({ error: 'Enter a number' }).int('Whole fish only').positive('Must be at least 1').max(10_000_000)

@@ -100,6 +100,7 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/stock/movements': ALL,
   'POST /api/stock/movements': MST,
   'GET /api/tanks/:id/stock': ALL,
+  'GET /api/stock/on-hand': ALL,
   'GET /api/batches/:id/stock': ALL,
   'GET /api/stock/settings': ALL,
   'PATCH /api/stock/settings': M,

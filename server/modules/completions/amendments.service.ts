@@ -3,10 +3,12 @@ import { bandFor, pickLimit } from '#shared/readings/band'
 import { deriveReadings } from '#shared/readings/derive'
 import { AmendmentInputSchema } from '#shared/schemas/completion'
 import type { Person } from '#shared/schemas/person'
+import { MORTALITY_READING } from '#shared/schemas/stock'
 import { db } from '../../db/data-source'
 import { forbidden, notFound, validationError } from '../../lib/errors'
 import { audit } from '../audit/audit.service'
 import { ParameterEntity } from '../parameters/parameter.entities'
+import { adjustRoundMortality } from '../stock/round-mortality'
 import { getTaskRow } from '../tasks/tasks.service'
 import { AmendmentEntity } from './amendment.entity'
 import { CompletionEntity, ReadingEntity } from './completion.entities'
@@ -51,6 +53,7 @@ export async function amendCompletion(completionId: string, person: Person, inpu
         takenAt, personId: completion.personId, supersededAt: null, amendmentId: amendment.id,
       }))
       if (rows.length) await readingsRepo.insert(rows)
+      await adjustRoundMortality(manager, { completionId, amendmentId: amendment.id, tankId: context.tankId, count: data.readings[MORTALITY_READING], reason: data.reason, personId: person.id, at: new Date() })
     }
     await audit('completion', completionId, 'amend', { readings: current.map((r) => ({ key: r.parameterKey, value: r.value })) }, { reason: data.reason, readings: data.readings, note: data.note ?? null })
     return { id: amendment.id, completionId, reason: amendment.reason, readings: amendment.readings, note: amendment.note, createdAt: amendment.createdAt.toISOString(), personName: person.name }

@@ -1,6 +1,7 @@
 import { bandFor, pickLimit, worstBand } from '#shared/readings/band'
 import { deriveReadings } from '#shared/readings/derive'
 import { CompletionInputSchema, type CompletionResult, type Reading } from '#shared/schemas/completion'
+import { MORTALITY_READING } from '#shared/schemas/stock'
 import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
@@ -8,6 +9,7 @@ import { conflict, forbidden, validationError } from '../../lib/errors'
 import { PersonEntity } from '../people/person.entity'
 import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
+import { assessRoundMortality, writeRoundMortality } from '../stock/round-mortality'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
@@ -44,7 +46,9 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const performer = await performerFor(person, data.performedById)
   if (doneAt.getTime() > Date.now() + 60_000) throw validationError('A task cannot be completed in the future.', { doneAt: ['In the future'] })
   const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings, context) : { rows: [] as Reading[], notes: [] as string[] }
-  const flag = data.outcome === 'done' ? worstBand(readings.rows.map((r) => r.band)) : 'ok'
+  const mortality = data.outcome === 'done' ? await assessRoundMortality(context.tankId, data.readings[MORTALITY_READING], data.mortality, doneAt) : null
+  readings.notes.push(...(mortality?.notes ?? []))
+  const flag = data.outcome === 'done' ? worstBand([...readings.rows.map((r) => r.band), mortality?.band ?? 'ok']) : 'ok'
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
   const result = await db().transaction(async (manager) => {
@@ -76,6 +80,7 @@ export async function completeTask(taskId: number, person: Person, input: unknow
         })),
       )
     }
+    if (mortality?.plan) await writeRoundMortality(manager, mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
     return true
   })
   if (!result) {

@@ -2,7 +2,7 @@ import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { requireRole, signedIn } from '../auth/require-role'
 import { getStockSettings, updateStockSettings } from './stock-settings.service'
-import { batchStock, listMovements, recordMovement, tankStock } from './stock.service'
+import { batchStock, listMovements, onHandByTank, recordMovement, tankStock } from './stock.service'
 
 export const stockRouter = Router()
 
@@ -11,6 +11,9 @@ stockRouter.get('/stock/movements', signedIn, async (req, res) => {
 })
 stockRouter.post('/stock/movements', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
   res.status(201).json(await recordMovement(req.user!, req.body))
+})
+stockRouter.get('/stock/on-hand', signedIn, async (_req, res) => {
+  res.json(await onHandByTank())
 })
 stockRouter.get('/tanks/:id/stock', signedIn, async (req, res) => {
   res.json(await tankStock(IdParamSchema.parse(req.params).id))

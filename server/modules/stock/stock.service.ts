@@ -72,6 +72,17 @@ export async function batchStock(batchId: number): Promise<BatchStock> {
   return { batchId, batchCode: batch.code, meanWeightG: batch.meanWeightG, onRegister: rows.length > 0, count, biomassKg: round(biomass, 2), densityKgM3: held.length ? roundOrNull(stockingDensityKgM3(biomass, volume)) : null, tanks: held }
 }
 
+/** Fish on the register per tank, for the round's "in this tank" beside the mortality field. */
+export async function onHandByTank(): Promise<Record<number, number>> {
+  const onHand = balances((await db().getRepository(MovementEntity).find()).map(toEntry))
+  const out: Record<number, number> = {}
+  for (const [key, n] of onHand) {
+    const tankId = Number(key.split(':')[1])
+    out[tankId] = (out[tankId] ?? 0) + n
+  }
+  return out
+}
+
 const roundOrNull = (n: number | null) => (n === null ? null : round(n, 2))
 
 export async function tankCodes(): Promise<Map<number, string>> {
