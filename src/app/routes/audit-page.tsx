@@ -1,6 +1,8 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { BarChart3 } from 'lucide-react'
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { facilityQueries, requireFacility } from '../../api/facility'
+import { staffQueries } from '../../api/staff'
 import { ErrorState, PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { reportQueries } from '../../features/reports/api/report-queries'
@@ -16,19 +18,19 @@ import '../../features/reports/report-print.css'
 const filterFrom = (search: URLSearchParams, timeZone: string): AuditFilter => ({ ...rangeFrom(search, timeZone), entity: search.get('entity') ?? '' })
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const [facility, me] = await Promise.all([queryClient.ensureQueryData(reportQueries.facility()), queryClient.ensureQueryData(authQueries.me())])
+  const [facility, me] = await Promise.all([queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility), queryClient.ensureQueryData(authQueries.me())])
   const filter = filterFrom(new URL(request.url).searchParams, facility.timeZone)
   await Promise.all([
     rangeProblem(filter) ? null : queryClient.ensureQueryData(reportQueries.audit(filter)),
     // Observers may not read the staff list; they see person numbers instead.
-    me.role === 'manager' || me.role === 'supervisor' ? queryClient.ensureQueryData(reportQueries.staff()) : null,
+    me.role === 'manager' || me.role === 'supervisor' ? queryClient.ensureQueryData(staffQueries.staff()) : null,
   ])
   return null
 }
 
 export function Component() {
   const [search, setSearch] = useSearchParams()
-  const { data: facility } = useSuspenseQuery(reportQueries.facility())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
   const { data: me } = useSuspenseQuery(authQueries.me())
   const filter = filterFrom(search, facility.timeZone)
   const problem = rangeProblem(filter)

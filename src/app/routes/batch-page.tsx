@@ -1,11 +1,13 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { CalendarRange } from 'lucide-react'
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import { catalogueQueries } from '../../api/catalogues'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { batchRecordQueries } from '../../features/batch-record/api/batch-record-queries'
-import { BathRecordForm } from '../../features/batch-record/components/bath-record-form'
 import { BatchSummary } from '../../features/batch-record/components/batch-summary'
+import { BathRecordForm } from '../../features/batch-record/components/bath-record-form'
 import { NoteForm } from '../../features/batch-record/components/note-form'
 import { RECORD_FORMS, RecordFormPicker, type RecordFormName } from '../../features/batch-record/components/record-form-picker'
 import { RecordList } from '../../features/batch-record/components/record-list'
@@ -29,8 +31,8 @@ export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFun
   await Promise.all([
     queryClient.ensureQueryData(batchRecordQueries.batch(id)),
     queryClient.ensureQueryData(batchRecordQueries.records(id)),
-    queryClient.ensureQueryData(batchRecordQueries.facility()),
-    queryClient.ensureQueryData(batchRecordQueries.tanks()),
+    queryClient.ensureQueryData(facilityQueries.facility()),
+    queryClient.ensureQueryData(catalogueQueries.tanks()),
   ])
   return null
 }
@@ -41,8 +43,8 @@ export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: batch } = useSuspenseQuery(batchRecordQueries.batch(id))
   const { data: records } = useSuspenseQuery(batchRecordQueries.records(id))
-  const { data: facility } = useSuspenseQuery(batchRecordQueries.facility())
-  const { data: tanks } = useSuspenseQuery(batchRecordQueries.tanks())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
+  const { data: tanks } = useSuspenseQuery(catalogueQueries.tanks())
   const eventId = positiveId(params.get('event'))
   const form: RecordFormName = RECORD_FORMS.find((f) => f === params.get('form')) ?? 'weighing'
   const pick = (next: RecordFormName) =>

@@ -1,12 +1,13 @@
 import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { Loader2 } from 'lucide-react'
 import { redirect, useNavigation, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { catalogueQueries } from '../../api/catalogues'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { boardQueries } from '../../features/board/api/board-queries'
 import { BoardView } from '../../features/board/components/board-view'
 import { fullDay, ISO_DATE } from '../../features/board/utils/board-dates'
-import { facilityQueries } from '../../features/facility/api/facility-queries'
 
 /** Today on the facility's clock (the browser's own when no facility is set up yet). */
 function todayIn(timeZone: string | undefined) {
@@ -22,7 +23,7 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
     url.searchParams.set('date', await facilityToday(queryClient))
     throw redirect(`${url.pathname}?${url.searchParams}`)
   }
-  void queryClient.prefetchQuery(facilityQueries.areas())
+  void queryClient.prefetchQuery(catalogueQueries.areas())
   await queryClient.ensureQueryData(boardQueries.day(date))
   return null
 }
@@ -33,7 +34,7 @@ export function Component() {
   const { data: board } = useSuspenseQuery(boardQueries.day(date))
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: facility } = useQuery(facilityQueries.facility())
-  const { data: areas = [] } = useQuery(facilityQueries.areas())
+  const { data: areas = [] } = useQuery(catalogueQueries.areas())
   const navigation = useNavigation()
   const loadingDay = navigation.state === 'loading' && navigation.location.pathname === '/board'
 

@@ -1,10 +1,11 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { ArrowLeft } from 'lucide-react'
 import { Link, useParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import { catalogueQueries as refs } from '../../api/catalogues'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { playbookQueries } from '../../features/playbooks/api/playbook-queries'
-import { playbookReferenceQueries as refs } from '../../features/playbooks/api/playbook-reference-queries'
 import { EventSummary } from '../../features/playbooks/components/event-summary'
 import { EventTaskDays } from '../../features/playbooks/components/event-task-days'
 
@@ -18,7 +19,7 @@ export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFun
   const id = eventIdFrom(params)
   const [event] = await Promise.all([
     queryClient.ensureQueryData(playbookQueries.event(id)),
-    queryClient.ensureQueryData(refs.facility()),
+    queryClient.ensureQueryData(facilityQueries.facility()),
     queryClient.ensureQueryData(refs.tanks()),
     queryClient.ensureQueryData(refs.batches()),
   ])
@@ -31,7 +32,7 @@ export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: event } = useSuspenseQuery(playbookQueries.event(id))
   const { data: playbook } = useSuspenseQuery(playbookQueries.detail(event.playbookId))
-  const { data: facility } = useSuspenseQuery(refs.facility())
+  const { data: zone } = useSuspenseQuery(facilityQueries.timeZone())
   const { data: tanks } = useSuspenseQuery(refs.tanks())
   const { data: batches } = useSuspenseQuery(refs.batches())
   const canManage = me.role === 'manager' || me.role === 'supervisor'
@@ -42,8 +43,8 @@ export function Component() {
         <ArrowLeft aria-hidden className="size-4" /> Playbooks & events
       </Link>
       <PageHeader title={event.title} />
-      <EventSummary event={event} playbook={playbook} tanks={tanks} batches={batches} zone={facility.timeZone} canManage={canManage} />
-      <EventTaskDays event={event} playbook={playbook} zone={facility.timeZone} />
+      <EventSummary event={event} playbook={playbook} tanks={tanks} batches={batches} zone={zone} canManage={canManage} />
+      <EventTaskDays event={event} playbook={playbook} zone={zone} />
     </section>
   )
 }

@@ -1,9 +1,9 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { Printer } from 'lucide-react'
 import { useSearchParams } from 'react-router-dom'
+import { catalogueQueries } from '../../api/catalogues'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
-import { labelQueries } from '../../features/labels/api/label-queries'
 import { LabelPicker, type LabelChoice } from '../../features/labels/components/label-picker'
 import { LabelSheet } from '../../features/labels/components/label-sheet'
 import '../../features/labels/labels-print.css'
@@ -16,14 +16,14 @@ function choiceFrom(search: URLSearchParams): LabelChoice {
 }
 
 export const loader = (queryClient: QueryClient) => async () => {
-  await Promise.all([queryClient.ensureQueryData(labelQueries.tanks()), queryClient.ensureQueryData(labelQueries.areas())])
+  await Promise.all([queryClient.ensureQueryData(catalogueQueries.tanks()), queryClient.ensureQueryData(catalogueQueries.areas())])
   return null
 }
 
 export function Component() {
   const [search, setSearch] = useSearchParams()
-  const { data: tanks } = useSuspenseQuery(labelQueries.tanks())
-  const { data: areas } = useSuspenseQuery(labelQueries.areas())
+  const { data: tanks } = useSuspenseQuery(catalogueQueries.tanks())
+  const { data: areas } = useSuspenseQuery(catalogueQueries.areas())
   const choice = choiceFrom(search)
   const sorted = [...tanks].sort((a, b) => a.code.localeCompare(b.code))
   const shown = choice.id === null ? [] : choice.kind === 'area' ? sorted.filter((t) => t.areaId === choice.id) : sorted.filter((t) => t.id === choice.id)

@@ -1,4 +1,5 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { onCallQueries } from '../../features/on-call/api/on-call-queries'
@@ -9,12 +10,12 @@ import { WaitingEscalations } from '../../features/on-call/components/waiting-es
 import { WeekendTasks } from '../../features/on-call/components/weekend-tasks'
 
 export const loader = (queryClient: QueryClient) => () =>
-  Promise.all([queryClient.ensureQueryData(onCallQueries.summary()), queryClient.ensureQueryData(onCallQueries.timeZone())])
+  Promise.all([queryClient.ensureQueryData(onCallQueries.summary()), queryClient.ensureQueryData(facilityQueries.timeZone())])
 
 export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: summary } = useSuspenseQuery(onCallQueries.summary())
-  const { data: timeZone } = useSuspenseQuery(onCallQueries.timeZone())
+  const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   const canPlan = me.role === 'manager' || me.role === 'supervisor'
   const notObserver = me.role !== 'observer'
 

@@ -2,6 +2,7 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { clsx } from 'clsx'
 import { Info, RefreshCw } from 'lucide-react'
 import { useSearchParams } from 'react-router-dom'
+import { facilityQueries } from '../../api/facility'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
 import { outboxQueries } from '../../features/outbox/api/outbox-queries'
@@ -9,11 +10,11 @@ import { OutboxList } from '../../features/outbox/components/outbox-list'
 import { OutboxMessageView } from '../../features/outbox/components/outbox-message-view'
 
 export const loader = (queryClient: QueryClient) => () =>
-  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(outboxQueries.timeZone())])
+  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(facilityQueries.timeZone())])
 
 export function Component() {
   const { data: messages, refetch, isFetching } = useSuspenseQuery(outboxQueries.list())
-  const { data: timeZone } = useSuspenseQuery(outboxQueries.timeZone())
+  const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   const [params] = useSearchParams()
   const selectedId = Number(params.get('id')) || null
   const selected = messages?.find((m) => m.id === selectedId) ?? null

@@ -2,6 +2,7 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { Calculator, Plus } from 'lucide-react'
 import { useState } from 'react'
 import { Link } from 'react-router-dom'
+import { facilityQueries } from '../../api/facility'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
@@ -10,14 +11,14 @@ import { AddCylinderForm } from '../../features/oxygen/components/add-cylinder-f
 import { CylinderCard } from '../../features/oxygen/components/cylinder-card'
 
 export const loader = (queryClient: QueryClient) => async () => {
-  await Promise.all([queryClient.ensureQueryData(oxygenQueries.cylinders()), queryClient.ensureQueryData(oxygenQueries.facility())])
+  await Promise.all([queryClient.ensureQueryData(oxygenQueries.cylinders()), queryClient.ensureQueryData(facilityQueries.facility())])
   return null
 }
 
 export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: cylinders } = useSuspenseQuery(oxygenQueries.cylinders())
-  const { data: facility } = useSuspenseQuery(oxygenQueries.facility())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
   const [adding, setAdding] = useState(false)
   const canAdd = me.role === 'manager' || me.role === 'supervisor'
 

@@ -1,17 +1,17 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { UserPlus } from 'lucide-react'
 import { useState } from 'react'
+import { staffQueries } from '../../api/staff'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
-import { peopleQueries } from '../../features/people/api/people-queries'
 import { CreatePersonForm } from '../../features/people/components/create-person-form'
 import { PeopleTable } from '../../features/people/components/people-table'
 
-export const loader = (queryClient: QueryClient) => () => queryClient.ensureQueryData(peopleQueries.list())
+export const loader = (queryClient: QueryClient) => () => queryClient.ensureQueryData(staffQueries.people())
 
 export function Component() {
-  const { data: people } = useSuspenseQuery(peopleQueries.list())
+  const { data: people } = useSuspenseQuery(staffQueries.people())
   const { data: me } = useSuspenseQuery(authQueries.me())
   const [adding, setAdding] = useState(false)
   return (

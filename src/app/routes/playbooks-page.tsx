@@ -3,11 +3,12 @@ import { Play } from 'lucide-react'
 import { useState } from 'react'
 import { useNavigate } from 'react-router-dom'
 import { toast } from 'sonner'
+import { catalogueQueries as refs } from '../../api/catalogues'
+import { facilityQueries, facilityZone } from '../../api/facility'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { playbookQueries } from '../../features/playbooks/api/playbook-queries'
-import { playbookReferenceQueries as refs } from '../../features/playbooks/api/playbook-reference-queries'
 import { EventList } from '../../features/playbooks/components/event-list'
 import { PlaybookLibrary } from '../../features/playbooks/components/playbook-library'
 import { StartEventForm } from '../../features/playbooks/components/start-event-form'
@@ -21,30 +22,29 @@ const eventRange = (zone: string) => {
 
 export const loader = (queryClient: QueryClient) => async () => {
   const [facility] = await Promise.all([
-    queryClient.ensureQueryData(refs.facility()),
+    queryClient.ensureQueryData(facilityQueries.facility()),
     queryClient.ensureQueryData(playbookQueries.list()),
     queryClient.ensureQueryData(refs.tanks()),
     queryClient.ensureQueryData(refs.areas()),
     queryClient.ensureQueryData(refs.batches()),
   ])
-  const { from, to } = eventRange(facility.timeZone)
+  const { from, to } = eventRange(facilityZone(facility))
   await queryClient.ensureQueryData(playbookQueries.events(from, to))
   return null
 }
 
 export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
-  const { data: facility } = useSuspenseQuery(refs.facility())
+  const { data: zone } = useSuspenseQuery(facilityQueries.timeZone())
   const { data: playbooks } = useSuspenseQuery(playbookQueries.list())
   const { data: tanks } = useSuspenseQuery(refs.tanks())
   const { data: areas } = useSuspenseQuery(refs.areas())
   const { data: batches } = useSuspenseQuery(refs.batches())
-  const [range] = useState(() => eventRange(facility.timeZone))
+  const [range] = useState(() => eventRange(zone))
   const { data: events } = useSuspenseQuery(playbookQueries.events(range.from, range.to))
   const [starting, setStarting] = useState(false)
   const navigate = useNavigate()
   const canPlan = me.role === 'manager' || me.role === 'supervisor'
-  const zone = facility.timeZone
 
   return (
     <section className="mx-auto flex w-full max-w-6xl flex-col gap-8">

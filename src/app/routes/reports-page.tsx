@@ -1,6 +1,8 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { History } from 'lucide-react'
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { catalogueQueries } from '../../api/catalogues'
+import { facilityQueries, requireFacility } from '../../api/facility'
 import { ErrorState, PageHeader } from '../../components/ui/page-state'
 import { reportQueries } from '../../features/reports/api/report-queries'
 import { ComplianceReport } from '../../features/reports/components/compliance-report'
@@ -16,13 +18,13 @@ import '../../features/reports/report-print.css'
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
   const search = new URL(request.url).searchParams
-  const facility = await queryClient.ensureQueryData(reportQueries.facility())
+  const facility = await queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility)
   const f = reportFilters(search, facility.timeZone)
   if (rangeProblem(f.range)) return null
   const view = parseReportView(search.get('view'))
   if (view === 'compliance') await queryClient.ensureQueryData(reportQueries.compliance(f.compliance))
   if (view === 'responses') await queryClient.ensureQueryData(reportQueries.responses(f.range))
-  if (view === 'welfare') await Promise.all([queryClient.ensureQueryData(reportQueries.welfare(f.welfare)), queryClient.ensureQueryData(reportQueries.tanks())])
+  if (view === 'welfare') await Promise.all([queryClient.ensureQueryData(reportQueries.welfare(f.welfare)), queryClient.ensureQueryData(catalogueQueries.tanks())])
   return null
 }
 
@@ -30,7 +32,7 @@ const TITLES = { compliance: 'Compliance', responses: 'Response times', welfare:
 
 export function Component() {
   const [search, setSearch] = useSearchParams()
-  const { data: facility } = useSuspenseQuery(reportQueries.facility())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
   const view = parseReportView(search.get('view'))
   const f = reportFilters(search, facility.timeZone)
   const problem = rangeProblem(f.range)

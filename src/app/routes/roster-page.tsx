@@ -2,6 +2,8 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { useRef, useState } from 'react'
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
 import type { Shift } from '#shared/schemas/roster'
+import { facilityQueries, facilityZone } from '../../api/facility'
+import { staffQueries } from '../../api/staff'
 import { PageHeader } from '../../components/ui/page-state'
 import { rosterQueries } from '../../features/roster/api/roster-queries'
 import { CoverageWarnings } from '../../features/roster/components/coverage-warnings'
@@ -18,10 +20,10 @@ function rangeFrom(params: URLSearchParams, timeZone: string) {
 }
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const { timeZone } = await queryClient.ensureQueryData(rosterQueries.facility())
+  const timeZone = facilityZone(await queryClient.ensureQueryData(facilityQueries.facility()))
   const { from, to } = rangeFrom(new URL(request.url).searchParams, timeZone)
   await Promise.all([
-    queryClient.ensureQueryData(rosterQueries.staff()),
+    queryClient.ensureQueryData(staffQueries.staff()),
     queryClient.ensureQueryData(rosterQueries.shifts(from, to)),
     queryClient.ensureQueryData(rosterQueries.duties(from, to)),
     queryClient.ensureQueryData(rosterQueries.coverage(from, to)),
@@ -30,11 +32,12 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
 }
 
 export function Component() {
-  const { data: facility } = useSuspenseQuery(rosterQueries.facility())
+  const { data: facility } = useSuspenseQuery(facilityQueries.facility())
+  const timeZone = facilityZone(facility)
   const [params, setParams] = useSearchParams()
-  const { from, days, to } = rangeFrom(params, facility.timeZone)
-  const today = todayIn(facility.timeZone)
-  const { data: staff } = useSuspenseQuery(rosterQueries.staff())
+  const { from, days, to } = rangeFrom(params, timeZone)
+  const today = todayIn(timeZone)
+  const { data: staff } = useSuspenseQuery(staffQueries.staff())
   const { data: shifts } = useSuspenseQuery(rosterQueries.shifts(from, to))
   const { data: duties } = useSuspenseQuery(rosterQueries.duties(from, to))
   const { data: warnings } = useSuspenseQuery(rosterQueries.coverage(from, to))
@@ -74,7 +77,7 @@ export function Component() {
         staff={staff}
         from={from}
         duties={duties}
-        handoverTime={facility.handoverTime}
+        handoverTime={facility?.handoverTime ?? null}
       />
     </section>
   )

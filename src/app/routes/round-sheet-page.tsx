@@ -2,6 +2,9 @@ import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-qu
 import { Printer } from 'lucide-react'
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
 import type { Person } from '#shared/schemas/person'
+import { catalogueQueries } from '../../api/catalogues'
+import { facilityQueries, requireFacility } from '../../api/facility'
+import { staffQueries } from '../../api/staff'
 import { Button } from '../../components/ui/button'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
@@ -25,12 +28,12 @@ function filterFrom(search: URLSearchParams, me: Person, timeZone: string): Shee
 }
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const [me, facility] = await Promise.all([queryClient.ensureQueryData(authQueries.me()), queryClient.ensureQueryData(roundSheetQueries.facility())])
-  const filter = filterFrom(new URL(request.url).searchParams, me, facility.timeZone)
+  const [me, facility] = await Promise.all([queryClient.ensureQueryData(authQueries.me()), queryClient.ensureQueryData(facilityQueries.facility())])
+  const filter = filterFrom(new URL(request.url).searchParams, me, requireFacility(facility).timeZone)
   await Promise.all([
     queryClient.ensureQueryData(roundSheetQueries.sheet(filter)),
-    queryClient.ensureQueryData(roundSheetQueries.areas()),
-    plans(me) ? queryClient.ensureQueryData(roundSheetQueries.staff()) : null,
+    queryClient.ensureQueryData(catalogueQueries.areas()),
+    plans(me) ? queryClient.ensureQueryData(staffQueries.staff()) : null,
   ])
   return null
 }
@@ -38,11 +41,11 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
 export function Component() {
   const [search, setSearch] = useSearchParams()
   const { data: me } = useSuspenseQuery(authQueries.me())
-  const { data: facility } = useSuspenseQuery(roundSheetQueries.facility())
-  const { data: areas } = useSuspenseQuery(roundSheetQueries.areas())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
+  const { data: areas } = useSuspenseQuery(catalogueQueries.areas())
   const filter = filterFrom(search, me, facility.timeZone)
   const { data: round } = useSuspenseQuery(roundSheetQueries.sheet(filter))
-  const staff = useQuery({ ...roundSheetQueries.staff(), enabled: plans(me) })
+  const staff = useQuery({ ...staffQueries.staff(), enabled: plans(me) })
   const people = plans(me) ? (staff.data ?? []).filter((p) => p.role !== 'observer') : [{ id: me.id, name: me.name }]
   const mode = parseSheetMode(search.get('mode'))
   const sheetFor = filter.areaId ? (areas.find((a) => a.id === filter.areaId)?.name ?? 'Area') : (people.find((p) => p.id === filter.personId)?.name ?? me.name)

@@ -2,9 +2,10 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { ArrowLeft } from 'lucide-react'
 import { Link, redirect, useNavigate, useParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
 import type { Role } from '#shared/schemas/person'
+import { facilityQueries } from '../../api/facility'
+import { parameterQueries } from '../../api/parameters'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
-import { routineReferenceQueries } from '../../features/routines/api/routine-reference-queries'
 import { routineQueries } from '../../features/routines/api/routine-queries'
 import { DeleteRoutineButton } from '../../features/routines/components/delete-routine-button'
 import { PausedLabel } from '../../features/routines/components/paused-label'
@@ -27,8 +28,8 @@ export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFun
   const me = await queryClient.ensureQueryData(authQueries.me())
   if (id === null && !canEditRoutines(me.role)) return redirect('/routines')
   await Promise.all([
-    queryClient.ensureQueryData(routineReferenceQueries.facility()),
-    queryClient.ensureQueryData(routineReferenceQueries.parameters()),
+    queryClient.ensureQueryData(facilityQueries.facility()),
+    queryClient.ensureQueryData(parameterQueries.parameters()),
     id === null ? null : queryClient.ensureQueryData(routineQueries.detail(id)),
   ])
   return null
@@ -36,8 +37,8 @@ export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFun
 
 function useEditorContext() {
   const { data: me } = useSuspenseQuery(authQueries.me())
-  const { data: facility } = useSuspenseQuery(routineReferenceQueries.facility())
-  const { data: parameters } = useSuspenseQuery(routineReferenceQueries.parameters())
+  const { data: facility } = useSuspenseQuery(facilityQueries.required())
+  const { data: parameters } = useSuspenseQuery(parameterQueries.parameters())
   return {
     timeZone: facility.timeZone,
     parameters,

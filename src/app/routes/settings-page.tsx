@@ -1,4 +1,6 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { facilityQueries } from '../../api/facility'
+import { staffQueries } from '../../api/staff'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { escalationQueries } from '../../features/escalation/api/escalation-queries'
@@ -9,16 +11,16 @@ export const loader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(authQueries.me())
   await Promise.all([
     queryClient.ensureQueryData(escalationQueries.preferences()),
-    queryClient.ensureQueryData(escalationQueries.timeZone()),
+    queryClient.ensureQueryData(facilityQueries.timeZone()),
     me.role === 'manager' && queryClient.ensureQueryData(escalationQueries.ladders()),
-    me.role === 'manager' && queryClient.ensureQueryData(escalationQueries.staff()),
+    me.role === 'manager' && queryClient.ensureQueryData(staffQueries.staff()),
   ])
   return null
 }
 
 function Ladders() {
   const { data: ladders } = useSuspenseQuery(escalationQueries.ladders())
-  const { data: staff } = useSuspenseQuery(escalationQueries.staff())
+  const { data: staff } = useSuspenseQuery(staffQueries.staff())
   return (
     <section aria-labelledby="ladders-heading" className="flex flex-col gap-3">
       <div>
@@ -33,7 +35,7 @@ function Ladders() {
 export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: preferences } = useSuspenseQuery(escalationQueries.preferences())
-  const { data: timeZone } = useSuspenseQuery(escalationQueries.timeZone())
+  const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   return (
     <section className="mx-auto flex w-full max-w-3xl flex-col gap-6">
       <PageHeader title="Settings" />

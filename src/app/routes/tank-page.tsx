@@ -1,5 +1,6 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { useParams, useSearchParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { TREND_RANGES, tankPageQueries, type TrendRange } from '../../features/tank-page/api/tank-page-queries'
 import { BatchHistory } from '../../features/tank-page/components/batch-history'
@@ -24,7 +25,7 @@ export const loader = (queryClient: QueryClient) => async ({ params, request }: 
   await Promise.all([
     queryClient.ensureQueryData(tankPageQueries.overview(id)),
     queryClient.ensureQueryData(tankPageQueries.readings(id, daysFrom(new URL(request.url).searchParams))),
-    queryClient.ensureQueryData(tankPageQueries.facility()),
+    queryClient.ensureQueryData(facilityQueries.facility()),
   ])
   return null
 }
@@ -35,7 +36,7 @@ export function Component() {
   const days = daysFrom(search)
   const { data: overview } = useSuspenseQuery(tankPageQueries.overview(id))
   const { data: readings } = useSuspenseQuery(tankPageQueries.readings(id, days))
-  const { data: facility } = useSuspenseQuery(tankPageQueries.facility())
+  const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   const parameters = trendParameters(overview.limits, readings.tank, readings.system)
   const shown = search.get('show')
   const selected = shown === null ? defaultSelection(parameters) : shown.split(',').filter(Boolean)
@@ -56,7 +57,7 @@ export function Component() {
         parameters={parameters}
         selected={selected}
         days={days}
-        timeZone={facility.timeZone}
+        timeZone={timeZone}
         systemLabel={systemLabel}
         onDaysChange={(d) => update('days', String(d))}
         onSelectedChange={(keys) => update('show', keys.join(','))}
@@ -69,7 +70,7 @@ export function Component() {
           <LimitsTable limits={overview.limits} />
         </PageSection>
         <PageSection title="Batches">
-          <BatchHistory overview={overview} timeZone={facility.timeZone} />
+          <BatchHistory overview={overview} timeZone={timeZone} />
         </PageSection>
         <PageSection title="Events">
           <EventList events={overview.events} />

@@ -2,9 +2,10 @@ import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { Eye } from 'lucide-react'
 import { useSearchParams } from 'react-router-dom'
 import type { Area, Batch, Equipment, System, Tank } from '#shared/schemas/facility'
+import { catalogueQueries } from '../../api/catalogues'
+import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
-import { facilityQueries } from '../../features/facility/api/facility-queries'
 import { AreaForm } from '../../features/facility/components/area-form'
 import { BatchForm } from '../../features/facility/components/batch-form'
 import { BatchesTable } from '../../features/facility/components/batches-table'
@@ -25,11 +26,11 @@ import { TanksTable } from '../../features/facility/components/tanks-table'
 export const loader = (queryClient: QueryClient) => async () => {
   await Promise.all([
     queryClient.ensureQueryData(facilityQueries.facility()),
-    queryClient.ensureQueryData(facilityQueries.areas()),
-    queryClient.ensureQueryData(facilityQueries.systems()),
-    queryClient.ensureQueryData(facilityQueries.tanks()),
-    queryClient.ensureQueryData(facilityQueries.equipment()),
-    queryClient.ensureQueryData(facilityQueries.batches()),
+    queryClient.ensureQueryData(catalogueQueries.areas()),
+    queryClient.ensureQueryData(catalogueQueries.systems()),
+    queryClient.ensureQueryData(catalogueQueries.tanks()),
+    queryClient.ensureQueryData(catalogueQueries.equipment()),
+    queryClient.ensureQueryData(catalogueQueries.batches()),
   ])
   return null
 }
@@ -39,11 +40,11 @@ export function Component() {
   const tab = parseFacilityTab(params.get('tab'))
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: facility } = useSuspenseQuery(facilityQueries.facility())
-  const { data: areas } = useSuspenseQuery(facilityQueries.areas())
-  const { data: systems } = useSuspenseQuery(facilityQueries.systems())
-  const { data: tanks } = useSuspenseQuery(facilityQueries.tanks())
-  const { data: equipment } = useSuspenseQuery(facilityQueries.equipment())
-  const { data: batches } = useSuspenseQuery(facilityQueries.batches())
+  const { data: areas } = useSuspenseQuery(catalogueQueries.areas())
+  const { data: systems } = useSuspenseQuery(catalogueQueries.systems())
+  const { data: tanks } = useSuspenseQuery(catalogueQueries.tanks())
+  const { data: equipment } = useSuspenseQuery(catalogueQueries.equipment())
+  const { data: batches } = useSuspenseQuery(catalogueQueries.batches())
   const isManager = me.role === 'manager'
   const canEditBatches = isManager || me.role === 'supervisor'
   const nextRoundOrder = areas.reduce((max, a) => Math.max(max, a.roundOrder + 10), 10)

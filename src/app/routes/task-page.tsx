@@ -1,5 +1,7 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { useParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
+import { facilityQueries } from '../../api/facility'
+import { parameterQueries } from '../../api/parameters'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { escalationQueries } from '../../features/escalation/api/escalation-queries'
@@ -17,8 +19,8 @@ export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFun
   await Promise.all([
     queryClient.ensureQueryData(escalationQueries.task(id)),
     queryClient.ensureQueryData(escalationQueries.record(id)),
-    queryClient.ensureQueryData(escalationQueries.timeZone()),
-    queryClient.ensureQueryData(escalationQueries.parameters()),
+    queryClient.ensureQueryData(facilityQueries.timeZone()),
+    queryClient.ensureQueryData(parameterQueries.parameters()),
   ])
   return null
 }
@@ -28,8 +30,8 @@ export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())
   const { data: task } = useSuspenseQuery(escalationQueries.task(id))
   const { data: alerts } = useSuspenseQuery(escalationQueries.record(id))
-  const { data: timeZone } = useSuspenseQuery(escalationQueries.timeZone())
-  const { data: parameters } = useSuspenseQuery(escalationQueries.parameters())
+  const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
+  const { data: parameters } = useSuspenseQuery(parameterQueries.parameters())
   const readingNames = new Map(parameters.map((p) => [p.key, p.unit ? `${p.name} (${p.unit})` : p.name]))
 
   return (

@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
 import { BatchRecordSchema } from '#shared/schemas/batch-record'
-import { BatchSchema, FacilitySchema, TankSchema } from '#shared/schemas/facility'
+import { BatchSchema } from '#shared/schemas/facility'
 import { apiFetch } from '../../../lib/api-client'
 
 export const batchRecordKeys = {
@@ -14,7 +14,4 @@ export const batchRecordQueries = {
   batch: (id: number) => queryOptions({ queryKey: batchRecordKeys.batch(id), queryFn: () => apiFetch(`/batches/${id}`, BatchSchema) }),
   records: (id: number) =>
     queryOptions({ queryKey: batchRecordKeys.records(id), queryFn: () => apiFetch(`/batches/${id}/records`, z.array(BatchRecordSchema)) }),
-  facility: () =>
-    queryOptions({ queryKey: [...batchRecordKeys.all, 'facility'], queryFn: () => apiFetch('/facility', FacilitySchema), staleTime: 5 * 60_000 }),
-  tanks: () => queryOptions({ queryKey: [...batchRecordKeys.all, 'tanks'], queryFn: () => apiFetch('/tanks', z.array(TankSchema)) }),
 }

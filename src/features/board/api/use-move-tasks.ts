@@ -3,9 +3,9 @@ import { toast } from 'sonner'
 import { z } from 'zod'
 import type { Board, BoardCard } from '#shared/schemas/board'
 import { TaskSchema } from '#shared/schemas/task'
+import { applyMove, placeTasks, type MoveTarget } from '../../../api/tasks/board-cache'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
-import { applyMove, placeTasks, type MoveTarget } from './board-cache'
-import { boardKeys } from './board-queries'
 
 const BulkMoveResultSchema = z.object({
   moved: z.array(TaskSchema),
@@ -41,7 +41,7 @@ function refusalText(result: MoveResult, tasks: BoardCard[]) {
  */
 export function useMoveTasks(date: string) {
   const queryClient = useQueryClient()
-  const key = boardKeys.day(date)
+  const key = taskKeys.board(date)
   return useMutation({
     mutationKey: MOVE_KEY,
     mutationFn: sendMove,
@@ -72,7 +72,7 @@ export function useMoveTasks(date: string) {
     },
     onSettled: () => {
       // Refetch once the last of several quick moves is done, so an early answer cannot undo a later drag.
-      if (queryClient.isMutating({ mutationKey: MOVE_KEY }) === 1) void queryClient.invalidateQueries({ queryKey: ['tasks'] })
+      if (queryClient.isMutating({ mutationKey: MOVE_KEY }) === 1) void queryClient.invalidateQueries({ queryKey: taskKeys.all })
     },
   })
 }

@@ -1,12 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { z } from 'zod'
+import { catalogueKeys, itemSchema, type CatalogueInput, type CatalogueName } from '../../../api/catalogues'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
-import { itemSchema, type CatalogueInput, type CatalogueName } from './catalogues'
-import { facilityKeys } from './facility-queries'
 
 function useInvalidate(name: CatalogueName) {
   const queryClient = useQueryClient()
-  return () => queryClient.invalidateQueries({ queryKey: facilityKeys.catalogue(name) })
+  return () => queryClient.invalidateQueries({ queryKey: catalogueKeys.list(name) })
 }
 
 export function useCreateItem<K extends CatalogueName>(name: K) {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { TankImportResultSchema } from '#shared/schemas/facility'
+import { catalogueKeys } from '../../../api/catalogues'
 import { apiFetch } from '../../../lib/api-client'
-import { facilityKeys } from './facility-queries'
 
 export function useImportTanks() {
   const queryClient = useQueryClient()
@@ -11,6 +11,6 @@ export function useImportTanks() {
       body.append('file', file)
       return apiFetch('/tanks/import', TankImportResultSchema, { method: 'POST', body })
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: facilityKeys.catalogue('tanks') }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogueKeys.list('tanks') }),
   })
 }

@@ -1,8 +1,8 @@
 import { Trash2 } from 'lucide-react'
 import { useState } from 'react'
 import { toast } from 'sonner'
+import type { CatalogueName } from '../../../api/catalogues'
 import { Button } from '../../../components/ui/button'
-import type { CatalogueName } from '../api/catalogues'
 import { useDeleteItem } from '../api/use-catalogue-mutations'
 
 interface DeleteItemButtonProps {

@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query'
 import type { Batch, System } from '#shared/schemas/facility'
 import type { Limit, Parameter } from '#shared/schemas/parameter'
+import { parameterQueries } from '../../../api/parameters'
 import { Button } from '../../../components/ui/button'
 import { ErrorState, LoadingState } from '../../../components/ui/page-state'
-import { facilityQueries } from '../api/facility-queries'
 
 function range(min: number | null, max: number | null, unit: string) {
   if (min != null && max != null) return `${min} – ${max} ${unit}`
@@ -19,8 +19,8 @@ function critical(min: number | null, max: number | null, unit: string) {
 
 /** Current limits per parameter, read-only; a reading outside ok is watch, outside critical is critical. */
 export function LimitsList({ systems, batches }: { systems: System[]; batches: Batch[] }) {
-  const parameters = useQuery(facilityQueries.parameters())
-  const limits = useQuery(facilityQueries.limits())
+  const parameters = useQuery(parameterQueries.parameters())
+  const limits = useQuery(parameterQueries.limits())
   if (parameters.isPending || limits.isPending) return <LoadingState label="Loading limits…" />
   if (parameters.isError || limits.isError) {
     return (

@@ -1,5 +1,5 @@
 import { Pencil } from 'lucide-react'
-import type { CatalogueName } from '../api/catalogues'
+import type { CatalogueName } from '../../../api/catalogues'
 import { DeleteItemButton } from './delete-item-button'
 
 interface RowActionsProps {

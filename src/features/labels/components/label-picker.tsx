@@ -1,12 +1,12 @@
 import { useId } from 'react'
-import type { LabelArea, LabelTank } from '../api/label-queries'
+import type { Area, Tank } from '#shared/schemas/facility'
 
 export type LabelChoice = { kind: 'tank'; id: number | null } | { kind: 'area'; id: number | null }
 
 interface LabelPickerProps {
   choice: LabelChoice
-  tanks: LabelTank[]
-  areas: LabelArea[]
+  tanks: Tank[]
+  areas: Area[]
   onChange: (choice: LabelChoice) => void
 }
 

@@ -1,10 +1,11 @@
 import { useQuery } from '@tanstack/react-query'
 import { ShieldAlert } from 'lucide-react'
-import { labelQueries, type LabelArea, type LabelTank } from '../api/label-queries'
+import type { Area, Tank } from '#shared/schemas/facility'
+import { labelQueries } from '../api/label-queries'
 import { tankAddress } from '../api/tank-address'
 
 /** One label to stick on a tank: its code and name large, the QR code that opens its page, and the address in words. */
-export function TankLabel({ tank, area }: { tank: LabelTank; area: LabelArea | undefined }) {
+export function TankLabel({ tank, area }: { tank: Tank; area: Area | undefined }) {
   const url = tankAddress(tank.id)
   const qr = useQuery(labelQueries.qr(url))
   return (

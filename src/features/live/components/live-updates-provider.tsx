@@ -1,35 +1,29 @@
-import { useQueryClient, type QueryClient, type QueryKey } from '@tanstack/react-query'
+import { useQueryClient, type QueryKey } from '@tanstack/react-query'
 import { useEffect, useRef, useState, type ReactNode } from 'react'
 import type { Socket } from 'socket.io-client'
-import { TaskSchema, type Task } from '#shared/schemas/task'
-import { patchTaskLists, TASKS_ROOT } from '../api/task-list-cache'
+import { TaskSchema } from '#shared/schemas/task'
+import { patchTaskViews, refetchTaskViews } from '../../../api/tasks/task-cache'
 import { LiveStatusContext, type LiveStatus } from '../hooks/use-live-status'
 import { useSessionPersonId } from '../hooks/use-session-person-id'
-
-export type TaskEventHandler = (queryClient: QueryClient, task: Task, personId: number) => void
 
 interface Props {
   /** The query holding the signed-in person; the socket is open only while it has data. */
   sessionKey: QueryKey
-  /** Extra cache patching for task views that need more than the task (e.g. the round). */
-  onTask?: TaskEventHandler
   /** Runs when the signed-in person signs out (e.g. to forget copies kept for offline use). */
   onSignedOut?: () => void
   children: ReactNode
 }
 
 /** One socket per signed-in person; task events patch the caches in place, a reconnect refetches once. */
-export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children }: Props) {
+export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props) {
   const queryClient = useQueryClient()
   const personId = useSessionPersonId(sessionKey)
   const [state, setState] = useState<{ personId: number | null; status: LiveStatus }>({ personId: null, status: 'connecting' })
-  const onTaskRef = useRef(onTask)
   const onSignedOutRef = useRef(onSignedOut)
   const lastPersonId = useRef<number | null>(null)
   useEffect(() => {
-    onTaskRef.current = onTask
     onSignedOutRef.current = onSignedOut
-  }, [onTask, onSignedOut])
+  }, [onSignedOut])
 
   useEffect(() => {
     if (personId === null && lastPersonId.current !== null) onSignedOutRef.current?.()
@@ -54,16 +48,15 @@ export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children 
       const handle = (payload: unknown) => {
         const parsed = TaskSchema.safeParse(payload)
         if (!parsed.success) return
-        patchTaskLists(queryClient, parsed.data)
-        onTaskRef.current?.(queryClient, parsed.data, personId)
+        patchTaskViews(queryClient, parsed.data, personId)
       }
       for (const event of taskEvents) socket.on(event, handle)
       // Bulk changes (a roster change re-assigning, an event holding feeds) come without tasks: refetch once.
-      socket.on('tasks:changed', () => void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false }))
+      socket.on('tasks:changed', () => void refetchTaskViews(queryClient))
       socket.on('connect', () => {
         report('live')
         // What changed while we were away came as events nobody heard: catch up once.
-        if (missed) void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
+        if (missed) void refetchTaskViews(queryClient)
         missed = false
       })
       socket.on('disconnect', lost)
@@ -76,7 +69,7 @@ export function LiveUpdatesProvider({ sessionKey, onTask, onSignedOut, children 
       const onOnline = () => {
         if (socket.connected) {
           report('live')
-          void queryClient.invalidateQueries({ queryKey: TASKS_ROOT }, { cancelRefetch: false })
+          void refetchTaskViews(queryClient)
           missed = false
           return
         }

@@ -1,13 +1,11 @@
 import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
-import { FacilitySchema } from '#shared/schemas/facility'
 import { OutboxMessageSchema } from '#shared/schemas/ladder'
 import { ApiError, apiFetch } from '../../../lib/api-client'
 
 export const outboxKeys = {
   all: ['outbox'] as const,
   list: () => [...outboxKeys.all, 'list'] as const,
-  facility: () => [...outboxKeys.all, 'facility'] as const,
 }
 
 /** null when the server sends real mail (smtp mode), where there is no outbox to show. */
@@ -20,16 +18,6 @@ async function fetchOutbox() {
   }
 }
 
-async function facilityZone() {
-  try {
-    return (await apiFetch('/facility', FacilitySchema)).timeZone
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 404) return Intl.DateTimeFormat().resolvedOptions().timeZone
-    throw error
-  }
-}
-
 export const outboxQueries = {
   list: () => queryOptions({ queryKey: outboxKeys.list(), queryFn: fetchOutbox, staleTime: 5_000, refetchInterval: 10_000 }),
-  timeZone: () => queryOptions({ queryKey: outboxKeys.facility(), queryFn: facilityZone, staleTime: 10 * 60_000 }),
 }

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import type { z } from 'zod'
 import { CylinderStatusSchema, type CylinderInput, type CylinderReadingInputSchema } from '#shared/schemas/oxygen'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 import { oxygenKeys } from './oxygen-queries'
 
@@ -13,7 +14,7 @@ export function useRecordCylinderReading() {
     onSuccess: (status) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: oxygenKeys.cylinders() }),
-        status.replaceTaskId ? queryClient.invalidateQueries({ queryKey: ['tasks'] }) : null,
+        status.replaceTaskId ? queryClient.invalidateQueries({ queryKey: taskKeys.all }) : null,
       ]),
   })
 }

@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { PersonSchema, type CreatePersonInput, type UpdatePersonInput } from '#shared/schemas/person'
+import { staffKeys } from '../../../api/staff'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
-import { peopleKeys } from './people-queries'
 
 function useInvalidatePeople() {
   const queryClient = useQueryClient()
-  return () => queryClient.invalidateQueries({ queryKey: peopleKeys.all })
+  // A new, renamed or deactivated person changes the planners' staff lists too.
+  return () => Promise.all([queryClient.invalidateQueries({ queryKey: staffKeys.people }), queryClient.invalidateQueries({ queryKey: staffKeys.staff })])
 }
 
 export function useCreatePerson() {

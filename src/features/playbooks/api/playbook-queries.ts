@@ -2,6 +2,7 @@ import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
 import { EventSchema, PlaybookSchema, type FacilityEvent, type Playbook } from '#shared/schemas/playbook'
 import { TaskSchema } from '#shared/schemas/task'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch } from '../../../lib/api-client'
 import { belongsToEvent, eventTaskWindows } from '../utils/event-tasks'
 
@@ -18,8 +19,6 @@ export const eventKeys = {
   detail: (id: number) => [...eventKeys.all, 'detail', id] as const,
 }
 
-// Under the shared "tasks" root, so live task changes refresh the event's task list too.
-const eventTaskKey = (eventId: number, version: string) => ['tasks', 'list', { eventId, version }] as const
 
 async function fetchEventTasks(event: FacilityEvent, playbook: Playbook, zone: string) {
   const windows = eventTaskWindows(event, playbook, zone)
@@ -35,7 +34,7 @@ export const playbookQueries = {
   event: (id: number) => queryOptions({ queryKey: eventKeys.detail(id), queryFn: () => apiFetch(`/events/${id}`, EventSchema) }),
   eventTasks: (event: FacilityEvent, playbook: Playbook, zone: string) =>
     queryOptions({
-      queryKey: eventTaskKey(event.id, `${event.localStart}|${event.status}|${event.taskCount}`),
+      queryKey: taskKeys.list({ eventId: event.id, version: `${event.localStart}|${event.status}|${event.taskCount}` }),
       queryFn: () => fetchEventTasks(event, playbook, zone),
     }),
 }

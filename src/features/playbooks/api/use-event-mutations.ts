@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { EventSchema, type EventInput, type FacilityEvent } from '#shared/schemas/playbook'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 import { eventKeys } from './playbook-queries'
 
@@ -10,7 +11,7 @@ function useRefreshAfterEvent() {
     queryClient.setQueryData(eventKeys.detail(event.id), event)
     return Promise.all([
       queryClient.invalidateQueries({ queryKey: eventKeys.lists() }),
-      queryClient.invalidateQueries({ queryKey: ['tasks'] }),
+      queryClient.invalidateQueries({ queryKey: taskKeys.all }),
     ])
   }
 }

@@ -58,6 +58,3 @@ export const AuditRowSchema = z.object({
 })
 export type AuditRow = z.infer<typeof AuditRowSchema>
 
-export const ReportTankSchema = z.object({ id: z.number().int(), code: z.string(), name: z.string(), areaId: z.number().int() })
-export const ReportAreaSchema = z.object({ id: z.number().int(), name: z.string(), roundOrder: z.number().int() })
-export const StaffNameSchema = z.object({ id: z.number().int(), name: z.string() })

@@ -1,4 +1,5 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query'
+import { staffQueries } from '../../../api/staff'
 import { reportQueries } from '../api/report-queries'
 import type { AuditFilter } from '../utils/report-paths'
 import { AuditEntry } from './audit-entry'
@@ -9,7 +10,7 @@ const when = (iso: string, timeZone: string) =>
 /** Who changed what, newest first; names when this role may read the staff list, numbers otherwise. */
 export function AuditList({ filter, timeZone, canReadStaff }: { filter: AuditFilter; timeZone: string; canReadStaff: boolean }) {
   const { data: rows } = useSuspenseQuery(reportQueries.audit(filter))
-  const staff = useQuery({ ...reportQueries.staff(), enabled: canReadStaff })
+  const staff = useQuery({ ...staffQueries.staff(), enabled: canReadStaff })
   const names = new Map((staff.data ?? []).map((p) => [p.id, p.name]))
   const who = (id: number | null) => (id === null ? 'Roundtide (scheduler)' : (names.get(id) ?? `Person #${id}`))
   if (rows.length === 0) return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No changes recorded in this range.</p>

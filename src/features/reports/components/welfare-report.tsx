@@ -1,4 +1,5 @@
 import { useSuspenseQuery } from '@tanstack/react-query'
+import { catalogueQueries } from '../../../api/catalogues'
 import { reportQueries } from '../api/report-queries'
 import type { WelfareRow } from '../api/report-schemas'
 import { csvHref, type WelfareFilter } from '../utils/report-paths'
@@ -29,7 +30,7 @@ interface WelfareReportProps {
 /** Every welfare and quarantine check in the range for the chosen tanks: who, when, and what they read. */
 export function WelfareReport({ filter, onTanksChange }: WelfareReportProps) {
   const { data: rows } = useSuspenseQuery(reportQueries.welfare(filter))
-  const { data: tanks } = useSuspenseQuery(reportQueries.tanks())
+  const { data: tanks } = useSuspenseQuery(catalogueQueries.tanks())
   const chosen = tanks.filter((t) => filter.tankIds.includes(t.id)).map((t) => t.code)
   return (
     <section aria-labelledby="welfare-heading" className="flex flex-col gap-3">

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { CompletionResultSchema } from '#shared/schemas/completion'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 
 export interface PaperCompletion {
@@ -18,6 +19,6 @@ export function useEnterPaperCompletion() {
   return useMutation({
     mutationFn: ({ taskId, ...body }: PaperCompletion) =>
       apiFetch(`/tasks/${taskId}/completion`, CompletionResultSchema, { method: 'POST', ...jsonBody(body) }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['tasks'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: taskKeys.all }),
   })
 }

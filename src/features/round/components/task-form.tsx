@@ -2,8 +2,8 @@ import { useQueryClient } from '@tanstack/react-query'
 import { Check, CircleAlert, Loader2, NotebookPen, X } from 'lucide-react'
 import { useEffect, useRef } from 'react'
 import type { RoundTask } from '#shared/schemas/round'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { ApiError } from '../../../lib/api-client'
-import { roundKeys } from '../api/round-queries'
 import { useSubmitCompletion, type SubmitOutcome } from '../api/use-submit-completion'
 import { useDraft } from '../state/drafts'
 import { buildCompletion, draftErrorsFrom } from '../utils/build-completion'
@@ -51,7 +51,7 @@ export function TaskForm({ task, personId, online, onFinished }: Props) {
       },
       (error: Error) => {
         update({ errors: draftErrorsFrom(error instanceof ApiError ? error.fieldErrors : undefined, error.message) })
-        if (error instanceof ApiError && error.status === 409) void queryClient.invalidateQueries({ queryKey: roundKeys.all })
+        if (error instanceof ApiError && error.status === 409) void queryClient.invalidateQueries({ queryKey: taskKeys.rounds() })
       },
     )
   }

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { z } from 'zod'
+import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch } from '../../../lib/api-client'
-import { routineKeys, routineTaskKeys } from './routine-queries'
+import { routineKeys } from './routine-queries'
 
 export function useDeleteRoutine() {
   const queryClient = useQueryClient()
@@ -10,7 +11,7 @@ export function useDeleteRoutine() {
     onSuccess: (_data, id) =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: routineKeys.lists() }),
-        queryClient.invalidateQueries({ queryKey: routineTaskKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: taskKeys.lists() }),
         // Marked stale but not refetched: the page still showing it would only get a 404.
         queryClient.invalidateQueries({ queryKey: routineKeys.detail(id), refetchType: 'none' }),
       ]),

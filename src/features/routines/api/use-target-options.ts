@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query'
 import type { TargetKind } from '#shared/schemas/routine'
-import { routineReferenceQueries as refs } from './routine-reference-queries'
+import { catalogueQueries as refs } from '../../../api/catalogues'
 
 export type TargetOption = { id: number; label: string; note?: string; group?: string }
 

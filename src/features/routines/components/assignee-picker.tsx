@@ -2,16 +2,16 @@ import { useQuery } from '@tanstack/react-query'
 import { useController } from 'react-hook-form'
 import { ROLES, ROLE_LABELS, type Role } from '#shared/schemas/person'
 import type { AssigneeRule, RoutineInput } from '#shared/schemas/routine'
-import { routineReferenceQueries } from '../api/routine-reference-queries'
-import { FormSection } from './form-section'
+import { staffQueries } from '../../../api/staff'
 import { SelectField } from '../../../components/ui/select-field'
+import { FormSection } from './form-section'
 
 type Kind = AssigneeRule['kind']
 
 export function AssigneePicker({ canPickPerson }: { canPickPerson: boolean }) {
   const { field, fieldState } = useController<RoutineInput, 'assigneeRule'>({ name: 'assigneeRule' })
   const rule: AssigneeRule = field.value ?? { kind: 'none' }
-  const people = useQuery({ ...routineReferenceQueries.people(), enabled: canPickPerson })
+  const people = useQuery({ ...staffQueries.people(), enabled: canPickPerson })
   const active = (people.data ?? []).filter((p) => p.active && p.role !== 'observer')
   // A supervisor cannot list people, but must not silently lose a manager's named choice.
   const offerPerson = canPickPerson || rule.kind === 'person'

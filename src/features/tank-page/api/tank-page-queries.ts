@@ -1,5 +1,4 @@
 import { queryOptions } from '@tanstack/react-query'
-import { z } from 'zod'
 import { apiFetch } from '../../../lib/api-client'
 import { TankOverviewSchema, TankReadingsSchema } from './tank-page-schemas'
 
@@ -10,7 +9,6 @@ export const tankPageKeys = {
   all: ['tank-page'] as const,
   overview: (id: number) => [...tankPageKeys.all, 'overview', id] as const,
   readings: (id: number, days: TrendRange) => [...tankPageKeys.all, 'readings', id, days] as const,
-  facility: () => [...tankPageKeys.all, 'facility'] as const,
 }
 
 /** The window ends now and is worked out when fetched, so a refetch moves it along. */
@@ -25,10 +23,4 @@ async function fetchReadings(id: number, days: TrendRange) {
 export const tankPageQueries = {
   overview: (id: number) => queryOptions({ queryKey: tankPageKeys.overview(id), queryFn: () => apiFetch(`/tanks/${id}/overview`, TankOverviewSchema) }),
   readings: (id: number, days: TrendRange) => queryOptions({ queryKey: tankPageKeys.readings(id, days), queryFn: () => fetchReadings(id, days) }),
-  facility: () =>
-    queryOptions({
-      queryKey: tankPageKeys.facility(),
-      queryFn: () => apiFetch('/facility', z.object({ name: z.string(), timeZone: z.string() })),
-      staleTime: 5 * 60_000,
-    }),
 }

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query'
 import type { Board, BoardCard } from '#shared/schemas/board'
 import type { Task } from '#shared/schemas/task'
-import { boardKeys } from './board-queries'
+import { taskKeys } from './task-keys'
 
 export interface MoveTarget {
   assigneeId?: number | null
@@ -50,7 +50,7 @@ export function placeTasks(board: Board, changed: Task[]): Board | 'refetch' {
 
 /** For live task events: patches every cached board with one changed task. */
 export function patchBoardTask(queryClient: QueryClient, task: Task) {
-  for (const [queryKey, board] of queryClient.getQueriesData<Board>({ queryKey: boardKeys.all })) {
+  for (const [queryKey, board] of queryClient.getQueriesData<Board>({ queryKey: taskKeys.boards() })) {
     if (!board) continue
     const next = placeTasks(board, [task])
     if (next === 'refetch') void queryClient.invalidateQueries({ queryKey, exact: true })

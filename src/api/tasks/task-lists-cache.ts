@@ -1,9 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query'
 import type { Task } from '#shared/schemas/task'
-
-// Every task query lives under this root (the round, lists for the board and routines).
-export const TASKS_ROOT = ['tasks'] as const
-const TASK_LISTS = ['tasks', 'list'] as const
+import { taskKeys } from './task-keys'
 
 type Filter = Record<string, unknown>
 
@@ -31,7 +28,7 @@ const byDue = (a: Task, b: Task) => a.dueAt.localeCompare(b.dueAt) || a.id - b.i
 
 /** Patches every cached task list with one changed task, without refetching the ones it can place. */
 export function patchTaskLists(queryClient: QueryClient, task: Task) {
-  for (const [queryKey, data] of queryClient.getQueriesData<Task[]>({ queryKey: TASK_LISTS })) {
+  for (const [queryKey, data] of queryClient.getQueriesData<Task[]>({ queryKey: taskKeys.lists() })) {
     if (!Array.isArray(data)) continue
     const existing = data.find((t) => t.id === task.id)
     if (existing && existing.version > task.version) continue
