@@ -1,7 +1,8 @@
 import { DateTime } from 'luxon'
 import type { IANAZone } from 'luxon'
 import { RRule, parseRule } from './parse-rule'
-import type { RuleUntil } from './parse-rule'
+import type { ParsedRule, RuleUntil } from './parse-rule'
+import { RULE_LIMITS, limitPeriods, stepsPerPeriod } from './rule-limits'
 import {
   DAY_MS,
   floatingMsToInstant,
@@ -27,6 +28,16 @@ export type ExpandRuleInput = {
   to?: string
   /** Most occurrences to return; default 1000. */
   limit?: number
+  /** Most work to do, in days of candidates; default RULE_LIMITS.maxSteps. */
+  maxSteps?: number
+}
+
+export type BoundedExpansion = {
+  occurrences: Occurrence[]
+  /** False when the walk stopped at its period budget before the end of the window. */
+  complete: boolean
+  /** The end of the window that was searched, as a floating (wall-time-as-UTC) millisecond count. */
+  searchedUntilFloatingMs: number
 }
 
 export type Occurrence = {
@@ -37,8 +48,12 @@ export type Occurrence = {
 }
 
 const DEFAULT_LIMIT = 1000
-// rrule stops iterating after year 9999, so this works as an open end
-const END_OF_TIME = Date.UTC(9999, 11, 31, 23, 59, 59)
+const YEAR_MS = 365.25 * DAY_MS
+// Fixed-length periods, and months for MONTHLY (12 for YEARLY): the walk can start shortly before
+// the window instead of at DTSTART years back, so the work follows the window (see startNearWindow).
+const PERIOD_MS: Record<string, number> = { WEEKLY: 7 * DAY_MS, DAILY: DAY_MS, HOURLY: 3_600_000, MINUTELY: 60_000, SECONDLY: 1000 }
+const PERIOD_MONTHS: Record<string, number> = { MONTHLY: 1, YEARLY: 12 }
+const DAY_PARTS = ['BYWEEKNO', 'BYYEARDAY', 'BYMONTHDAY', 'BYDAY']
 
 function parseInstant(text: string | undefined, label: string, zone: IANAZone): number | undefined {
   if (text === undefined) return undefined
@@ -69,6 +84,43 @@ function earliest(...instants: (number | undefined)[]): number | undefined {
  * as real instants; the floating window is widened by a day on each side and filtered exactly.
  */
 export function expandRule(input: ExpandRuleInput): Occurrence[] {
+  return expandRuleBounded(input).occurrences
+}
+
+type WalkStart = { dtstartMs: number; defaults: Partial<ParsedRule['options']> }
+
+/**
+ * Where rrule may start walking: DTSTART moved forward by whole periods (times INTERVAL) to one
+ * step before the window. That gives the same dates, because a period's dates depend only on
+ * the period and the BY parts; the time of day is kept, and the day rrule would take from DTSTART
+ * (RFC 5545: a MONTHLY rule without day parts repeats DTSTART's day) is written out first.
+ * COUNT counts from the real DTSTART, so such rules are walked from there.
+ */
+function startNearWindow(rule: ParsedRule, dtstartMs: number, windowStartMs: number): WalkStart {
+  const freq = rule.parts.get('FREQ') ?? ''
+  const interval = Number(rule.parts.get('INTERVAL') ?? 1)
+  const unchanged = { dtstartMs, defaults: {} }
+  if (rule.parts.has('COUNT') || windowStartMs <= dtstartMs) return unchanged
+  const period = PERIOD_MS[freq]
+  if (period) {
+    const steps = Math.floor((windowStartMs - dtstartMs) / (period * interval)) - 1
+    return steps > 0 ? { dtstartMs: dtstartMs + steps * period * interval, defaults: {} } : unchanged
+  }
+  const months = PERIOD_MONTHS[freq] * interval
+  const start = new Date(dtstartMs)
+  const window = new Date(windowStartMs)
+  const monthsApart = (window.getUTCFullYear() - start.getUTCFullYear()) * 12 + window.getUTCMonth() - start.getUTCMonth()
+  const steps = Math.floor(monthsApart / months) - 1
+  if (steps <= 0) return unchanged
+  const hasDayPart = DAY_PARTS.some((part) => rule.parts.has(part))
+  const defaults = hasDayPart ? {} : freq === 'YEARLY' ? { bymonth: rule.options.bymonth ?? [start.getUTCMonth() + 1], bymonthday: [start.getUTCDate()] } : { bymonthday: [start.getUTCDate()] }
+  const firstOfMonth = Date.UTC(start.getUTCFullYear(), start.getUTCMonth() + steps * months, 1, start.getUTCHours(), start.getUTCMinutes(), start.getUTCSeconds())
+  // Day 1 of the month: DTSTART's own day may not exist there (31st, 29 February).
+  return { dtstartMs: firstOfMonth, defaults }
+}
+
+/** expandRule with what the bounds cut off: a walk is never longer than its period budget or the search span. */
+export function expandRuleBounded(input: ExpandRuleInput): BoundedExpansion {
   const zone = resolveZone(input.tzid)
   const dtstartMs = wallToFloatingMs(parseWallTime(input.dtstart, 'dtstart'))
   const limit = input.limit ?? DEFAULT_LIMIT
@@ -76,11 +128,15 @@ export function expandRule(input: ExpandRuleInput): Occurrence[] {
   const rule = parseRule(input.rrule)
   const lower = parseInstant(input.from, 'from', zone)
   const upper = earliest(parseInstant(input.to, 'to', zone), untilToInstant(rule.until, zone))
-  if (limit === 0 || (lower !== undefined && upper !== undefined && lower > upper)) return []
-
-  const recurrence = new RRule({ ...rule.options, dtstart: new Date(dtstartMs), until: null, tzid: null }, true)
   const windowStart = lower === undefined ? dtstartMs : Math.max(dtstartMs, instantToFloatingMs(lower, zone) - DAY_MS)
-  let windowEnd = upper === undefined ? END_OF_TIME : instantToFloatingMs(upper, zone) + DAY_MS
+  const spanEnd = windowStart + RULE_LIMITS.searchYears * YEAR_MS
+  let windowEnd = upper === undefined ? spanEnd : Math.min(spanEnd, instantToFloatingMs(upper, zone) + DAY_MS)
+  const searchedUntilFloatingMs = windowEnd
+  if (limit === 0 || (lower !== undefined && upper !== undefined && lower > upper)) return { occurrences: [], complete: true, searchedUntilFloatingMs }
+
+  const walk = startNearWindow(rule, dtstartMs, windowStart)
+  const recurrence = new RRule({ ...rule.options, ...walk.defaults, dtstart: new Date(walk.dtstartMs), until: null, tzid: null }, true)
+  const budget = limitPeriods(recurrence, input.maxSteps ?? RULE_LIMITS.maxSteps, stepsPerPeriod(rule.parts.get('FREQ')))
   const instants = new Set<number>()
 
   recurrence.between(new Date(windowStart), new Date(windowEnd), true, (floating) => {
@@ -97,11 +153,12 @@ export function expandRule(input: ExpandRuleInput): Occurrence[] {
     return true
   })
 
-  return [...instants]
+  const occurrences = [...instants]
     .sort((a, b) => a - b)
     .slice(0, limit)
     .map((instant) => ({
       local: formatWallTime(floatingMsToWall(instantToFloatingMs(instant, zone))),
       utc: formatUtcInstant(instant),
     }))
+  return { occurrences, complete: !budget.exhausted || instants.size >= limit, searchedUntilFloatingMs }
 }

@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import { calendarDate } from './calendar'
 
 const code = z.string().trim().min(1, 'Required').max(40).regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
 const name = z.string().trim().min(1, 'Required').max(120)
 const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const isoDate = calendarDate()
 
 export function isValidTimeZone(tz: string) {
   try {

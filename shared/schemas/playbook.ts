@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { wallDateTime } from './calendar'
 import { AssigneeRuleSchema, CategorySchema, PrioritySchema } from './routine'
 
 const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
@@ -53,7 +54,7 @@ export const PlaybookSchema = z.object({
 export type Playbook = z.infer<typeof PlaybookSchema>
 
 export const EVENT_STATUSES = ['planned', 'ended', 'cancelled'] as const
-const localDateTime = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/, 'Use YYYY-MM-DDTHH:mm')
+const localDateTime = wallDateTime({ seconds: 'optional' })
 
 export const EventInputSchema = z
   .object({

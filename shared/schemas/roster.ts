@@ -1,6 +1,7 @@
 import { z } from 'zod'
+import { calendarDate } from './calendar'
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const isoDate = calendarDate()
 const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 
 export const SHIFT_KINDS = ['day', 'early', 'late', 'weekend'] as const

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { calendarDate } from './calendar'
 import { TaskSchema } from './task'
 
 export const ReadingSpecSchema = z.object({
@@ -32,4 +33,4 @@ export const RoundSchema = z.object({
 })
 export type Round = z.infer<typeof RoundSchema>
 
-export const RoundQuerySchema = z.object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD').optional() })
+export const RoundQuerySchema = z.object({ date: calendarDate().optional() })

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { calendarDate, wallDateTime } from './calendar'
 import { RoleSchema } from './person'
 
 export const ROUTINE_CATEGORIES = [
@@ -31,8 +32,8 @@ export const AssigneeRuleSchema = z.discriminatedUnion('kind', [
 ])
 export type AssigneeRule = z.infer<typeof AssigneeRuleSchema>
 
-const localDateTime = z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}$/, 'Use YYYY-MM-DDTHH:mm:ss')
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const localDateTime = wallDateTime({ seconds: 'required' })
+const isoDate = calendarDate()
 
 export const RoutineSchema = z.object({
   id: z.number().int(),
@@ -55,6 +56,8 @@ export const RoutineSchema = z.object({
   paused: z.boolean(),
   skipDates: z.array(isoDate),
   ladderId: z.number().int().nullable(),
+  /** Why the last planning run could not make tasks from this routine; null when it could. */
+  planningError: z.string().nullable(),
   version: z.number().int(),
 })
 export type Routine = z.infer<typeof RoutineSchema>

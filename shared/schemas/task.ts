@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { calendarDate, wallDateTime } from './calendar'
 import { BandSchema } from './parameter'
 import { CategorySchema, PrioritySchema, TargetKindSchema } from './routine'
 
@@ -7,7 +8,7 @@ export const TaskStatusSchema = z.enum(TASK_STATUSES)
 export type TaskStatus = z.infer<typeof TaskStatusSchema>
 export const FINISHED_STATUSES: readonly TaskStatus[] = ['done', 'skipped']
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const isoDate = calendarDate()
 
 export const TaskSchema = z.object({
   id: z.number().int(),
@@ -74,7 +75,7 @@ export const CreateTaskInputSchema = z.object({
   priority: PrioritySchema.default('routine'),
   targetKind: TargetKindSchema.exclude(['area_tanks']),
   targetId: z.number().int().positive().nullable().default(null),
-  localStart: z.string().regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/, 'Use YYYY-MM-DDTHH:mm'),
+  localStart: wallDateTime({ seconds: 'optional' }),
   durationMinutes: z.number().int().min(1).max(24 * 60).default(10),
   graceMinutes: z.number().int().min(0).max(7 * 24 * 60).default(60),
   assigneeId: z.number().int().positive().nullable().default(null),

@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
+import { calendarDate } from '#shared/schemas/calendar'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { broadcast } from '../../realtime/socket-server'
 import { requireRole, signedIn } from '../auth/require-role'
@@ -10,7 +11,7 @@ import { createPlaybook, getPlaybook, listPlaybooks, updatePlaybook } from './pl
 export const playbooksRouter = Router()
 const planners = requireRole('manager', 'supervisor')
 const doers = requireRole('manager', 'supervisor', 'technician')
-const RangeSchema = z.object({ from: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional(), to: z.string().regex(/^\d{4}-\d{2}-\d{2}$/).optional() })
+const RangeSchema = z.object({ from: calendarDate().optional(), to: calendarDate().optional() })
 
 playbooksRouter.get('/playbooks', signedIn, async (_req, res) => {
   res.json(await listPlaybooks())

@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { z } from 'zod'
+import { calendarDate } from '#shared/schemas/calendar'
 import { toCsv } from '../../lib/csv'
 import { requireRole } from '../auth/require-role'
 import { AuditEntity } from '../audit/audit.entity'
@@ -9,7 +10,7 @@ import { tankOverview, tankReadings } from './tank-overview.service'
 
 export const reportsRouter = Router()
 const readers = requireRole('manager', 'supervisor', 'observer')
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD')
+const isoDate = calendarDate()
 
 export const ReportRangeSchema = z
   .object({ from: isoDate, to: isoDate, format: z.enum(['json', 'csv']).default('json') })

@@ -31,6 +31,7 @@ export const RoutineEntity = new EntitySchema<RoutineRow>({
     paused: { type: 'boolean', default: false },
     skipDates: { type: 'json' },
     ladderId: { type: 'int', nullable: true },
+    planningError: { type: 'varchar', length: 500, nullable: true },
     version: { type: 'int', default: 1 },
     createdAt: createdAtColumn,
     updatedAt: updatedAtColumn,

@@ -1,5 +1,4 @@
-import { validateRule } from '#shared/schedule/describe-rule'
-import { expandRule } from '#shared/schedule/expand-rule'
+import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
 import { RoutineInputSchema, UpdateRoutineInputSchema, type Routine, type RoutineData } from '#shared/schemas/routine'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
@@ -28,15 +27,10 @@ export async function getRoutine(id: number): Promise<Routine> {
   return toRoutine(row)
 }
 
-/** Checks what the schema cannot: the rule expands, the readings exist. */
+/** Checks what the schema cannot: tasks can be planned from the rule, the readings exist. */
 async function checkRoutine(data: RoutineData) {
-  const ruleError = validateRule(data.rrule)
+  const ruleError = plannableRuleProblem({ rrule: data.rrule, dtstart: data.dtstart, tzid: (await getFacility()).timeZone })
   if (ruleError) throw validationError(ruleError, { rrule: [ruleError] })
-  try {
-    expandRule({ rrule: data.rrule, dtstart: data.dtstart, tzid: (await getFacility()).timeZone, limit: 1 })
-  } catch (err) {
-    throw validationError((err as Error).message, { rrule: [(err as Error).message] })
-  }
   const known = new Set((await db().getRepository(ParameterEntity).find()).map((p) => p.key))
   const unknown = data.requiredReadings.filter((k) => !known.has(k))
   if (unknown.length) throw validationError(`Unknown reading: ${unknown.join(', ')}`, { requiredReadings: [`Unknown: ${unknown.join(', ')}`] })

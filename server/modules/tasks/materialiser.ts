@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon'
-import { expandRule } from '#shared/schedule/expand-rule'
+import { expandRuleBounded, type Occurrence } from '#shared/schedule/expand-rule'
+import { RULE_LIMITS } from '#shared/schedule/rule-limits'
 import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
@@ -9,7 +10,7 @@ import { RoutineEntity } from '../routines/routine.entity'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
 
-export const DEFAULT_HORIZON_DAYS = 42
+export const DEFAULT_HORIZON_DAYS = RULE_LIMITS.horizonDays
 // Rows per INSERT: ~400 bytes each, so a statement stays far below max_allowed_packet.
 const CHUNK = 2000
 // Columns the materialiser writes; the rest take their defaults.
@@ -42,7 +43,17 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
   // Rows wait in one batch across routines, so small routines share a statement.
   let batch: Array<Partial<TaskRow>> = []
   for (const [index, routine] of routines.entries()) {
-    for (const row of planRoutineTasks(routine, cat, from, until, activePeople)) {
+    let rows: Array<Partial<TaskRow>> = []
+    try {
+      rows = planRoutineTasks(routine, cat, from, until, activePeople)
+      if (routine.planningError !== null) await repo.update(routine.id, { planningError: null })
+    } catch (err) {
+      // One broken routine (say, a date stored before dates were checked) must not stop the
+      // planning of every routine after it: it is logged, marked for the routines page, and skipped.
+      logger.error({ err, routineId: routine.id }, 'routine could not be planned')
+      await repo.update(routine.id, { planningError: planningErrorText(err) })
+    }
+    for (const row of rows) {
       if (opts.tankId !== undefined && row.tankId !== opts.tankId) continue
       batch.push(row)
       if (batch.length === CHUNK) {
@@ -52,6 +63,8 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     }
     if (index === routines.length - 1 && batch.length) created += await insertIgnoringDuplicates(batch)
     opts.onProgress?.(index + 1, routines.length, created)
+    // Planning is synchronous work: give waiting requests their turn between routines.
+    await new Promise<void>((resolve) => setImmediate(resolve))
   }
   if (created) {
     logger.info({ created, routines: routines.length }, 'tasks materialised')
@@ -72,6 +85,8 @@ async function activePersonIds(): Promise<Set<number>> {
   return new Set(rows.map((r) => r.id))
 }
 
+const planningErrorText = (err: unknown) => `Tasks could not be planned: ${err instanceof Error ? err.message : String(err)}`.slice(0, 500)
+
 /**
  * One multi-row INSERT IGNORE, written by hand: the query builder spends longer building a
  * 2,000-row statement than the database spends on it. The driver reports the rows really new.
@@ -86,18 +101,41 @@ async function insertIgnoringDuplicates(rows: Array<Partial<TaskRow>>): Promise<
   return result.affectedRows ?? 0
 }
 
+const WEEK_MS = 7 * 86_400_000
+
+/**
+ * The routine's occurrences a week at a time: each expansion stays within its bounded work
+ * (RULE_LIMITS) however long the horizon, and a rule validated for the planning horizon fits.
+ */
+function occurrencesBetween(routine: Routine, zone: string, lower: Date, upper: Date): Occurrence[] {
+  const found: Occurrence[] = []
+  for (let start = lower.getTime(); start <= upper.getTime(); start += WEEK_MS) {
+    const end = Math.min(start + WEEK_MS - 1, upper.getTime())
+    const week = expandRuleBounded({ rrule: routine.rrule, dtstart: routine.dtstart, tzid: zone, from: new Date(start).toISOString(), to: new Date(end).toISOString(), limit: RULE_LIMITS.maxPerHorizon })
+    if (!week.complete) logger.warn({ routineId: routine.id, from: new Date(start).toISOString() }, 'rule expansion stopped at its work limit')
+    found.push(...week.occurrences)
+  }
+  return found
+}
+
+function localDay(date: string, zone: string) {
+  const day = DateTime.fromISO(date, { zone })
+  if (!day.isValid) throw new Error(`${date} is not a calendar date (${day.invalidExplanation ?? day.invalidReason})`)
+  return day
+}
+
 /** The task rows one routine should have between two instants, in the facility's zone. */
 export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, until: Date, activePeople?: ReadonlySet<number>): Array<Partial<TaskRow>> {
   const zone = cat.facility.timeZone
-  const startOfDay = (d: string) => DateTime.fromISO(d, { zone }).startOf('day').toJSDate()
-  const endOfDay = (d: string) => DateTime.fromISO(d, { zone }).endOf('day').toJSDate()
+  const startOfDay = (d: string) => localDay(d, zone).startOf('day').toJSDate()
+  const endOfDay = (d: string) => localDay(d, zone).endOf('day').toJSDate()
   const lower = routine.activeFrom ? new Date(Math.max(from.getTime(), startOfDay(routine.activeFrom).getTime())) : from
   const upper = routine.activeTo ? new Date(Math.min(until.getTime(), endOfDay(routine.activeTo).getTime())) : until
   if (upper < lower) return []
   const targets = resolveTargets(routine, cat)
   if (!targets.length) return []
   const skip = new Set(routine.skipDates)
-  const occurrences = expandRule({ rrule: routine.rrule, dtstart: routine.dtstart, tzid: zone, from: lower.toISOString(), to: upper.toISOString(), limit: 100_000 })
+  const occurrences = occurrencesBetween(routine, zone, lower, upper)
   // A named person who is no longer active leaves the task unassigned, as the rule pass would.
   const named = routine.assigneeRule.kind === 'person' ? routine.assigneeRule.personId : null
   const assigneeId = named !== null && (!activePeople || activePeople.has(named)) ? named : null

@@ -3,6 +3,7 @@ import { IdParamSchema } from '#shared/schemas/facility'
 import { RoundQuerySchema } from '#shared/schemas/round'
 import { BulkMoveInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
 import { z } from 'zod'
+import { calendarDate } from '#shared/schemas/calendar'
 import { forbidden } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
 import { publishTask } from '../../realtime/task-events'
@@ -22,7 +23,7 @@ tasksRouter.get('/round', requireRole('manager', 'supervisor', 'technician'), as
 })
 tasksRouter.get('/round-sheet', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
   const q = z
-    .object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD'), personId: z.coerce.number().int().positive().optional(), areaId: z.coerce.number().int().positive().optional() })
+    .object({ date: calendarDate(), personId: z.coerce.number().int().positive().optional(), areaId: z.coerce.number().int().positive().optional() })
     .refine((x) => x.personId || x.areaId, { message: 'Choose a person or an area', path: ['personId'] })
     .parse(req.query)
   // A technician prints their own sheet or an area's, not a colleague's.
@@ -30,7 +31,7 @@ tasksRouter.get('/round-sheet', requireRole('manager', 'supervisor', 'technician
   res.json(await getRoundSheet(q.date, q))
 })
 tasksRouter.get('/board', signedIn, async (req, res) => {
-  const { date } = z.object({ date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use YYYY-MM-DD') }).parse(req.query)
+  const { date } = z.object({ date: calendarDate() }).parse(req.query)
   res.json(await getBoard(date))
 })
 tasksRouter.post('/bulk-move', requireRole('manager', 'supervisor'), async (req, res) => {

@@ -20,7 +20,7 @@ const routine = (overrides: Partial<Routine> = {}): Routine => ({
   id: 7, name: 'Morning feed', category: 'feeding', instructions: '', targetKind: 'tank', targetIds: [1, 2], onlyInUse: true,
   rrule: 'FREQ=WEEKLY;BYDAY=MO,WE,FR', dtstart: '2026-03-02T10:15:00', durationMinutes: 5, windowBeforeMinutes: 30, graceMinutes: 60,
   priority: 'routine', assigneeRule: { kind: 'none' }, requiredReadings: ['do_mgL'], activeFrom: null, activeTo: null,
-  paused: false, skipDates: [], ladderId: null, version: 1, ...overrides,
+  paused: false, skipDates: [], ladderId: null, planningError: null, version: 1, ...overrides,
 })
 
 describe('planning a routine into tasks', () => {

@@ -4,6 +4,7 @@ import { CATEGORY_LABELS, type Category, type Routine } from '#shared/schemas/ro
 import { summariseRule } from '../utils/rule-preview'
 import { describeTargets } from '../utils/target-text'
 import { PausedLabel } from './paused-label'
+import { PlanningErrorLabel } from './planning-error-label'
 import { PriorityLabel } from './priority-label'
 import { RoutineCategoryFilter } from './routine-category-filter'
 
@@ -40,10 +41,11 @@ export function RoutineList({ routines, category, onCategoryChange }: {
               </span>
               <span className="flex flex-col gap-1">
                 <span className="text-tide-800">{summariseRule(r.rrule, r.dtstart)}</span>
-                {(r.priority === 'welfare_critical' || r.paused) && (
+                {(r.priority === 'welfare_critical' || r.paused || r.planningError) && (
                   <span className="flex flex-wrap gap-2">
                     <PriorityLabel priority={r.priority} />
                     {r.paused && <PausedLabel />}
+                    {r.planningError && <PlanningErrorLabel reason={r.planningError} />}
                   </span>
                 )}
               </span>

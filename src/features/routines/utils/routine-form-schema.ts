@@ -1,18 +1,10 @@
-import { validateRule } from '#shared/schedule/describe-rule'
-import { expandRule } from '#shared/schedule/expand-rule'
+import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
 import { RoutineInputSchema } from '#shared/schemas/routine'
 
-/** The shared input schema plus the checks the server makes against the facility: the rule must expand there. */
+/** The shared input schema plus the checks the server makes against the facility: tasks can be planned from the rule there. */
 export function routineFormSchema(timeZone: string) {
   return RoutineInputSchema.superRefine((r, ctx) => {
-    let ruleError = validateRule(r.rrule)
-    if (!ruleError) {
-      try {
-        expandRule({ rrule: r.rrule, dtstart: r.dtstart, tzid: timeZone, limit: 1 })
-      } catch (error) {
-        ruleError = error instanceof Error ? error.message : String(error)
-      }
-    }
+    const ruleError = plannableRuleProblem({ rrule: r.rrule, dtstart: r.dtstart, tzid: timeZone })
     if (ruleError) ctx.addIssue({ code: 'custom', path: ['rrule'], message: ruleError })
     if (r.assigneeRule.kind === 'person' && r.assigneeRule.personId <= 0) {
       ctx.addIssue({ code: 'custom', path: ['assigneeRule', 'personId'], message: 'Choose a person' })

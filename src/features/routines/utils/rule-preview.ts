@@ -2,6 +2,7 @@ import { DateTime } from 'luxon'
 import { describeRule, validateRule } from '#shared/schedule/describe-rule'
 import { expandRule } from '#shared/schedule/expand-rule'
 import { parseRule } from '#shared/schedule/parse-rule'
+import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
 
 const TIMED_FREQUENCIES = ['YEARLY', 'MONTHLY', 'WEEKLY', 'DAILY']
 
@@ -52,9 +53,9 @@ export type PreviewInput = {
 
 /** The next occurrences as the server will place them, or a readable reason there are none. */
 export function previewRule(input: PreviewInput): { rows: PreviewRow[]; error: null } | { rows: null; error: string } {
-  const ruleError = validateRule(input.rrule)
+  if (!/^\d{4}-\d{2}-\d{2}T/.test(input.dtstart)) return { rows: null, error: validateRule(input.rrule) ?? 'Choose a start date.' }
+  const ruleError = plannableRuleProblem({ rrule: input.rrule, dtstart: input.dtstart, tzid: input.timeZone })
   if (ruleError) return { rows: null, error: ruleError }
-  if (!/^\d{4}-\d{2}-\d{2}T/.test(input.dtstart)) return { rows: null, error: 'Choose a start date.' }
   try {
     const activeStart = input.activeFrom ? DateTime.fromISO(input.activeFrom, { zone: input.timeZone }).toMillis() : NaN
     const from = new Date(activeStart > input.now.getTime() ? activeStart : input.now.getTime()).toISOString()
