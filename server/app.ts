@@ -22,6 +22,7 @@ import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
+import { incidentsRouter } from './modules/incidents/incidents.routes'
 import { oxygenRouter } from './modules/oxygen/oxygen.routes'
 import { playbooksRouter } from './modules/playbooks/playbooks.routes'
 import { reportsRouter } from './modules/reports/reports.routes'
@@ -84,6 +85,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', oxygenRouter)
   api.use('/', reportsRouter)
   api.use('/', stockRouter)
+  api.use('/', incidentsRouter)
   api.use((req: express.Request) => {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })

@@ -5,6 +5,7 @@ import { AmendmentEntity } from '../modules/completions/amendment.entity'
 import { AreaEntity, BatchEntity, EquipmentEntity, FacilityEntity, SystemEntity, TankEntity } from '../modules/facility/facility.entities'
 import { LimitEntity, ParameterEntity } from '../modules/parameters/parameter.entities'
 import { PersonEntity } from '../modules/people/person.entity'
+import { IncidentEntity } from '../modules/incidents/incident.entity'
 import { HandoverNoteEntity, OnCallEntity, ShiftEntity } from '../modules/roster/roster.entities'
 import { CylinderEntity } from '../modules/oxygen/oxygen.entities'
 import { BatchRecordEntity, EventEntity, PlaybookEntity } from '../modules/playbooks/playbook.entities'
@@ -18,5 +19,5 @@ export const entities = [
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
   ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity,
   PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity, AuditEntity, AmendmentEntity,
-  MovementEntity, StockSettingsEntity,
+  MovementEntity, StockSettingsEntity, IncidentEntity,
 ]

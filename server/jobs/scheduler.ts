@@ -4,6 +4,7 @@ import { logger } from '../lib/logger'
 import { deliverPending, type Transport } from '../modules/escalation/deliver'
 import { sendDailyDigestIfDue } from '../modules/escalation/digest'
 import { runEscalations } from '../modules/escalation/escalate'
+import { escalateOverdueIncidents } from '../modules/incidents/incidents.service'
 import { materialise } from '../modules/tasks/materialiser'
 import { getTask } from '../modules/tasks/tasks.service'
 import { publishTask } from '../realtime/task-events'
@@ -68,6 +69,7 @@ export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
       const at = now()
       const { changed } = await advanceTaskStatuses(ds, at)
       for (const id of changed.slice(0, 500)) publishTask('task:updated', await getTask(id))
+      await escalateOverdueIncidents(at)
       await runEscalations(at)
       if (opts.mail) {
         await deliverPending(opts.mail.config, opts.mail.transport, at)

@@ -1,6 +1,7 @@
 import { In, type DataSource } from 'typeorm'
 import type { TaskStatus } from '#shared/schemas/task'
 import { AlertEntity } from '../modules/completions/completion.entities'
+import { proposeForMissedTasks } from '../modules/incidents/incidents.service'
 import { TaskEntity } from '../modules/tasks/task.entity'
 
 interface Step {
@@ -46,6 +47,9 @@ export async function advanceTaskStatuses(ds: DataSource, now: Date): Promise<{ 
       .values(missed.map((taskId) => ({ taskId, kind: 'missed_task' as const, detail: 'Not done within its grace time', ladderId: null, startedAt: now })))
       .orIgnore()
       .execute()
+    // A missed welfare-critical check is proposed as an incident for a person to confirm or dismiss.
+    const critical = await repo.findBy({ id: In(missed), priority: 'welfare_critical' })
+    await proposeForMissedTasks(critical, now)
   }
   return { changed, missed }
 }

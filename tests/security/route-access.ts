@@ -104,6 +104,12 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/batches/:id/stock': ALL,
   'GET /api/stock/settings': ALL,
   'PATCH /api/stock/settings': M,
+  'GET /api/incidents': ALL,
+  'GET /api/incidents/:id': ALL,
+  'POST /api/incidents/:id/confirm': MS,
+  'POST /api/incidents/:id/dismiss': MS,
+  'PATCH /api/incidents/:id': MS,
+  'POST /api/incidents/:id/notes': MSO,
 }
 
 function catalogue(name: string, editors: Role[]): Record<string, Role[]> {

@@ -49,3 +49,9 @@ export async function startCriticalAlert(task: TaskRow, critical: Reading[]) {
   await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId: task.id, kind: 'critical_reading', detail, ladderId: null, startedAt: new Date() }).orIgnore().execute()
   logger.warn({ taskId: task.id, detail }, 'critical reading: escalation started')
 }
+
+/** An incident past its committee deadline climbs the ladder of the task it came from, once. */
+export async function startIncidentAlert(taskId: number, detail: string, at: Date) {
+  await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId, kind: 'incident_overdue', detail: detail.slice(0, 500), ladderId: null, startedAt: at }).orIgnore().execute()
+  logger.warn({ taskId, detail }, 'incident overdue: escalation started')
+}

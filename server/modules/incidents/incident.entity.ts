@@ -1,0 +1,58 @@
+import { EntitySchema } from 'typeorm'
+import type { Incident } from '#shared/schemas/incident'
+import { INCIDENT_SOURCES, INCIDENT_STATUSES } from '#shared/schemas/incident'
+
+type Dates = 'startedAt' | 'noticedAt' | 'decidedAt' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'reportedAt' | 'closedAt' | 'escalatedAt'
+export type IncidentRow = Omit<Incident, Dates> & {
+  startedAt: Date
+  noticedAt: Date
+  decidedAt: Date | null
+  welfareDueAt: Date
+  committeeDueAt: Date
+  reportDueAt: Date
+  reportedAt: Date | null
+  closedAt: Date | null
+  escalatedAt: Date | null
+  /** One proposal per cause (e.g. "missed_task:42"), so a retried clock tick never proposes twice. */
+  sourceKey: string | null
+  createdAt: Date
+}
+
+const when = (nullable = false) => ({ type: 'datetime' as const, precision: 3, nullable })
+
+export const IncidentEntity = new EntitySchema<IncidentRow>({
+  name: 'Incident',
+  tableName: 'incidents',
+  columns: {
+    id: { type: 'int', primary: true, generated: 'increment' },
+    status: { type: 'enum', enum: [...INCIDENT_STATUSES], default: 'proposed' },
+    source: { type: 'enum', enum: [...INCIDENT_SOURCES] },
+    sourceKey: { type: 'varchar', length: 60, nullable: true, unique: true },
+    taskId: { type: 'int', nullable: true },
+    title: { type: 'varchar', length: 160 },
+    whatHappened: { type: 'text' },
+    startedAt: when(),
+    noticedAt: when(),
+    tankIds: { type: 'json' },
+    batchIds: { type: 'json' },
+    personIds: { type: 'json' },
+    affected: { type: 'int', default: 0 },
+    dead: { type: 'int', default: 0 },
+    immediateActions: { type: 'text' },
+    told: { type: 'json' },
+    rootCause: { type: 'text' },
+    correctiveActions: { type: 'text' },
+    decisionReason: { type: 'varchar', length: 500, nullable: true },
+    decidedById: { type: 'int', nullable: true },
+    decidedAt: when(true),
+    welfareDueAt: when(),
+    committeeDueAt: when(),
+    reportDueAt: when(),
+    reportedAt: when(true),
+    closedAt: when(true),
+    escalatedAt: when(true),
+    notes: { type: 'json' },
+    createdAt: { type: 'datetime', precision: 3, createDate: true, default: () => 'CURRENT_TIMESTAMP(3)' },
+  },
+  indices: [{ columns: ['status', 'committeeDueAt'] }],
+})

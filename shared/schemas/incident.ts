@@ -1,0 +1,66 @@
+import { z } from 'zod'
+
+export const INCIDENT_STATUSES = ['proposed', 'dismissed', 'open', 'reported', 'closed'] as const
+export const INCIDENT_SOURCES = ['missed_task', 'critical_recheck', 'mortality_threshold', 'manual'] as const
+export const IncidentStatusSchema = z.enum(INCIDENT_STATUSES)
+
+const text = (max: number) => z.string().trim().max(max)
+
+export const IncidentNoteSchema = z.object({ at: z.string(), personId: z.number().int(), personName: z.string(), text: z.string() })
+export const ToldSchema = z.object({ who: text(160).min(1), at: z.string().datetime() })
+
+/** One adverse event: what happened, who was told, and the three deadlines from the facility's settings. */
+export const IncidentSchema = z.object({
+  id: z.number().int(),
+  status: IncidentStatusSchema,
+  source: z.enum(INCIDENT_SOURCES),
+  taskId: z.number().int().nullable(),
+  title: z.string(),
+  whatHappened: z.string(),
+  startedAt: z.string(),
+  noticedAt: z.string(),
+  tankIds: z.array(z.number().int()),
+  batchIds: z.array(z.number().int()),
+  personIds: z.array(z.number().int()),
+  affected: z.number().int(),
+  dead: z.number().int(),
+  immediateActions: z.string(),
+  told: z.array(ToldSchema),
+  rootCause: z.string(),
+  correctiveActions: z.string(),
+  decisionReason: z.string().nullable(),
+  decidedById: z.number().int().nullable(),
+  decidedAt: z.string().nullable(),
+  welfareDueAt: z.string(),
+  committeeDueAt: z.string(),
+  reportDueAt: z.string(),
+  reportedAt: z.string().nullable(),
+  closedAt: z.string().nullable(),
+  escalatedAt: z.string().nullable(),
+  notes: z.array(IncidentNoteSchema),
+})
+export type Incident = z.infer<typeof IncidentSchema>
+
+export const DecideIncidentInputSchema = z.object({ reason: text(500).min(3, 'Say why in a few words') })
+export const IncidentNoteInputSchema = z.object({ text: text(2000).min(1, 'Write the note') })
+
+/** The record's fields a supervisor or manager fills in; status moves open → reported → closed only. */
+export const UpdateIncidentInputSchema = z
+  .object({
+    title: text(160).min(1),
+    whatHappened: text(4000),
+    startedAt: z.string().datetime(),
+    noticedAt: z.string().datetime(),
+    tankIds: z.array(z.number().int().positive()).max(200),
+    batchIds: z.array(z.number().int().positive()).max(200),
+    personIds: z.array(z.number().int().positive()).max(200),
+    affected: z.number().int().min(0),
+    dead: z.number().int().min(0),
+    immediateActions: text(4000),
+    told: z.array(ToldSchema).max(50),
+    rootCause: text(4000),
+    correctiveActions: text(4000),
+    status: z.enum(['reported', 'closed']),
+  })
+  .partial()
+export type UpdateIncidentInput = z.infer<typeof UpdateIncidentInputSchema>

@@ -1,0 +1,103 @@
+import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { db } from '#server/db/data-source'
+import { advanceTaskStatuses } from '#server/jobs/status-clock'
+import { AlertEntity } from '#server/modules/completions/completion.entities'
+import { runEscalations } from '#server/modules/escalation/escalate'
+import { NotificationEntity } from '#server/modules/escalation/escalation.entities'
+import { escalateOverdueIncidents } from '#server/modules/incidents/incidents.service'
+import type { Incident } from '#shared/schemas/incident'
+import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
+import { makeTankTask } from '#tests/support/task-fixtures'
+import { startTestApp, type TestApp } from '#tests/support/test-app'
+
+let t: TestApp
+beforeAll(async () => {
+  t = await startTestApp()
+  await ensureFacilityAndParameters()
+})
+afterAll(() => t.close())
+
+const MIN = 60_000
+const HOUR = 60 * MIN
+
+/** A welfare-critical check that passes its grace at `missedAt` while the clock runs. */
+async function missWelfareCriticalCheck(missedAt: Date) {
+  const { tanks } = await makeAreaWithTanks(1)
+  const assignee = await t.createPersonWithRole('technician')
+  const due = new Date(missedAt.getTime() - 60 * MIN)
+  const task = await makeTankTask(tanks[0], { title: `Morning tank check ${uniqueCode('i')}`, assigneeId: assignee.id, dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2032-01-01T07:30:00' })
+  await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
+  return { task, tank: tanks[0] }
+}
+
+type Agent = Awaited<ReturnType<TestApp['signedInAgent']>>['agent']
+const signInAs = async (role: 'supervisor' | 'observer') => (await t.signedInAgent(role)).agent
+
+async function incidentsOf(taskId: number, as: Agent) {
+  const res = await as.get('/api/incidents').expect(200)
+  return (res.body as Incident[]).filter((i) => i.taskId === taskId)
+}
+
+describe('incidents proposed by Roundtide, decided by a person', () => {
+  test('when a welfare-critical check is missed, then one incident is proposed (not filed), with deadlines 24 h / 72 h / 7 d from when it was noticed', async () => {
+    const missedAt = new Date(Date.now() + 9000 * MIN)
+    const { task, tank } = await missWelfareCriticalCheck(missedAt)
+    // The clock runs again (a retried tick, a second process): still one proposal.
+    await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 60_000))
+    const supervisor = await signInAs('supervisor')
+    const found = await incidentsOf(task.id, supervisor)
+    expect(found).toHaveLength(1)
+    const [incident] = found
+    expect(incident.status).toBe('proposed')
+    expect(incident.source).toBe('missed_task')
+    expect(incident.tankIds).toEqual([tank.id])
+    const noticed = new Date(incident.noticedAt).getTime()
+    expect(new Date(incident.welfareDueAt).getTime() - noticed).toBe(24 * HOUR)
+    expect(new Date(incident.committeeDueAt).getTime() - noticed).toBe(72 * HOUR)
+    expect(new Date(incident.reportDueAt).getTime() - noticed).toBe(7 * 24 * HOUR)
+  })
+
+  test('a proposal is confirmed or dismissed only with a reason; an observer may add a note but not confirm', async () => {
+    const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9100 * MIN))
+    const supervisor = await signInAs('supervisor')
+    const observer = await signInAs('observer')
+    const [incident] = await incidentsOf(task.id, supervisor)
+    await observer.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Seen it' }).expect(403)
+    const noReason = await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: '' }).expect(400)
+    expect(JSON.stringify(noReason.body)).toContain('Say why')
+    const confirmed = await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Fish in the tank were gasping at 10:00' }).expect(200)
+    expect(confirmed.body.status).toBe('open')
+    expect(confirmed.body.decisionReason).toBe('Fish in the tank were gasping at 10:00')
+    await supervisor.post(`/api/incidents/${incident.id}/dismiss`).send({ reason: 'Changed my mind' }).expect(409)
+    const noted = await observer.post(`/api/incidents/${incident.id}/notes`).send({ text: 'Welfare officer informed by phone.' }).expect(201)
+    expect(noted.body.notes.map((n: { text: string }) => n.text)).toEqual(['Welfare officer informed by phone.'])
+    const reported = await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Aerator tripped', status: 'reported' }).expect(200)
+    expect(reported.body.status).toBe('reported')
+    expect(reported.body.reportedAt).not.toBeNull()
+  })
+
+  test('when a confirmed incident passes its 72 h committee deadline unreported, then it escalates through the ladder once', async () => {
+    const missedAt = new Date(Date.now() + 9200 * MIN)
+    const { task } = await missWelfareCriticalCheck(missedAt)
+    const supervisor = await signInAs('supervisor')
+    const [incident] = await incidentsOf(task.id, supervisor)
+    await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Check was missed on a hot day' }).expect(200)
+    const committeeDue = new Date(incident.committeeDueAt).getTime()
+
+    await escalateOverdueIncidents(new Date(committeeDue - 60_000))
+    expect(await db().getRepository(AlertEntity).findBy({ taskId: task.id, kind: 'incident_overdue' })).toHaveLength(0)
+
+    const past = new Date(committeeDue + 60 * MIN)
+    await escalateOverdueIncidents(past)
+    await escalateOverdueIncidents(new Date(past.getTime() + 30 * MIN))
+    const alerts = await db().getRepository(AlertEntity).findBy({ taskId: task.id, kind: 'incident_overdue' })
+    expect(alerts).toHaveLength(1)
+    await runEscalations(past)
+    await runEscalations(past)
+    const firstStep = await db().getRepository(NotificationEntity).findBy({ alertId: alerts[0].id, step: 0 })
+    expect(firstStep.length).toBeGreaterThan(0)
+    expect(new Set(firstStep.map((n) => n.personId)).size).toBe(firstStep.length)
+    const after = (await supervisor.get(`/api/incidents/${incident.id}`).expect(200)).body as Incident
+    expect(after.escalatedAt).toBe(past.toISOString())
+  })
+})
