@@ -11,7 +11,7 @@ import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { loadCatalogue } from '#server/modules/tasks/targets'
 
 /** A small seeded generator, so every fresh demo tells the same (invented) story. */
-function generator(seed: number) {
+export function generator(seed: number) {
   let a = seed
   const next = () => {
     a |= 0
