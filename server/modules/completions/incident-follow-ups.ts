@@ -2,7 +2,6 @@ import type { Band } from '#shared/schemas/parameter'
 import type { Reading } from '#shared/schemas/completion'
 import { proposeForCriticalRecheck, proposeForMortalityThreshold } from '../incidents/incidents.service'
 import type { RoundMortalityPlan } from '../stock/round-mortality'
-import type { TaskRow } from '../tasks/task.entity'
 import { getTaskRow } from '../tasks/tasks.service'
 
 /**
@@ -10,7 +9,9 @@ import { getTaskRow } from '../tasks/tasks.service'
  * critical again after a critical first reading, or when the round's deaths take the batch over
  * the facility's 7-day threshold. A person confirms or dismisses each proposal.
  */
-export async function proposeIncidentsAfterCompletion(task: TaskRow, flag: Band, readings: Reading[], mortality: RoundMortalityPlan | null | undefined, completionId: string, now: Date) {
+type CompletedTask = { id: number; title: string; tankId: number | null; recheckOfTaskId: number | null }
+
+export async function proposeIncidentsAfterCompletion(task: CompletedTask, flag: Band, readings: Reading[], mortality: RoundMortalityPlan | null | undefined, completionId: string, now: Date) {
   if (flag === 'critical' && task.recheckOfTaskId) {
     const first = await getTaskRow(task.recheckOfTaskId).catch(() => null)
     if (first?.flag === 'critical') {
