@@ -6,12 +6,11 @@ export interface DatedEntry extends LedgerEntry {
   occurredAt: string
 }
 
-export interface BatchPeriodFigures {
+/** What a batch, or a batch in one tank, began and ended a period with, and what happened between. */
+interface PeriodCounts {
   batchId: number
   opening: number
   arrived: number
-  /** Fish moved between tanks inside the batch (transfers and gradings); they change no total. */
-  moved: number
   died: number
   diedByCause: Record<string, number>
   culled: number
@@ -20,6 +19,11 @@ export interface BatchPeriodFigures {
   /** Net count corrections, other than corrections of a recorded death. */
   corrected: number
   closing: number
+}
+
+export interface BatchPeriodFigures extends PeriodCounts {
+  /** Fish moved between tanks inside the batch (transfers and gradings); they change no total. */
+  moved: number
 }
 
 const empty = (batchId: number): BatchPeriodFigures => ({ batchId, opening: 0, arrived: 0, moved: 0, died: 0, diedByCause: {}, culled: 0, used: 0, dispatched: 0, corrected: 0, closing: 0 })
@@ -55,27 +59,17 @@ export function periodFigures(entries: DatedEntry[], from: string, to: string): 
   return [...out.values()].sort((a, b) => a.batchId - b.batchId)
 }
 
-function addDeath(r: { died: number; diedByCause: Record<string, number> }, cause: string | null | undefined, n: number) {
+function addDeath(r: PeriodCounts, cause: string | null | undefined, n: number) {
   const key = cause || UNKNOWN_CAUSE
   r.died += n
   r.diedByCause[key] = (r.diedByCause[key] ?? 0) + n
   if (r.diedByCause[key] === 0) delete r.diedByCause[key]
 }
 
-export interface TankPeriodFigures {
-  batchId: number
+export interface TankPeriodFigures extends PeriodCounts {
   tankId: number
-  opening: number
-  arrived: number
   movedIn: number
   movedOut: number
-  died: number
-  diedByCause: Record<string, number>
-  culled: number
-  used: number
-  dispatched: number
-  corrected: number
-  closing: number
 }
 
 /**
