@@ -1,4 +1,5 @@
 import { readFile } from 'node:fs/promises'
+import AxeBuilder from '@axe-core/playwright'
 import { DateTime } from 'luxon'
 import Papa from 'papaparse'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
@@ -54,6 +55,8 @@ describe('the animal record for the ethics committee', () => {
     await deadlines.getByRole('row').filter({ hasText: 'NUR-T02' }).getByText('Met', { exact: true }).first().waitFor()
     await deadlines.getByRole('row').filter({ hasText: 'TRL-A07' }).getByText('Missed, done late').first().waitFor()
     await screenshot(page, 'animal-record-desktop')
+    const axe = await new AxeBuilder({ page }).analyze()
+    expect(axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(' | ')}`)).toEqual([])
 
     const link = page.getByRole('link', { name: 'Download CSV: numbers per batch' })
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()])
