@@ -125,7 +125,10 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     await escalateOverdueIncidents(new Date(reportLate.getTime() + HOUR))
     expect(await alertsOf('incident_overdue')).toHaveLength(1)
     expect(await alertsOf('incident_report_overdue')).toHaveLength(1)
-    const closed = (await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', status: 'closed' }).expect(200)).body as Incident
+    const unfinished = await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', status: 'closed' }).expect(400)
+    expect(unfinished.body.error.fieldErrors).toHaveProperty(['correctiveActions'])
+    expect(((await supervisor.get(`/api/incidents/${incident.id}`)).body as Incident).status).toBe('open')
+    const closed = (await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', correctiveActions: 'Swaps go through the roster page', status: 'closed' }).expect(200)).body as Incident
     expect(closed.reportEscalatedAt).toBe(reportLate.toISOString())
     expect((await alertsOf('incident_report_overdue'))[0].closedAt).not.toBeNull()
   })

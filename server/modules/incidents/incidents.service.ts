@@ -5,7 +5,7 @@ import {
   type Incident,
 } from '#shared/schemas/incident'
 import { db } from '../../db/data-source'
-import { conflict, notFound } from '../../lib/errors'
+import { conflict, notFound, validationError } from '../../lib/errors'
 import { closeIncidentAlert } from '../completions/follow-ups'
 import { DEADLINE_RULES } from './incident-escalation'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
@@ -63,7 +63,12 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
   if (noticedAt) next.noticedAt = new Date(noticedAt)
   if (welfareNotifiedAt) next.welfareNotifiedAt = new Date(welfareNotifiedAt)
   if (status === 'reported' && !row.reportedAt) Object.assign(next, { status, reportedAt: now })
-  if (status === 'closed') Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
+  if (status === 'closed') {
+    // Closing files the full report (the third deadline), so the report must say why and what changes.
+    const missing = (['rootCause', 'correctiveActions'] as const).filter((k) => !(next[k] ?? row[k]).trim())
+    if (missing.length) throw validationError('Nothing was saved: the full report needs the root cause and the corrective actions before the incident is closed.', Object.fromEntries(missing.map((k) => [k, ['Required to close']])))
+    Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
+  }
   await repo().update(id, next)
   if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
   return getIncident(id)
