@@ -8,6 +8,7 @@ import {
 import { db } from '../../db/data-source'
 import { conflict, notFound } from '../../lib/errors'
 import { startIncidentAlert } from '../completions/follow-ups'
+import { listPeople } from '../people/people.service'
 import { getStockSettings } from '../stock/stock-settings.service'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
 
@@ -15,10 +16,13 @@ const repo = () => db().getRepository(IncidentEntity)
 const HOUR = 3_600_000
 const iso = (d: Date | null) => (d ? d.toISOString() : null)
 
-export function toIncident(r: IncidentRow): Incident {
+/** `names` (person id → name) lets observers, who cannot list the staff, read who decided and who was involved. */
+export function toIncident(r: IncidentRow, names: Map<number, string> = new Map()): Incident {
   const { sourceKey: _k, createdAt: _c, ...rest } = r
   return {
     ...rest,
+    decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
+    people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
     startedAt: r.startedAt.toISOString(), noticedAt: r.noticedAt.toISOString(), decidedAt: iso(r.decidedAt),
     welfareDueAt: r.welfareDueAt.toISOString(), committeeDueAt: r.committeeDueAt.toISOString(), reportDueAt: r.reportDueAt.toISOString(),
     reportedAt: iso(r.reportedAt), closedAt: iso(r.closedAt), escalatedAt: iso(r.escalatedAt),
@@ -60,8 +64,11 @@ export async function proposeIncident(p: IncidentProposal, now: Date): Promise<v
     .execute()
 }
 
+const personNames = async () => new Map((await listPeople()).map((p) => [p.id, p.name]))
+
 export async function listIncidents(): Promise<Incident[]> {
-  return (await repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 })).map(toIncident)
+  const [rows, names] = await Promise.all([repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 }), personNames()])
+  return rows.map((r) => toIncident(r, names))
 }
 
 async function load(id: number) {
@@ -70,7 +77,7 @@ async function load(id: number) {
   return row
 }
 
-export const getIncident = async (id: number) => toIncident(await load(id))
+export const getIncident = async (id: number) => toIncident(await load(id), await personNames())
 
 type Actor = { id: number; name: string }
 
