@@ -56,9 +56,9 @@ export function Component() {
               <PageHeader title={`Incident #${i.id}: ${i.title}`}>
                 <IncidentStatusLabel status={i.status} />
               </PageHeader>
+              {canDecide && i.status === 'proposed' && <DecideForm incidentId={i.id} />}
               <div className="grid gap-4 lg:grid-cols-[3fr_2fr]">
                 <div className="flex min-w-0 flex-col gap-4">
-                  {canDecide && i.status === 'proposed' && <DecideForm incidentId={i.id} />}
                   <div className="flex flex-wrap items-center justify-between gap-2">
                     <h2 className="text-xl font-bold text-tide-900">Record</h2>
                     {editable && !editing && <Button variant="secondary" onClick={() => setEditing(true)}>Fill in the record</Button>}
@@ -76,7 +76,8 @@ export function Component() {
                     <IncidentDetails incident={i} timeZone={timeZone} tankCodes={new Map(tanks.data!.map((t) => [t.id, t.code]))} batchCodes={new Map(batches.data!.map((b) => [b.id, b.code]))} />
                   )}
                 </div>
-                <div className="flex min-w-0 flex-col gap-4">
+                {/* On a phone the deadlines and the timeline come first: they are what a reader checks. */}
+                <div className="order-first flex min-w-0 flex-col gap-4 lg:order-none">
                   <IncidentDeadlines deadlines={deadlines} now={now} timeZone={timeZone} />
                   <section aria-labelledby="timeline-heading" className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-4">
                     <h2 id="timeline-heading" className="text-lg font-bold text-tide-900">Timeline</h2>

@@ -9,7 +9,7 @@ export function IncidentFilterBar({ filters, onChange }: { filters: IncidentFilt
   return (
     <div role="search" aria-label="Filter incidents" className="flex flex-wrap items-end gap-3 rounded-xl border border-tide-200 bg-white p-3">
       <SelectField label="Status" value={filters.status} onChange={(e) => onChange({ status: e.target.value as IncidentFilters['status'] })} className="w-56">
-        <option value="active">Needs attention (proposed, open, reported)</option>
+        <option value="active">Needs attention</option>
         <option value="all">All</option>
         {INCIDENT_STATUSES.map((s) => <option key={s} value={s}>{INCIDENT_STATUS_LOOK[s].label}</option>)}
       </SelectField>

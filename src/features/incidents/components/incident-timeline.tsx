@@ -16,7 +16,8 @@ export function IncidentTimeline({ incident, deadlines, now, timeZone }: { incid
     <ol aria-label="Timeline" className="flex flex-col border-l-2 border-tide-200 pl-4">
       {entries.map((e, n) => {
         const Icon = ICONS[e.kind]
-        const ahead = new Date(e.at).getTime() > now.getTime()
+        // Only a deadline lies ahead; a note stamped by the server a moment after the last tick is not.
+        const ahead = e.kind === 'deadline' && new Date(e.at).getTime() > now.getTime()
         return (
           <li key={n} className="relative pb-3">
             <Icon aria-hidden className="absolute top-0.5 -left-[27px] size-5 rounded-full bg-white text-tide-600" />
