@@ -51,5 +51,6 @@ export function MortalityDetail({ value, errors, onChange }: Props) {
 /** "312 in this tank" beside the mortality field, from the register (kept for offline like the round). */
 export function useTankCount(tankId: number | null, wanted: boolean): number | null {
   const onHand = useQuery({ ...stockQueries.onHand(), enabled: wanted && tankId !== null })
-  return tankId === null ? null : (onHand.data?.[String(tankId)] ?? null)
+  // Loaded and absent means the register shows the tank empty: say 0 rather than nothing.
+  return tankId === null || !onHand.data ? null : (onHand.data[String(tankId)] ?? 0)
 }
