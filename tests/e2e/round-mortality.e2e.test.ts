@@ -47,6 +47,9 @@ describe('deaths counted on the round reach the stock register', () => {
     // 3 dead is above the tank's band (≤ 2): the completion is flagged, and the count beside the field drops.
     await page.getByText('Flag: Watch').first().waitFor()
     await screenshot(page, 'round-mortality-phone-done')
+    // The recheck asks for the count again, and beside it the register already shows 3 fewer.
+    await page.getByRole('button', { name: /Recheck: Morning tank check/ }).click()
+    await page.getByText('397 fish in this tank on the register').waitFor()
 
     const rows = await db().getRepository(MovementEntity).findBy({ batchId: batch.id, kind: 'mortality' })
     expect(rows).toHaveLength(1)
