@@ -10,6 +10,7 @@ export const incidentKeys = {
 }
 
 export const incidentQueries = {
-  list: () => queryOptions({ queryKey: incidentKeys.list(), queryFn: () => apiFetch('/incidents', z.array(IncidentSchema)) }),
+  // Proposals come from the status clock, not from this page: a list left open looks again each minute.
+  list: () => queryOptions({ queryKey: incidentKeys.list(), queryFn: () => apiFetch('/incidents', z.array(IncidentSchema)), refetchInterval: 60_000 }),
   detail: (id: number) => queryOptions({ queryKey: incidentKeys.detail(id), queryFn: () => apiFetch(`/incidents/${id}`, IncidentSchema) }),
 }
