@@ -5,7 +5,7 @@ import { describeOkRange } from '#shared/readings/band'
 import type { ReadingSpec } from '#shared/schemas/round'
 import { checkTypedReading } from '#shared/readings/typed-reading'
 import { bandReason } from '../utils/reading-value'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 
 interface ReadingInputProps {
   spec: ReadingSpec
@@ -60,7 +60,7 @@ export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(func
           </span>
         ) : check.state === 'valid' ? (
           <span className="inline-flex flex-wrap items-center gap-2">
-            <BandBadge band={check.band} />
+            <BandBadge band={check.band} ringed />
             <span className="text-tide-700">{bandReason(check.value, check.band, spec) ?? 'In range'}</span>
           </span>
         ) : null}
