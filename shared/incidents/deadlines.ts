@@ -4,9 +4,9 @@ export const INCIDENT_DEADLINES = ['welfare', 'committee', 'report'] as const
 export type IncidentDeadline = (typeof INCIDENT_DEADLINES)[number]
 
 export const DEADLINE_LABELS: Record<IncidentDeadline, string> = {
-  welfare: 'Welfare officer told',
-  committee: 'Ethics committee told',
-  report: 'Full report filed',
+  welfare: 'Tell the welfare officer',
+  committee: 'Report to the ethics committee',
+  report: 'Full report',
 }
 
 /** met: done by the deadline; late: done after it; overdue: not done and past it; due: still time; not_needed: the proposal was dismissed. */
@@ -21,21 +21,30 @@ export interface DeadlineStatus {
   state: DeadlineState
 }
 
-type DeadlineFields = Pick<Incident, 'status' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'welfareNotifiedAt' | 'reportedAt' | 'closedAt'>
+type DeadlineFields = Pick<Incident, 'status' | 'told' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'welfareNotifiedAt' | 'reportedAt' | 'closedAt'>
 
-/** Which date meets which deadline: the welfare officer told, the committee told (reported), the full report filed (closed). */
-const DONE_BY: Record<IncidentDeadline, { due: keyof DeadlineFields; done: keyof DeadlineFields }> = {
-  welfare: { due: 'welfareDueAt', done: 'welfareNotifiedAt' },
-  committee: { due: 'committeeDueAt', done: 'reportedAt' },
-  report: { due: 'reportDueAt', done: 'closedAt' },
+/**
+ * When the welfare officer counts as told: the time recorded for it, else the first person or body
+ * the record says was told. The server stores this as `welfareNotifiedAt` when the record is saved,
+ * so its escalation and every screen judge the first deadline alike.
+ */
+export function welfareToldAt(incident: Pick<Incident, 'told' | 'welfareNotifiedAt'>): string | null {
+  if (incident.welfareNotifiedAt) return incident.welfareNotifiedAt
+  return incident.told.length ? incident.told.map((t) => t.at).sort()[0] : null
 }
 
-/** Each of an incident's three deadlines with whether it was met, at `now`. ISO instants compare as strings. */
-export function deadlineStatuses(incident: DeadlineFields, now: string): DeadlineStatus[] {
+/** Each of an incident's three deadlines with whether it was met, at `now`. */
+export function deadlineStatuses(incident: DeadlineFields, now: Date | string): DeadlineStatus[] {
+  const nowMs = new Date(now).getTime()
+  const done: Record<IncidentDeadline, string | null> = { welfare: welfareToldAt(incident), committee: incident.reportedAt, report: incident.closedAt }
+  const due: Record<IncidentDeadline, string> = { welfare: incident.welfareDueAt, committee: incident.committeeDueAt, report: incident.reportDueAt }
   return INCIDENT_DEADLINES.map((key) => {
-    const dueAt = incident[DONE_BY[key].due] as string
-    const doneAt = (incident[DONE_BY[key].done] as string | null) ?? null
-    const state: DeadlineState = doneAt ? (doneAt <= dueAt ? 'met' : 'late') : incident.status === 'dismissed' ? 'not_needed' : now > dueAt ? 'overdue' : 'due'
-    return { key, label: DEADLINE_LABELS[key], dueAt, doneAt, state }
+    const doneAt = done[key]
+    const dueMs = new Date(due[key]).getTime()
+    const state: DeadlineState = doneAt ? (new Date(doneAt).getTime() <= dueMs ? 'met' : 'late') : incident.status === 'dismissed' ? 'not_needed' : nowMs > dueMs ? 'overdue' : 'due'
+    return { key, label: DEADLINE_LABELS[key], dueAt: due[key], doneAt, state }
   })
 }
+
+/** The deadline to show first in a list: the next one overdue, else the next one still due. */
+export const nextDeadline = (deadlines: DeadlineStatus[]) => deadlines.find((d) => d.state === 'overdue') ?? deadlines.find((d) => d.state === 'due') ?? null

@@ -32,6 +32,9 @@ export const IncidentSchema = z.object({
   decisionReason: z.string().nullable(),
   decidedById: z.number().int().nullable(),
   decidedAt: z.string().nullable(),
+  /** Names for readers who may not list the staff (observers). */
+  decidedByName: z.string().nullable(),
+  people: z.array(z.object({ id: z.number().int(), name: z.string() })),
   welfareDueAt: z.string(),
   committeeDueAt: z.string(),
   reportDueAt: z.string(),

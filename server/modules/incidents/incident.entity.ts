@@ -3,7 +3,8 @@ import type { Incident } from '#shared/schemas/incident'
 import { INCIDENT_SOURCES, INCIDENT_STATUSES } from '#shared/schemas/incident'
 
 type Dates = 'startedAt' | 'noticedAt' | 'decidedAt' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'welfareNotifiedAt' | 'reportedAt' | 'closedAt' | 'escalatedAt' | 'welfareEscalatedAt' | 'reportEscalatedAt'
-export type IncidentRow = Omit<Incident, Dates> & {
+// Names are looked up when answering, never stored.
+export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'people'> & {
   startedAt: Date
   noticedAt: Date
   decidedAt: Date | null

@@ -4,9 +4,11 @@ import {
   UpdateIncidentInputSchema,
   type Incident,
 } from '#shared/schemas/incident'
+import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { closeIncidentAlert } from '../completions/follow-ups'
+import { listPeople } from '../people/people.service'
 import { DEADLINE_RULES } from './incident-escalation'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
 
@@ -17,10 +19,13 @@ export { escalateOverdueIncidents } from './incident-escalation'
 const repo = () => db().getRepository(IncidentEntity)
 const iso = (d: Date | null) => (d ? d.toISOString() : null)
 
-export function toIncident(r: IncidentRow): Incident {
+/** `names` (person id → name) lets observers, who cannot list the staff, read who decided and who was involved. */
+export function toIncident(r: IncidentRow, names: Map<number, string> = new Map()): Incident {
   const { sourceKey: _k, createdAt: _c, ...rest } = r
   return {
     ...rest,
+    decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
+    people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
     startedAt: r.startedAt.toISOString(), noticedAt: r.noticedAt.toISOString(), decidedAt: iso(r.decidedAt),
     welfareDueAt: r.welfareDueAt.toISOString(), committeeDueAt: r.committeeDueAt.toISOString(), reportDueAt: r.reportDueAt.toISOString(),
     welfareNotifiedAt: iso(r.welfareNotifiedAt), reportedAt: iso(r.reportedAt), closedAt: iso(r.closedAt),
@@ -28,8 +33,11 @@ export function toIncident(r: IncidentRow): Incident {
   }
 }
 
+const personNames = async () => new Map((await listPeople()).map((p) => [p.id, p.name]))
+
 export async function listIncidents(): Promise<Incident[]> {
-  return (await repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 })).map(toIncident)
+  const [rows, names] = await Promise.all([repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 }), personNames()])
+  return rows.map((r) => toIncident(r, names))
 }
 
 async function load(id: number) {
@@ -38,7 +46,7 @@ async function load(id: number) {
   return row
 }
 
-export const getIncident = async (id: number) => toIncident(await load(id))
+export const getIncident = async (id: number) => toIncident(await load(id), await personNames())
 
 type Actor = { id: number; name: string }
 
@@ -61,7 +69,9 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
   const next: Partial<IncidentRow> = { ...fields }
   if (startedAt) next.startedAt = new Date(startedAt)
   if (noticedAt) next.noticedAt = new Date(noticedAt)
-  if (welfareNotifiedAt) next.welfareNotifiedAt = new Date(welfareNotifiedAt)
+  // The first deadline is judged as the screens judge it: the time given, else the first person told.
+  const welfareTold = welfareToldAt({ welfareNotifiedAt: welfareNotifiedAt ?? iso(row.welfareNotifiedAt), told: next.told ?? row.told })
+  if (welfareTold) next.welfareNotifiedAt = new Date(welfareTold)
   if (status === 'reported' && !row.reportedAt) Object.assign(next, { status, reportedAt: now })
   if (status === 'closed') {
     // Closing files the full report (the third deadline), so the report must say why and what changes.
