@@ -44,7 +44,7 @@ export function completionsRouter(config: AppConfig) {
   router.post('/tasks/:id/photos', doers, upload.single('photo'), async (req, res) => {
     const { id } = IdParamSchema.parse(req.params)
     if (!req.file) throw new AppError(400, 'validation_failed', 'Attach a photo in the "photo" field.', { fieldErrors: { photo: ['Required'] } })
-    const photo = await savePhoto(config.uploadDir, id, req.user!.id, req.file)
+    const photo = await savePhoto(config.uploadDir, id, req.user!, req.file)
     res.status(201).json({ id: photo.id, mimeType: photo.mimeType, sizeBytes: photo.sizeBytes })
   })
 
