@@ -21,6 +21,7 @@ import { escalationRouter } from './modules/escalation/escalation.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
+import { preferencesRouter } from './modules/people/preferences.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
 import { incidentsRouter } from './modules/incidents/incidents.routes'
 import { oxygenRouter } from './modules/oxygen/oxygen.routes'
@@ -80,6 +81,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/tasks', tasksRouter)
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
+  api.use('/me/preferences', preferencesRouter(config))
   api.use('/', escalationRouter(config))
   api.use('/', playbooksRouter)
   api.use('/', oxygenRouter)

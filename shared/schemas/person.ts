@@ -63,6 +63,26 @@ export type UpdatePersonInput = z.infer<typeof UpdatePersonInputSchema>
 export const ResetPasswordInputSchema = z.object({ password })
 export type ResetPasswordInput = z.infer<typeof ResetPasswordInputSchema>
 
+const quietTime = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour').nullable()
+
+/** My own settings: the address I sign in with (escalation mail goes there too) and my quiet hours. */
+export const PreferencesSchema = z.object({ email: z.string(), quietStart: z.string().nullable(), quietEnd: z.string().nullable() })
+export type Preferences = z.infer<typeof PreferencesSchema>
+
+/** Changing the sign-in address needs the current password: a session left open must not be enough to take the account. */
+export const PreferencesInputSchema = z
+  .object({
+    email: email.optional(),
+    currentPassword: z.string().max(200).optional(),
+    quietStart: quietTime.optional(),
+    quietEnd: quietTime.optional(),
+  })
+  .refine((p) => (p.quietStart === undefined) === (p.quietEnd === undefined) && (p.quietStart === null) === (p.quietEnd === null), {
+    path: ['quietEnd'],
+    message: 'Give both the start and the end of quiet hours, or neither',
+  })
+export type PreferencesInput = z.infer<typeof PreferencesInputSchema>
+
 export const PersonIdParamSchema = z.object({ id: z.coerce.number().int().positive() })
 
 export const StaffMemberSchema = z.object({
