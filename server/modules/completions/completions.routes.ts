@@ -2,6 +2,7 @@ import { Router } from 'express'
 import multer from 'multer'
 import { z } from 'zod'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { PHOTO_CACHE_CONTROL } from '../../lib/cache-control'
 import type { AppConfig } from '../../lib/config'
 import { AppError } from '../../lib/errors'
 import { publishTask } from '../../realtime/task-events'
@@ -56,7 +57,8 @@ export function completionsRouter(config: AppConfig) {
   router.get('/photos/:photoId', signedIn, async (req, res) => {
     const { photoId } = z.object({ photoId: z.string().uuid() }).parse(req.params)
     const file = await photoFile(config.uploadDir, photoId)
-    res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow' })
+    res.setHeader('cache-control', PHOTO_CACHE_CONTROL)
+    res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow', cacheControl: false })
   })
 
   return router
