@@ -77,5 +77,16 @@ export default tseslint.config(
       ],
     },
   },
+  {
+    // Every string field starts from text(), which refuses malformed Unicode (record 12c).
+    files: ['shared/**/*.ts', 'server/**/*.ts', 'src/**/*.{ts,tsx}'],
+    ignores: ['shared/schemas/text.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        { selector: "CallExpression[callee.object.name='z'][callee.property.name='string']", message: 'Declare strings with text() from shared/schemas/text.ts: it refuses malformed Unicode with a 400.' },
+      ],
+    },
+  },
   ...boundaryConfig({ root: import.meta.dirname, allowedEntityImports: ENTITY_IMPORTS_BEING_REMOVED }),
 )

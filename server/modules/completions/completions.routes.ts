@@ -1,6 +1,7 @@
 import { Router } from 'express'
 import multer from 'multer'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { PHOTO_CACHE_CONTROL } from '../../lib/cache-control'
 import type { AppConfig } from '../../lib/config'
@@ -32,7 +33,7 @@ export function completionsRouter(config: AppConfig) {
   })
 
   router.post('/completions/:completionId/amendments', doers, async (req, res) => {
-    const { completionId } = z.object({ completionId: z.string().uuid() }).parse(req.params)
+    const { completionId } = z.object({ completionId: text().uuid() }).parse(req.params)
     res.status(201).json(await amendCompletion(completionId, req.user!, req.body))
   })
 
@@ -55,7 +56,7 @@ export function completionsRouter(config: AppConfig) {
   })
 
   router.get('/photos/:photoId', signedIn, async (req, res) => {
-    const { photoId } = z.object({ photoId: z.string().uuid() }).parse(req.params)
+    const { photoId } = z.object({ photoId: text().uuid() }).parse(req.params)
     const file = await photoFile(config.uploadDir, photoId)
     res.setHeader('cache-control', PHOTO_CACHE_CONTROL)
     res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow', cacheControl: false })

@@ -1,7 +1,8 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import type { Preferences, PreferencesInput } from '#shared/schemas/person'
 
-const time = z.union([z.literal(''), z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')])
+const time = z.union([z.literal(''), text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')])
 
 /**
  * The server's PreferencesInputSchema (shared/schemas/person.ts) as a form: '' for "no quiet
@@ -9,7 +10,7 @@ const time = z.union([z.literal(''), z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$
  */
 export const preferencesFormSchema = (savedEmail: string) =>
   z
-    .object({ email: z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(200), currentPassword: z.string().max(200), quietStart: time, quietEnd: time })
+    .object({ email: text().trim().toLowerCase().email('Enter a valid e-mail address').max(200), currentPassword: text().max(200), quietStart: time, quietEnd: time })
     .refine((p) => (p.quietStart === '') === (p.quietEnd === ''), { path: ['quietEnd'], message: 'Give both the start and the end of quiet hours, or neither' })
     .refine((p) => p.email === savedEmail || p.currentPassword !== '', { path: ['currentPassword'], message: 'Enter your current password to change your e-mail' })
 export type PreferencesFormValues = z.infer<ReturnType<typeof preferencesFormSchema>>
