@@ -14,8 +14,7 @@ export const ROLE_LABELS: Record<Role, string> = {
 
 const email = text().trim().toLowerCase().email('Enter a valid e-mail address').max(200)
 // bcrypt reads at most 72 bytes of a password; longer ones would be silently truncated.
-const password = z
-  .string()
+const password = text()
   .min(10, 'Use at least 10 characters')
   .refine((p) => new TextEncoder().encode(p).length <= 72, 'Use at most 72 bytes')
 
