@@ -32,3 +32,30 @@ export const impossibleWallTime = (shape: string) =>
       const time = shape.length > 6 ? `${pad(hour)}:${pad(minute)}:${pad(second)}` : `${pad(hour)}:${pad(minute)}`
       return `2026-03-31T${time}${shape.slice(9)}`
     })
+
+const FREQS = ['SECONDLY', 'MINUTELY', 'HOURLY', 'DAILY', 'WEEKLY', 'MONTHLY', 'YEARLY'] as const
+const list = (values: fc.Arbitrary<number | string>) => fc.uniqueArray(values, { minLength: 1, maxLength: 4 }).map((xs) => xs.join(','))
+const DAYS = ['MO', 'TU', 'WE', 'TH', 'FR', 'SA', 'SU']
+
+/**
+ * RRULE parts that make rules never match or match densely: positions no period has, days
+ * no month has (BYMONTH=2;BYMONTHDAY=30), week numbers, huge intervals, every second.
+ */
+const rulePart = fc.oneof(
+  list(fc.oneof(fc.integer({ min: 1, max: 400 }), fc.integer({ min: -400, max: -1 }))).map((v) => `BYSETPOS=${v}`),
+  list(fc.integer({ min: 0, max: 59 })).map((v) => `BYMINUTE=${v}`),
+  list(fc.integer({ min: 0, max: 59 })).map((v) => `BYSECOND=${v}`),
+  list(fc.integer({ min: 0, max: 23 })).map((v) => `BYHOUR=${v}`),
+  list(fc.tuple(fc.constantFrom('', '1', '2', '-1', '5', '53'), fc.constantFrom(...DAYS)).map(([n, d]) => `${n}${d}`)).map((v) => `BYDAY=${v}`),
+  list(fc.oneof(fc.integer({ min: 28, max: 31 }), fc.integer({ min: -31, max: -1 }), fc.integer({ min: 1, max: 27 }))).map((v) => `BYMONTHDAY=${v}`),
+  list(fc.integer({ min: 1, max: 12 })).map((v) => `BYMONTH=${v}`),
+  list(fc.oneof(fc.integer({ min: 1, max: 366 }), fc.integer({ min: -366, max: -1 }))).map((v) => `BYYEARDAY=${v}`),
+  list(fc.oneof(fc.integer({ min: 1, max: 53 }), fc.integer({ min: -53, max: -1 }))).map((v) => `BYWEEKNO=${v}`),
+  fc.oneof(fc.integer({ min: 1, max: 12 }), fc.integer({ min: 13, max: 100_000 })).map((v) => `INTERVAL=${v}`),
+  fc.integer({ min: 1, max: 100_000 }).map((v) => `COUNT=${v}`),
+  fc.constantFrom('UNTIL=20261231T000000Z', 'UNTIL=20260105T000000Z', 'UNTIL=99991231T235959Z', 'WKST=SU'),
+)
+
+export const odditiesRule = fc
+  .tuple(fc.constantFrom(...FREQS), fc.uniqueArray(rulePart, { maxLength: 4, selector: (p) => p.split('=')[0] }))
+  .map(([freq, parts]) => [`FREQ=${freq}`, ...parts].join(';'))
