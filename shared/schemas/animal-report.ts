@@ -2,6 +2,7 @@ import { z } from 'zod'
 import { DEADLINE_STATES } from '../incidents/deadlines'
 import { INCIDENT_SOURCES, IncidentStatusSchema } from './incident'
 import { calendarDate } from './calendar'
+import { text } from './text'
 
 /** Every report's question: facility days from–to (at most a year), as JSON or CSV. */
 export const ReportRangeSchema = z
@@ -21,11 +22,11 @@ const count = z.number().int()
  */
 export const StockReportRowSchema = z.object({
   batchId: count,
-  batchCode: z.string(),
-  species: z.string(),
+  batchCode: text(),
+  species: text(),
   tankId: count.nullable(),
   /** The tank's code, or "All tanks" on the batch's own line. */
-  tank: z.string(),
+  tank: text(),
   opening: count,
   arrived: count,
   /** Fish moved into and out of this tank within the batch (transfers and gradings); on the batch line they are equal. */
@@ -33,7 +34,7 @@ export const StockReportRowSchema = z.object({
   movedOut: count,
   died: count,
   /** "cause n; cause n", largest first. */
-  diedByCause: z.string(),
+  diedByCause: text(),
   culled: count,
   /** Sampled for research. */
   used: count,
@@ -51,20 +52,20 @@ export const DeadlineStateSchema = z.enum(DEADLINE_STATES)
 /** One incident of the period with each of its three deadlines met or missed. */
 export const IncidentReportRowSchema = z.object({
   id: count,
-  title: z.string(),
+  title: text(),
   status: IncidentStatusSchema,
   source: z.enum(INCIDENT_SOURCES),
-  noticedAt: z.string(),
-  tanks: z.string(),
+  noticedAt: text(),
+  tanks: text(),
   dead: count,
-  welfareDueAt: z.string(),
-  welfareDoneAt: z.string(),
+  welfareDueAt: text(),
+  welfareDoneAt: text(),
   welfare: DeadlineStateSchema,
-  committeeDueAt: z.string(),
-  committeeDoneAt: z.string(),
+  committeeDueAt: text(),
+  committeeDoneAt: text(),
   committee: DeadlineStateSchema,
-  reportDueAt: z.string(),
-  reportDoneAt: z.string(),
+  reportDueAt: text(),
+  reportDoneAt: text(),
   report: DeadlineStateSchema,
 })
 export type IncidentReportRow = z.infer<typeof IncidentReportRowSchema>

@@ -1,6 +1,7 @@
 import { Router } from 'express'
 import { z } from 'zod'
 import { AnimalReportQuerySchema, INCIDENT_REPORT_COLUMNS, ReportRangeSchema, STOCK_REPORT_COLUMNS } from '#shared/schemas/animal-report'
+import { text } from '#shared/schemas/text'
 import { toCsv } from '../../lib/csv'
 import { requireRole } from '../auth/require-role'
 import { AuditEntity } from '../audit/audit.entity'
@@ -32,7 +33,7 @@ reportsRouter.get('/reports/responses', readers, async (req, res) => {
 })
 
 reportsRouter.get('/reports/welfare', readers, async (req, res) => {
-  const q = ReportRangeSchema.and(z.object({ tankIds: z.string().regex(/^\d+(,\d+)*$/, 'Tank ids separated by commas').optional() })).parse(req.query)
+  const q = ReportRangeSchema.and(z.object({ tankIds: text().regex(/^\d+(,\d+)*$/, 'Tank ids separated by commas').optional() })).parse(req.query)
   const rows = await welfareReport(q.from, q.to, q.tankIds ? q.tankIds.split(',').map(Number) : [])
   send(res, q.format, `welfare-${q.from}-${q.to}`, rows, ['date', 'due', 'task', 'tank', 'status', 'doneAt', 'doneBy', 'lateMinutes', 'readings', 'flag'])
 })
@@ -56,12 +57,12 @@ reportsRouter.get('/tanks/:id/overview', requireRole('manager', 'supervisor', 't
 
 reportsRouter.get('/tanks/:id/readings', requireRole('manager', 'supervisor', 'technician', 'observer'), async (req, res) => {
   const { id } = z.object({ id: z.coerce.number().int().positive() }).parse(req.params)
-  const q = z.object({ from: z.string().datetime({ offset: true }), to: z.string().datetime({ offset: true }) }).refine((x) => x.to > x.from, { path: ['to'], message: 'Ends before it starts' }).parse(req.query)
+  const q = z.object({ from: text().datetime({ offset: true }), to: text().datetime({ offset: true }) }).refine((x) => x.to > x.from, { path: ['to'], message: 'Ends before it starts' }).parse(req.query)
   res.json(await tankReadings(id, new Date(q.from), new Date(q.to)))
 })
 
 reportsRouter.get('/audit', requireRole('manager', 'supervisor', 'observer'), async (req, res) => {
-  const q = ReportRangeSchema.and(z.object({ entity: z.string().max(20).optional() })).parse(req.query)
+  const q = ReportRangeSchema.and(z.object({ entity: text().max(20).optional() })).parse(req.query)
   const qb = db().getRepository(AuditEntity).createQueryBuilder('a').where('a.at BETWEEN :from AND :to', { from: new Date(`${q.from}T00:00:00Z`), to: new Date(`${q.to}T23:59:59.999Z`) })
   if (q.entity) qb.andWhere('a.entity = :entity', { entity: q.entity })
   const found = await qb.orderBy('a.id', 'DESC').take(1000).getMany()
