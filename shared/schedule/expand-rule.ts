@@ -11,6 +11,7 @@ import {
   formatUtcInstant,
   formatWallTime,
   instantToFloatingMs,
+  offsetSteady,
   parseWallTime,
   resolveZone,
   wallToFloatingMs,
@@ -152,8 +153,10 @@ export function expandRuleBounded(input: ExpandRuleInput): BoundedExpansion {
       // Set: wall times moved forward out of a DST gap can land on an instant already present
       // (RFC 5545 §3.8.5.3: duplicate instances are ignored)
       instants.add(instant)
-      // a later wall time can map to an earlier instant only across a gap, which is under a day
-      if (instants.size === limit) windowEnd = Math.min(windowEnd, floatingMs + DAY_MS)
+      // A later wall time can map to an earlier instant only across a gap, which is under a day:
+      // look a day further where the offset changes nearby, and stop at once where it does not
+      // (a dense rule would otherwise walk a whole extra day of occurrences).
+      if (instants.size === limit) windowEnd = Math.min(windowEnd, offsetSteady(zone, floatingMs) ? floatingMs : floatingMs + DAY_MS)
     }
     return true
   })

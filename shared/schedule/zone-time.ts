@@ -68,8 +68,37 @@ export function parseWallTime(text: string, label: string): WallTime {
   return wall
 }
 
+const BUCKET_MS = 15 * MINUTE_MS
+const offsetsByZone = new Map<string, Map<number, number | null>>()
+
+/**
+ * The zone's UTC offset in minutes at an instant. Luxon asks Intl on every call (tens of µs),
+ * and a dense rule's occurrences ask thousands of times, so offsets are kept per quarter hour:
+ * a quarter whose two ends share an offset has that offset throughout (no zone changes twice
+ * within 15 minutes); a quarter holding a transition is always asked exactly.
+ */
+function offsetAt(zone: IANAZone, instantMs: number): number {
+  let offsets = offsetsByZone.get(zone.name)
+  if (!offsets) offsetsByZone.set(zone.name, (offsets = new Map()))
+  const bucket = Math.floor(instantMs / BUCKET_MS)
+  let known = offsets.get(bucket)
+  if (known === undefined) {
+    const first = zone.offset(bucket * BUCKET_MS)
+    known = first === zone.offset((bucket + 1) * BUCKET_MS - 1) ? first : null
+    if (offsets.size >= 200_000) offsets.clear()
+    offsets.set(bucket, known)
+  }
+  return known ?? zone.offset(instantMs)
+}
+
+/** True when the zone keeps one offset from a day before to a day after this wall time (no transition can reorder times near it). */
+export function offsetSteady(zone: IANAZone, floatingMs: number): boolean {
+  const offset = offsetAt(zone, floatingMs)
+  return offsetAt(zone, floatingMs - DAY_MS) === offset && offsetAt(zone, floatingMs + DAY_MS) === offset
+}
+
 export function instantToFloatingMs(instantMs: number, zone: IANAZone): number {
-  return instantMs + zone.offset(instantMs) * MINUTE_MS
+  return instantMs + offsetAt(zone, instantMs) * MINUTE_MS
 }
 
 /**
@@ -80,8 +109,8 @@ export function instantToFloatingMs(instantMs: number, zone: IANAZone): number {
  * the candidates are checked here explicitly.
  */
 export function floatingMsToInstant(floatingMs: number, zone: IANAZone): number {
-  const offsetBefore = zone.offset(floatingMs - DAY_MS)
-  const nearbyOffsets = new Set([offsetBefore, zone.offset(floatingMs), zone.offset(floatingMs + DAY_MS)])
+  const offsetBefore = offsetAt(zone, floatingMs - DAY_MS)
+  const nearbyOffsets = new Set([offsetBefore, offsetAt(zone, floatingMs), offsetAt(zone, floatingMs + DAY_MS)])
   const matchingInstants = [...nearbyOffsets]
     .map((offset) => floatingMs - offset * MINUTE_MS)
     .filter((instant) => instantToFloatingMs(instant, zone) === floatingMs)
