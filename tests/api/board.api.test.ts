@@ -50,7 +50,7 @@ describe('the day as the board receives it', () => {
     // Four cards of one routine-like kind on two tanks and an area: the kind once, each target once.
     expect(new Set(ours.map((c) => c.kind)).size).toBe(1)
     expect(new Set(ours.map((c) => c.target)).size).toBe(3)
-    expect(ours[0]).not.toHaveProperty('flag')
+    expect(ours.find((c) => c.id === made[0].id)).not.toHaveProperty('flag')
     const board = unfoldBoard(wire)
     for (const m of made) {
       const { body: task } = await supervisor.get(`/api/tasks/${m.id}`).expect(200)
