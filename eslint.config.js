@@ -16,7 +16,6 @@ const ENTITY_IMPORTS_BEING_REMOVED = {
   'escalation/deliver.ts': ['completions/completion.entities.ts', 'tasks/task.entity.ts'],
   'escalation/digest.ts': ['completions/completion.entities.ts', 'people/person.entity.ts', 'tasks/task.entity.ts'],
   'escalation/escalate.ts': ['completions/completion.entities.ts', 'tasks/task.entity.ts'],
-  'escalation/escalation.routes.ts': ['people/person.entity.ts'],
   'escalation/escalation.service.ts': ['completions/completion.entities.ts', 'people/person.entity.ts', 'tasks/task.entity.ts'],
   'escalation/ladders.service.ts': ['completions/completion.entities.ts', 'parameters/parameter.entities.ts', 'routines/routine.entity.ts', 'tasks/task.entity.ts'],
   'escalation/messages.ts': ['completions/completion.entities.ts', 'tasks/task.entity.ts'],

@@ -18,6 +18,7 @@ import { healthRouter } from './modules/health/health.routes'
 import { completionsRouter } from './modules/completions/completions.routes'
 import { ackRouter } from './modules/escalation/ack-page'
 import { escalationRouter } from './modules/escalation/escalation.routes'
+import { textHooksRouter } from './modules/escalation/text-hooks'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
@@ -90,6 +91,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })
   app.use('/api', api)
+  // The text provider posts here from its own servers: no session, no Origin; its signature is the check.
+  app.use('/hooks/sms', express.urlencoded({ extended: false, limit: '16kb' }), textHooksRouter(config))
   app.use('/ack', express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {

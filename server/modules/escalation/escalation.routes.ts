@@ -1,19 +1,16 @@
 import { Router } from 'express'
-import { z } from 'zod'
+import { TextReplyInputSchema } from '#shared/schemas/ladder'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { notFound } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
-import { PersonEntity } from '../people/person.entity'
+import { myPreferences, updateMyPreferences } from './preferences.service'
+import { localTexts, replyAsRecipient } from './text-outbox.service'
 import { OutboxEntity } from './escalation.entities'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
 import { createLadder, listLadders, updateLadder } from './ladders.service'
 
-const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour').nullable()
-export const PreferencesInputSchema = z
-  .object({ email: z.string().trim().toLowerCase().email('Enter a valid e-mail address').optional(), quietStart: hhmm.optional(), quietEnd: hhmm.optional() })
-  .refine((p) => (p.quietStart === undefined) === (p.quietEnd === undefined) && (p.quietStart === null) === (p.quietEnd === null), { path: ['quietEnd'], message: 'Give both the start and the end of quiet hours, or neither' })
 
 export function escalationRouter(config: AppConfig) {
   const router = Router()
@@ -37,14 +34,10 @@ export function escalationRouter(config: AppConfig) {
   })
 
   router.get('/me/preferences', signedIn, async (req, res) => {
-    const row = await db().getRepository(PersonEntity).findOneByOrFail({ id: req.user!.id })
-    res.json({ email: row.email, quietStart: row.quietStart, quietEnd: row.quietEnd })
+    res.json(await myPreferences(config, req.user!.id))
   })
   router.patch('/me/preferences', signedIn, async (req, res) => {
-    const input = PreferencesInputSchema.parse(req.body)
-    await db().getRepository(PersonEntity).update(req.user!.id, input)
-    const row = await db().getRepository(PersonEntity).findOneByOrFail({ id: req.user!.id })
-    res.json({ email: row.email, quietStart: row.quietStart, quietEnd: row.quietEnd })
+    res.json(await updateMyPreferences(config, req.user!.id, req.body))
   })
 
   // Local mode only: the mail the app sent, as the local SMTP server received it.
@@ -52,6 +45,13 @@ export function escalationRouter(config: AppConfig) {
     if (config.mail.mode !== 'local') throw notFound('The outbox (only in local mail mode)')
     const rows = await db().getRepository(OutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
     res.json(rows.map((r) => ({ ...r, receivedAt: r.receivedAt.toISOString() })))
+  })
+  // Local text mode only: what the stand-in provider received, and a reply sent as the recipient.
+  router.get('/outbox/texts', requireRole('manager'), async (_req, res) => {
+    res.json(await localTexts(config))
+  })
+  router.post('/outbox/texts/:id/reply', requireRole('manager'), async (req, res) => {
+    res.json(await replyAsRecipient(config, IdParamSchema.parse(req.params).id, TextReplyInputSchema.parse(req.body).body))
   })
 
   return router
