@@ -45,6 +45,7 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
   const expectedAuth = Buffer.from(`Basic ${Buffer.from(`${opts.accountSid}:${opts.authToken}`).toString('base64')}`)
   const pending: Array<() => void> = []
   const deliver = opts.deliver ?? overHttp
+  let holding = opts.holdRequests ?? false
 
   app.use((req, res, next) => {
     const given = Buffer.from(req.header('authorization') ?? '')
@@ -53,7 +54,7 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
   })
 
   app.post('/2010-04-01/Accounts/:account/Messages.json', async (req, res) => {
-    if (opts.holdRequests) {
+    if (holding) {
       // Keeps the request open, as a provider that has received it but not yet answered.
       await db().getRepository(TextOutboxEntity).insert(outboundRow(req.body as Record<string, string>, sid('SM')))
       pending.push(() => res.destroy())
@@ -117,6 +118,11 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
     port,
     reportStatuses,
     deliverInbound,
+    /** Stops holding requests (those held so far are dropped, as by a provider that never answered). */
+    answerRequests() {
+      holding = false
+      pending.splice(0).forEach((drop) => drop())
+    },
     close: () =>
       new Promise<void>((resolve) => {
         pending.splice(0).forEach((drop) => drop())

@@ -8,12 +8,14 @@ import { PageHeader } from '../../components/ui/page-state'
 import { outboxQueries } from '../../features/outbox/api/outbox-queries'
 import { OutboxList } from '../../features/outbox/components/outbox-list'
 import { OutboxMessageView } from '../../features/outbox/components/outbox-message-view'
+import { TextOutboxList } from '../../features/outbox/components/text-outbox-list'
 
 export const loader = (queryClient: QueryClient) => () =>
-  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(facilityQueries.timeZone())])
+  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(outboxQueries.texts()), queryClient.ensureQueryData(facilityQueries.timeZone())])
 
 export function Component() {
   const { data: messages, refetch, isFetching } = useSuspenseQuery(outboxQueries.list())
+  const { data: texts } = useSuspenseQuery(outboxQueries.texts())
   const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   const [params] = useSearchParams()
   const selectedId = Number(params.get('id')) || null
@@ -46,6 +48,13 @@ export function Component() {
             )}
           </div>
         </>
+      )}
+      {texts && (
+        <section aria-labelledby="texts-heading" className="flex flex-col gap-2">
+          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">Text messages</h2>
+          <p className="text-sm text-tide-700">Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.</p>
+          <TextOutboxList texts={texts} timeZone={timeZone} />
+        </section>
       )}
     </section>
   )
