@@ -91,8 +91,9 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })
   app.use('/api', api)
-  // The text provider posts here from its own servers: no session, no Origin; its signature is the check.
-  app.use('/hooks/sms', express.urlencoded({ extended: false, limit: '16kb' }), textHooksRouter(config))
+  // The text provider posts here from its own servers: no session and no Origin (so the same-origin
+  // check lets it through while still refusing a browser on another site); its signature is the check.
+  app.use('/hooks/sms', express.urlencoded({ extended: false, limit: '16kb' }), requireSameOrigin(config.allowedOrigins), textHooksRouter(config))
   app.use('/ack', express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {

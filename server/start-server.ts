@@ -51,6 +51,8 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   return {
     url: `http://${config.host}:${port}`,
     port,
+    /** The configuration in force, with the generated secrets filled in. */
+    config,
     scheduler,
     smtpPort: smtp?.port ?? null,
     async stop() {

@@ -64,6 +64,7 @@ export async function startBrowserSession() {
   return {
     url: server.url,
     database,
+    config: server.config,
     browser,
     newPage,
     signIn,
