@@ -51,7 +51,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   return {
     url: `http://${config.host}:${port}`,
     port,
-    /** The configuration in force, with the generated secrets filled in. */
+    /** The configuration in force, with the secrets generated or read from the database. */
     config,
     scheduler,
     smtpPort: smtp?.port ?? null,

@@ -16,7 +16,6 @@ beforeAll(async () => {
   s = await startBrowserSession()
   await ensureFacilityAndParameters()
   // Links in the mail point at the browser-test server, as they would at a real deployment's address.
-  // The server's own config carries the acknowledge key it generated, so mailed links verify.
   mail = await startMailCatcher({ ...s.config, publicUrl: s.url })
 })
 afterAll(async () => {

@@ -63,8 +63,8 @@ export async function startBrowserSession() {
 
   return {
     url: server.url,
-    database,
     config: server.config,
+    database,
     browser,
     newPage,
     signIn,
