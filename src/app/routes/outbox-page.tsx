@@ -30,6 +30,13 @@ export function Component() {
           </Button>
         )}
       </PageHeader>
+      {texts && (
+        <section aria-labelledby="texts-heading" className="flex flex-col gap-2">
+          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">Text messages</h2>
+          <p className="text-sm text-tide-700">Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.</p>
+          <TextOutboxList texts={texts} timeZone={timeZone} />
+        </section>
+      )}
       {messages === null ? (
         <p className="flex max-w-xl items-start gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
           <Info aria-hidden className="mt-0.5 size-5 shrink-0" /> This server sends real e-mail through its mail host, so there is no outbox to show. The outbox exists only in local mail mode.
@@ -48,13 +55,6 @@ export function Component() {
             )}
           </div>
         </>
-      )}
-      {texts && (
-        <section aria-labelledby="texts-heading" className="flex flex-col gap-2">
-          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">Text messages</h2>
-          <p className="text-sm text-tide-700">Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.</p>
-          <TextOutboxList texts={texts} timeZone={timeZone} />
-        </section>
       )}
     </section>
   )
