@@ -3,6 +3,7 @@ import { z } from 'zod'
 export const INCIDENT_STATUSES = ['proposed', 'dismissed', 'open', 'reported', 'closed'] as const
 export const INCIDENT_SOURCES = ['missed_task', 'critical_recheck', 'mortality_threshold', 'manual'] as const
 export const IncidentStatusSchema = z.enum(INCIDENT_STATUSES)
+export type IncidentStatus = z.infer<typeof IncidentStatusSchema>
 
 const text = (max: number) => z.string().trim().max(max)
 
@@ -31,12 +32,22 @@ export const IncidentSchema = z.object({
   decisionReason: z.string().nullable(),
   decidedById: z.number().int().nullable(),
   decidedAt: z.string().nullable(),
+  /** Names for readers who may not list the staff (observers). */
+  decidedByName: z.string().nullable(),
+  people: z.array(z.object({ id: z.number().int(), name: z.string() })),
   welfareDueAt: z.string(),
   committeeDueAt: z.string(),
   reportDueAt: z.string(),
+  /** When the welfare officer was told (the first deadline is met by this). */
+  welfareNotifiedAt: z.string().nullable(),
+  /** When the ethics committee was told (status "reported"); the second deadline. */
   reportedAt: z.string().nullable(),
+  /** When the full report was filed and the incident closed; the third deadline. */
   closedAt: z.string().nullable(),
+  /** When each overdue deadline started its one escalation (committee, welfare officer, full report). */
   escalatedAt: z.string().nullable(),
+  welfareEscalatedAt: z.string().nullable(),
+  reportEscalatedAt: z.string().nullable(),
   notes: z.array(IncidentNoteSchema),
 })
 export type Incident = z.infer<typeof IncidentSchema>
@@ -60,6 +71,8 @@ export const UpdateIncidentInputSchema = z
     told: z.array(ToldSchema).max(50),
     rootCause: text(4000),
     correctiveActions: text(4000),
+    /** The welfare officer was told at this time (it may be earlier than the record is filled in). */
+    welfareNotifiedAt: z.string().datetime(),
     status: z.enum(['reported', 'closed']),
   })
   .partial()

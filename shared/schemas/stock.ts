@@ -18,6 +18,8 @@ export const UNKNOWN_CAUSE = 'unknown'
 export const OTHER_CAUSE = 'other'
 /** The round's reading whose value becomes a mortality movement. */
 export const MORTALITY_READING = 'mortalities'
+/** What a technician may record; arrivals, gradings, dispatches and corrections are for supervisors and managers. */
+export const TECHNICIAN_MOVEMENT_KINDS: readonly MovementKind[] = ['mortality', 'cull', 'sampling', 'transfer']
 
 export const RoundMortalityDetailSchema = z
   .object({
@@ -137,6 +139,9 @@ export const BatchStockSchema = StockFiguresSchema.extend({
   tanks: z.array(StockFiguresSchema.extend({ tankId: z.number().int(), tankCode: z.string(), volumeL: z.number() })),
 })
 export type BatchStock = z.infer<typeof BatchStockSchema>
+
+/** Fish on the register per tank id (JSON object keys are strings). */
+export const OnHandByTankSchema = z.record(z.string(), z.number().int())
 
 export const MovementListQuerySchema = z.object({
   batchId: z.coerce.number().int().positive().optional(),
