@@ -19,10 +19,10 @@ import { healthRouter } from './modules/health/health.routes'
 import { completionsRouter } from './modules/completions/completions.routes'
 import { ackRouter } from './modules/escalation/ack-page'
 import { escalationRouter } from './modules/escalation/escalation.routes'
+import { textHooksRouter } from './modules/escalation/text-hooks'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
-import { preferencesRouter } from './modules/people/preferences.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
 import { incidentsRouter } from './modules/incidents/incidents.routes'
 import { oxygenRouter } from './modules/oxygen/oxygen.routes'
@@ -83,7 +83,6 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/tasks', tasksRouter)
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
-  api.use('/me/preferences', preferencesRouter(config))
   api.use('/', escalationRouter(config))
   api.use('/', playbooksRouter)
   api.use('/', oxygenRouter)
@@ -94,6 +93,9 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })
   app.use('/api', api)
+  // The text provider posts here from its own servers: no session and no Origin (so the same-origin
+  // check lets it through while still refusing a browser on another site); its signature is the check.
+  app.use('/hooks/sms', express.urlencoded({ extended: false, limit: '16kb' }), requireSameOrigin(config.allowedOrigins), textHooksRouter(config))
   app.use('/ack', noStore, express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {

@@ -8,6 +8,8 @@ import { startScheduler } from './jobs/scheduler'
 import { logger } from './lib/logger'
 import { withStoredSecrets } from './lib/secrets'
 import { startLocalSmtp } from './mail/local-smtp'
+import { startFakeTextProvider } from './sms/fake-text-provider'
+import { createTextSender } from './sms/text-client'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
@@ -25,10 +27,14 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   const dataSource = createDataSource(given.db)
   await dataSource.initialize()
   setDataSource(dataSource)
-  const config = await withStoredSecrets(given, dataSource).catch(async (err: unknown) => {
+  const stored = await withStoredSecrets(given, dataSource).catch(async (err: unknown) => {
     await dataSource.destroy()
     throw err
   })
+  // Local text mode: the provider SDK talks to a stand-in on loopback, started before the app so its URL is known.
+  const fakeTexts = stored.sms.mode === 'local' && !stored.sms.apiBaseUrl ? await startFakeTextProvider({ accountSid: stored.sms.accountSid, authToken: stored.sms.authToken, publicUrl: stored.publicUrl, port: stored.sms.localPort, autoStatus: true }) : null
+  const config = fakeTexts ? { ...stored, sms: { ...stored.sms, apiBaseUrl: fakeTexts.url } } : stored
+  if (fakeTexts) logger.info(`Local text provider on ${fakeTexts.url} (texts are kept for the Outbox page)`)
   const sessionStore = createSessionStore(config)
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)
@@ -39,7 +45,8 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
   const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
   const transport = createTransport(mailConfig)
-  const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport }, intervalMs: opts.schedulerIntervalMs })
+  const channels = { text: createTextSender(config) }
+  const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {
     url: `http://${config.host}:${port}`,
@@ -52,6 +59,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
       await scheduler?.stop()
       transport.close()
       await smtp?.close()
+      await fakeTexts?.close()
       await closeSocketServer()
       await redis?.close()
       await new Promise<void>((resolve) => server.close(() => resolve()))

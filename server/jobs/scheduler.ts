@@ -1,7 +1,7 @@
 import type { DataSource, QueryRunner } from 'typeorm'
 import type { AppConfig } from '../lib/config'
 import { logger } from '../lib/logger'
-import { deliverPending, type Transport } from '../modules/escalation/deliver'
+import { deliverPending, type Channels, type Transport } from '../modules/escalation/deliver'
 import { sendDailyDigestIfDue } from '../modules/escalation/digest'
 import { runEscalations } from '../modules/escalation/escalate'
 import { escalateOverdueIncidents } from '../modules/incidents/incidents.service'
@@ -19,7 +19,7 @@ export interface SchedulerOptions {
   /** Processes sharing a lock name share one leader; tests use their own name. */
   lockName?: string
   /** Without mail settings the clock still moves tasks but sends nothing. */
-  mail?: { config: AppConfig; transport: Transport }
+  mail?: { config: AppConfig; transport: Transport; channels?: Channels }
 }
 
 /**
@@ -72,7 +72,7 @@ export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
       await escalateOverdueIncidents(at)
       await runEscalations(at)
       if (opts.mail) {
-        await deliverPending(opts.mail.config, opts.mail.transport, at)
+        await deliverPending(opts.mail.config, opts.mail.transport, at, opts.mail.channels)
         await sendDailyDigestIfDue(opts.mail.config, opts.mail.transport, at).catch((err) => logger.warn({ err }, 'daily digest not sent'))
       }
       if (at.getTime() - lastHorizon > HORIZON_EVERY_MS) {

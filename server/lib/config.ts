@@ -27,12 +27,24 @@ const EnvSchema = z.object({
   ROUNDTIDE_SMTP_PASSWORD: text().optional(),
   ROUNDTIDE_MAIL_FROM: text().default('Roundtide <roundtide@localhost>'),
   ROUNDTIDE_ACK_TTL_HOURS: z.coerce.number().min(1).max(24 * 14).default(72),
+  /** Text messages: `local` (default) runs a stand-in provider on loopback; `twilio` sends for real; `off` sends none. */
+  ROUNDTIDE_SMS_MODE: z.enum(['local', 'twilio', 'off']).default('local'),
+  /** The provider's API base URL; unset means the SDK's own. Local mode points it at the stand-in. */
+  ROUNDTIDE_SMS_API_URL: text().url().optional(),
+  ROUNDTIDE_SMS_LOCAL_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  ROUNDTIDE_SMS_FROM: text().default('+15555550100'),
+  ROUNDTIDE_SMS_MAX_PER_HOUR: z.coerce.number().int().min(1).max(1000).default(6),
+  TWILIO_ACCOUNT_SID: text().optional(),
+  TWILIO_AUTH_TOKEN: text().optional(),
   /** Set to share live events between several app processes (socket.io's Redis adapter). */
   ROUNDTIDE_REDIS_URL: text().url().optional(),
   /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
   ROUNDTIDE_SCHEDULER_INTERVAL_MS: z.coerce.number().int().min(100).max(3_600_000).default(30_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })
+
+/** The stand-in provider's account (local mode); the SDK insists on the AC prefix. */
+export const LOCAL_ACCOUNT_SID = 'AC00000000000000000000000000000000'
 
 export type AppConfig = ReturnType<typeof loadConfig>
 
@@ -63,6 +75,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     logLevel: e.LOG_LEVEL,
     redisUrl: e.ROUNDTIDE_REDIS_URL ?? null,
     schedulerIntervalMs: e.ROUNDTIDE_SCHEDULER_INTERVAL_MS,
+    sms: {
+      mode: e.ROUNDTIDE_SMS_MODE,
+      apiBaseUrl: e.ROUNDTIDE_SMS_API_URL ?? null,
+      localPort: e.ROUNDTIDE_SMS_LOCAL_PORT,
+      from: e.ROUNDTIDE_SMS_FROM,
+      maxPerHour: e.ROUNDTIDE_SMS_MAX_PER_HOUR,
+      // Local mode has an account of its own; its token is generated and kept like the other secrets.
+      accountSid: e.TWILIO_ACCOUNT_SID ?? (e.ROUNDTIDE_SMS_MODE === 'local' ? LOCAL_ACCOUNT_SID : ''),
+      authToken: e.TWILIO_AUTH_TOKEN ?? '',
+    },
     mail: {
       mode: e.ROUNDTIDE_MAIL_MODE,
       host: e.ROUNDTIDE_SMTP_HOST,

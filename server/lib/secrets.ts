@@ -9,8 +9,8 @@ export const MIN_SECRET_LENGTH = 32
 const DEFAULT_DB_PASSWORD = 'roundtide-local'
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1'])
 
-type SecretName = 'session' | 'ack'
-const VARIABLES: Record<SecretName, string> = { session: 'ROUNDTIDE_SESSION_SECRET', ack: 'ROUNDTIDE_ACK_SECRET' }
+type SecretName = 'session' | 'ack' | 'sms_local'
+const VARIABLES: Record<'session' | 'ack', string> = { session: 'ROUNDTIDE_SESSION_SECRET', ack: 'ROUNDTIDE_ACK_SECRET' }
 
 export class UnsafeConfigError extends Error {}
 
@@ -43,7 +43,7 @@ function refuseOrWarn(config: AppConfig, problem: string) {
  * database that is not on this machine, stops the start with a message saying what to fix.
  */
 export async function withStoredSecrets(config: AppConfig, dataSource: DataSource): Promise<AppConfig> {
-  const given: Record<SecretName, string> = { session: config.sessionSecret, ack: config.ackSecret }
+  const given: Record<'session' | 'ack', string> = { session: config.sessionSecret, ack: config.ackSecret }
   const resolved = { ...given }
   for (const name of ['session', 'ack'] as const) {
     if (!given[name]) {
@@ -57,5 +57,10 @@ export async function withStoredSecrets(config: AppConfig, dataSource: DataSourc
   if (config.db.password === DEFAULT_DB_PASSWORD && !LOOPBACK.has(config.db.host)) {
     refuseOrWarn(config, `the database at ${config.db.host} uses the default password; set ROUNDTIDE_DB_PASSWORD.`)
   }
-  return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack }
+  if (config.sms.mode === 'twilio' && (!config.sms.accountSid || !config.sms.authToken)) {
+    throw new UnsafeConfigError('Roundtide will not start: ROUNDTIDE_SMS_MODE=twilio needs TWILIO_ACCOUNT_SID and TWILIO_AUTH_TOKEN.')
+  }
+  // The local stand-in signs its callbacks with a token of its own, kept so every process agrees.
+  const smsToken = config.sms.authToken || (config.sms.mode === 'local' ? await storedSecret(dataSource, 'sms_local') : '')
+  return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack, sms: { ...config.sms, authToken: smsToken } }
 }

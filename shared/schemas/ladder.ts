@@ -12,11 +12,19 @@ export const RecipientSchema = z.discriminatedUnion('kind', [
 ])
 export type Recipient = z.infer<typeof RecipientSchema>
 
+/** How a message reaches a person: e-mail, a text message (SMS) or a push notification to the installed app. */
+export const CHANNELS = ['email', 'sms', 'push'] as const
+export const ChannelSchema = z.enum(CHANNELS)
+export type Channel = z.infer<typeof ChannelSchema>
+
 export const LadderStepSchema = z.object({
   afterMinutes: z.number().int().min(0).max(7 * 24 * 60),
   notify: z.array(RecipientSchema).min(1, 'Notify someone'),
+  /** Unset (ladders saved before channels existed) reads as e-mail only. */
+  channels: z.array(ChannelSchema).min(1, 'Choose at least one channel').optional(),
 })
 export type LadderStep = z.infer<typeof LadderStepSchema>
+export const stepChannels = (step: LadderStep): Channel[] => step.channels ?? ['email']
 
 export const LadderInputSchema = z.object({
   name: text().trim().min(1, 'Required').max(120),
@@ -30,7 +38,11 @@ export type LadderInput = z.infer<typeof LadderInputSchema>
 export const LadderSchema = LadderInputSchema.extend({ id: z.number().int() })
 export type Ladder = z.infer<typeof LadderSchema>
 
-export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded'] as const
+/**
+ * `failed` is retried with back-off; `undelivered` is final (the provider refused or could not
+ * deliver it, and the next channel was queued); `suppressed` was held back by the text limit.
+ */
+export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded', 'undelivered', 'suppressed'] as const
 
 export const EscalationRecordSchema = z.object({
   alertId: z.number().int(),
@@ -44,8 +56,14 @@ export const EscalationRecordSchema = z.object({
   notifications: z.array(
     z.object({
       step: z.number().int(),
+      channel: ChannelSchema,
       personName: text(),
       email: text(),
+      /** The phone number or push service the message went to; the e-mail address for mail. */
+      destination: text(),
+      providerId: text().nullable(),
+      /** The provider's own word on delivery, from its status callbacks (e.g. delivered, undelivered). */
+      providerStatus: text().nullable(),
       status: z.enum(NOTIFICATION_STATUSES),
       attempts: z.number().int(),
       sentAt: text().nullable(),
@@ -64,3 +82,18 @@ export const OutboxMessageSchema = z.object({
   receivedAt: text(),
 })
 export type OutboxMessage = z.infer<typeof OutboxMessageSchema>
+
+/** What the local text provider received (local mode), shown on the Outbox page beside the e-mail. */
+export const TextOutboxMessageSchema = z.object({
+  id: z.number().int(),
+  sid: text(),
+  direction: z.enum(['outbound', 'inbound']),
+  to: text(),
+  from: text(),
+  body: text(),
+  status: text(),
+  receivedAt: text(),
+})
+export type TextOutboxMessage = z.infer<typeof TextOutboxMessageSchema>
+
+export const TextReplyInputSchema = z.object({ body: text().trim().min(1, 'Type a reply').max(160) })

@@ -63,25 +63,9 @@ export type UpdatePersonInput = z.infer<typeof UpdatePersonInputSchema>
 export const ResetPasswordInputSchema = z.object({ password })
 export type ResetPasswordInput = z.infer<typeof ResetPasswordInputSchema>
 
-const quietTime = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour').nullable()
 
 /** My own settings: the address I sign in with (escalation mail goes there too) and my quiet hours. */
-export const PreferencesSchema = z.object({ email: text(), quietStart: text().nullable(), quietEnd: text().nullable() })
-export type Preferences = z.infer<typeof PreferencesSchema>
-
-/** Changing the sign-in address needs the current password: a session left open must not be enough to take the account. */
-export const PreferencesInputSchema = z
-  .object({
-    email: email.optional(),
-    currentPassword: text().max(200).optional(),
-    quietStart: quietTime.optional(),
-    quietEnd: quietTime.optional(),
-  })
-  .refine((p) => (p.quietStart === undefined) === (p.quietEnd === undefined) && (p.quietStart === null) === (p.quietEnd === null), {
-    path: ['quietEnd'],
-    message: 'Give both the start and the end of quiet hours, or neither',
-  })
-export type PreferencesInput = z.infer<typeof PreferencesInputSchema>
+// My preferences (address, channels, quiet hours) are in ./preferences.ts.
 
 export const PersonIdParamSchema = z.object({ id: z.coerce.number().int().positive() })
 

@@ -17,6 +17,9 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'DELETE /api/session': 'public',
   'GET /ack/:token': 'public',
   'POST /ack/:token': 'public',
+  // The text provider's webhooks: no session; each is refused without a valid provider signature.
+  'POST /hooks/sms/status': 'public',
+  'POST /hooks/sms/inbound': 'public',
   'GET /api/me': ALL,
   'GET /api/people': M,
   'POST /api/people': M,
@@ -76,6 +79,8 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/me/preferences': ALL,
   'PATCH /api/me/preferences': ALL,
   'GET /api/outbox': M,
+  'GET /api/outbox/texts': M,
+  'POST /api/outbox/texts/:id/reply': M,
   'GET /api/playbooks': ALL,
   'GET /api/playbooks/:id': ALL,
   'POST /api/playbooks': M,

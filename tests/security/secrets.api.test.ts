@@ -78,7 +78,8 @@ describe('secrets are generated, kept and checked', () => {
     expect(second.ackSecret).toBe(first.ackSecret)
     expect(first.sessionSecret).not.toBe(PUBLISHED_DEFAULT)
     const rows = (await t.dataSource.query('SELECT name, value FROM app_secrets ORDER BY name')) as Array<{ name: string; value: string }>
-    expect(rows.map((r) => r.name)).toEqual(['ack', 'session'])
+    // sms_local: the local text stand-in's token (ROUNDTIDE_SMS_MODE=local is the default).
+    expect(rows.map((r) => r.name)).toEqual(['ack', 'session', 'sms_local'])
   })
 
   test.each([

@@ -1,14 +1,18 @@
+import { randomInt } from 'node:crypto'
 import nodemailer from 'nodemailer'
 import { In, LessThanOrEqual } from 'typeorm'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { logger } from '../../lib/logger'
 import { signAckToken } from '../../mail/ack-token'
-import { AlertEntity } from '../completions/completion.entities'
-import { TaskEntity } from '../tasks/task.entity'
+import { isPermanentTextError, type TextSender } from '../../sms/text-client'
+import { AlertEntity, type AlertRow } from '../completions/completion.entities'
+import { TaskEntity, type TaskRow } from '../tasks/task.entity'
 import { loadCatalogue, targetLabel } from '../tasks/targets'
+import { queueFallback } from './channels'
 import { NotificationEntity, type NotificationRow } from './escalation.entities'
-import { composeMessage } from './messages'
+import { composeMessage, composeText } from './messages'
+import { sendStormSummaries, takeTextSlot } from './text-quota'
 
 const MAX_BACKOFF_MS = 30 * 60_000
 
@@ -27,11 +31,24 @@ export function createTransport(config: AppConfig) {
 
 export type Transport = ReturnType<typeof createTransport>
 
+/** The senders beyond mail; a channel without one is recorded as undelivered and falls back. */
+export interface Channels {
+  text?: TextSender | null
+}
+
+/** What one attempt came to: sent, held back by the text limit, or finally refused (which falls back). */
+type Outcome =
+  | { status: 'sent'; subject: string; providerId?: string; providerStatus?: string; replyCode?: string }
+  | { status: 'suppressed' | 'undelivered'; subject: string; note: string }
+
+interface Context { config: AppConfig; transport: Transport; channels: Channels; alert: AlertRow; task: TaskRow; label: string; now: Date }
+
 /**
- * Sends every queued message that is due. Each row is claimed before sending, so two
- * processes never send it twice; a failure is kept and retried with back-off, never dropped.
+ * Sends every queued message that is due, on its own channel. Each row is claimed before
+ * sending, so two processes never send it twice; a row left `sending` by a crash is never sent
+ * again. A failure is kept and retried with back-off, and the person's next channel is queued.
  */
-export async function deliverPending(config: AppConfig, transport: Transport, now: Date): Promise<{ sent: number; failed: number }> {
+export async function deliverPending(config: AppConfig, transport: Transport, now: Date, channels: Channels = {}): Promise<{ sent: number; failed: number }> {
   const repo = db().getRepository(NotificationEntity)
   const due = await repo.find({ where: { status: In(['pending', 'held', 'failed']), nextAttemptAt: LessThanOrEqual(now) }, order: { id: 'ASC' }, take: 200 })
   let sent = 0
@@ -46,26 +63,57 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
       await repo.update(row.id, { status: 'superseded' })
       continue
     }
-    const token = signAckToken(config.ackSecret, row.id, new Date(now.getTime() + config.mail.ackTtlHours * 3_600_000))
-    const message = composeMessage({
-      alert, task, step: row.step, now,
-      targetLabel: targetLabel(task.targetKind, task.targetId, cat!),
-      taskUrl: `${config.publicUrl}/tasks/${task.id}`,
-      ackUrl: `${config.publicUrl}/ack/${token}`,
-    })
+    const context: Context = { config, transport, channels, alert, task, label: targetLabel(task.targetKind, task.targetId, cat!), now }
     try {
-      await transport.sendMail({ from: config.mail.from, to: row.email, subject: message.subject, text: message.text, html: message.html })
-      await repo.update(row.id, { status: 'sent', sentAt: new Date(), subject: message.subject.slice(0, 300), attempts: row.attempts + 1, lastError: null })
-      sent++
+      const outcome = await sendOne(row, context)
+      const base = { subject: outcome.subject.slice(0, 300), attempts: row.attempts + 1 }
+      if (outcome.status === 'sent') {
+        await repo.update(row.id, { ...base, status: 'sent', sentAt: new Date(), lastError: null, providerId: outcome.providerId ?? null, providerStatus: outcome.providerStatus ?? null, replyCode: outcome.replyCode ?? null })
+        sent++
+      } else {
+        await repo.update(row.id, { ...base, status: outcome.status, lastError: outcome.note.slice(0, 500) })
+        if (outcome.status === 'undelivered') await queueFallback(row, now)
+      }
     } catch (err) {
       const attempts = row.attempts + 1
       const wait = Math.min(MAX_BACKOFF_MS, 30_000 * 2 ** (attempts - 1))
-      await repo.update(row.id, { status: 'failed', attempts, nextAttemptAt: new Date(now.getTime() + wait), lastError: String((err as Error).message).slice(0, 500), subject: message.subject.slice(0, 300) })
-      logger.warn({ err, notification: row.id, attempts }, 'mail not sent; will retry')
+      const message = String((err as Error).message).slice(0, 500)
+      if (row.channel !== 'email' && isPermanentTextError(err)) {
+        await repo.update(row.id, { status: 'undelivered', attempts, lastError: message })
+      } else {
+        await repo.update(row.id, { status: 'failed', attempts, nextAttemptAt: new Date(now.getTime() + wait), lastError: message })
+      }
+      // Whoever is not reached on one channel is tried on the next while this one retries.
+      await queueFallback(row, now)
+      logger.warn({ err, notification: row.id, channel: row.channel, attempts }, 'message not sent')
       failed++
     }
   }
+  if (channels.text) await sendStormSummaries(channels.text, config.sms.maxPerHour, config.publicUrl)
   return { sent, failed }
+}
+
+async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
+  const taskUrl = `${c.config.publicUrl}/tasks/${c.task.id}`
+  const input = { alert: c.alert, task: c.task, step: row.step, now: c.now, targetLabel: c.label, taskUrl }
+  if (row.channel === 'email') {
+    const token = signAckToken(c.config.ackSecret, row.id, new Date(c.now.getTime() + c.config.mail.ackTtlHours * 3_600_000))
+    const message = composeMessage({ ...input, ackUrl: `${c.config.publicUrl}/ack/${token}` })
+    await c.transport.sendMail({ from: c.config.mail.from, to: row.email, subject: message.subject, text: message.text, html: message.html })
+    return { status: 'sent', subject: message.subject }
+  }
+  const subject = composeMessage({ ...input, ackUrl: '' }).subject
+  if (row.channel === 'sms') {
+    if (!c.channels.text) return { status: 'undelivered', subject, note: 'Text messages are not set up on this server' }
+    if (!row.destination) return { status: 'undelivered', subject, note: 'No mobile number on file' }
+    if (!(await takeTextSlot(row.personId, c.now, c.config.sms.maxPerHour))) {
+      return { status: 'suppressed', subject, note: `Not texted: ${c.config.sms.maxPerHour} texts an hour already went to this person; counted in one summary text` }
+    }
+    const replyCode = String(randomInt(1000, 10_000))
+    const message = await c.channels.text.send(row.destination, composeText({ ...input, replyCode }))
+    return { status: 'sent', subject, providerId: message.sid, providerStatus: message.status, replyCode }
+  }
+  return { status: 'undelivered', subject, note: 'Push notifications are not set up on this server' }
 }
 
 export type { NotificationRow }

@@ -1,11 +1,13 @@
 import { In, IsNull, LessThanOrEqual } from 'typeorm'
 import { db } from '../../db/data-source'
+import { stepChannels } from '#shared/schemas/ladder'
 import { AlertEntity, type AlertRow } from '../completions/completion.entities'
 import { getFacility } from '../facility/facility.service'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
 import { NotificationEntity } from './escalation.entities'
 import { ladderFor } from './ladders.service'
-import { inQuietHours, quietHoursEnd, resolveRecipients } from './recipients'
+import { channelsFor, destinationFor } from './channels'
+import { inQuietHours, onCallHolder, quietHoursEnd, resolveRecipients } from './recipients'
 
 export const isUrgent = (alert: AlertRow, task: TaskRow) => alert.kind === 'critical_reading' || task.priority === 'welfare_critical'
 
@@ -35,14 +37,20 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
     const step = dueSteps.at(-1)
     if (!step) continue
     const people = await resolveRecipients(step.notify, task, now, zone)
+    const holder = await onCallHolder(now)
     const urgent = isUrgent(alert, task)
-    const rows = people.map((p) => {
-      const held = !urgent && inQuietHours(p, now, zone)
+    const rows = people.flatMap((p) => {
+      // The on-call holder is reached by every channel they enabled, quiet hours or not.
+      const onCall = p.id === holder
+      const held = !urgent && !onCall && inQuietHours(p, now, zone)
       const nextAttemptAt = held ? quietHoursEnd(p, now, zone) : now
-      return { alertId: alert.id, step: step.i, personId: p.id, email: p.email, subject: '', status: held ? ('held' as const) : ('pending' as const), urgent, attempts: 0, nextAttemptAt }
+      return channelsFor(p, stepChannels(step), onCall).map((channel) => ({
+        alertId: alert.id, step: step.i, personId: p.id, channel, email: p.email, destination: destinationFor(p, channel), subject: '',
+        status: held ? ('held' as const) : ('pending' as const), urgent, attempts: 0, nextAttemptAt,
+      }))
     })
     // Record the step even when nobody matched, so the ladder moves on instead of retrying it.
-    const values = rows.length ? rows : [{ alertId: alert.id, step: step.i, personId: 0, email: '', subject: 'Nobody to notify at this step', status: 'superseded' as const, urgent, attempts: 0, nextAttemptAt: now }]
+    const values = rows.length ? rows : [{ alertId: alert.id, step: step.i, personId: 0, channel: 'email' as const, email: '', destination: null, subject: 'Nobody to notify at this step', status: 'superseded' as const, urgent, attempts: 0, nextAttemptAt: now }]
     const result = await db().getRepository(NotificationEntity).createQueryBuilder().insert().values(values).orIgnore().execute()
     queued += rows.length ? (result.identifiers.filter(Boolean).length || rows.length) : 0
   }

@@ -1,5 +1,5 @@
 import { EntitySchema } from 'typeorm'
-import { NOTIFICATION_STATUSES, type LadderStep } from '#shared/schemas/ladder'
+import { CHANNELS, NOTIFICATION_STATUSES, type Channel, type LadderStep } from '#shared/schemas/ladder'
 import { createdAtColumn } from '../../db/timestamps'
 
 export interface LadderRow {
@@ -23,7 +23,15 @@ export interface NotificationRow {
   alertId: number
   step: number
   personId: number
+  /** One row per channel: each is claimed, sent and recorded on its own. */
+  channel: Channel
   email: string
+  /** Where a text or push went (phone number, push endpoint); null for mail (see `email`). */
+  destination: string | null
+  providerId: string | null
+  providerStatus: string | null
+  /** The digits a person texts back to acknowledge (text messages only). */
+  replyCode: string | null
   subject: string
   status: (typeof NOTIFICATION_STATUSES)[number]
   /** Critical and welfare-critical mail ignores quiet hours. */
@@ -44,7 +52,12 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
     alertId: { type: 'int' },
     step: { type: 'int' },
     personId: { type: 'int' },
+    channel: { type: 'enum', enum: [...CHANNELS], default: 'email' },
     email: { type: 'varchar', length: 200 },
+    destination: { type: 'varchar', length: 1000, nullable: true },
+    providerId: { type: 'varchar', length: 64, nullable: true },
+    providerStatus: { type: 'varchar', length: 40, nullable: true },
+    replyCode: { type: 'varchar', length: 8, nullable: true },
     subject: { type: 'varchar', length: 300 },
     status: { type: 'enum', enum: [...NOTIFICATION_STATUSES], default: 'pending' },
     urgent: { type: 'boolean', default: false },
@@ -55,8 +68,12 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
     ackUsedAt: { type: 'datetime', precision: 3, nullable: true },
     createdAt: createdAtColumn,
   },
-  // One message per alert, step and person, however many processes try.
-  indices: [{ columns: ['alertId', 'step', 'personId'], unique: true }, { columns: ['status', 'nextAttemptAt'] }],
+  // One message per alert, step, person and channel, however many processes try.
+  indices: [
+    { name: 'IDX_notifications_alert_step_person_channel', columns: ['alertId', 'step', 'personId', 'channel'], unique: true },
+    { columns: ['status', 'nextAttemptAt'] },
+    { name: 'IDX_notifications_provider', columns: ['providerId'] },
+  ],
 })
 
 export interface OutboxRow {
@@ -88,5 +105,57 @@ export const DigestEntity = new EntitySchema<{ date: string; sentAt: Date }>({
   columns: {
     date: { type: 'varchar', length: 10, primary: true },
     sentAt: { type: 'datetime', precision: 3 },
+  },
+})
+
+export interface TextOutboxRow {
+  id: number
+  sid: string
+  direction: 'outbound' | 'inbound'
+  to: string
+  from: string
+  body: string
+  status: string
+  statusCallback: string | null
+  receivedAt: Date
+}
+
+/** What the local text provider received or delivered inbound (local mode), for the Outbox page. */
+export const TextOutboxEntity = new EntitySchema<TextOutboxRow>({
+  name: 'TextOutboxMessage',
+  tableName: 'text_outbox',
+  columns: {
+    id: { type: 'int', primary: true, generated: 'increment' },
+    sid: { type: 'varchar', length: 40, unique: true },
+    direction: { type: 'enum', enum: ['outbound', 'inbound'] },
+    to: { type: 'varchar', length: 40 },
+    from: { type: 'varchar', length: 40 },
+    body: { type: 'text' },
+    status: { type: 'varchar', length: 20 },
+    statusCallback: { type: 'varchar', length: 500, nullable: true },
+    receivedAt: { type: 'datetime', precision: 3 },
+  },
+})
+
+export interface TextQuotaRow {
+  personId: number
+  hourStart: Date
+  used: number
+  suppressed: number
+  summaryStatus: 'none' | 'sending' | 'sent' | 'failed'
+  summaryProviderId: string | null
+}
+
+/** Texts sent to a person in one clock hour: the slot is taken by a conditional update, so the limit holds across processes. */
+export const TextQuotaEntity = new EntitySchema<TextQuotaRow>({
+  name: 'TextQuota',
+  tableName: 'text_quotas',
+  columns: {
+    personId: { type: 'int', primary: true },
+    hourStart: { type: 'datetime', precision: 0, primary: true },
+    used: { type: 'int', default: 0 },
+    suppressed: { type: 'int', default: 0 },
+    summaryStatus: { type: 'enum', enum: ['none', 'sending', 'sent', 'failed'], default: 'none' },
+    summaryProviderId: { type: 'varchar', length: 64, nullable: true },
   },
 })

@@ -1,12 +1,17 @@
 import { Router } from 'express'
+import { TextReplyInputSchema } from '#shared/schemas/ladder'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { notFound } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
+import { passwordCheckLimiter } from '../auth/sign-in-limits'
+import { myPreferences, updateMyPreferences } from './preferences.service'
+import { localTexts, replyAsRecipient } from './text-outbox.service'
 import { OutboxEntity } from './escalation.entities'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
 import { createLadder, listLadders, updateLadder } from './ladders.service'
+
 
 export function escalationRouter(config: AppConfig) {
   const router = Router()
@@ -29,11 +34,25 @@ export function escalationRouter(config: AppConfig) {
     res.status(204).end()
   })
 
+  router.get('/me/preferences', signedIn, async (req, res) => {
+    res.json(await myPreferences(config, req.user!.id))
+  })
+  router.patch('/me/preferences', signedIn, passwordCheckLimiter(config), async (req, res) => {
+    res.json(await updateMyPreferences(config, req.user!.id, req.body))
+  })
+
   // Local mode only: the mail the app sent, as the local SMTP server received it.
   router.get('/outbox', requireRole('manager'), async (_req, res) => {
     if (config.mail.mode !== 'local') throw notFound('The outbox (only in local mail mode)')
     const rows = await db().getRepository(OutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
     res.json(rows.map((r) => ({ ...r, receivedAt: r.receivedAt.toISOString() })))
+  })
+  // Local text mode only: what the stand-in provider received, and a reply sent as the recipient.
+  router.get('/outbox/texts', requireRole('manager'), async (_req, res) => {
+    res.json(await localTexts(config))
+  })
+  router.post('/outbox/texts/:id/reply', requireRole('manager'), async (req, res) => {
+    res.json(await replyAsRecipient(config, IdParamSchema.parse(req.params).id, TextReplyInputSchema.parse(req.body).body))
   })
 
   return router

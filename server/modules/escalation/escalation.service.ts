@@ -30,7 +30,7 @@ export async function escalationRecord(taskId: number): Promise<EscalationRecord
       ladderName: (await ladderFor(a, task)).name,
       notifications: notes
         .filter((n) => n.alertId === a.id && n.personId !== 0)
-        .map((n) => ({ step: n.step, personName: names.get(n.personId) ?? n.email, email: n.email, status: n.status, attempts: n.attempts, sentAt: n.sentAt?.toISOString() ?? null, lastError: n.lastError })),
+        .map((n) => ({ step: n.step, channel: n.channel, personName: names.get(n.personId) ?? n.email, email: n.email, destination: n.destination ?? n.email, providerId: n.providerId, providerStatus: n.providerStatus, status: n.status, attempts: n.attempts, sentAt: n.sentAt?.toISOString() ?? null, lastError: n.lastError })),
     })),
   )
 }

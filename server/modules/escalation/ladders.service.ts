@@ -1,4 +1,4 @@
-import { LadderInputSchema, type Ladder, type LadderStep } from '#shared/schemas/ladder'
+import { LadderInputSchema, stepChannels, type Ladder, type LadderStep } from '#shared/schemas/ladder'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
@@ -11,18 +11,22 @@ import { LadderEntity } from './escalation.entities'
 
 /** Used when the facility has not chosen ladders yet (common practice: assignee, then on call, then managers). */
 export const BUILT_IN_STANDARD: LadderStep[] = [
-  { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
-  { afterMinutes: 30, notify: [{ kind: 'on_call' }] },
-  { afterMinutes: 60, notify: [{ kind: 'managers' }] },
+  { afterMinutes: 0, notify: [{ kind: 'assignee' }], channels: ['email'] },
+  { afterMinutes: 30, notify: [{ kind: 'on_call' }], channels: ['email'] },
+  { afterMinutes: 60, notify: [{ kind: 'managers' }], channels: ['email'] },
 ]
+// Welfare-critical work and critical readings reach phones from the first step.
 export const BUILT_IN_FAST: LadderStep[] = [
-  { afterMinutes: 0, notify: [{ kind: 'assignee' }, { kind: 'on_call' }] },
-  { afterMinutes: 15, notify: [{ kind: 'supervisors' }] },
-  { afterMinutes: 30, notify: [{ kind: 'managers' }] },
+  { afterMinutes: 0, notify: [{ kind: 'assignee' }, { kind: 'on_call' }], channels: ['email', 'sms', 'push'] },
+  { afterMinutes: 15, notify: [{ kind: 'supervisors' }], channels: ['email', 'sms', 'push'] },
+  { afterMinutes: 30, notify: [{ kind: 'managers' }], channels: ['email', 'sms', 'push'] },
 ]
 
+/** Ladders saved before steps chose channels read as e-mail only. */
+const withChannels = <L extends { steps: LadderStep[] }>(ladder: L): L => ({ ...ladder, steps: ladder.steps.map((s) => ({ ...s, channels: stepChannels(s) })) })
+
 const repo = () => db().getRepository(LadderEntity)
-export const listLadders = (): Promise<Ladder[]> => repo().find({ order: { id: 'ASC' } })
+export const listLadders = async (): Promise<Ladder[]> => (await repo().find({ order: { id: 'ASC' } })).map(withChannels)
 
 export async function createLadder(input: unknown): Promise<Ladder> {
   const saved = await repo().save(LadderInputSchema.parse(input))
@@ -57,6 +61,6 @@ export async function ladderFor(alert: AlertRow, task: TaskRow): Promise<{ name:
     id = fast ? facility.fastLadderId : facility.defaultLadderId
   }
   const ladder = id ? await repo().findOneBy({ id }) : null
-  if (ladder) return ladder
+  if (ladder) return withChannels(ladder)
   return fast ? { name: 'Fast (built in)', steps: BUILT_IN_FAST } : { name: 'Standard (built in)', steps: BUILT_IN_STANDARD }
 }

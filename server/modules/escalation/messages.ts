@@ -46,3 +46,9 @@ export function composeMessage(m: MessageInput) {
     .join('')}</div>`
   return { subject, text, html }
 }
+
+/** A text is short: what and where, the reply code that acknowledges, and the task link. */
+export function composeText(m: Omit<MessageInput, 'ackUrl'> & { replyCode: string }) {
+  const { subject } = composeMessage({ ...m, ackUrl: '' })
+  return `Roundtide ${subject}. Reply ${m.replyCode} to acknowledge. ${m.taskUrl}`
+}

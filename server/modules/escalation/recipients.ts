@@ -4,6 +4,7 @@ import { PersonEntity, type PersonRow } from '../people/person.entity'
 import { OnCallEntity, ShiftEntity } from '../roster/roster.entities'
 import type { TaskRow } from '../tasks/task.entity'
 import { DateTime } from 'luxon'
+import { LessThanOrEqual, MoreThan } from 'typeorm'
 
 const minutes = (hhmm: string) => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3, 5))
 
@@ -18,8 +19,8 @@ export async function resolveRecipients(recipients: Recipient[], task: TaskRow, 
     if (r.kind === 'supervisors') people.filter((p) => p.role === 'supervisor').forEach((p) => chosen.add(p.id))
     if (r.kind === 'managers') people.filter((p) => p.role === 'manager').forEach((p) => chosen.add(p.id))
     if (r.kind === 'on_call') {
-      const duty = (await db().getRepository(OnCallEntity).find()).filter((d) => d.startsAt <= at && d.endsAt > at).sort((a, b) => +b.startsAt - +a.startsAt)[0]
-      if (duty) chosen.add(duty.personId)
+      const holder = await onCallHolder(at)
+      if (holder) chosen.add(holder)
     }
     if (r.kind === 'on_shift') {
       const local = DateTime.fromJSDate(at).setZone(zone)
@@ -34,6 +35,12 @@ export async function resolveRecipients(recipients: Recipient[], task: TaskRow, 
     }
   }
   return [...chosen].map((id) => byId.get(id)).filter((p): p is PersonRow => !!p)
+}
+
+/** Who holds the on-call duty at that moment (the latest-starting duty that covers it). */
+export async function onCallHolder(at: Date): Promise<number | null> {
+  const duty = await db().getRepository(OnCallEntity).findOne({ where: { startsAt: LessThanOrEqual(at), endsAt: MoreThan(at) }, order: { startsAt: 'DESC' } })
+  return duty?.personId ?? null
 }
 
 /** Routine mail waits during a person's quiet hours (which may run past midnight). */

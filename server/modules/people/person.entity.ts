@@ -1,4 +1,5 @@
 import { EntitySchema } from 'typeorm'
+import type { Channel } from '#shared/schemas/ladder'
 import { ROLES, type Role } from '#shared/schemas/person'
 import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
 
@@ -17,6 +18,8 @@ export interface PersonRow {
   /** Routine mail waits outside these local hours; critical and welfare-critical mail never waits. */
   quietStart: string | null
   quietEnd: string | null
+  /** The channels this person accepts escalations by; null reads as e-mail only. */
+  channels: Channel[] | null
   createdAt: Date
   updatedAt: Date
 }
@@ -37,6 +40,7 @@ export const PersonEntity = new EntitySchema<PersonRow>({
     sessionVersion: { type: 'int', default: 0 },
     quietStart: { type: 'varchar', length: 5, nullable: true },
     quietEnd: { type: 'varchar', length: 5, nullable: true },
+    channels: { type: 'json', nullable: true },
     createdAt: createdAtColumn,
     updatedAt: updatedAtColumn,
   },

@@ -8,12 +8,14 @@ import { PageHeader } from '../../components/ui/page-state'
 import { outboxQueries } from '../../features/outbox/api/outbox-queries'
 import { OutboxList } from '../../features/outbox/components/outbox-list'
 import { OutboxMessageView } from '../../features/outbox/components/outbox-message-view'
+import { TextOutboxList } from '../../features/outbox/components/text-outbox-list'
 
 export const loader = (queryClient: QueryClient) => () =>
-  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(facilityQueries.timeZone())])
+  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(outboxQueries.texts()), queryClient.ensureQueryData(facilityQueries.timeZone())])
 
 export function Component() {
   const { data: messages, refetch, isFetching } = useSuspenseQuery(outboxQueries.list())
+  const { data: texts } = useSuspenseQuery(outboxQueries.texts())
   const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
   const [params] = useSearchParams()
   const selectedId = Number(params.get('id')) || null
@@ -28,6 +30,13 @@ export function Component() {
           </Button>
         )}
       </PageHeader>
+      {texts && (
+        <section aria-labelledby="texts-heading" className="flex flex-col gap-2">
+          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">Text messages</h2>
+          <p className="text-sm text-tide-700">Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.</p>
+          <TextOutboxList texts={texts} timeZone={timeZone} />
+        </section>
+      )}
       {messages === null ? (
         <p className="flex max-w-xl items-start gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
           <Info aria-hidden className="mt-0.5 size-5 shrink-0" /> This server sends real e-mail through its mail host, so there is no outbox to show. The outbox exists only in local mail mode.

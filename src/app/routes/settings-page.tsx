@@ -40,7 +40,7 @@ export function Component() {
     <section className="mx-auto flex w-full max-w-3xl flex-col gap-6">
       <PageHeader title="Settings" />
       <section aria-labelledby="prefs-heading" className="flex flex-col gap-3">
-        <h2 id="prefs-heading" className="text-xl font-bold text-tide-900">My escalation mail</h2>
+        <h2 id="prefs-heading" className="text-xl font-bold text-tide-900">How escalations reach me</h2>
         <PreferencesForm preferences={preferences} timeZone={timeZone} />
       </section>
       {me.role === 'manager' && <Ladders />}

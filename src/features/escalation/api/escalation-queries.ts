@@ -1,11 +1,12 @@
 import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
 import { EscalationRecordSchema, LadderSchema } from '#shared/schemas/ladder'
-import { PreferencesSchema } from '#shared/schemas/person'
+import { PreferencesSchema } from '#shared/schemas/preferences'
 import { TaskSchema } from '#shared/schemas/task'
 import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch } from '../../../lib/api-client'
 
+export { PreferencesSchema, type Preferences } from '#shared/schemas/preferences'
 
 export const escalationKeys = {
   all: ['escalation'] as const,

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
-import { PreferencesSchema, type PreferencesInput } from '#shared/schemas/person'
+import { PreferencesSchema, type PreferencesInput } from '#shared/schemas/preferences'
 import { escalationKeys } from './escalation-queries'
 
 export function useUpdatePreferences() {

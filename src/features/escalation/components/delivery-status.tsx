@@ -1,5 +1,5 @@
 import { clsx } from 'clsx'
-import { CircleSlash, Clock, MailCheck, MailWarning, MoonStar, Send, type LucideIcon } from 'lucide-react'
+import { CircleSlash, Clock, Layers, MailCheck, MailWarning, MailX, MoonStar, Send, type LucideIcon } from 'lucide-react'
 import type { EscalationRecord } from '#shared/schemas/ladder'
 
 type Status = EscalationRecord['notifications'][number]['status']
@@ -11,6 +11,8 @@ const LOOK: Record<Status, { label: string; icon: LucideIcon; tone: string }> = 
   failed: { label: 'Not delivered', icon: MailWarning, tone: 'text-alarm-700' },
   held: { label: 'Waiting for quiet hours to end', icon: MoonStar, tone: 'text-tide-700' },
   superseded: { label: 'Not needed (answered first)', icon: CircleSlash, tone: 'text-tide-600' },
+  undelivered: { label: 'Not delivered; next channel tried', icon: MailX, tone: 'text-alarm-700' },
+  suppressed: { label: 'Held back (text limit); in a summary', icon: Layers, tone: 'text-tide-700' },
 }
 
 export function DeliveryStatus({ status }: { status: Status }) {

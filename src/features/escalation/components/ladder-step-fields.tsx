@@ -3,6 +3,7 @@ import { Controller, useFormContext } from 'react-hook-form'
 import type { LadderInput } from '#shared/schemas/ladder'
 import type { StaffMember } from '#shared/schemas/person'
 import { Field } from '../../../components/ui/field'
+import { ChannelPicker } from './channel-picker'
 import { RecipientPicker } from './recipient-picker'
 
 const plain = (message: string | undefined) => (message && /expected number/i.test(message) ? 'Enter a whole number of minutes' : message)
@@ -36,6 +37,14 @@ export function LadderStepFields({ index, staff, onRemove }: { index: number; st
           <RecipientPicker label={`Step ${index + 1}: notify`} value={field.value} onChange={field.onChange} staff={staff} error={errors?.notify?.message ?? errors?.notify?.root?.message} />
         )}
       />
+      <Controller
+        control={control}
+        name={`steps.${index}.channels`}
+        render={({ field }) => (
+          <ChannelPicker label={`Step ${index + 1}: send by`} value={field.value ?? ['email']} onChange={field.onChange} error={errors?.channels?.message ?? errors?.channels?.root?.message} />
+        )}
+      />
+      <p className="text-sm text-tide-700">Whoever is on call at that moment is reached by every channel they accept, whatever is ticked here.</p>
     </li>
   )
 }
