@@ -10,6 +10,7 @@ import { withStoredSecrets } from './lib/secrets'
 import { startLocalSmtp } from './mail/local-smtp'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
+import { startPublisher } from './realtime/publisher'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
 
 /** Starts the whole server (DB, HTTP, sockets); used by server/index.ts and by browser tests. */
@@ -39,15 +40,18 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
   const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
   const transport = createTransport(mailConfig)
+  const publisher = startPublisher({ intervalMs: config.publishIntervalMs })
   const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {
     url: `http://${config.host}:${port}`,
     port,
     scheduler,
+    publisher,
     smtpPort: smtp?.port ?? null,
     async stop() {
       await scheduler?.stop()
+      await publisher.stop()
       transport.close()
       await smtp?.close()
       await closeSocketServer()

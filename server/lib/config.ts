@@ -30,6 +30,8 @@ const EnvSchema = z.object({
   ROUNDTIDE_REDIS_URL: z.string().url().optional(),
   /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
   ROUNDTIDE_SCHEDULER_INTERVAL_MS: z.coerce.number().int().min(100).max(3_600_000).default(30_000),
+  /** How often the live-event publisher looks for unsent changes besides after each commit (and its first look after start). */
+  ROUNDTIDE_PUBLISH_INTERVAL_MS: z.coerce.number().int().min(100).max(600_000).default(2_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })
 
@@ -62,6 +64,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     logLevel: e.LOG_LEVEL,
     redisUrl: e.ROUNDTIDE_REDIS_URL ?? null,
     schedulerIntervalMs: e.ROUNDTIDE_SCHEDULER_INTERVAL_MS,
+    publishIntervalMs: e.ROUNDTIDE_PUBLISH_INTERVAL_MS,
     mail: {
       mode: e.ROUNDTIDE_MAIL_MODE,
       host: e.ROUNDTIDE_SMTP_HOST,

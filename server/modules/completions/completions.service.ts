@@ -6,6 +6,7 @@ import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { PersonEntity } from '../people/person.entity'
 import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
@@ -29,8 +30,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
   if (replay) {
     if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
-    // The first attempt may have been cut off between its commit and recording its answer
-    // (the database went away): answer the retry from the stored completion instead.
+    // A retry of a committed completion gets the stored answer; completions stored before the
+    // answer joined their commit may have none: answer from the record instead.
     return (replay.response as CompletionResult | null) ?? answerFromRecord(replay)
   }
   const task = await getTaskRow(taskId)
@@ -81,21 +82,24 @@ export async function completeTask(taskId: number, person: Person, input: unknow
       )
     }
     if (mortality?.plan) await writeRoundMortality(manager, mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
-    return true
+
+    // The recheck, the alert, the stored answer and the outbox rows commit with the completion:
+    // a crash can lose all of it (the retry then does it all) but never half.
+    const updated = await getTaskRow(taskId)
+    // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
+    const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
+    if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
+    const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
+    await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
+    await recordTaskChanges(recheckTaskId ? [task.id, recheckTaskId] : [task.id])
+    return response
   })
   if (!result) {
     // Lost the race: say who won.
     await assertStillOpen(await getTaskRow(taskId))
     throw conflict('This task changed while you were completing it. Check it and try again.')
   }
-
-  const updated = await getTaskRow(taskId)
-  // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
-  const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
-  if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
-  const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
-  await db().getRepository(CompletionEntity).update(data.completionId, { response: response as never })
-  return response
+  return result
 }
 
 async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {

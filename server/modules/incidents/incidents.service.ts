@@ -6,6 +6,7 @@ import {
   type Incident,
 } from '#shared/schemas/incident'
 import { db } from '../../db/data-source'
+import { recordChange } from '../../realtime/change-outbox'
 import { conflict, notFound } from '../../lib/errors'
 import { startIncidentAlert } from '../completions/follow-ups'
 import { getStockSettings } from '../stock/stock-settings.service'
@@ -58,6 +59,7 @@ export async function proposeIncident(p: IncidentProposal, now: Date): Promise<v
     })
     .orIgnore()
     .execute()
+  await recordChange('incident')
 }
 
 export async function listIncidents(): Promise<Incident[]> {
@@ -82,6 +84,7 @@ export async function decideIncident(id: number, decision: 'confirm' | 'dismiss'
     const row = await load(id)
     throw conflict(`This incident is already ${row.status}; nothing was changed.`)
   }
+  await recordChange('incident', [id])
   return getIncident(id)
 }
 
@@ -96,6 +99,7 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
   if (status === 'reported' && !row.reportedAt) Object.assign(next, { status, reportedAt: now })
   if (status === 'closed') Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
   await repo().update(id, next)
+  await recordChange('incident', [id])
   return getIncident(id)
 }
 
@@ -104,6 +108,7 @@ export async function addIncidentNote(id: number, input: unknown, who: Actor, no
   const { text } = IncidentNoteInputSchema.parse(input)
   const row = await load(id)
   await repo().update(id, { notes: [...row.notes, { at: now.toISOString(), personId: who.id, personName: who.name, text }] })
+  await recordChange('incident', [id])
   return getIncident(id)
 }
 

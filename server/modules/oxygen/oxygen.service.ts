@@ -3,6 +3,7 @@ import { In, Not } from 'typeorm'
 import { estimateSupply, pressureUnitFor, type CylinderSettings } from '#shared/oxygen-supply/cylinder'
 import { CylinderInputSchema, CylinderReadingInputSchema, type CylinderStatus } from '#shared/schemas/oxygen'
 import { db } from '../../db/data-source'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { AlertEntity } from '../completions/completion.entities'
 import { getFacility } from '../facility/facility.service'
@@ -89,5 +90,6 @@ async function raiseReplaceTask(c: CylinderRow, status: CylinderStatus, zone: st
   if (critical) {
     await db().getRepository(AlertEntity).insert({ taskId: task.id, kind: 'critical_reading', detail: `cylinder_bar ${c.lastPressure} at ${c.code}: ${status.hoursToReserve} h to reserve`, ladderId: null, startedAt: new Date() })
   }
+  await recordTaskChanges([task.id])
   return task.id
 }

@@ -103,7 +103,7 @@ export async function updateEvent(id: number, input: unknown): Promise<FacilityE
   return getEvent(id)
 }
 
-async function removeUntouchedEventTasks(eventId: number, manager = db().manager) {
+async function removeUntouchedEventTasks(eventId: number, manager = db()) {
   await manager
     .createQueryBuilder()
     .delete()

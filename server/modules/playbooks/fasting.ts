@@ -8,7 +8,7 @@ import { EventEntity, type EventRow } from './playbook.entities'
  * the reason, never counted as missed or escalated. Idempotent, so it can run after every
  * materialisation too.
  */
-export async function holdFeedsForEvent(event: EventRow, manager: EntityManager = db().manager): Promise<number> {
+export async function holdFeedsForEvent(event: EventRow, manager: EntityManager = db()): Promise<number> {
   if (!event.fastingFrom || !event.fastingTo || event.status !== 'planned' || !event.tankIds.length) return 0
   const result = await manager
     .createQueryBuilder()
@@ -22,7 +22,7 @@ export async function holdFeedsForEvent(event: EventRow, manager: EntityManager 
 }
 
 /** Ending or cancelling an event gives back the held feeds that are still ahead; past ones stay held. */
-export async function releaseFeedsForEvent(event: EventRow, now = new Date(), manager: EntityManager = db().manager): Promise<number> {
+export async function releaseFeedsForEvent(event: EventRow, now = new Date(), manager: EntityManager = db()): Promise<number> {
   if (!event.fastingFrom || !event.tankIds.length) return 0
   const result = await manager
     .createQueryBuilder()
