@@ -32,8 +32,9 @@ export function startPublisher({ intervalMs = 2000 }: PublisherOptions = {}) {
   let running: Promise<void> | null = null
   let again = false
   let stopped = false
+  let started = false
   const run = (): Promise<void> => {
-    if (stopped) return Promise.resolve()
+    if (stopped || !started) return Promise.resolve()
     if (running) {
       again = true
       return running
@@ -52,12 +53,18 @@ export function startPublisher({ intervalMs = 2000 }: PublisherOptions = {}) {
   // Off the response path: the request has its answer before the events go.
   const stopListening = onCommitted(() => setImmediate(() => void run()))
   // The first pass, one interval after start, sends what a killed process committed but never
-  // sent; by then the clients that reconnect to this process are listening again.
-  const timer = setInterval(() => void run(), intervalMs)
+  // sent (and what committed since): by then the clients of the process are listening again.
+  let timer: NodeJS.Timeout | undefined
+  const firstPass = setTimeout(() => {
+    started = true
+    timer = setInterval(() => void run(), intervalMs)
+    void run()
+  }, intervalMs)
   return {
     publishNow: run,
     async stop() {
       stopped = true
+      clearTimeout(firstPass)
       clearInterval(timer)
       stopListening()
       await running
@@ -84,7 +91,7 @@ export async function publishBatch(): Promise<number> {
   const repo = ds.getRepository(ChangeOutboxEntity)
   const rows = await repo.find({ where: { claimedBy: token, publishedAt: IsNull() }, order: { id: 'ASC' } })
   if (!rows.length) return 0
-  crashPoint('after-claim')
+  crashPoint('after-claim', rows.map((r) => `${r.kind}:${r.entityId}`).join(' '))
   await send(rows)
   await repo.update({ id: In(rows.map((r) => r.id)), claimedBy: token, publishedAt: IsNull() }, { publishedAt: new Date() })
   return rows.length

@@ -12,7 +12,8 @@ import { testConfig } from './test-app'
 
 /** The whole server on a free port (HTTP and socket.io), with helpers for signed-in sockets. */
 export async function startLiveServer(overrides: Partial<AppConfig> = {}) {
-  const server = await startServer(testConfig({ port: 0, ...overrides }), { scheduler: false })
+  // Live events go out a moment after each commit; the first pass comes one publish interval after start.
+  const server = await startServer(testConfig({ port: 0, publishIntervalMs: 100, ...overrides }), { scheduler: false })
   const sockets: Socket[] = []
 
   /** A new person of that role, signed in over HTTP; returns their agent and the session cookie. */

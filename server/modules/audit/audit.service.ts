@@ -6,10 +6,10 @@ import { AuditEntity, type AuditRow, type AuditedEntity } from './audit.entity'
 
 const SECRET_FIELDS = new Set(['passwordHash', 'sessionVersion'])
 
-/** What an audited change tells the live feed; null where the caller records it itself (a task move) or nobody shows it live. */
+/** What an audited change tells the live feed; null where the caller records it itself (tasks, amendments) or nobody shows it live. */
 const LIVE_KIND: Record<AuditedEntity, ChangeKind | null> = {
   routine: 'routine', playbook: 'playbook', limit: 'parameter', ladder: null, shift: 'roster', on_call: 'roster',
-  assignment: null, person: null, completion: 'amendment', event: 'event', facility: 'facility',
+  assignment: null, person: null, completion: null, event: 'event', facility: 'facility',
 }
 
 function clean(value: unknown): unknown {

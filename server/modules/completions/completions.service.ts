@@ -7,6 +7,7 @@ import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { recordTaskChanges } from '../../realtime/change-outbox'
+import { audit } from '../audit/audit.service'
 import { PersonEntity } from '../people/person.entity'
 import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
@@ -91,6 +92,7 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
+    await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
     await recordTaskChanges(recheckTaskId ? [task.id, recheckTaskId] : [task.id])
     return response
   })

@@ -150,6 +150,8 @@ export interface AppOptions {
   schedulerIntervalMs?: number
   redisUrl?: string
   readyTimeoutMs?: number
+  /** Extra environment, e.g. ROUNDTIDE_CRASH_AT (server/lib/crash-point.ts). */
+  env?: Record<string, string>
 }
 
 /**
@@ -171,6 +173,7 @@ export async function startApp(name: string, opts: AppOptions): Promise<AppProce
     ROUNDTIDE_SMTP_HOST: '127.0.0.1',
     ROUNDTIDE_SMTP_PORT: String(opts.smtpPort),
     ROUNDTIDE_SCHEDULER_INTERVAL_MS: String(opts.schedulerIntervalMs ?? 30_000),
+    ...opts.env,
   }
   delete env.ROUNDTIDE_PUBLIC_URL
   if (opts.redisUrl) env.ROUNDTIDE_REDIS_URL = opts.redisUrl
