@@ -83,10 +83,14 @@ async function drain() {
 export async function publishBatch(): Promise<number> {
   const ds = dataSource()
   const token = randomUUID()
-  // Claimed before sending (as escalation messages are, record 009): two processes never send a row twice.
-  await ds.query(
-    'UPDATE change_outbox SET claimedBy = ?, claimedAt = NOW(3) WHERE publishedAt IS NULL AND (claimedAt IS NULL OR claimedAt < NOW(3) - INTERVAL ? SECOND) ORDER BY id LIMIT ?',
-    [token, CLAIM_LEASE_SECONDS, CLAIM_BATCH],
+  // Claimed before sending (as escalation messages are, record 009): two processes never send a
+  // row twice. Read committed, so the claim passes over rows of transactions still open (a long
+  // scheduler tick) instead of waiting for them; the next pass takes those.
+  await ds.transaction('READ COMMITTED', (m) =>
+    m.query(
+      'UPDATE change_outbox SET claimedBy = ?, claimedAt = NOW(3) WHERE publishedAt IS NULL AND (claimedAt IS NULL OR claimedAt < NOW(3) - INTERVAL ? SECOND) ORDER BY id LIMIT ?',
+      [token, CLAIM_LEASE_SECONDS, CLAIM_BATCH],
+    ),
   )
   const repo = ds.getRepository(ChangeOutboxEntity)
   const rows = await repo.find({ where: { claimedBy: token, publishedAt: IsNull() }, order: { id: 'ASC' } })

@@ -26,7 +26,8 @@ afterAll(async () => {
   await ds?.destroy()
 })
 
-const PUBLISH_MS = 2500
+// The first publisher pass comes one interval after start: long enough for the test's socket to connect.
+const PUBLISH_MS = 5000
 /** The claim lease of server/realtime/publisher.ts, after which another process sends claimed rows. */
 const CLAIM_LEASE_MS = 15_000
 
@@ -105,7 +106,7 @@ describe('a crash after the commit', () => {
     const first = await startApp('app (crashes after claiming)', { smtpPort, env })
     apps.push(first)
     const cookie = await signIn(first.url, DEMO.priya)
-    await sleep(600) // its publisher is past its first pass
+    await sleep(1000) // its publisher is past its first pass: the completion's commit is published at once
 
     const answer = await call(first.url, `/api/tasks/${task.id}/completion`, { method: 'POST', cookie, body: { completionId: randomUUID(), readings: { do_mgL: 6.8, temp_c: 28.2 } } })
     expect(answer.status).toBe(200)
@@ -113,7 +114,7 @@ describe('a crash after the commit', () => {
     const [claimed] = await outboxRows([task.id])
     expect(claimed).toMatchObject({ publishedAt: null, claimedBy: expect.any(String) })
 
-    const second = await startApp('app (after the crash)', { smtpPort, env: { ROUNDTIDE_PUBLISH_INTERVAL_MS: '500' } })
+    const second = await startApp('app (after the crash)', { smtpPort, env: { ROUNDTIDE_PUBLISH_INTERVAL_MS: String(PUBLISH_MS) } })
     apps.push(second)
     const feed = listen(second.url, cookie)
     await feed.ready
