@@ -93,7 +93,7 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
-    await recordTaskChanges(recheckTaskId ? [task.id, recheckTaskId] : [task.id])
+    await recordTaskChanges([task.id]) // the recheck noted its own
     return response
   })
   if (!result) {
