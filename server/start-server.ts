@@ -46,6 +46,8 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   return {
     url: `http://${config.host}:${port}`,
     port,
+    /** The configuration in force, with the secrets generated or read from the database. */
+    config,
     scheduler,
     publisher,
     smtpPort: smtp?.port ?? null,

@@ -8,7 +8,7 @@ import type { DataSource } from 'typeorm'
 import { createBenchDatabase, dropBenchDatabase } from './bench-db'
 import { measureBoardDrag } from './board-drag'
 import { measureBoard } from './board-latency'
-import { buildClient, measureBundle } from './bundle-size'
+import { buildClient, measureBundle, measureStackFloor } from './bundle-size'
 import { measureCompletions } from './completion-load'
 import { measureLighthouse } from './lighthouse-scores'
 import { measureMaterialise } from './materialise-step'
@@ -90,7 +90,7 @@ try {
   await step('5 front end', async () => {
     const buildMs = await buildClient(outDir)
     clientDir = outDir
-    return measureBundle(outDir, buildMs)
+    return measureBundle(outDir, buildMs, await measureStackFloor(path.join(workDir, 'stack-floor')))
   })
   await step('setup: server', async () => {
     server = await startBenchServer(clientDir ?? (existsSync('dist/index.html') ? path.resolve('dist') : null))

@@ -1,7 +1,7 @@
 import { QueryClientProvider } from '@tanstack/react-query'
 import { useState } from 'react'
 import { RouterProvider } from 'react-router-dom'
-import { Toaster } from 'sonner'
+import { DeferredToaster } from '../components/ui/deferred-toaster'
 import { authKeys } from '../features/auth/api/auth-queries'
 import { LiveUpdatesProvider } from '../features/live/components/live-updates-provider'
 import { forgetOfflineCopies } from '../features/round/api/offline-copies'
@@ -16,7 +16,7 @@ export function App() {
       <LiveUpdatesProvider sessionKey={authKeys.me} onSignedOut={forgetOfflineCopies}>
         <RouterProvider router={router} />
       </LiveUpdatesProvider>
-      <Toaster position="top-center" richColors closeButton />
+      <DeferredToaster />
     </QueryClientProvider>
   )
 }

@@ -1,6 +1,6 @@
 import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query'
-import { toast } from 'sonner'
 import { ApiError } from '../lib/api-client'
+import { toastError } from '../lib/toast'
 
 function sendToSignIn() {
   const here = window.location.pathname + window.location.search
@@ -23,14 +23,14 @@ export function createQueryClient() {
       onError: (error, query) => {
         if (error instanceof ApiError && error.status === 401) return sendToSignIn()
         // Background refetch failed: keep the stale data on screen and say so once.
-        if (query.state.data !== undefined) toast.error(`Could not refresh: ${error.message}`)
+        if (query.state.data !== undefined) toastError(`Could not refresh: ${error.message}`)
       },
     }),
     mutationCache: new MutationCache({
       onError: (error) => {
         if (error instanceof ApiError && error.status === 401) return sendToSignIn()
         if (error instanceof ApiError && error.code === 'validation_failed' && error.fieldErrors) return
-        toast.error(error.message)
+        toastError(error.message)
       },
     }),
   })

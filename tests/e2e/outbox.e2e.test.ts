@@ -8,7 +8,6 @@ import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } 
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { messagesTo, startMailCatcher } from '#tests/support/mail-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
-import { testConfig } from '#tests/support/test-app'
 
 const MIN = 60_000
 let s: BrowserSession
@@ -17,7 +16,7 @@ beforeAll(async () => {
   s = await startBrowserSession()
   await ensureFacilityAndParameters()
   // Links in the mail point at the browser-test server, as they would at a real deployment's address.
-  mail = await startMailCatcher({ ...testConfig(), publicUrl: s.url })
+  mail = await startMailCatcher({ ...s.config, publicUrl: s.url })
 })
 afterAll(async () => {
   await mail?.close()

@@ -91,7 +91,7 @@ describe('the round sheet', () => {
     await second.getByLabel('Temperature (°C)').fill('27.5')
     await second.getByLabel('Time on paper').fill('07:15')
     await second.getByRole('button', { name: 'Save this task' }).click()
-    await second.getByText('Must be 0–30').waitFor()
+    await second.getByText('Not possible: must be 0–30').waitFor()
     await second.getByLabel('Dissolved oxygen (mg/L)').fill('7.9')
     await second.getByRole('button', { name: 'Save this task' }).click()
     await page.getByRole('status').filter({ hasText: 'Saved: done at 07:15 by Mere Kahu' }).waitFor()

@@ -63,6 +63,7 @@ export async function startBrowserSession() {
 
   return {
     url: server.url,
+    config: server.config,
     database,
     browser,
     newPage,

@@ -1,3 +1,4 @@
+import { checkTypedReading } from '#shared/readings/typed-reading'
 import type { RoundTask } from '#shared/schemas/round'
 import { ApiError } from '../../../lib/api-client'
 import { clockTime, paperTime } from './sheet-format'
@@ -15,12 +16,10 @@ export function checkPaperDraft(task: RoundTask, draft: PaperDraft, date: string
   const errors: Record<string, string> = {}
   const readings: Record<string, number> = {}
   for (const spec of task.readingSpecs) {
-    const text = (draft.values[spec.key] ?? '').trim().replace(',', '.')
-    const value = Number(text)
-    if (text === '') errors[spec.key] = 'Copy this reading from the sheet'
-    else if (!Number.isFinite(value)) errors[spec.key] = 'Enter a number'
-    else if (value < spec.physicalMin || value > spec.physicalMax) errors[spec.key] = `Must be ${spec.physicalMin}–${spec.physicalMax}`
-    else readings[spec.key] = value
+    const check = checkTypedReading(draft.values[spec.key] ?? '', spec)
+    if (check.state === 'empty') errors[spec.key] = 'Copy this reading from the sheet'
+    else if (check.state === 'invalid') errors[spec.key] = check.message
+    else readings[spec.key] = check.value
   }
   const doneAt = paperTime(date, draft.time, timeZone)
   if (!doneAt) errors.time = 'Use the time on the sheet, HH:MM'

@@ -2,13 +2,13 @@ import { Calculator } from 'lucide-react'
 import { deriveReadings } from '#shared/readings/derive'
 import type { ReadingSpec } from '#shared/schemas/round'
 import { DERIVED_NAMES as DERIVED } from '../utils/derived-names'
-import { checkReading } from '../utils/reading-value'
+import { checkTypedReading } from '#shared/readings/typed-reading'
 
 /** Values Roundtide works out from what was typed (DO % saturation, NH3); the server bands them on Done. */
 export function DerivedReadings({ specs, raw, salinitySetpoint }: { specs: ReadingSpec[]; raw: Record<string, string>; salinitySetpoint: number | null }) {
   const values: Record<string, number> = {}
   for (const spec of specs) {
-    const check = checkReading(raw[spec.key] ?? '', spec)
+    const check = checkTypedReading(raw[spec.key] ?? '', spec)
     if (check.state === 'valid') values[spec.key] = check.value
   }
   const derived = deriveReadings(values, salinitySetpoint)

@@ -3,7 +3,8 @@ import { CircleAlert } from 'lucide-react'
 import { forwardRef, useId } from 'react'
 import { describeOkRange } from '#shared/readings/band'
 import type { ReadingSpec } from '#shared/schemas/round'
-import { bandReason, checkReading } from '../utils/reading-value'
+import { checkTypedReading } from '#shared/readings/typed-reading'
+import { bandReason } from '../utils/reading-value'
 import { BandBadge } from './band-badge'
 
 interface ReadingInputProps {
@@ -18,7 +19,7 @@ interface ReadingInputProps {
 /** One reading: big decimal field with its unit and ok range, and the band as the person types. */
 export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(function ReadingInput({ spec, value, error, last, onChange, onEnter }, ref) {
   const id = useId()
-  const check = checkReading(value, spec)
+  const check = checkTypedReading(value, spec)
   const range = describeOkRange(spec, spec.unit)
   const message = error ?? (check.state === 'invalid' ? check.message : undefined)
   return (

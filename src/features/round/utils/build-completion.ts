@@ -1,7 +1,7 @@
 import type { RoundTask } from '#shared/schemas/round'
 import type { CompletionPayload } from '../api/completion-api'
 import type { Draft } from '../state/drafts'
-import { checkReading } from './reading-value'
+import { checkTypedReading } from '#shared/readings/typed-reading'
 
 export type BuiltCompletion = { ok: true; payload: CompletionPayload } | { ok: false; errors: Record<string, string> }
 
@@ -12,7 +12,7 @@ export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' |
   const note = draft.note.trim() || undefined
   if (outcome === 'done') {
     for (const spec of task.readingSpecs) {
-      const check = checkReading(draft.readings[spec.key] ?? '', spec)
+      const check = checkTypedReading(draft.readings[spec.key] ?? '', spec)
       if (check.state === 'empty') errors[`readings.${spec.key}`] = `Enter ${spec.name.toLowerCase()}`
       else if (check.state === 'invalid') errors[`readings.${spec.key}`] = check.message
       else readings[spec.key] = check.value
