@@ -6,13 +6,12 @@ import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
-import { recordTaskChanges } from '../../realtime/change-outbox'
 import { audit } from '../audit/audit.service'
 import { PersonEntity } from '../people/person.entity'
 import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
 import { assessRoundMortality, writeRoundMortality } from '../stock/round-mortality'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { closeTask, recheckOf, type TaskRow } from '../tasks/task-writes.service'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
 import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
@@ -54,22 +53,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
   const result = await db().transaction(async (manager) => {
-    const claimed = await manager
-      .createQueryBuilder()
-      .update(TaskEntity)
-      .set({
-        status: data.outcome,
-        flag: flag === 'ok' ? null : flag,
-        lateMinutes,
-        completedAt: doneAt,
-        completedById: performer.id,
-        assigneeId: task.assigneeId ?? performer.id,
-        version: () => 'version + 1',
-      })
-      .where('id = :id AND version = :version', { id: task.id, version: task.version })
-      .andWhere("status NOT IN ('done', 'skipped')")
-      .execute()
-    if (!claimed.affected) return null
+    const closing = { outcome: data.outcome, flag: flag === 'ok' ? null : flag, lateMinutes, completedAt: doneAt, completedById: performer.id, assigneeId: task.assigneeId ?? performer.id }
+    if (!(await closeTask(task, closing))) return null
     await manager.getRepository(CompletionEntity).insert({
       id: data.completionId, taskId: task.id, personId: performer.id, enteredById: performer.id === person.id ? null : person.id, outcome: data.outcome,
       skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
@@ -93,7 +78,6 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
-    await recordTaskChanges([task.id]) // the recheck noted its own
     return response
   })
   if (!result) {
@@ -108,7 +92,7 @@ async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
   const [task, readings, recheck] = await Promise.all([
     getTaskRow(row.taskId),
     db().getRepository(ReadingEntity).find({ where: { completionId: row.id, amendmentId: IsNull() }, order: { id: 'ASC' } }),
-    db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: row.taskId }),
+    recheckOf(row.taskId),
   ])
   return {
     task: toTask(task, await loadTaskContext()),

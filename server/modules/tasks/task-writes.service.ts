@@ -21,6 +21,35 @@ export async function createTask(fields: NewTask): Promise<TaskRow> {
   return saved
 }
 
+export interface Closing {
+  outcome: 'done' | 'skipped'
+  flag: TaskRow['flag']
+  lateMinutes: number | null
+  completedAt: Date
+  completedById: number
+  assigneeId: number
+}
+
+/**
+ * Closes a task if it is still the version the person saw and nobody finished it meanwhile (one
+ * winner when two complete it at once); answers whether this call closed it.
+ */
+export async function closeTask(task: Pick<TaskRow, 'id' | 'version'>, closing: Closing): Promise<boolean> {
+  const { outcome, ...fields } = closing
+  const claimed = await db()
+    .createQueryBuilder()
+    .update(TaskEntity)
+    .set({ ...fields, status: outcome, version: () => 'version + 1' })
+    .where('id = :id AND version = :version', { id: task.id, version: task.version })
+    .andWhere("status NOT IN ('done', 'skipped')")
+    .execute()
+  if (claimed.affected) await recordTaskChanges([task.id])
+  return !!claimed.affected
+}
+
+/** The recheck raised after this task, if any. */
+export const recheckOf = (taskId: number) => tasks().findOneBy({ recheckOfTaskId: taskId })
+
 /** The task with this id while nobody has finished it yet, else null. */
 export const openTask = (id: number) => tasks().findOneBy({ id, status: Not(In([...FINISHED])) })
 
