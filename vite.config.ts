@@ -35,8 +35,9 @@ export default defineConfig({
         navigateFallbackDenylist: [/^\/api\//, /^\/socket\.io\//],
         runtimeCaching: [
           {
-            // Today's round and the person open offline from the last copy; online, the network always wins.
-            urlPattern: ({ url }) => url.pathname === '/api/tasks/round' || url.pathname === '/api/me',
+            // Today's round, the person, and the register's counts and causes shown on the round open offline
+            // from the last copy; online, the network always wins.
+            urlPattern: ({ url }) => ['/api/tasks/round', '/api/me', '/api/stock/on-hand', '/api/stock/settings'].includes(url.pathname),
             handler: 'NetworkFirst',
             method: 'GET',
             options: {

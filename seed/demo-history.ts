@@ -11,7 +11,7 @@ import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { loadCatalogue } from '#server/modules/tasks/targets'
 
 /** A small seeded generator, so every fresh demo tells the same (invented) story. */
-function generator(seed: number) {
+export function generator(seed: number) {
   let a = seed
   const next = () => {
     a |= 0
@@ -29,7 +29,8 @@ function fakeValue(key: string, r: ReturnType<typeof generator>, salinity: numbe
   switch (key) {
     case 'temp_c': return round(r.around(28.6, 0.9), 1)
     case 'do_mgL': return round(r.next() < 0.03 ? r.around(4.4, 0.6) : r.around(6.9, 0.9), 1)
-    case 'mortalities': return r.next() < 0.85 ? 0 : Math.floor(r.next() * 4)
+    // About one check in twenty finds a dead fish: the round's deaths go on the stock register too.
+    case 'mortalities': return r.next() < 0.85 ? 0 : r.next() < 0.3 ? 1 + Math.floor(r.next() * 2) : 0
     case 'behaviour_score': return r.next() < 0.9 ? 0 : 1
     case 'feed_g': return round(r.around(120, 40), 0)
     case 'uneaten_feed_g': return round(r.around(3, 2) + 2, 1)

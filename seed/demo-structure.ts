@@ -45,8 +45,12 @@ export const DEMO_EQUIPMENT = [
   { code: 'EQ-ALARM', name: 'Alarm panel and call-out', kind: 'Alarm system', area: 'PLT' },
 ]
 
-/** Batches: arrival dates are days before the demo's "today", so the demo never ages. */
+/**
+ * Batches: arrival dates are days before the demo's "today", so the demo never ages. Counts and
+ * tanks are then set from the stock register the demo writes (demo-stock-story.ts).
+ */
 export const DEMO_BATCHES = [
+  { code: 'B-SPR-25', species: 'Barramundi (Lates calcarifer)', origin: 'Tallowmere Hatchery (invented)', daysAgo: 360, count: 0, meanWeightG: 310, tanks: [] as string[], status: 'dispatched' as const, feedRatePct: null },
   { code: 'B-NUR-APR', species: 'Barramundi (Lates calcarifer)', origin: 'Quollridge Fingerlings (invented)', daysAgo: 49, count: 4750, meanWeightG: 18.2, tanks: ['NUR-T01', 'NUR-T02', 'NUR-T03', 'NUR-T04', 'NUR-T05', 'NUR-T06'], status: 'active' as const, feedRatePct: 3 },
   { code: 'B-TRIAL', species: 'Barramundi (Lates calcarifer)', origin: 'Quollridge Fingerlings (invented)', daysAgo: 112, count: 576, meanWeightG: 61.5, tanks: ['TRL-A01', 'TRL-A02', 'TRL-A03', 'TRL-A04', 'TRL-A05', 'TRL-A06', 'TRL-A07', 'TRL-A08', 'TRL-A09', 'TRL-A10', 'TRL-A11', 'TRL-A12'], status: 'active' as const, feedRatePct: 2.5 },
   { code: 'B-QUA-NEW', species: 'Barramundi (Lates calcarifer)', origin: 'Tallowmere Hatchery (invented)', daysAgo: 6, count: 400, meanWeightG: 2.1, tanks: ['QUA-B01', 'QUA-B02'], status: 'quarantine' as const, feedRatePct: 2 },

@@ -18,6 +18,8 @@ import { DEMO_PEOPLE } from './demo-people'
 import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
 import { DEMO_CYLINDERS, DEMO_PLAYBOOKS } from './demo-playbooks'
 import { seedHistory } from './demo-history'
+import { seedIncidents } from './demo-incidents'
+import { seedStock } from './demo-stock'
 import { DEMO_ON_CALL, DEMO_SHIFT_PATTERNS } from './demo-roster'
 import { DEMO_ROUTINES } from './demo-routines'
 import { DEMO_AREAS, DEMO_BATCHES, DEMO_EQUIPMENT, DEMO_FACILITY, DEMO_SYSTEMS, DEMO_TANKS } from './demo-structure'
@@ -118,6 +120,10 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   // Two weeks of history, then today from its start, so the morning's round is there whenever it is run.
   const { created } = await materialise({ from: today.minus({ days: 14 }).toJSDate(), horizonDays: 14 + 42 })
   const history = await seedHistory(14, facility.timeZone)
+  const person = (email: string) => ({ id: people.get(email)!, name: DEMO_PEOPLE.find((p) => p.email === email)!.name })
+  const [supervisor, technician, boss, vet] = ['tomas.ferreira', 'priya.nandakumar', 'maren.holloway', 'ruth.amsel'].map((n) => person(`${n}@brackenwater.example`))
+  const movements = await seedStock(facility.timeZone, { tanks, batches, supervisor: supervisor.id, technician: technician.id, manager: boss.id })
+  await seedIncidents(facility.timeZone, { tanks, batches, supervisor, manager: boss, welfareOfficer: vet })
   // Coming up: an arrival into quarantine in three days, and a nursery grading (with its fasting window) in five.
   const spareBins = ['QUA-B03', 'QUA-B04'].map((c) => tanks.get(c)!)
   await tanksCatalogue.update(spareBins[0], { inUse: true })
@@ -126,5 +132,5 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   await startEvent({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }, manager)
   await recordCylinderReading(1, { pressure: 168, flowLPerMin: 6 })
 
-  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks and ${history} past completions (today is ${today.toISODate()}).`)
+  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks, ${history} past completions, ${movements} stock movements and 2 incidents (today is ${today.toISODate()}).`)
 }

@@ -5,6 +5,7 @@ import { pinoHttp } from 'pino-http'
 import { randomUUID } from 'node:crypto'
 import { existsSync } from 'node:fs'
 import path from 'node:path'
+import { noStore } from './lib/cache-control'
 import type { AppConfig } from './lib/config'
 import { errorHandler } from './lib/error-handler'
 import { notFound } from './lib/errors'
@@ -22,6 +23,7 @@ import { escalationRouter } from './modules/escalation/escalation.routes'
 import { facilityRouter } from './modules/facility/facility.routes'
 import { parametersRouter } from './modules/parameters/parameters.routes'
 import { peopleRouter, staffRouter } from './modules/people/people.routes'
+import { preferencesRouter } from './modules/people/preferences.routes'
 import { rosterRouter } from './modules/roster/roster.routes'
 import { incidentsRouter } from './modules/incidents/incidents.routes'
 import { oxygenRouter } from './modules/oxygen/oxygen.routes'
@@ -76,6 +78,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   )
 
   const api = express.Router()
+  api.use(noStore)
   api.use(express.json({ limit: '256kb' }))
   api.use(requireSameOrigin(config.allowedOrigins))
   api.use('/health', healthRouter)
@@ -89,6 +92,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/tasks', tasksRouter)
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
+  api.use('/me/preferences', preferencesRouter(config))
   api.use('/', escalationRouter(config))
   api.use('/', playbooksRouter)
   api.use('/', oxygenRouter)
@@ -99,7 +103,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
     throw notFound(`The API route ${req.method} ${req.path}`)
   })
   app.use('/api', api)
-  app.use('/ack', express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
+  app.use('/ack', noStore, express.urlencoded({ extended: false, limit: '4kb' }), requireSameOrigin(config.allowedOrigins), ackRouter(config))
 
   if (clientDir && existsSync(path.join(clientDir, 'index.html'))) {
     app.use(

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 
 export const API_ERROR_CODES = [
   'validation_failed',
@@ -16,10 +17,10 @@ export const API_ERROR_CODES = [
 export const ApiErrorBodySchema = z.object({
   error: z.object({
     code: z.enum(API_ERROR_CODES),
-    message: z.string(),
-    fieldErrors: z.record(z.string(), z.array(z.string())).optional(),
-    requestId: z.string().optional(),
-    details: z.record(z.string(), z.unknown()).optional(),
+    message: text(),
+    fieldErrors: z.record(text(), z.array(text())).optional(),
+    requestId: text().optional(),
+    details: z.record(text(), z.unknown()).optional(),
   }),
 })
 export type ApiErrorBody = z.infer<typeof ApiErrorBodySchema>

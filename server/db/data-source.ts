@@ -57,6 +57,9 @@ export function setDataSource(ds: DataSource) {
   if (ds) joinAmbientOnTransaction(ds.manager)
 }
 
+/** The connection when one is set, for code that must not throw without one (the error handler). */
+export const dataSourceIfSet = (): DataSource | undefined => current
+
 export function dataSource(): DataSource {
   if (!current) throw new Error('The database connection has not been set up yet')
   return current

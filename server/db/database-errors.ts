@@ -14,3 +14,19 @@ export function isDatabaseDown(err: unknown): boolean {
   }
   return false
 }
+
+/**
+ * The name of the unique key a write ran into (MariaDB ER_DUP_ENTRY, errno 1062), or null when
+ * the error is something else. TypeORM wraps the driver's error, so both layers are read.
+ */
+export function duplicateKeyName(err: unknown): string | null {
+  let current: unknown = err
+  for (let depth = 0; current && depth < 4; depth++) {
+    const e = current as { code?: string; errno?: number; sqlMessage?: string; message?: string; driverError?: unknown }
+    if (e.code === 'ER_DUP_ENTRY' || e.errno === 1062) {
+      return /for key '(?:[^'.]+\.)?([^']+)'/.exec(e.sqlMessage ?? e.message ?? '')?.[1] ?? ''
+    }
+    current = e.driverError
+  }
+  return null
+}

@@ -2,6 +2,7 @@ import type { ErrorRequestHandler } from 'express'
 import { ZodError, z } from 'zod'
 import { AppError } from './errors'
 import { isDatabaseDown } from '../db/database-errors'
+import { duplicateKeyConflict } from '../db/unique-conflicts'
 import { logger } from './logger'
 
 type BodyParserError = Error & { type?: string; status?: number }
@@ -20,9 +21,10 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     res.status(400).json({ error: { code: 'validation_failed', message: `Please check the input: ${first}`, fieldErrors } })
     return
   }
-  if (err instanceof AppError) {
-    res.status(err.status).json({
-      error: { code: err.code, message: err.message, fieldErrors: err.fieldErrors, details: err.details },
+  const known = err instanceof AppError ? err : duplicateKeyConflict(err)
+  if (known) {
+    res.status(known.status).json({
+      error: { code: known.code, message: known.message, fieldErrors: known.fieldErrors, details: known.details },
     })
     return
   }

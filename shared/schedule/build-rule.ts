@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 
 const WEEKDAY_ORDER = ['MO', 'TU', 'WE', 'TH', 'FR', 'SA', 'SU'] as const
 
 export const weekdaySchema = z.enum(WEEKDAY_ORDER)
-export const timeOfDaySchema = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use a 24-hour time such as 07:30')
+export const timeOfDaySchema = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use a 24-hour time such as 07:30')
 
 const timesSchema = z.array(timeOfDaySchema).min(1, 'Add at least one time of day')
 const daysSchema = z.array(weekdaySchema).min(1, 'Pick at least one weekday')

@@ -2,6 +2,7 @@ import { DateTime } from 'luxon'
 import type { IANAZone } from 'luxon'
 import { RRule, parseRule } from './parse-rule'
 import type { ParsedRule, RuleUntil } from './parse-rule'
+import { unreachableTimeProblem } from './time-lattice'
 import { RULE_LIMITS, limitPeriods, stepsPerPeriod } from './rule-limits'
 import {
   DAY_MS,
@@ -122,10 +123,14 @@ function startNearWindow(rule: ParsedRule, dtstartMs: number, windowStartMs: num
 /** expandRule with what the bounds cut off: a walk is never longer than its period budget or the search span. */
 export function expandRuleBounded(input: ExpandRuleInput): BoundedExpansion {
   const zone = resolveZone(input.tzid)
-  const dtstartMs = wallToFloatingMs(parseWallTime(input.dtstart, 'dtstart'))
+  const dtstartWall = parseWallTime(input.dtstart, 'dtstart')
+  const dtstartMs = wallToFloatingMs(dtstartWall)
   const limit = input.limit ?? DEFAULT_LIMIT
   if (!Number.isInteger(limit) || limit < 0) throw new Error(`Invalid limit ${limit}: expected a whole number of 0 or more`)
   const rule = parseRule(input.rrule)
+  // Before rrule sees it: such a rule would hold the event loop for ever (see time-lattice.ts).
+  const unreachable = unreachableTimeProblem(rule.parts.get('FREQ'), rule.parts, dtstartWall)
+  if (unreachable) throw new Error(unreachable)
   const lower = parseInstant(input.from, 'from', zone)
   const upper = earliest(parseInstant(input.to, 'to', zone), untilToInstant(rule.until, zone))
   const windowStart = lower === undefined ? dtstartMs : Math.max(dtstartMs, instantToFloatingMs(lower, zone) - DAY_MS)

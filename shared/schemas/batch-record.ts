@@ -1,8 +1,9 @@
 import { z } from 'zod'
+import { text } from './text'
 
 export const TransportBoxRecordSchema = z.object({
   kind: z.literal('transport_box'),
-  box: z.string().trim().min(1).max(40),
+  box: text().trim().min(1).max(40),
   doMgL: z.number().min(0).max(60),
   tempC: z.number().min(-2).max(45),
   pH: z.number().min(0).max(14),
@@ -26,15 +27,15 @@ export const WeighingRecordSchema = z.object({
 })
 export const BathRecordSchema = z.object({
   kind: z.literal('bath'),
-  product: z.string().trim().min(1).max(120),
+  product: text().trim().min(1).max(120),
   targetMgL: z.number().positive().max(10_000),
   volumeL: z.number().positive().max(1_000_000),
   purityPct: z.number().positive().max(100),
   gramsWeighed: z.number().positive().max(1_000_000),
   minutes: z.number().int().positive().max(24 * 60),
-  observations: z.string().trim().max(2000).default(''),
+  observations: text().trim().max(2000).default(''),
 })
-export const NoteRecordSchema = z.object({ kind: z.enum(['note', 'review']), text: z.string().trim().min(1).max(4000) })
+export const NoteRecordSchema = z.object({ kind: z.enum(['note', 'review']), text: text().trim().min(1).max(4000) })
 
 export const BatchRecordInputSchema = z
   .discriminatedUnion('kind', [TransportBoxRecordSchema, TransportWaterRecordSchema, WeighingRecordSchema, BathRecordSchema, NoteRecordSchema])
@@ -45,9 +46,9 @@ export const BatchRecordSchema = z.object({
   id: z.number().int(),
   batchId: z.number().int(),
   eventId: z.number().int().nullable(),
-  kind: z.string(),
-  data: z.record(z.string(), z.unknown()),
-  personName: z.string(),
-  createdAt: z.string(),
+  kind: text(),
+  data: z.record(text(), z.unknown()),
+  personName: text(),
+  createdAt: text(),
 })
 export type BatchRecord = z.infer<typeof BatchRecordSchema>

@@ -1,13 +1,14 @@
 import { z } from 'zod'
+import { text } from './text'
 import { BandSchema } from './parameter'
 import { CategorySchema, PrioritySchema } from './routine'
 import { TaskStatusSchema, type Task } from './task'
 
 export const BoardColumnPersonSchema = z.object({
   personId: z.number().int(),
-  name: z.string(),
-  role: z.string(),
-  shifts: z.array(z.object({ start: z.string(), end: z.string(), kind: z.string() })),
+  name: text(),
+  role: text(),
+  shifts: z.array(z.object({ start: text(), end: text(), kind: text() })),
   taskCount: z.number().int(),
   plannedMinutes: z.number().int(),
 })
@@ -15,14 +16,14 @@ export type BoardColumnPerson = z.infer<typeof BoardColumnPersonSchema>
 
 /** What many cards share: a routine's title, category, priority and length. */
 export const BoardKindSchema = z.object({
-  title: z.string(),
+  title: text(),
   category: CategorySchema,
   priority: PrioritySchema,
   durationMinutes: z.number().int(),
 })
 
 export const BoardTargetSchema = z.object({
-  label: z.string(),
+  label: text(),
   tankId: z.number().int().nullable(),
   areaId: z.number().int().nullable(),
 })
@@ -36,18 +37,18 @@ export const BoardCardWireSchema = z.object({
   kind: z.number().int().nonnegative(),
   target: z.number().int().nonnegative(),
   /** Local "HH:mm" on the board's day. */
-  time: z.string(),
+  time: text(),
   status: TaskStatusSchema,
   assignee: z.number().int().optional(),
   flag: BandSchema.optional(),
-  held: z.string().optional(),
+  held: text().optional(),
   version: z.number().int(),
 })
 export type BoardCardWire = z.infer<typeof BoardCardWireSchema>
 
 /** GET /tasks/board: one day's cards, with each kind, target and person once. */
 export const BoardWireSchema = z.object({
-  date: z.string(),
+  date: text(),
   people: z.array(BoardColumnPersonSchema),
   kinds: z.array(BoardKindSchema),
   targets: z.array(BoardTargetSchema),
@@ -100,11 +101,11 @@ export function unfoldBoard(wire: BoardWire): Board {
 }
 
 export const CalendarDaySchema = z.object({
-  date: z.string(),
+  date: text(),
   counts: z.object({ done: z.number().int(), open: z.number().int(), missed: z.number().int(), held: z.number().int(), skipped: z.number().int() }),
-  byCategory: z.record(z.string(), z.number().int()),
-  onShift: z.array(z.string()),
-  onCall: z.array(z.string()),
-  events: z.array(z.object({ id: z.number().int(), title: z.string(), kind: z.string() })),
+  byCategory: z.record(text(), z.number().int()),
+  onShift: z.array(text()),
+  onCall: z.array(text()),
+  events: z.array(z.object({ id: z.number().int(), title: text(), kind: text() })),
 })
 export type CalendarDay = z.infer<typeof CalendarDaySchema>

@@ -1,4 +1,4 @@
-import { z } from 'zod'
+import { text } from './text'
 
 const DATE = /^(\d{4})-(\d{2})-(\d{2})$/
 const DATE_TIME = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})(?::(\d{2}))?$/
@@ -22,8 +22,7 @@ function realDateTime(text: string): boolean {
  * Every date field in the shared schemas uses it, so an impossible date is a 400 at the door.
  */
 export const calendarDate = () =>
-  z
-    .string()
+  text()
     .regex(DATE, 'Use YYYY-MM-DD')
     // zod runs refinements after a failed regex too; the shape error already speaks for that case.
     .refine((text) => {
@@ -33,7 +32,6 @@ export const calendarDate = () =>
 
 /** A wall-clock date and time without a zone, `YYYY-MM-DDTHH:mm[:ss]`, on a real day and a real time. */
 export const wallDateTime = ({ seconds }: { seconds: 'required' | 'optional' }) =>
-  z
-    .string()
+  text()
     .regex(seconds === 'required' ? /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}$/ : /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/, seconds === 'required' ? 'Use YYYY-MM-DDTHH:mm:ss' : 'Use YYYY-MM-DDTHH:mm')
     .refine(realDateTime, 'There is no such date or time')

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 import { BandSchema } from './parameter'
 import { RoundMortalityDetailSchema } from './stock'
 import { TaskSchema } from './task'
@@ -16,14 +17,14 @@ export const SKIP_REASON_LABELS: Record<(typeof SKIP_REASONS)[number], string> =
 export const CompletionInputSchema = z
   .object({
     /** Made by the client, so a replay (e.g. after a dropped connection) is recognised. */
-    completionId: z.string().uuid('completionId must be a UUID'),
+    completionId: text().uuid('completionId must be a UUID'),
     outcome: z.enum(['done', 'skipped']).default('done'),
     version: z.number().int().optional(),
-    readings: z.record(z.string().min(1).max(40), z.number({ error: 'Enter a number' }).finite('Enter a number')).default({}),
+    readings: z.record(text().min(1).max(40), z.number({ error: 'Enter a number' }).finite('Enter a number')).default({}),
     skipReason: z.enum(SKIP_REASONS).optional(),
-    note: z.string().trim().max(2000).optional(),
+    note: text().trim().max(2000).optional(),
     /** When the work was really done (typing in a paper sheet later); defaults to now. */
-    doneAt: z.string().datetime().optional(),
+    doneAt: text().datetime().optional(),
     /** Typing in a paper round sheet: who really did it (supervisors and managers only). */
     performedById: z.number().int().positive().optional(),
     /** What is known about the fish counted in the mortalities reading. */
@@ -36,9 +37,9 @@ export const CompletionInputSchema = z
 export type CompletionInput = z.input<typeof CompletionInputSchema>
 
 export const ReadingSchema = z.object({
-  parameterKey: z.string(),
+  parameterKey: text(),
   value: z.number(),
-  unit: z.string(),
+  unit: text(),
   band: BandSchema,
   derived: z.boolean(),
 })
@@ -48,13 +49,13 @@ export const CompletionResultSchema = z.object({
   task: TaskSchema,
   readings: z.array(ReadingSchema),
   recheckTaskId: z.number().int().nullable(),
-  notes: z.array(z.string()),
+  notes: z.array(text()),
 })
 export type CompletionResult = z.infer<typeof CompletionResultSchema>
 
 export const AmendmentInputSchema = z.object({
-  reason: z.string().trim().min(5, 'Say why the record is corrected').max(1000),
-  readings: z.record(z.string().min(1).max(40), z.number({ error: 'Enter a number' }).finite()).default({}),
-  note: z.string().trim().max(2000).optional(),
+  reason: text().trim().min(5, 'Say why the record is corrected').max(1000),
+  readings: z.record(text().min(1).max(40), z.number({ error: 'Enter a number' }).finite()).default({}),
+  note: text().trim().max(2000).optional(),
 })
 export type AmendmentInput = z.input<typeof AmendmentInputSchema>

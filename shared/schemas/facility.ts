@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import { text } from './text'
 import { calendarDate } from './calendar'
 
-const code = z.string().trim().min(1, 'Required').max(40).regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
-const name = z.string().trim().min(1, 'Required').max(120)
-const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
+const code = text().trim().min(1, 'Required').max(40).regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
+const name = text().trim().min(1, 'Required').max(120)
+const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 const isoDate = calendarDate()
 
 export function isValidTimeZone(tz: string) {
@@ -18,7 +19,7 @@ export function isValidTimeZone(tz: string) {
 export const FacilitySchema = z.object({
   id: z.number().int(),
   name,
-  timeZone: z.string().refine(isValidTimeZone, 'Unknown IANA time zone'),
+  timeZone: text().refine(isValidTimeZone, 'Unknown IANA time zone'),
   handoverTime: hhmm,
   quarantineDays: z.number().int().min(0).max(365),
   arrivalTempDiffLimitC: z.number().min(0).max(10),
@@ -26,7 +27,7 @@ export const FacilitySchema = z.object({
   /** Ladder for missed routine tasks, and the fast one for welfare-critical tasks and critical readings. */
   defaultLadderId: z.number().int().nullable(),
   fastLadderId: z.number().int().nullable(),
-  digestTime: z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour'),
+  digestTime: text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour'),
 })
 export type Facility = z.infer<typeof FacilitySchema>
 export const UpdateFacilityInputSchema = FacilitySchema.omit({ id: true }).partial()
@@ -74,7 +75,7 @@ export const EquipmentSchema = z.object({
   id: z.number().int(),
   code,
   name,
-  kind: z.string().trim().min(1, 'Required').max(60),
+  kind: text().trim().min(1, 'Required').max(60),
   areaId: z.number().int().nullable(),
 })
 export type Equipment = z.infer<typeof EquipmentSchema>
@@ -85,8 +86,8 @@ export const BATCH_STATUSES = ['quarantine', 'active', 'dispatched', 'ended'] as
 export const BatchSchema = z.object({
   id: z.number().int(),
   code,
-  species: z.string().trim().min(1, 'Required').max(120),
-  origin: z.string().trim().max(200),
+  species: text().trim().min(1, 'Required').max(120),
+  origin: text().trim().max(200),
   arrivalDate: isoDate,
   count: z.number().int().min(0).max(10_000_000),
   meanWeightG: z.number().min(0).max(100_000),

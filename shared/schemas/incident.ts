@@ -1,13 +1,16 @@
 import { z } from 'zod'
+// This file's own text(max) trims and caps; every field still starts from the shared textField().
+import { text as textField } from './text'
 
 export const INCIDENT_STATUSES = ['proposed', 'dismissed', 'open', 'reported', 'closed'] as const
 export const INCIDENT_SOURCES = ['missed_task', 'critical_recheck', 'mortality_threshold', 'manual'] as const
 export const IncidentStatusSchema = z.enum(INCIDENT_STATUSES)
+export type IncidentStatus = z.infer<typeof IncidentStatusSchema>
 
-const text = (max: number) => z.string().trim().max(max)
+const text = (max: number) => textField().trim().max(max)
 
-export const IncidentNoteSchema = z.object({ at: z.string(), personId: z.number().int(), personName: z.string(), text: z.string() })
-export const ToldSchema = z.object({ who: text(160).min(1), at: z.string().datetime() })
+export const IncidentNoteSchema = z.object({ at: textField(), personId: z.number().int(), personName: textField(), text: textField() })
+export const ToldSchema = z.object({ who: text(160).min(1), at: textField().datetime() })
 
 /** One adverse event: what happened, who was told, and the three deadlines from the facility's settings. */
 export const IncidentSchema = z.object({
@@ -15,28 +18,38 @@ export const IncidentSchema = z.object({
   status: IncidentStatusSchema,
   source: z.enum(INCIDENT_SOURCES),
   taskId: z.number().int().nullable(),
-  title: z.string(),
-  whatHappened: z.string(),
-  startedAt: z.string(),
-  noticedAt: z.string(),
+  title: textField(),
+  whatHappened: textField(),
+  startedAt: textField(),
+  noticedAt: textField(),
   tankIds: z.array(z.number().int()),
   batchIds: z.array(z.number().int()),
   personIds: z.array(z.number().int()),
   affected: z.number().int(),
   dead: z.number().int(),
-  immediateActions: z.string(),
+  immediateActions: textField(),
   told: z.array(ToldSchema),
-  rootCause: z.string(),
-  correctiveActions: z.string(),
-  decisionReason: z.string().nullable(),
+  rootCause: textField(),
+  correctiveActions: textField(),
+  decisionReason: textField().nullable(),
   decidedById: z.number().int().nullable(),
-  decidedAt: z.string().nullable(),
-  welfareDueAt: z.string(),
-  committeeDueAt: z.string(),
-  reportDueAt: z.string(),
-  reportedAt: z.string().nullable(),
-  closedAt: z.string().nullable(),
-  escalatedAt: z.string().nullable(),
+  decidedAt: textField().nullable(),
+  /** Names for readers who may not list the staff (observers). */
+  decidedByName: textField().nullable(),
+  people: z.array(z.object({ id: z.number().int(), name: textField() })),
+  welfareDueAt: textField(),
+  committeeDueAt: textField(),
+  reportDueAt: textField(),
+  /** When the welfare officer was told (the first deadline is met by this). */
+  welfareNotifiedAt: textField().nullable(),
+  /** When the ethics committee was told (status "reported"); the second deadline. */
+  reportedAt: textField().nullable(),
+  /** When the full report was filed and the incident closed; the third deadline. */
+  closedAt: textField().nullable(),
+  /** When each overdue deadline started its one escalation (committee, welfare officer, full report). */
+  escalatedAt: textField().nullable(),
+  welfareEscalatedAt: textField().nullable(),
+  reportEscalatedAt: textField().nullable(),
   notes: z.array(IncidentNoteSchema),
 })
 export type Incident = z.infer<typeof IncidentSchema>
@@ -49,8 +62,8 @@ export const UpdateIncidentInputSchema = z
   .object({
     title: text(160).min(1),
     whatHappened: text(4000),
-    startedAt: z.string().datetime(),
-    noticedAt: z.string().datetime(),
+    startedAt: textField().datetime(),
+    noticedAt: textField().datetime(),
     tankIds: z.array(z.number().int().positive()).max(200),
     batchIds: z.array(z.number().int().positive()).max(200),
     personIds: z.array(z.number().int().positive()).max(200),
@@ -60,6 +73,8 @@ export const UpdateIncidentInputSchema = z
     told: z.array(ToldSchema).max(50),
     rootCause: text(4000),
     correctiveActions: text(4000),
+    /** The welfare officer was told at this time (it may be earlier than the record is filled in). */
+    welfareNotifiedAt: textField().datetime(),
     status: z.enum(['reported', 'closed']),
   })
   .partial()

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 
 /** Whom a ladder step notifies; `person` names someone such as the welfare officer. */
 export const RecipientSchema = z.discriminatedUnion('kind', [
@@ -18,7 +19,7 @@ export const LadderStepSchema = z.object({
 export type LadderStep = z.infer<typeof LadderStepSchema>
 
 export const LadderInputSchema = z.object({
-  name: z.string().trim().min(1, 'Required').max(120),
+  name: text().trim().min(1, 'Required').max(120),
   steps: z
     .array(LadderStepSchema)
     .min(1, 'A ladder needs at least one step')
@@ -33,22 +34,22 @@ export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'h
 
 export const EscalationRecordSchema = z.object({
   alertId: z.number().int(),
-  kind: z.string(),
-  detail: z.string(),
-  startedAt: z.string(),
-  acknowledgedAt: z.string().nullable(),
-  acknowledgedByName: z.string().nullable(),
-  closedAt: z.string().nullable(),
-  ladderName: z.string().nullable(),
+  kind: text(),
+  detail: text(),
+  startedAt: text(),
+  acknowledgedAt: text().nullable(),
+  acknowledgedByName: text().nullable(),
+  closedAt: text().nullable(),
+  ladderName: text().nullable(),
   notifications: z.array(
     z.object({
       step: z.number().int(),
-      personName: z.string(),
-      email: z.string(),
+      personName: text(),
+      email: text(),
       status: z.enum(NOTIFICATION_STATUSES),
       attempts: z.number().int(),
-      sentAt: z.string().nullable(),
-      lastError: z.string().nullable(),
+      sentAt: text().nullable(),
+      lastError: text().nullable(),
     }),
   ),
 })
@@ -56,10 +57,10 @@ export type EscalationRecord = z.infer<typeof EscalationRecordSchema>
 
 export const OutboxMessageSchema = z.object({
   id: z.number().int(),
-  to: z.string(),
-  subject: z.string(),
-  text: z.string(),
-  html: z.string(),
-  receivedAt: z.string(),
+  to: text(),
+  subject: text(),
+  text: text(),
+  html: text(),
+  receivedAt: text(),
 })
 export type OutboxMessage = z.infer<typeof OutboxMessageSchema>

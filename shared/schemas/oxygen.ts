@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import { text } from './text'
 
 export const CylinderInputSchema = z
   .object({
-    code: z.string().trim().min(1, 'Required').max(40),
-    label: z.string().trim().min(1, 'Required').max(160),
+    code: text().trim().min(1, 'Required').max(40),
+    label: text().trim().min(1, 'Required').max(160),
     method: z.enum(['metric', 'psi-factor']),
     waterCapacityL: z.number().positive().max(10_000).nullable().default(null),
     factorLPerPsi: z.number().positive().max(100).nullable().default(null),
@@ -24,14 +25,14 @@ export const CylinderReadingInputSchema = z.object({
 
 export const CylinderStatusSchema = z.object({
   id: z.number().int(),
-  code: z.string(),
-  label: z.string(),
+  code: text(),
+  label: text(),
   method: z.enum(['metric', 'psi-factor']),
   unit: z.enum(['bar', 'psi']),
   reservePressure: z.number(),
   lastPressure: z.number().nullable(),
   flowLPerMin: z.number(),
-  lastReadAt: z.string().nullable(),
+  lastReadAt: text().nullable(),
   gasLeftL: z.number().nullable(),
   hoursToReserve: z.number().nullable(),
   level: z.enum(['ok', 'low', 'critical', 'unknown']),

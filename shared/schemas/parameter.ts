@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 
 export const BANDS = ['ok', 'watch', 'critical'] as const
 export const BandSchema = z.enum(BANDS)
@@ -6,9 +7,9 @@ export type Band = z.infer<typeof BandSchema>
 
 export const ParameterSchema = z.object({
   id: z.number().int(),
-  key: z.string(),
-  name: z.string(),
-  unit: z.string(),
+  key: text(),
+  name: text(),
+  unit: text(),
   decimals: z.number().int().min(0).max(4),
   /** A value outside the physical range is an input error, not a reading. */
   physicalMin: z.number(),
@@ -24,7 +25,7 @@ const bound = z.number().finite().nullable()
 
 export const LimitSchema = z.object({
   id: z.number().int(),
-  parameterKey: z.string(),
+  parameterKey: text(),
   scope: z.enum(LIMIT_SCOPES),
   scopeId: z.number().int().nullable(),
   okMin: bound,

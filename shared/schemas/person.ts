@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 
 export const ROLES = ['manager', 'supervisor', 'technician', 'observer'] as const
 export const RoleSchema = z.enum(ROLES)
@@ -11,37 +12,36 @@ export const ROLE_LABELS: Record<Role, string> = {
   observer: 'Observer',
 }
 
-const email = z.string().trim().toLowerCase().email('Enter a valid e-mail address').max(200)
+const email = text().trim().toLowerCase().email('Enter a valid e-mail address').max(200)
 // bcrypt reads at most 72 bytes of a password; longer ones would be silently truncated.
-const password = z
-  .string()
+const password = text()
   .min(10, 'Use at least 10 characters')
   .refine((p) => new TextEncoder().encode(p).length <= 72, 'Use at most 72 bytes')
 
 export const PersonSchema = z.object({
   id: z.number().int(),
-  email: z.string(),
-  name: z.string(),
-  title: z.string().nullable(),
-  phone: z.string().nullable(),
+  email: text(),
+  name: text(),
+  title: text().nullable(),
+  phone: text().nullable(),
   role: RoleSchema,
   active: z.boolean(),
   onCallEligible: z.boolean(),
-  createdAt: z.string(),
+  createdAt: text(),
 })
 export type Person = z.infer<typeof PersonSchema>
 
 export const SignInInputSchema = z.object({
   email,
-  password: z.string().min(1, 'Enter your password').max(200),
+  password: text().min(1, 'Enter your password').max(200),
 })
 export type SignInInput = z.infer<typeof SignInInputSchema>
 
 export const CreatePersonInputSchema = z.object({
   email,
-  name: z.string().trim().min(1, 'Required').max(120),
-  title: z.string().trim().max(160).nullable().optional(),
-  phone: z.string().trim().max(40).nullable().optional(),
+  name: text().trim().min(1, 'Required').max(120),
+  title: text().trim().max(160).nullable().optional(),
+  phone: text().trim().max(40).nullable().optional(),
   role: RoleSchema,
   onCallEligible: z.boolean().default(false),
   password,
@@ -50,9 +50,9 @@ export type CreatePersonInput = z.input<typeof CreatePersonInputSchema>
 
 export const UpdatePersonInputSchema = z
   .object({
-    name: z.string().trim().min(1, 'Required').max(120),
-    title: z.string().trim().max(160).nullable(),
-    phone: z.string().trim().max(40).nullable(),
+    name: text().trim().min(1, 'Required').max(120),
+    title: text().trim().max(160).nullable(),
+    phone: text().trim().max(40).nullable(),
     role: RoleSchema,
     active: z.boolean(),
     onCallEligible: z.boolean(),
@@ -63,13 +63,33 @@ export type UpdatePersonInput = z.infer<typeof UpdatePersonInputSchema>
 export const ResetPasswordInputSchema = z.object({ password })
 export type ResetPasswordInput = z.infer<typeof ResetPasswordInputSchema>
 
+const quietTime = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour').nullable()
+
+/** My own settings: the address I sign in with (escalation mail goes there too) and my quiet hours. */
+export const PreferencesSchema = z.object({ email: text(), quietStart: text().nullable(), quietEnd: text().nullable() })
+export type Preferences = z.infer<typeof PreferencesSchema>
+
+/** Changing the sign-in address needs the current password: a session left open must not be enough to take the account. */
+export const PreferencesInputSchema = z
+  .object({
+    email: email.optional(),
+    currentPassword: text().max(200).optional(),
+    quietStart: quietTime.optional(),
+    quietEnd: quietTime.optional(),
+  })
+  .refine((p) => (p.quietStart === undefined) === (p.quietEnd === undefined) && (p.quietStart === null) === (p.quietEnd === null), {
+    path: ['quietEnd'],
+    message: 'Give both the start and the end of quiet hours, or neither',
+  })
+export type PreferencesInput = z.infer<typeof PreferencesInputSchema>
+
 export const PersonIdParamSchema = z.object({ id: z.coerce.number().int().positive() })
 
 export const StaffMemberSchema = z.object({
   id: z.number().int(),
-  name: z.string(),
+  name: text(),
   role: RoleSchema,
   onCallEligible: z.boolean(),
-  phone: z.string().nullable(),
+  phone: text().nullable(),
 })
 export type StaffMember = z.infer<typeof StaffMemberSchema>

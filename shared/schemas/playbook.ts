@@ -1,8 +1,9 @@
 import { z } from 'zod'
+import { text } from './text'
 import { wallDateTime } from './calendar'
 import { AssigneeRuleSchema, CategorySchema, PrioritySchema } from './routine'
 
-const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
+const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 
 export const EVENT_KINDS = ['arrival', 'transfer', 'grading', 'weighing', 'sampling', 'harvest', 'dispatch', 'treatment', 'other'] as const
 export const EventKindSchema = z.enum(EVENT_KINDS)
@@ -17,9 +18,9 @@ export const FASTING_KINDS: readonly EventKind[] = ['transfer', 'grading', 'weig
  */
 export const PlaybookStepSchema = z
   .object({
-    title: z.string().trim().min(1, 'Required').max(160),
+    title: text().trim().min(1, 'Required').max(160),
     category: CategorySchema,
-    instructions: z.string().trim().max(4000).default(''),
+    instructions: text().trim().max(4000).default(''),
     dayOffset: z.number().int().min(-30).max(365).default(0),
     time: hhmm.nullable().default(null),
     minutesOffset: z.number().int().min(-7 * 1440).max(7 * 1440).default(0),
@@ -29,25 +30,25 @@ export const PlaybookStepSchema = z
     graceMinutes: z.number().int().min(0).max(7 * 1440).default(60),
     priority: PrioritySchema.default('routine'),
     assigneeRule: AssigneeRuleSchema.default({ kind: 'none' }),
-    requiredReadings: z.array(z.string().min(1)).max(30).default([]),
+    requiredReadings: z.array(text().min(1)).max(30).default([]),
     ladderId: z.number().int().nullable().default(null),
   })
   .refine((s) => s.time === null || s.minutesOffset === 0, { path: ['minutesOffset'], message: 'Give either a time of day or minutes from the start, not both' })
 export type PlaybookStep = z.output<typeof PlaybookStepSchema>
 
 export const PlaybookInputSchema = z.object({
-  name: z.string().trim().min(1, 'Required').max(160),
+  name: text().trim().min(1, 'Required').max(160),
   kind: EventKindSchema,
-  description: z.string().trim().max(4000).default(''),
+  description: text().trim().max(4000).default(''),
   fastingHours: z.number().int().min(0).max(168).default(0),
   steps: z.array(PlaybookStepSchema).min(1, 'A playbook needs at least one step').max(60),
 })
 export type PlaybookInput = z.input<typeof PlaybookInputSchema>
 export const PlaybookSchema = z.object({
   id: z.number().int(),
-  name: z.string(),
+  name: text(),
   kind: EventKindSchema,
-  description: z.string(),
+  description: text(),
   fastingHours: z.number().int(),
   steps: z.array(PlaybookStepSchema),
 })
@@ -59,11 +60,11 @@ const localDateTime = wallDateTime({ seconds: 'optional' })
 export const EventInputSchema = z
   .object({
     playbookId: z.number().int().positive(),
-    title: z.string().trim().min(1, 'Required').max(160),
+    title: text().trim().min(1, 'Required').max(160),
     localStart: localDateTime,
     tankIds: z.array(z.number().int().positive()).max(200).default([]),
     batchId: z.number().int().positive().nullable().default(null),
-    notes: z.string().trim().max(4000).default(''),
+    notes: text().trim().max(4000).default(''),
     /** Overrides the playbook's fasting window length for this event. */
     fastingHours: z.number().int().min(0).max(168).nullable().default(null),
   })
@@ -74,15 +75,15 @@ export const EventSchema = z.object({
   id: z.number().int(),
   playbookId: z.number().int(),
   kind: EventKindSchema,
-  title: z.string(),
-  localStart: z.string(),
-  startsAt: z.string(),
+  title: text(),
+  localStart: text(),
+  startsAt: text(),
   tankIds: z.array(z.number().int()),
   batchId: z.number().int().nullable(),
-  notes: z.string(),
+  notes: text(),
   status: z.enum(EVENT_STATUSES),
-  fastingFrom: z.string().nullable(),
-  fastingTo: z.string().nullable(),
+  fastingFrom: text().nullable(),
+  fastingTo: text().nullable(),
   taskCount: z.number().int(),
 })
 export type FacilityEvent = z.infer<typeof EventSchema>
@@ -90,6 +91,6 @@ export type FacilityEvent = z.infer<typeof EventSchema>
 export const UpdateEventInputSchema = z.object({
   localStart: localDateTime.optional(),
   tankIds: z.array(z.number().int().positive()).max(200).optional(),
-  notes: z.string().trim().max(4000).optional(),
+  notes: text().trim().max(4000).optional(),
   fastingHours: z.number().int().min(0).max(168).nullable().optional(),
 })

@@ -1,8 +1,9 @@
 import { z } from 'zod'
+import { text } from './text'
 import { calendarDate } from './calendar'
 
 const isoDate = calendarDate()
-const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
+const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 
 export const SHIFT_KINDS = ['day', 'early', 'late', 'weekend'] as const
 export const ShiftKindSchema = z.enum(SHIFT_KINDS)
@@ -10,7 +11,7 @@ export const ShiftKindSchema = z.enum(SHIFT_KINDS)
 export const ShiftSchema = z.object({
   id: z.number().int(),
   personId: z.number().int(),
-  personName: z.string(),
+  personName: text(),
   date: isoDate,
   start: hhmm,
   end: hhmm,
@@ -43,11 +44,11 @@ export type ShiftPatternInput = z.infer<typeof ShiftPatternInputSchema>
 export const OnCallDutySchema = z.object({
   id: z.number().int(),
   personId: z.number().int(),
-  personName: z.string(),
+  personName: text(),
   fromDate: isoDate,
   toDate: isoDate,
-  startsAt: z.string(),
-  endsAt: z.string(),
+  startsAt: text(),
+  endsAt: text(),
 })
 export type OnCallDuty = z.infer<typeof OnCallDutySchema>
 
@@ -63,7 +64,7 @@ export type RotationInput = z.infer<typeof RotationInputSchema>
 
 export const RotationResultSchema = z.object({
   duties: z.array(OnCallDutySchema),
-  weekendCounts: z.array(z.object({ personId: z.number().int(), personName: z.string(), weekends: z.number().int() })),
+  weekendCounts: z.array(z.object({ personId: z.number().int(), personName: text(), weekends: z.number().int() })),
 })
 export type RotationResult = z.infer<typeof RotationResultSchema>
 
@@ -71,7 +72,7 @@ export const COVERAGE_KINDS = ['tasks_without_shift', 'no_one_on_call', 'double_
 export const CoverageWarningSchema = z.object({
   kind: z.enum(COVERAGE_KINDS),
   date: isoDate,
-  message: z.string(),
+  message: text(),
   personId: z.number().int().nullable(),
   taskId: z.number().int().nullable(),
 })
@@ -82,6 +83,6 @@ export const RosterRangeQuerySchema = z
   .refine((q) => q.to >= q.from, { path: ['to'], message: 'Ends before it starts' })
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 93, { path: ['to'], message: 'Ask for at most 93 days at a time' })
 
-export const HandoverNoteInputSchema = z.object({ text: z.string().trim().min(1, 'Write something').max(4000) })
-export const HandoverNoteSchema = z.object({ id: z.number().int(), personId: z.number().int(), personName: z.string(), text: z.string(), createdAt: z.string() })
+export const HandoverNoteInputSchema = z.object({ text: text().trim().min(1, 'Write something').max(4000) })
+export const HandoverNoteSchema = z.object({ id: z.number().int(), personId: z.number().int(), personName: text(), text: text(), createdAt: text() })
 export type HandoverNote = z.infer<typeof HandoverNoteSchema>

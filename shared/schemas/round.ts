@@ -1,11 +1,12 @@
 import { z } from 'zod'
+import { text } from './text'
 import { calendarDate } from './calendar'
 import { TaskSchema } from './task'
 
 export const ReadingSpecSchema = z.object({
-  key: z.string(),
-  name: z.string(),
-  unit: z.string(),
+  key: text(),
+  name: text(),
+  unit: text(),
   decimals: z.number().int(),
   physicalMin: z.number(),
   physicalMax: z.number(),
@@ -26,9 +27,9 @@ export const RoundTaskSchema = TaskSchema.extend({
 export type RoundTask = z.infer<typeof RoundTaskSchema>
 
 export const RoundSchema = z.object({
-  date: z.string(),
-  timeZone: z.string(),
-  areas: z.array(z.object({ id: z.number().int(), name: z.string(), roundOrder: z.number().int(), quarantine: z.boolean() })),
+  date: text(),
+  timeZone: text(),
+  areas: z.array(z.object({ id: z.number().int(), name: text(), roundOrder: z.number().int(), quarantine: z.boolean() })),
   tasks: z.array(RoundTaskSchema),
 })
 export type Round = z.infer<typeof RoundSchema>

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 import { calendarDate, wallDateTime } from './calendar'
 import { RoleSchema } from './person'
 
@@ -37,47 +38,47 @@ const isoDate = calendarDate()
 
 export const RoutineSchema = z.object({
   id: z.number().int(),
-  name: z.string(),
+  name: text(),
   category: CategorySchema,
-  instructions: z.string(),
+  instructions: text(),
   targetKind: TargetKindSchema,
   targetIds: z.array(z.number().int()),
   onlyInUse: z.boolean(),
-  rrule: z.string(),
+  rrule: text(),
   dtstart: localDateTime,
   durationMinutes: z.number().int(),
   windowBeforeMinutes: z.number().int(),
   graceMinutes: z.number().int(),
   priority: PrioritySchema,
   assigneeRule: AssigneeRuleSchema,
-  requiredReadings: z.array(z.string()),
+  requiredReadings: z.array(text()),
   activeFrom: isoDate.nullable(),
   activeTo: isoDate.nullable(),
   paused: z.boolean(),
   skipDates: z.array(isoDate),
   ladderId: z.number().int().nullable(),
   /** Why the last planning run could not make tasks from this routine; null when it could. */
-  planningError: z.string().nullable(),
+  planningError: text().nullable(),
   version: z.number().int(),
 })
 export type Routine = z.infer<typeof RoutineSchema>
 
 export const RoutineInputSchema = z
   .object({
-    name: z.string().trim().min(1, 'Required').max(160),
+    name: text().trim().min(1, 'Required').max(160),
     category: CategorySchema,
-    instructions: z.string().trim().max(4000).default(''),
+    instructions: text().trim().max(4000).default(''),
     targetKind: TargetKindSchema,
     targetIds: z.array(z.number().int().positive()).max(500).default([]),
     onlyInUse: z.boolean().default(true),
-    rrule: z.string().trim().min(1, 'Required').max(500),
+    rrule: text().trim().min(1, 'Required').max(500),
     dtstart: localDateTime,
     durationMinutes: z.number().int().min(1, 'At least 1 minute').max(24 * 60).default(5),
     windowBeforeMinutes: z.number().int().min(0).max(24 * 60).default(30),
     graceMinutes: z.number().int().min(0).max(7 * 24 * 60).default(60),
     priority: PrioritySchema.default('routine'),
     assigneeRule: AssigneeRuleSchema.default({ kind: 'none' }),
-    requiredReadings: z.array(z.string().min(1)).max(30).default([]),
+    requiredReadings: z.array(text().min(1)).max(30).default([]),
     activeFrom: isoDate.nullable().default(null),
     activeTo: isoDate.nullable().default(null),
     paused: z.boolean().default(false),

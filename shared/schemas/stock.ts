@@ -1,4 +1,6 @@
 import { z } from 'zod'
+// This file's own text(max) trims and caps; every field still starts from the shared textField().
+import { text as textField } from './text'
 
 /** Every kind of change to a batch's numbers; the register is only ever added to. */
 export const MOVEMENT_KINDS = ['arrival', 'transfer', 'grading', 'mortality', 'cull', 'sampling', 'dispatch', 'correction'] as const
@@ -18,11 +20,13 @@ export const UNKNOWN_CAUSE = 'unknown'
 export const OTHER_CAUSE = 'other'
 /** The round's reading whose value becomes a mortality movement. */
 export const MORTALITY_READING = 'mortalities'
+/** What a technician may record; arrivals, gradings, dispatches and corrections are for supervisors and managers. */
+export const TECHNICIAN_MOVEMENT_KINDS: readonly MovementKind[] = ['mortality', 'cull', 'sampling', 'transfer']
 
 export const RoundMortalityDetailSchema = z
   .object({
-    cause: z.string().trim().min(1).max(80).default(UNKNOWN_CAUSE),
-    causeText: z.string().trim().max(500).optional(),
+    cause: textField().trim().min(1).max(80).default(UNKNOWN_CAUSE),
+    causeText: textField().trim().max(500).optional(),
     necropsy: z.boolean().default(false),
   })
   .superRefine((d, ctx) => {
@@ -32,10 +36,10 @@ export type RoundMortalityDetail = z.input<typeof RoundMortalityDetailSchema>
 
 const id = z.number().int().positive()
 const count = z.number({ error: 'Enter a number' }).int('Whole fish only').positive('Must be at least 1').max(10_000_000)
-const text = (max: number) => z.string().trim().max(max)
+const text = (max: number) => textField().trim().max(max)
 const base = z.object({
   batchId: id,
-  occurredAt: z.string().datetime({ offset: true }).optional(),
+  occurredAt: textField().datetime({ offset: true }).optional(),
   note: text(2000).optional(),
 })
 const fromTank = { fromTankId: id }
@@ -85,31 +89,31 @@ export type ParsedMovementInput = z.output<typeof MovementInputSchema>
 export const MovementSchema = z.object({
   id: z.number().int(),
   batchId: z.number().int(),
-  batchCode: z.string(),
+  batchCode: textField(),
   kind: z.enum(MOVEMENT_KINDS),
-  occurredAt: z.string(),
+  occurredAt: textField(),
   fromTankId: z.number().int().nullable(),
   toTankId: z.number().int().nullable(),
-  fromTankCode: z.string().nullable(),
-  toTankCode: z.string().nullable(),
+  fromTankCode: textField().nullable(),
+  toTankCode: textField().nullable(),
   /** Fish moved (always positive); for a correction, the signed change. */
   count: z.number().int(),
   meanWeightG: z.number().nullable(),
-  origin: z.string().nullable(),
-  permitRef: z.string().nullable(),
-  healthCertificateRef: z.string().nullable(),
+  origin: textField().nullable(),
+  permitRef: textField().nullable(),
+  healthCertificateRef: textField().nullable(),
   transportWater: TransportWaterSchema.nullable(),
-  destination: z.string().nullable(),
-  reason: z.string().nullable(),
-  cause: z.string().nullable(),
-  causeText: z.string().nullable(),
+  destination: textField().nullable(),
+  reason: textField().nullable(),
+  cause: textField().nullable(),
+  causeText: textField().nullable(),
   necropsy: z.boolean(),
   correctsId: z.number().int().nullable(),
   /** The round completion (or its amendment) that wrote it, when it came from the round. */
-  completionId: z.string().nullable(),
-  note: z.string().nullable(),
-  personName: z.string(),
-  createdAt: z.string(),
+  completionId: textField().nullable(),
+  note: textField().nullable(),
+  personName: textField(),
+  createdAt: textField(),
 })
 export type Movement = z.infer<typeof MovementSchema>
 
@@ -123,20 +127,23 @@ export type StockFigures = z.infer<typeof StockFiguresSchema>
 
 export const TankStockSchema = StockFiguresSchema.extend({
   tankId: z.number().int(),
-  tankCode: z.string(),
+  tankCode: textField(),
   volumeL: z.number(),
-  batches: z.array(StockFiguresSchema.extend({ batchId: z.number().int(), batchCode: z.string(), meanWeightG: z.number() })),
+  batches: z.array(StockFiguresSchema.extend({ batchId: z.number().int(), batchCode: textField(), meanWeightG: z.number() })),
 })
 export type TankStock = z.infer<typeof TankStockSchema>
 
 export const BatchStockSchema = StockFiguresSchema.extend({
   batchId: z.number().int(),
-  batchCode: z.string(),
+  batchCode: textField(),
   meanWeightG: z.number(),
   onRegister: z.boolean(),
-  tanks: z.array(StockFiguresSchema.extend({ tankId: z.number().int(), tankCode: z.string(), volumeL: z.number() })),
+  tanks: z.array(StockFiguresSchema.extend({ tankId: z.number().int(), tankCode: textField(), volumeL: z.number() })),
 })
 export type BatchStock = z.infer<typeof BatchStockSchema>
+
+/** Fish on the register per tank id (JSON object keys are strings). */
+export const OnHandByTankSchema = z.record(textField(), z.number().int())
 
 export const MovementListQuerySchema = z.object({
   batchId: z.coerce.number().int().positive().optional(),
@@ -145,7 +152,7 @@ export const MovementListQuerySchema = z.object({
 
 export const StockSettingsSchema = z.object({
   /** The facility's own short list of causes of death; "unknown" and free text are always offered. */
-  mortalityCauses: z.array(z.string().trim().min(1).max(80)).max(40),
+  mortalityCauses: z.array(textField().trim().min(1).max(80)).max(40),
   /** Deaths in 7 days, as % of the batch, above which a flag is raised and an incident proposed. */
   mortalityWeekPct: z.number().positive().max(100),
   notifyWelfareOfficerHours: z.number().int().positive().max(24 * 30),

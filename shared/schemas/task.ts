@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from './text'
 import { calendarDate, wallDateTime } from './calendar'
 import { BandSchema } from './parameter'
 import { CategorySchema, PrioritySchema, TargetKindSchema } from './routine'
@@ -15,31 +16,31 @@ export const TaskSchema = z.object({
   routineId: z.number().int().nullable(),
   /** The playbook event that made it, if any. */
   eventId: z.number().int().nullable().optional(),
-  title: z.string(),
+  title: text(),
   category: CategorySchema,
-  instructions: z.string(),
+  instructions: text(),
   priority: PrioritySchema,
   targetKind: TargetKindSchema,
   targetId: z.number().int().nullable(),
-  targetLabel: z.string(),
+  targetLabel: text(),
   tankId: z.number().int().nullable(),
   areaId: z.number().int().nullable(),
   localDate: isoDate,
-  localTime: z.string(),
-  dueAt: z.string(),
-  windowStartAt: z.string(),
-  graceUntil: z.string(),
+  localTime: text(),
+  dueAt: text(),
+  windowStartAt: text(),
+  graceUntil: text(),
   durationMinutes: z.number().int(),
   status: TaskStatusSchema,
   assigneeId: z.number().int().nullable(),
-  assigneeName: z.string().nullable(),
-  requiredReadings: z.array(z.string()),
+  assigneeName: text().nullable(),
+  requiredReadings: z.array(text()),
   flag: BandSchema.nullable(),
   lateMinutes: z.number().int().nullable(),
-  completedAt: z.string().nullable(),
+  completedAt: text().nullable(),
   completedById: z.number().int().nullable(),
-  completedByName: z.string().nullable(),
-  heldReason: z.string().nullable(),
+  completedByName: text().nullable(),
+  heldReason: text().nullable(),
   recheckOfTaskId: z.number().int().nullable(),
   version: z.number().int(),
 })
@@ -69,9 +70,9 @@ export const TaskListQuerySchema = z
 export type TaskListQuery = z.infer<typeof TaskListQuerySchema>
 
 export const CreateTaskInputSchema = z.object({
-  title: z.string().trim().min(1, 'Required').max(160),
+  title: text().trim().min(1, 'Required').max(160),
   category: CategorySchema,
-  instructions: z.string().trim().max(4000).default(''),
+  instructions: text().trim().max(4000).default(''),
   priority: PrioritySchema.default('routine'),
   targetKind: TargetKindSchema.exclude(['area_tanks']),
   targetId: z.number().int().positive().nullable().default(null),
@@ -79,7 +80,7 @@ export const CreateTaskInputSchema = z.object({
   durationMinutes: z.number().int().min(1).max(24 * 60).default(10),
   graceMinutes: z.number().int().min(0).max(7 * 24 * 60).default(60),
   assigneeId: z.number().int().positive().nullable().default(null),
-  requiredReadings: z.array(z.string().min(1)).max(30).default([]),
+  requiredReadings: z.array(text().min(1)).max(30).default([]),
 })
 export type CreateTaskInput = z.input<typeof CreateTaskInputSchema>
 

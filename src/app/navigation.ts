@@ -1,6 +1,6 @@
 import {
   BarChart3, Bell, BookOpen, CalendarDays, ClipboardCheck, Cylinder, Fish, LayoutGrid, Repeat, Users, CalendarClock, Mail, Settings,
-  Printer, type LucideIcon,
+  Printer, Siren, type LucideIcon,
 } from 'lucide-react'
 import type { Role } from '#shared/schemas/person'
 
@@ -25,6 +25,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/playbooks', label: 'Playbooks', icon: BookOpen, roles: ['manager', 'supervisor', 'observer'] },
   { to: '/oxygen', label: 'Oxygen', icon: Cylinder, roles: ['manager', 'supervisor', 'technician'] },
   { to: '/roster', label: 'Roster', icon: CalendarClock, roles: ['manager', 'supervisor'] },
+  { to: '/incidents', label: 'Incidents', icon: Siren, roles: everyone },
   { to: '/reports', label: 'Reports', icon: BarChart3, roles: ['manager', 'supervisor', 'observer'] },
   { to: '/round-sheet', label: 'Round sheet', icon: Printer, roles: ['manager', 'supervisor', 'technician'] },
   { to: '/people', label: 'People', icon: Users, roles: ['manager'] },

@@ -112,6 +112,20 @@ export function createRouter(queryClient: QueryClient) {
               },
             },
             {
+              path: 'incidents',
+              lazy: async () => {
+                const m = await import('./routes/incidents-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'incidents/:id',
+              lazy: async () => {
+                const m = await import('./routes/incident-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
               path: 'settings',
               lazy: async () => {
                 const m = await import('./routes/settings-page')

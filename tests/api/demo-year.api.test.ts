@@ -30,7 +30,13 @@ describe('demo facility', () => {
     const [{ n, first }] = await ds.query('SELECT COUNT(*) AS n, MIN(localStart) AS first FROM tasks WHERE localDate = ?', [today])
     expect(Number(n)).toBeGreaterThan(50)
     expect(first).toBe(`${today}T07:30:00`)
-  })
+    // The demo's stock register holds what its batches say they hold.
+    const batches: Array<{ id: number; count: number }> = await ds.query('SELECT id, count FROM batches')
+    for (const b of batches) {
+      const [{ held }] = await ds.query("SELECT COALESCE(SUM(CASE WHEN kind IN ('arrival', 'correction') THEN count WHEN kind IN ('transfer', 'grading') THEN 0 ELSE -count END), 0) AS held FROM stock_movements WHERE batchId = ?", [b.id])
+      expect(Number(held)).toBe(b.count)
+    }
+  }, 120_000)
 
   test('when a year of horizon is materialised, then it finishes, reports progress and its count, and a rerun adds nothing', async () => {
     const progress: number[] = []

@@ -100,4 +100,36 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     const after = (await supervisor.get(`/api/incidents/${incident.id}`).expect(200)).body as Incident
     expect(after.escalatedAt).toBe(past.toISOString())
   })
+
+  test('each deadline escalates once on its own: the welfare officer at 24 h even before a decision, the full report at 7 days; a deadline met stops its alert', async () => {
+    const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9300 * MIN))
+    const supervisor = await signInAs('supervisor')
+    const [incident] = await incidentsOf(task.id, supervisor)
+    const alertsOf = async (kind: string) => db().getRepository(AlertEntity).findBy({ taskId: task.id, kind: kind as never })
+    const welfareLate = new Date(new Date(incident.welfareDueAt).getTime() + MIN)
+    // Other files' incidents may be due at the same ticks, so only this incident's alerts are counted.
+    await escalateOverdueIncidents(welfareLate)
+    await escalateOverdueIncidents(new Date(welfareLate.getTime() + 10 * MIN))
+    expect(await alertsOf('incident_welfare_overdue')).toHaveLength(1)
+    expect(((await supervisor.get(`/api/incidents/${incident.id}`)).body as Incident).welfareEscalatedAt).toBe(welfareLate.toISOString())
+    // Still only proposed: the committee deadline waits for a confirmed incident.
+    expect(await alertsOf('incident_overdue')).toHaveLength(0)
+
+    await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Tank was not checked all morning' }).expect(200)
+    const told = await supervisor.patch(`/api/incidents/${incident.id}`).send({ welfareNotifiedAt: new Date(welfareLate.getTime() + 5 * MIN).toISOString() }).expect(200)
+    expect(told.body.welfareNotifiedAt).not.toBeNull()
+    expect((await alertsOf('incident_welfare_overdue'))[0].closedAt).not.toBeNull()
+
+    const reportLate = new Date(new Date(incident.reportDueAt).getTime() + MIN)
+    await escalateOverdueIncidents(reportLate) // the committee and the full report, both unmet
+    await escalateOverdueIncidents(new Date(reportLate.getTime() + HOUR))
+    expect(await alertsOf('incident_overdue')).toHaveLength(1)
+    expect(await alertsOf('incident_report_overdue')).toHaveLength(1)
+    const unfinished = await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', status: 'closed' }).expect(400)
+    expect(unfinished.body.error.fieldErrors).toHaveProperty(['correctiveActions'])
+    expect(((await supervisor.get(`/api/incidents/${incident.id}`)).body as Incident).status).toBe('open')
+    const closed = (await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', correctiveActions: 'Swaps go through the roster page', status: 'closed' }).expect(200)).body as Incident
+    expect(closed.reportEscalatedAt).toBe(reportLate.toISOString())
+    expect((await alertsOf('incident_report_overdue'))[0].closedAt).not.toBeNull()
+  })
 })

@@ -89,3 +89,23 @@ describe('GET /api/me', () => {
     expect(res.body.error.code).toBe('unauthenticated')
   })
 })
+
+describe('a session in use', () => {
+  test('its expiry is pushed a week ahead by the first request, then at most once a minute, not by every request', async () => {
+    const person = await t.createPersonWithRole('technician')
+    const agent = request.agent(t.app)
+    await agent.post('/api/session').send({ email: person.email, password: TEST_PASSWORD }).expect(200)
+    const [{ sid }] = (await t.dataSource.query("SELECT session_id AS sid FROM sessions WHERE data LIKE ? ORDER BY expires DESC LIMIT 1", [`%"id":${person.id},%`])) as Array<{ sid: string }>
+    const soon = Math.floor(Date.now() / 1000) + 100
+    const expiry = async () => Number(((await t.dataSource.query('SELECT expires FROM sessions WHERE session_id = ?', [sid])) as Array<{ expires: number }>)[0].expires)
+
+    await t.dataSource.query('UPDATE sessions SET expires = ? WHERE session_id = ?', [soon, sid])
+    await agent.get('/api/me').expect(200)
+    expect(await expiry()).toBeGreaterThan(soon + 6 * 24 * 3600)
+
+    await t.dataSource.query('UPDATE sessions SET expires = ? WHERE session_id = ?', [soon, sid])
+    await agent.get('/api/me').expect(200)
+    await agent.get('/api/me').expect(200)
+    expect(await expiry()).toBe(soon)
+  })
+})

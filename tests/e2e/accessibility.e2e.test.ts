@@ -3,7 +3,9 @@ import { DateTime } from 'luxon'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { batches } from '#server/modules/facility/catalogues'
 import { createRoutine } from '#server/modules/routines/routines.service'
+import { listIncidents, proposeIncident } from '#server/modules/incidents/incidents.service'
 import { addHandoverNote } from '#server/modules/roster/on-call.service'
+import { recordMovement } from '#server/modules/stock/stock.service'
 import { toPerson } from '#server/modules/people/person.mapper'
 import { getPersonRow } from '#server/modules/people/people.service'
 import { DESKTOP, PHONE, startBrowserSession, type BrowserSession } from '#tests/support/browser'
@@ -26,10 +28,13 @@ beforeAll(async () => {
   const batch = await batches.create({ code: 'B-A11Y', species: 'Barramundi', origin: SCRIPT, arrivalDate: today, count: 100, meanWeightG: 5, tankIds: [tanks[0].id], status: 'active', feedRatePct: 2 })
   const routine = await createRoutine(routineInput({ name: `Routine ${SCRIPT}`, targetIds: [tanks[0].id], instructions: SCRIPT }))
   await addHandoverNote(toPerson(await getPersonRow(manager.id)), { text: `Watch bin 2 ${SCRIPT}` })
+  await recordMovement(toPerson(await getPersonRow(manager.id)), { kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT })
+  await proposeIncident({ source: 'missed_task', sourceKey: `a11y:${task.id}`, taskId: task.id, title: `Missed ${SCRIPT}`, whatHappened: SCRIPT, startedAt: new Date(), tankIds: [tanks[0].id] }, new Date())
   pages = [
     '/round', `/board?date=${today}`, '/calendar', '/on-call', '/tanks', `/tanks/${tanks[0].id}`, '/routines', `/routines/${routine.id}`,
     '/routines/new', '/playbooks', '/oxygen', '/calculators', '/roster', '/reports', '/audit', `/round-sheet?date=${today}&areaId=${area.id}`,
     `/labels?areaId=${area.id}`, '/people', '/outbox', '/settings', `/tasks/${task.id}`, `/batches/${batch.id}`,
+    '/incidents', `/incidents/${(await listIncidents())[0].id}`,
   ]
 }, 120_000)
 afterAll(() => s?.close())

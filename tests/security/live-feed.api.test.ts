@@ -29,6 +29,12 @@ describe('the live feed needs a signed-in person', () => {
     expect(await leaked).toBe(false)
   })
 
+  test('an anonymous client on the websocket transport alone, with an empty sid, is refused too', async () => {
+    const anonymous = live.connect({ query: { sid: '' }, transports: ['websocket'] })
+    await expect(connected(anonymous)).rejects.toBeInstanceOf(Error)
+    expect(anonymous.connected).toBe(false)
+  })
+
   test('a signed-in cookie sent from a page on another site is refused at the handshake', async () => {
     const { cookie } = await live.signIn('supervisor')
     const foreign = live.connect({ extraHeaders: { cookie, origin: 'http://attacker.invalid' } })

@@ -94,6 +94,8 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/reports/compliance': MSO,
   'GET /api/reports/responses': MSO,
   'GET /api/reports/welfare': MSO,
+  'GET /api/reports/stock': MSO,
+  'GET /api/reports/incidents': MSO,
   'GET /api/tanks/:id/overview': ALL,
   'GET /api/tanks/:id/readings': ALL,
   'GET /api/audit': MSO,

@@ -37,6 +37,15 @@ describe('a rule with no dates is refused quickly, and the server keeps answerin
     expect(await db().getRepository(RoutineEntity).countBy({ rrule })).toBe(0)
   })
 
+  test.each([
+    ['FREQ=MINUTELY;INTERVAL=10;BYMINUTE=17', /never reaches its BYMINUTE/],
+    ['FREQ=HOURLY;INTERVAL=2;BYHOUR=8,10', /never reaches its BYHOUR/],
+    ['FREQ=SECONDLY;BYMINUTE=53;BYMONTHDAY=30', /cannot plan FREQ=SECONDLY with BYHOUR or BYMINUTE/],
+  ])('%s, which rrule would step through for ever inside one call, is refused before it is expanded', async (rrule, reason) => {
+    const res = await supervisor.post('/api/routines').send(routineInput({ rrule, targetIds: tankIds })).expect(400)
+    expect(res.body.error.fieldErrors.rrule[0]).toMatch(reason)
+  })
+
   test('a rule repeating every minute is refused: it would make tens of thousands of tasks', async () => {
     const res = await supervisor.post('/api/routines').send(routineInput({ rrule: 'FREQ=MINUTELY', targetIds: tankIds })).expect(400)
     expect(res.body.error.fieldErrors.rrule[0]).toMatch(/repeats too often/)

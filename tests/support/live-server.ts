@@ -80,16 +80,20 @@ export const disconnected = (socket: Socket, ms = 3000) =>
 
 /**
  * Speaks the socket.io protocol by hand over long-polling, as an attacker's script would:
- * an engine handshake with the given query, then a connect to the main namespace.
- * Returns how far it got; 'namespace' means the feed would flow to this client.
+ * an engine handshake with exactly the given query string, then a connect to the main
+ * namespace. Returns how far it got; 'namespace' means the feed would flow to this client.
  */
-export async function rawPollingConnect(url: string, query: string, headers: Record<string, string> = {}): Promise<'refused' | 'engine' | 'namespace'> {
-  const base = `${url}/socket.io/?EIO=4&transport=polling`
-  const handshake = await fetch(`${base}&${query}`, { headers })
+export async function rawSocketConnect(url: string, query: string, headers: Record<string, string> = {}): Promise<'refused' | 'engine' | 'namespace'> {
+  const handshake = await fetch(`${url}/socket.io/?${query}`, { headers })
   const text = await handshake.text()
   const sid = /"sid":"([^"]+)"/.exec(text)?.[1]
   if (handshake.status !== 200 || !sid) return 'refused'
-  await fetch(`${base}&sid=${sid}`, { method: 'POST', body: '40', headers: { ...headers, 'content-type': 'text/plain;charset=UTF-8' } })
-  const answer = await (await fetch(`${base}&sid=${sid}`, { headers })).text()
+  const session = `${url}/socket.io/?EIO=4&transport=polling&sid=${encodeURIComponent(sid)}`
+  await fetch(session, { method: 'POST', body: '40', headers: { ...headers, 'content-type': 'text/plain;charset=UTF-8' } })
+  const answer = await (await fetch(session, { headers })).text()
   return answer.split('\u001e').some((packet) => packet.startsWith('40')) ? 'namespace' : 'engine'
 }
+
+/** The usual polling handshake (EIO=4, polling) with extra query parameters. */
+export const rawPollingConnect = (url: string, query: string, headers: Record<string, string> = {}) =>
+  rawSocketConnect(url, `EIO=4&transport=polling&${query}`, headers)

@@ -3,7 +3,7 @@ import { describe, expect, test } from 'vitest'
 import { MOVEMENT_KINDS } from '#shared/schemas/stock'
 import { biomassKg, stockingDensityKgM3 } from '#shared/stock/density'
 import { applyMovement, balances, totalOnHand, type LedgerEntry } from '#shared/stock/ledger'
-import { periodFigures, type DatedEntry } from '#shared/stock/period-report'
+import { periodFigures, tankPeriodFigures, type DatedEntry } from '#shared/stock/period-report'
 import reference from '../fixtures/stocking_transport.json'
 
 const TANKS = [1, 2, 3]
@@ -44,6 +44,10 @@ describe('the stock register arithmetic', () => {
         expect(balances(accepted)).toEqual(current)
         const [year] = periodFigures(accepted, '2026-01-01T00:00:00.000Z', '2027-01-01T00:00:00.000Z')
         if (year) expect(year.closing).toBe(inMinusOut)
+        // Split per tank, from a cut mid-sequence: each tank closes on what the register holds, and moves between tanks cancel.
+        const perTank = tankPeriodFigures(accepted, new Date(Date.UTC(2026, 0, 1) + 20 * 3_600_000).toISOString(), '2027-01-01T00:00:00.000Z')
+        for (const t of perTank) expect(t.closing).toBe(current.get(`${t.batchId}:${t.tankId}`) ?? 0)
+        expect(perTank.reduce((n, t) => n + t.movedIn, 0)).toBe(perTank.reduce((n, t) => n + t.movedOut, 0))
       }),
       { numRuns: 1000 },
     )
@@ -91,6 +95,16 @@ describe('stocking density', () => {
     // 350 fish of 2 kg in a 1,000 L tank: 700 kg in 1 m³; 500 fish of 2 kg: 1,000 kg.
     expect(stockingDensityKgM3(biomassKg(350, 2000), 1000)).toBeCloseTo(700, 6)
     expect(stockingDensityKgM3(biomassKg(500, 2000), 1000)).toBeCloseTo(1000, 6)
+  })
+
+  test('the same handbook’s cooler-water load, 5.0 lb per gallon at 55 °F (Piper et al. 1982, p.362 rule: +25 % per 10 °F cooler), is 599.1 kg/m³', () => {
+    const row = reference.rows.find((r) => r.quantity === 'catfish load at 55 F') as { expected_lb_per_gal: number; source: string }
+    expect(row.source).toMatch(/^Piper et al\. \(1982\)/)
+    // 600 fish of 2.5 lb in a 300-gallon tank: 1,500 lb in 300 gal is 5.0 lb/gal.
+    const density = stockingDensityKgM3(biomassKg(600, 2.5 * 453.59237), 300 * 3.785411784)!
+    const byHand = (row.expected_lb_per_gal * 0.45359237) / 3.785411784 * 1000
+    expect(byHand).toBeCloseTo(599.1, 1)
+    expect(density).toBeCloseTo(byHand, 6)
   })
 
   test('an empty or volume-less tank has no density', () => {

@@ -30,3 +30,19 @@ export function signInLimiters(config: AppConfig) {
     }),
   ]
 }
+
+/**
+ * Failed requests that check a signed-in person's password (changing the sign-in address) are
+ * limited per person like sign-ins per account, so an open session cannot be used to guess it.
+ */
+export function passwordCheckLimiter(config: AppConfig) {
+  return rateLimit({
+    windowMs: WINDOW_MS,
+    skipSuccessfulRequests: true,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    limit: config.signInLimitPerAccount,
+    keyGenerator: (req) => `person:${String(req.user?.id)}`,
+    message: { error: { code: 'rate_limited', message: `Too many wrong passwords. Please wait ${WINDOW_MS / 60000} minutes and try again.` } },
+  })
+}

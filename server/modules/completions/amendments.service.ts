@@ -5,7 +5,7 @@ import { AmendmentInputSchema } from '#shared/schemas/completion'
 import type { Person } from '#shared/schemas/person'
 import { MORTALITY_READING } from '#shared/schemas/stock'
 import { db } from '../../db/data-source'
-import { forbidden, notFound, validationError } from '../../lib/errors'
+import { notFound, validationError } from '../../lib/errors'
 import { recordChange } from '../../realtime/change-outbox'
 import { audit } from '../audit/audit.service'
 import { ParameterEntity } from '../parameters/parameter.entities'
@@ -14,6 +14,7 @@ import { getTaskRow } from '../tasks/tasks.service'
 import { AmendmentEntity } from './amendment.entity'
 import { CompletionEntity, ReadingEntity } from './completion.entities'
 import { readingContextFor } from './reading-context'
+import { assertMayCorrect } from './who-may-complete'
 
 /**
  * A correction never overwrites: the amendment keeps its reason and author, the original
@@ -23,9 +24,7 @@ export async function amendCompletion(completionId: string, person: Person, inpu
   const data = AmendmentInputSchema.parse(input)
   const completion = await db().getRepository(CompletionEntity).findOneBy({ id: completionId })
   if (!completion) throw notFound('That completion')
-  if (person.role === 'observer' || (person.role === 'technician' && completion.personId !== person.id)) {
-    throw forbidden('Only the person who did the work, a supervisor or a manager can correct it.')
-  }
+  assertMayCorrect(completion.personId, person)
   const task = await getTaskRow(completion.taskId)
   const parameters = new Map((await db().getRepository(ParameterEntity).find()).map((p) => [p.key, p]))
   const fieldErrors: Record<string, string[]> = {}

@@ -77,7 +77,7 @@ export const ReadingEntity = new EntitySchema<ReadingRow>({
   indices: [{ columns: ['tankId', 'parameterKey', 'takenAt'] }, { columns: ['systemId', 'parameterKey', 'takenAt'] }, { columns: ['completionId'] }],
 })
 
-export const ALERT_KINDS = ['critical_reading', 'missed_task', 'incident_overdue'] as const
+export const ALERT_KINDS = ['critical_reading', 'missed_task', 'incident_overdue', 'incident_welfare_overdue', 'incident_report_overdue'] as const
 export interface AlertRow {
   id: number
   taskId: number

@@ -1,7 +1,9 @@
 import { Router } from 'express'
 import multer from 'multer'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { PHOTO_CACHE_CONTROL } from '../../lib/cache-control'
 import type { AppConfig } from '../../lib/config'
 import { AppError } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
@@ -26,7 +28,7 @@ export function completionsRouter(config: AppConfig) {
   })
 
   router.post('/completions/:completionId/amendments', doers, async (req, res) => {
-    const { completionId } = z.object({ completionId: z.string().uuid() }).parse(req.params)
+    const { completionId } = z.object({ completionId: text().uuid() }).parse(req.params)
     res.status(201).json(await amendCompletion(completionId, req.user!, req.body))
   })
 
@@ -37,7 +39,7 @@ export function completionsRouter(config: AppConfig) {
   router.post('/tasks/:id/photos', doers, upload.single('photo'), async (req, res) => {
     const { id } = IdParamSchema.parse(req.params)
     if (!req.file) throw new AppError(400, 'validation_failed', 'Attach a photo in the "photo" field.', { fieldErrors: { photo: ['Required'] } })
-    const photo = await savePhoto(config.uploadDir, id, req.user!.id, req.file)
+    const photo = await savePhoto(config.uploadDir, id, req.user!, req.file)
     res.status(201).json({ id: photo.id, mimeType: photo.mimeType, sizeBytes: photo.sizeBytes })
   })
 
@@ -47,9 +49,10 @@ export function completionsRouter(config: AppConfig) {
   })
 
   router.get('/photos/:photoId', signedIn, async (req, res) => {
-    const { photoId } = z.object({ photoId: z.string().uuid() }).parse(req.params)
+    const { photoId } = z.object({ photoId: text().uuid() }).parse(req.params)
     const file = await photoFile(config.uploadDir, photoId)
-    res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow' })
+    res.setHeader('cache-control', PHOTO_CACHE_CONTROL)
+    res.type(file.mimeType).sendFile(file.path, { dotfiles: 'allow', cacheControl: false })
   })
 
   return router

@@ -16,6 +16,7 @@ import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
 import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
 import { createRecheck, startCriticalAlert } from './follow-ups'
+import { proposeIncidentsAfterCompletion } from './incident-follow-ups'
 import { readingContextFor, type ReadingContext } from './reading-context'
 import { assertMayComplete } from './who-may-complete'
 
@@ -75,6 +76,7 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
     const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
     if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
+    await proposeIncidentsAfterCompletion(updated, flag, readings.rows, mortality?.plan, data.completionId, new Date())
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })

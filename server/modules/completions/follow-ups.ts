@@ -1,4 +1,5 @@
 import { DateTime } from 'luxon'
+import { IsNull } from 'typeorm'
 import type { Reading } from '#shared/schemas/completion'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
@@ -47,8 +48,15 @@ export async function startCriticalAlert(task: TaskRow, critical: Reading[]) {
   logger.warn({ taskId: task.id, detail }, 'critical reading: escalation started')
 }
 
-/** An incident past its committee deadline climbs the ladder of the task it came from, once. */
-export async function startIncidentAlert(taskId: number, detail: string, at: Date) {
-  await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId, kind: 'incident_overdue', detail: detail.slice(0, 500), ladderId: null, startedAt: at }).orIgnore().execute()
-  logger.warn({ taskId, detail }, 'incident overdue: escalation started')
+export type IncidentAlertKind = 'incident_overdue' | 'incident_welfare_overdue' | 'incident_report_overdue'
+
+/** An incident past one of its deadlines climbs the ladder of the task it came from, once per deadline. */
+export async function startIncidentAlert(taskId: number, detail: string, at: Date, kind: IncidentAlertKind = 'incident_overdue') {
+  await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId, kind, detail: detail.slice(0, 500), ladderId: null, startedAt: at }).orIgnore().execute()
+  logger.warn({ taskId, kind, detail }, 'incident overdue: escalation started')
+}
+
+/** The deadline was met after all: its alert stops climbing. */
+export async function closeIncidentAlert(taskId: number, kind: IncidentAlertKind, at: Date) {
+  await db().getRepository(AlertEntity).update({ taskId, kind, closedAt: IsNull() }, { closedAt: at })
 }

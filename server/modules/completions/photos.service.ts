@@ -1,10 +1,12 @@
 import { randomUUID } from 'node:crypto'
 import { mkdir, writeFile } from 'node:fs/promises'
 import path from 'node:path'
+import type { Person } from '#shared/schemas/person'
 import { db } from '../../db/data-source'
 import { AppError, notFound } from '../../lib/errors'
 import { getTaskRow } from '../tasks/tasks.service'
 import { PhotoEntity } from './completion.entities'
+import { assertMayAddPhoto } from './who-may-complete'
 
 export const PHOTO_MAX_BYTES = 8 * 1024 * 1024
 const EXTENSIONS: Record<string, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' }
@@ -17,8 +19,8 @@ function sniff(buffer: Buffer): string | null {
   return null
 }
 
-export async function savePhoto(uploadDir: string, taskId: number, personId: number, file: { buffer: Buffer; mimetype: string }) {
-  await getTaskRow(taskId)
+export async function savePhoto(uploadDir: string, taskId: number, person: Person, file: { buffer: Buffer; mimetype: string }) {
+  assertMayAddPhoto(await getTaskRow(taskId), person)
   const mimeType = sniff(file.buffer)
   if (!mimeType) throw new AppError(415, 'unsupported_media_type', 'Photos must be JPEG, PNG or WebP images.')
   const id = randomUUID()
@@ -26,7 +28,7 @@ export async function savePhoto(uploadDir: string, taskId: number, personId: num
   const fileName = `${id}.${EXTENSIONS[mimeType]}`
   await mkdir(path.resolve(uploadDir), { recursive: true })
   await writeFile(path.resolve(uploadDir, fileName), file.buffer)
-  return db().getRepository(PhotoEntity).save({ id, taskId, personId, fileName, mimeType, sizeBytes: file.buffer.length })
+  return db().getRepository(PhotoEntity).save({ id, taskId, personId: person.id, fileName, mimeType, sizeBytes: file.buffer.length })
 }
 
 export async function photoFile(uploadDir: string, id: string) {

@@ -52,6 +52,8 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
 /** A missed task that was done after all, or a critical reading whose recheck came back out of critical. */
 async function answered(alert: AlertRow, task: TaskRow): Promise<boolean> {
   if (alert.kind === 'missed_task') return task.status === 'done' || task.status === 'skipped'
+  // An overdue incident's alert is closed by the incident when its deadline is met, or acknowledged.
+  if (alert.kind !== 'critical_reading') return false
   const recheck = await db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: task.id })
   return !!recheck && recheck.status === 'done' && recheck.flag !== 'critical'
 }

@@ -17,14 +17,20 @@ const escapeHtml = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', 
 export function composeMessage(m: MessageInput) {
   const late = Math.max(0, Math.round((m.now.getTime() - m.task.dueAt.getTime()) / 60_000))
   const lateText = late >= 60 ? `${Math.floor(late / 60)} h${late % 60 ? ` ${late % 60} min` : ''} late` : `${late} min late`
+  // An overdue incident deadline carries its own words in the detail; the task only says where it began.
+  const incident = m.alert.kind.startsWith('incident_')
   const subject =
     m.alert.kind === 'critical_reading'
       ? `CRITICAL reading: ${m.alert.detail} at ${m.targetLabel} (${m.task.title})`
-      : `MISSED: ${m.task.title} at ${m.targetLabel}, ${lateText}`
+      : incident
+        ? `INCIDENT deadline passed: ${m.alert.detail}`
+        : `MISSED: ${m.task.title} at ${m.targetLabel}, ${lateText}`
   const lines = [
     m.alert.kind === 'critical_reading'
       ? `A critical reading was recorded: ${m.alert.detail}.`
-      : `This task was not done within its grace time. It was due at ${m.task.localStart.replace('T', ' ').slice(0, 16)} (facility time) and is ${lateText}.`,
+      : incident
+        ? `${m.alert.detail}. Open Incidents in Roundtide and record who was told and when.`
+        : `This task was not done within its grace time. It was due at ${m.task.localStart.replace('T', ' ').slice(0, 16)} (facility time) and is ${lateText}.`,
     `Task: ${m.task.title}`,
     `Where: ${m.targetLabel}`,
     m.step > 0 ? `This is step ${m.step + 1} of the escalation: nobody has answered yet.` : '',

@@ -2,17 +2,21 @@ import { EntitySchema } from 'typeorm'
 import type { Incident } from '#shared/schemas/incident'
 import { INCIDENT_SOURCES, INCIDENT_STATUSES } from '#shared/schemas/incident'
 
-type Dates = 'startedAt' | 'noticedAt' | 'decidedAt' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'reportedAt' | 'closedAt' | 'escalatedAt'
-export type IncidentRow = Omit<Incident, Dates> & {
+type Dates = 'startedAt' | 'noticedAt' | 'decidedAt' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'welfareNotifiedAt' | 'reportedAt' | 'closedAt' | 'escalatedAt' | 'welfareEscalatedAt' | 'reportEscalatedAt'
+// Names are looked up when answering, never stored.
+export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'people'> & {
   startedAt: Date
   noticedAt: Date
   decidedAt: Date | null
   welfareDueAt: Date
   committeeDueAt: Date
   reportDueAt: Date
+  welfareNotifiedAt: Date | null
   reportedAt: Date | null
   closedAt: Date | null
   escalatedAt: Date | null
+  welfareEscalatedAt: Date | null
+  reportEscalatedAt: Date | null
   /** One proposal per cause (e.g. "missed_task:42"), so a retried clock tick never proposes twice. */
   sourceKey: string | null
   createdAt: Date
@@ -48,9 +52,12 @@ export const IncidentEntity = new EntitySchema<IncidentRow>({
     welfareDueAt: when(),
     committeeDueAt: when(),
     reportDueAt: when(),
+    welfareNotifiedAt: when(true),
     reportedAt: when(true),
     closedAt: when(true),
     escalatedAt: when(true),
+    welfareEscalatedAt: when(true),
+    reportEscalatedAt: when(true),
     notes: { type: 'json' },
     createdAt: { type: 'datetime', precision: 3, createDate: true, default: () => 'CURRENT_TIMESTAMP(3)' },
   },

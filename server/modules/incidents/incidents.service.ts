@@ -1,69 +1,44 @@
-import { IsNull, LessThanOrEqual } from 'typeorm'
 import {
   DecideIncidentInputSchema,
   IncidentNoteInputSchema,
   UpdateIncidentInputSchema,
   type Incident,
 } from '#shared/schemas/incident'
+import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
 import { recordChange } from '../../realtime/change-outbox'
-import { conflict, notFound } from '../../lib/errors'
-import { startIncidentAlert } from '../completions/follow-ups'
-import { getStockSettings } from '../stock/stock-settings.service'
+import { conflict, notFound, validationError } from '../../lib/errors'
+import { closeIncidentAlert } from '../completions/follow-ups'
+import { listPeople } from '../people/people.service'
+import { DEADLINE_RULES } from './incident-escalation'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
 
+// The clock and the scheduler reach proposals and escalation through this service.
+export { proposeForCriticalRecheck, proposeForMissedTasks, proposeForMortalityThreshold, proposeIncident } from './incident-proposals'
+export { escalateOverdueIncidents } from './incident-escalation'
+
 const repo = () => db().getRepository(IncidentEntity)
-const HOUR = 3_600_000
 const iso = (d: Date | null) => (d ? d.toISOString() : null)
 
-export function toIncident(r: IncidentRow): Incident {
+/** `names` (person id → name) lets observers, who cannot list the staff, read who decided and who was involved. */
+export function toIncident(r: IncidentRow, names: Map<number, string> = new Map()): Incident {
   const { sourceKey: _k, createdAt: _c, ...rest } = r
   return {
     ...rest,
+    decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
+    people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
     startedAt: r.startedAt.toISOString(), noticedAt: r.noticedAt.toISOString(), decidedAt: iso(r.decidedAt),
     welfareDueAt: r.welfareDueAt.toISOString(), committeeDueAt: r.committeeDueAt.toISOString(), reportDueAt: r.reportDueAt.toISOString(),
-    reportedAt: iso(r.reportedAt), closedAt: iso(r.closedAt), escalatedAt: iso(r.escalatedAt),
+    welfareNotifiedAt: iso(r.welfareNotifiedAt), reportedAt: iso(r.reportedAt), closedAt: iso(r.closedAt),
+    escalatedAt: iso(r.escalatedAt), welfareEscalatedAt: iso(r.welfareEscalatedAt), reportEscalatedAt: iso(r.reportEscalatedAt),
   }
 }
 
-export interface IncidentProposal {
-  source: 'missed_task' | 'critical_recheck' | 'mortality_threshold'
-  sourceKey: string
-  taskId: number
-  title: string
-  whatHappened: string
-  startedAt: Date
-  tankIds: number[]
-  batchIds?: number[]
-  dead?: number
-}
-
-/**
- * Roundtide proposes, a person decides: the row starts as "proposed" and nothing is reported
- * until a supervisor or manager confirms it. Deadlines run from when it was noticed, with the
- * hours from the facility's settings. One proposal per cause (unique source key).
- */
-export async function proposeIncident(p: IncidentProposal, now: Date): Promise<void> {
-  const s = await getStockSettings()
-  await repo()
-    .createQueryBuilder()
-    .insert()
-    .values({
-      status: 'proposed', source: p.source, sourceKey: p.sourceKey, taskId: p.taskId, title: p.title.slice(0, 160), whatHappened: p.whatHappened,
-      startedAt: p.startedAt, noticedAt: now, tankIds: p.tankIds, batchIds: p.batchIds ?? [], personIds: [], affected: p.dead ?? 0, dead: p.dead ?? 0,
-      immediateActions: '', told: [], rootCause: '', correctiveActions: '', decisionReason: null, decidedById: null, decidedAt: null,
-      welfareDueAt: new Date(now.getTime() + s.notifyWelfareOfficerHours * HOUR),
-      committeeDueAt: new Date(now.getTime() + s.notifyCommitteeHours * HOUR),
-      reportDueAt: new Date(now.getTime() + s.fullReportHours * HOUR),
-      reportedAt: null, closedAt: null, escalatedAt: null, notes: [],
-    })
-    .orIgnore()
-    .execute()
-  await recordChange('incident')
-}
+const personNames = async () => new Map((await listPeople()).map((p) => [p.id, p.name]))
 
 export async function listIncidents(): Promise<Incident[]> {
-  return (await repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 })).map(toIncident)
+  const [rows, names] = await Promise.all([repo().find({ order: { noticedAt: 'DESC', id: 'DESC' }, take: 500 }), personNames()])
+  return rows.map((r) => toIncident(r, names))
 }
 
 async function load(id: number) {
@@ -72,7 +47,7 @@ async function load(id: number) {
   return row
 }
 
-export const getIncident = async (id: number) => toIncident(await load(id))
+export const getIncident = async (id: number) => toIncident(await load(id), await personNames())
 
 type Actor = { id: number; name: string }
 
@@ -92,15 +67,29 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
   const data = UpdateIncidentInputSchema.parse(input)
   const row = await load(id)
   if (row.status === 'proposed' || row.status === 'dismissed') throw conflict('Confirm the incident before filling in its record.')
-  const { status, startedAt, noticedAt, ...fields } = data
+  const { status, startedAt, noticedAt, welfareNotifiedAt, ...fields } = data
   const next: Partial<IncidentRow> = { ...fields }
   if (startedAt) next.startedAt = new Date(startedAt)
   if (noticedAt) next.noticedAt = new Date(noticedAt)
+  // The first deadline is judged as the screens judge it: the time given, else the first person told.
+  const welfareTold = welfareToldAt({ welfareNotifiedAt: welfareNotifiedAt ?? iso(row.welfareNotifiedAt), told: next.told ?? row.told })
+  if (welfareTold) next.welfareNotifiedAt = new Date(welfareTold)
   if (status === 'reported' && !row.reportedAt) Object.assign(next, { status, reportedAt: now })
-  if (status === 'closed') Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
+  if (status === 'closed') {
+    // Closing files the full report (the third deadline), so the report must say why and what changes.
+    const missing = (['rootCause', 'correctiveActions'] as const).filter((k) => !(next[k] ?? row[k]).trim())
+    if (missing.length) throw validationError('Nothing was saved: the full report needs the root cause and the corrective actions before the incident is closed.', Object.fromEntries(missing.map((k) => [k, ['Required to close']])))
+    Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
+  }
   await repo().update(id, next)
+  if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
   await recordChange('incident', [id])
   return getIncident(id)
+}
+
+/** A deadline met after it escalated stops its alert climbing the ladder. */
+async function closeMetDeadlineAlerts(taskId: number, row: IncidentRow, now: Date) {
+  for (const rule of DEADLINE_RULES) if (row[rule.done] && row[rule.claim]) await closeIncidentAlert(taskId, rule.kind, now)
 }
 
 /** Observers (veterinarian, welfare officer) may add a note; nothing else. */
@@ -111,27 +100,3 @@ export async function addIncidentNote(id: number, input: unknown, who: Actor, no
   await recordChange('incident', [id])
   return getIncident(id)
 }
-
-/**
- * A confirmed incident not yet reported when its committee deadline passes climbs the ladder
- * once: escalatedAt is claimed by a conditional update, so two ticks never start two alerts.
- */
-export async function escalateOverdueIncidents(now: Date): Promise<number> {
-  const due = await repo().find({ where: { status: 'open', escalatedAt: IsNull(), committeeDueAt: LessThanOrEqual(now) } })
-  let started = 0
-  for (const incident of due) {
-    const claimed = await repo().update({ id: incident.id, escalatedAt: IsNull() }, { escalatedAt: now })
-    if (!claimed.affected || !incident.taskId) continue
-    await startIncidentAlert(incident.taskId, `Incident #${incident.id} not reported to the ethics committee by its deadline: ${incident.title}`, now)
-    started++
-  }
-  return started
-}
-
-/** Missed welfare-critical checks: one proposal each (the clock passes the tasks it just marked missed). */
-export async function proposeForMissedTasks(tasks: Array<{ id: number; title: string; tankId: number | null; graceUntil: Date }>, now: Date) {
-  for (const t of tasks) {
-    await proposeIncident({ source: 'missed_task', sourceKey: `missed_task:${t.id}`, taskId: t.id, title: `Missed welfare-critical check: ${t.title}`, whatHappened: `"${t.title}" was not done within its grace time.`, startedAt: t.graceUntil, tankIds: t.tankId ? [t.tankId] : [] }, now)
-  }
-}
-

@@ -1,6 +1,7 @@
 import { Router } from 'express'
 import { DateTime } from 'luxon'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RosterRangeQuerySchema } from '#shared/schemas/roster'
 import { recordChange } from '../../realtime/change-outbox'
@@ -79,5 +80,5 @@ rosterRouter.get('/on-call', signedIn, async (_req, res) => {
   res.json(await getOnCallSummary())
 })
 rosterRouter.post('/on-call/notes', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
-  res.status(201).json(await addHandoverNote(req.user!, z.object({ text: z.string() }).parse(req.body)))
+  res.status(201).json(await addHandoverNote(req.user!, z.object({ text: text() }).parse(req.body)))
 })

@@ -23,7 +23,12 @@ export interface RoundMortalityPlan {
   necropsy: boolean
   /** Deaths in the batch over the last 7 days passed the facility's threshold. */
   overThreshold: boolean
+  /** These deaths took the batch over the threshold (it was not over before them): an incident is proposed. */
+  crossedThreshold: boolean
   weekPct: number
+  weekDead: number
+  thresholdPct: number
+  tankCode: string
 }
 
 export interface RoundMortalityAssessment {
@@ -60,9 +65,12 @@ export async function assessRoundMortality(tankId: number | null, dead: number |
   const entries = (await db().getRepository(MovementEntity).find({ where: { batchId: where.batchId } })).map((m) => ({ ...toEntry(m), occurredAt: m.occurredAt.toISOString() }))
   const [week] = periodFigures(entries, new Date(at.getTime() - WEEK_MS).toISOString(), new Date(at.getTime() + 1).toISOString())
   const atRisk = (week?.opening ?? 0) + (week?.arrived ?? 0)
-  const weekPct = atRisk ? ((week!.died + dead) / atRisk) * 100 : 0
+  const before = week?.died ?? 0
+  const pct = (n: number) => (atRisk ? (n / atRisk) * 100 : 0)
+  const weekPct = pct(before + dead)
   const overThreshold = weekPct > settings.mortalityWeekPct
-  const plan = { batchId: where.batchId, tankId, count: dead, cause: d.cause, causeText: d.causeText ?? null, necropsy: d.necropsy, overThreshold, weekPct }
+  const crossedThreshold = overThreshold && pct(before) <= settings.mortalityWeekPct
+  const plan = { batchId: where.batchId, tankId, count: dead, cause: d.cause, causeText: d.causeText ?? null, necropsy: d.necropsy, overThreshold, crossedThreshold, weekPct, weekDead: before + dead, thresholdPct: settings.mortalityWeekPct, tankCode: code }
   const notes = overThreshold ? [`${weekPct.toFixed(1)} % of the batch died in the last 7 days (the facility flags above ${settings.mortalityWeekPct} %).`] : []
   return { plan, band: overThreshold ? 'watch' : 'ok', notes }
 }

@@ -1,6 +1,6 @@
 import { In } from 'typeorm'
 import type { Person } from '#shared/schemas/person'
-import { MovementInputSchema, MovementListQuerySchema, type BatchStock, type Movement, type TankStock } from '#shared/schemas/stock'
+import { MovementInputSchema, MovementListQuerySchema, TECHNICIAN_MOVEMENT_KINDS, type BatchStock, type Movement, type TankStock } from '#shared/schemas/stock'
 import { biomassKg, round, stockingDensityKgM3 } from '#shared/stock/density'
 import { balances } from '#shared/stock/ledger'
 import { db } from '../../db/data-source'
@@ -10,7 +10,7 @@ import { listPeople } from '../people/people.service'
 import { rowFor, toEntry, writeMovement } from './movement-writer'
 import { MovementEntity, type MovementRow } from './stock.entities'
 
-const TECHNICIAN_KINDS = new Set(['mortality', 'cull', 'sampling', 'transfer'])
+const TECHNICIAN_KINDS = new Set(TECHNICIAN_MOVEMENT_KINDS)
 
 /** A person records a movement: checked against the batch's register, refused if it would go below zero. */
 export async function recordMovement(person: Person, input: unknown): Promise<Movement> {

@@ -3,6 +3,7 @@ import { CalendarRange } from 'lucide-react'
 import { Link, useParams, useSearchParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
 import { catalogueQueries } from '../../api/catalogues'
 import { facilityQueries } from '../../api/facility'
+import { stockQueries } from '../../api/stock'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { batchRecordQueries } from '../../features/batch-record/api/batch-record-queries'
@@ -14,6 +15,7 @@ import { RecordList } from '../../features/batch-record/components/record-list'
 import { TransportBoxForm } from '../../features/batch-record/components/transport-box-form'
 import { TransportWaterForm } from '../../features/batch-record/components/transport-water-form'
 import { WeighingForm } from '../../features/batch-record/components/weighing-form'
+import { BatchStock } from '../stock/batch-stock'
 
 const positiveId = (value: string | null | undefined) => {
   const id = Number(value)
@@ -28,6 +30,9 @@ function batchIdFrom(params: Params): number {
 
 export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
   const id = batchIdFrom(params)
+  // The stock register loads beside the page (its own loading and error states), so it is not awaited.
+  void queryClient.prefetchQuery(stockQueries.batch(id))
+  void queryClient.prefetchQuery(stockQueries.movements({ batchId: id }))
   await Promise.all([
     queryClient.ensureQueryData(batchRecordQueries.batch(id)),
     queryClient.ensureQueryData(batchRecordQueries.records(id)),
@@ -59,6 +64,7 @@ export function Component() {
     <section className="mx-auto flex w-full max-w-4xl flex-col gap-4">
       <PageHeader title={`Batch ${batch.code}`} />
       <BatchSummary batch={batch} tanks={tanks} />
+      <BatchStock batchId={id} me={me} timeZone={facility.timeZone} />
       {eventId !== null && (
         <p className="flex items-center gap-2 text-sm text-tide-800">
           <CalendarRange aria-hidden className="size-4" /> Records added here belong to

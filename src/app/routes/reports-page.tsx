@@ -9,7 +9,9 @@ import { ComplianceReport } from '../../features/reports/components/compliance-r
 import { PrintHeading } from '../../features/reports/components/print-heading'
 import { RangeForm } from '../../features/reports/components/range-form'
 import { parseReportView, ReportTabs } from '../../features/reports/components/report-tabs'
+import { IncidentDeadlinesReport } from '../../features/reports/components/incident-deadlines-report'
 import { ResponsesReport } from '../../features/reports/components/responses-report'
+import { StockReport } from '../../features/reports/components/stock-report'
 import { WelfareReport } from '../../features/reports/components/welfare-report'
 import { describeRange, rangeProblem } from '../../features/reports/utils/date-range'
 import { reportFilters } from '../../features/reports/utils/report-filters'
@@ -25,10 +27,13 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
   if (view === 'compliance') await queryClient.ensureQueryData(reportQueries.compliance(f.compliance))
   if (view === 'responses') await queryClient.ensureQueryData(reportQueries.responses(f.range))
   if (view === 'welfare') await Promise.all([queryClient.ensureQueryData(reportQueries.welfare(f.welfare)), queryClient.ensureQueryData(catalogueQueries.tanks())])
+  if (view === 'animals') {
+    await Promise.all([queryClient.ensureQueryData(reportQueries.stock(f.stock)), queryClient.ensureQueryData(reportQueries.incidents(f.range)), queryClient.ensureQueryData(catalogueQueries.batches())])
+  }
   return null
 }
 
-const TITLES = { compliance: 'Compliance', responses: 'Response times', welfare: 'Welfare-check record' }
+const TITLES = { compliance: 'Compliance', responses: 'Response times', welfare: 'Welfare-check record', animals: 'Animal record: numbers per batch and incidents' }
 
 export function Component() {
   const [search, setSearch] = useSearchParams()
@@ -65,6 +70,12 @@ export function Component() {
           {view === 'compliance' && <ComplianceReport filter={f.compliance} onFilterChange={(c) => update(c)} />}
           {view === 'responses' && <ResponsesReport range={f.range} />}
           {view === 'welfare' && <WelfareReport filter={f.welfare} onTanksChange={(ids) => update({ tankIds: ids.join(',') })} />}
+          {view === 'animals' && (
+            <>
+              <StockReport filter={f.stock} onBatchChange={(batchId) => update({ batchId })} />
+              <IncidentDeadlinesReport range={f.range} timeZone={facility.timeZone} />
+            </>
+          )}
         </>
       )}
     </section>

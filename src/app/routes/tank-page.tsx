@@ -1,7 +1,9 @@
 import { useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
 import { useParams, useSearchParams, type LoaderFunctionArgs, type Params } from 'react-router-dom'
 import { facilityQueries } from '../../api/facility'
+import { stockQueries } from '../../api/stock'
 import { PageHeader } from '../../components/ui/page-state'
+import { authQueries } from '../../features/auth/api/auth-queries'
 import { TREND_RANGES, tankPageQueries, type TrendRange } from '../../features/tank-page/api/tank-page-queries'
 import { BatchHistory } from '../../features/tank-page/components/batch-history'
 import { EventList } from '../../features/tank-page/components/event-list'
@@ -11,6 +13,7 @@ import { RecentTasks } from '../../features/tank-page/components/recent-tasks'
 import { TankSummary } from '../../features/tank-page/components/tank-summary'
 import { TrendsSection } from '../../features/tank-page/components/trends-section'
 import { defaultSelection, trendParameters } from '../../features/tank-page/utils/trend-series'
+import { TankStock } from '../stock/tank-stock'
 
 function tankIdFrom(params: Params): number {
   const id = Number(params.id)
@@ -22,6 +25,9 @@ const daysFrom = (search: URLSearchParams): TrendRange => TREND_RANGES.find((d) 
 
 export const loader = (queryClient: QueryClient) => async ({ params, request }: LoaderFunctionArgs) => {
   const id = tankIdFrom(params)
+  // The stock register loads beside the page (its own loading and error states), so it is not awaited.
+  void queryClient.prefetchQuery(stockQueries.tank(id))
+  void queryClient.prefetchQuery(stockQueries.movements({ tankId: id }))
   await Promise.all([
     queryClient.ensureQueryData(tankPageQueries.overview(id)),
     queryClient.ensureQueryData(tankPageQueries.readings(id, daysFrom(new URL(request.url).searchParams))),
@@ -37,6 +43,7 @@ export function Component() {
   const { data: overview } = useSuspenseQuery(tankPageQueries.overview(id))
   const { data: readings } = useSuspenseQuery(tankPageQueries.readings(id, days))
   const { data: timeZone } = useSuspenseQuery(facilityQueries.timeZone())
+  const { data: me } = useSuspenseQuery(authQueries.me())
   const parameters = trendParameters(overview.limits, readings.tank, readings.system)
   const shown = search.get('show')
   const selected = shown === null ? defaultSelection(parameters) : shown.split(',').filter(Boolean)
@@ -52,6 +59,7 @@ export function Component() {
     <section className="mx-auto flex w-full max-w-6xl flex-col gap-5">
       <PageHeader title={`${overview.tank.code} · ${overview.tank.name}`} />
       <TankSummary overview={overview} />
+      <TankStock tankId={id} me={me} timeZone={timeZone} />
       <TrendsSection
         readings={readings}
         parameters={parameters}

@@ -9,7 +9,7 @@ describe('every expansion is bounded', () => {
   it.each([
     'FREQ=HOURLY;BYSETPOS=2;BYMINUTE=0',
     'FREQ=HOURLY;BYSETPOS=2;BYMINUTE=0;BYHOUR=3,4', // stepping with an hour filter must never see a zero interval
-    'FREQ=MINUTELY;BYHOUR=3;BYMINUTE=0;BYSETPOS=2',
+    'FREQ=MINUTELY;BYHOUR=3;BYMINUTE=0;BYSETPOS=2', // carries into BYHOUR one hour at a time: allowed, bounded by the budget
     'FREQ=DAILY;BYSETPOS=2;BYHOUR=1',
     'FREQ=YEARLY;BYSETPOS=2;BYMONTH=2;BYMONTHDAY=29',
   ])('when %s never matches, then the walk stops at its work limit and reports it', (rrule) => {

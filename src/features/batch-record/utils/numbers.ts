@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 
 /** A number as typed on a phone: "2,4" and "2.4" both count; anything else is not a number. */
 export function parseDecimal(text: string): number | null {
@@ -13,8 +14,7 @@ export const decimalsOf = (text: string) => (text.trim().replace(',', '.').split
 
 /** A required number field of a form whose inputs are strings. */
 export const decimalField = (min: number, max: number, unit = '') =>
-  z
-    .string()
+  text()
     .trim()
     .min(1, 'Required')
     .refine((s) => parseDecimal(s) !== null, 'Enter a number')

@@ -1,9 +1,10 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { decimalField, wholeField } from './numbers'
 
 export const transportBoxForm = z
   .object({
-    box: z.string().trim().min(1, 'Required').max(40),
+    box: text().trim().min(1, 'Required').max(40),
     doMgL: decimalField(0, 60, 'mg/L'),
     tempC: decimalField(-2, 45, '°C'),
     pH: decimalField(0, 14),
@@ -27,16 +28,16 @@ export type TransportWaterValues = z.input<typeof transportWaterForm>
 
 export const bathForm = z
   .object({
-    product: z.string().trim().min(1, 'Required').max(120),
+    product: text().trim().min(1, 'Required').max(120),
     targetMgL: decimalField(0.000001, 10_000, 'mg/L'),
     volumeL: decimalField(0.001, 1_000_000, 'L'),
     purityPct: decimalField(0.1, 100, '%'),
     gramsWeighed: decimalField(0.000001, 1_000_000, 'g'),
     minutes: wholeField(1, 24 * 60, 'min'),
-    observations: z.string().trim().max(2000),
+    observations: text().trim().max(2000),
   })
   .transform((v) => ({ kind: 'bath' as const, ...v }))
 export type BathValues = z.input<typeof bathForm>
 
-export const noteForm = z.object({ kind: z.enum(['note', 'review']), text: z.string().trim().min(1, 'Write the note first').max(4000) })
+export const noteForm = z.object({ kind: z.enum(['note', 'review']), text: text().trim().min(1, 'Write the note first').max(4000) })
 export type NoteValues = z.input<typeof noteForm>

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { toast } from 'sonner'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import type { Board, BoardCard } from '#shared/schemas/board'
 import { TaskSchema } from '#shared/schemas/task'
 import { applyMove, placeTasks, type MoveTarget } from '../../../api/tasks/board-cache'
@@ -9,7 +10,7 @@ import { apiFetch, jsonBody } from '../../../lib/api-client'
 
 const BulkMoveResultSchema = z.object({
   moved: z.array(TaskSchema),
-  refused: z.array(z.object({ id: z.number().int(), message: z.string() })),
+  refused: z.array(z.object({ id: z.number().int(), message: text() })),
 })
 type MoveResult = z.infer<typeof BulkMoveResultSchema>
 

@@ -1,13 +1,11 @@
 import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
 import { EscalationRecordSchema, LadderSchema } from '#shared/schemas/ladder'
+import { PreferencesSchema } from '#shared/schemas/person'
 import { TaskSchema } from '#shared/schemas/task'
 import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch } from '../../../lib/api-client'
 
-// GET/PATCH /api/me/preferences has no schema in shared/ yet (PreferencesInputSchema sits in the server's routes).
-export const PreferencesSchema = z.object({ email: z.string(), quietStart: z.string().nullable(), quietEnd: z.string().nullable() })
-export type Preferences = z.infer<typeof PreferencesSchema>
 
 export const escalationKeys = {
   all: ['escalation'] as const,

@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
-import { escalationKeys, PreferencesSchema, type Preferences } from './escalation-queries'
+import { PreferencesSchema, type PreferencesInput } from '#shared/schemas/person'
+import { escalationKeys } from './escalation-queries'
 
 export function useUpdatePreferences() {
   const queryClient = useQueryClient()
   return useMutation({
-    mutationFn: (input: Preferences) => apiFetch('/me/preferences', PreferencesSchema, { method: 'PATCH', ...jsonBody(input) }),
+    mutationFn: (input: PreferencesInput) => apiFetch('/me/preferences', PreferencesSchema, { method: 'PATCH', ...jsonBody(input) }),
     onSuccess: (saved) => queryClient.setQueryData(escalationKeys.preferences(), saved),
   })
 }

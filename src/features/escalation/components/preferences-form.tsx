@@ -5,18 +5,19 @@ import { toast } from 'sonner'
 import { Button } from '../../../components/ui/button'
 import { Field } from '../../../components/ui/field'
 import { ApiError } from '../../../lib/api-client'
-import type { Preferences } from '../api/escalation-queries'
+import type { Preferences } from '#shared/schemas/person'
 import { useUpdatePreferences } from '../api/use-update-preferences'
-import { PreferencesFormSchema, toFormValues, toPreferences, type PreferencesFormValues } from '../utils/preferences-form'
+import { preferencesFormSchema, toFormValues, toPreferencesInput, type PreferencesFormValues } from '../utils/preferences-form'
 
 /** My address for escalation mail and the hours in which routine mail waits. */
 export function PreferencesForm({ preferences, timeZone }: { preferences: Preferences; timeZone: string }) {
   const update = useUpdatePreferences()
-  const form = useForm<PreferencesFormValues>({ resolver: zodResolver(PreferencesFormSchema), defaultValues: toFormValues(preferences) })
+  const form = useForm<PreferencesFormValues>({ resolver: zodResolver(preferencesFormSchema(preferences.email)), defaultValues: toFormValues(preferences) })
   const errors = form.formState.errors
+  const changingEmail = form.watch('email').trim().toLowerCase() !== preferences.email
 
   const submit = form.handleSubmit((values) =>
-    update.mutate(toPreferences(values), {
+    update.mutate(toPreferencesInput(values, preferences.email), {
       onSuccess: (saved) => {
         toast.success('Preferences saved.')
         form.reset(toFormValues(saved))
@@ -32,6 +33,16 @@ export function PreferencesForm({ preferences, timeZone }: { preferences: Prefer
   return (
     <form noValidate onSubmit={submit} aria-label="My preferences" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
       <Field label="E-mail for escalations" type="email" autoComplete="email" hint="This is also the address you sign in with." {...form.register('email')} error={errors.email?.message} />
+      {changingEmail && (
+        <Field
+          label="Current password"
+          type="password"
+          autoComplete="current-password"
+          hint="Needed to change the address you sign in with."
+          {...form.register('currentPassword')}
+          error={errors.currentPassword?.message}
+        />
+      )}
       <fieldset className="flex flex-col gap-2">
         <legend className="flex items-center gap-2 font-semibold text-tide-900">
           <MoonStar aria-hidden className="size-5 text-tide-600" /> Quiet hours

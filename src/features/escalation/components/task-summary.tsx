@@ -2,7 +2,7 @@ import { Clock, Crosshair, HeartPulse, UserRound } from 'lucide-react'
 import type { ReactNode } from 'react'
 import type { Task } from '#shared/schemas/task'
 import { formatDay, formatWhen } from '../../../lib/zone-format'
-import { BandLabel } from './band-label'
+import { BandBadge } from '../../../components/ui/band-badge'
 import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
@@ -20,7 +20,7 @@ export function TaskSummary({ task, timeZone, readingNames }: { task: Task; time
     <section aria-label="Task" className="rounded-xl border border-tide-200 bg-white p-4 md:p-5">
       <div className="flex flex-wrap items-center gap-2">
         <TaskStatusLabel status={task.status} />
-        {task.flag && <BandLabel band={task.flag} prefix="Flag" />}
+        {task.flag && <BandBadge band={task.flag} prefix="Flag" />}
         {task.priority === 'welfare_critical' && (
           <span className="inline-flex items-center gap-1 rounded-md bg-alarm-50 px-1.5 py-0.5 text-sm font-semibold text-alarm-700">
             <HeartPulse aria-hidden className="size-4" /> Welfare-critical

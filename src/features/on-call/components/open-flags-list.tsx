@@ -2,7 +2,7 @@ import { Flag } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OpenFlag } from '../api/on-call-queries'
 import { formatWhen } from '../../../lib/zone-format'
-import { BandLabel } from './band-label'
+import { BandBadge } from '../../../components/ui/band-badge'
 import { OnCallSection } from './on-call-section'
 import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
@@ -17,7 +17,7 @@ export function OpenFlagsList({ flags, timeZone }: { flags: OpenFlag[]; timeZone
           {flags.map(({ task, recheck }) => (
             <li key={task.id} className="flex flex-col gap-1 py-2">
               <div className="flex flex-wrap items-center gap-2">
-                {task.flag && <BandLabel band={task.flag} prefix="Flag" />}
+                {task.flag && <BandBadge band={task.flag} prefix="Flag" />}
                 <Link to={`/tasks/${task.id}`} className="font-semibold text-tide-900 underline-offset-2 hover:underline">
                   {task.title}
                 </Link>
@@ -31,7 +31,7 @@ export function OpenFlagsList({ flags, timeZone }: { flags: OpenFlag[]; timeZone
                 {recheck ? (
                   <>
                     Recheck at {recheck.localTime.slice(0, 5)}: <TaskStatusLabel status={recheck.status} />
-                    {recheck.flag && <BandLabel band={recheck.flag} />}
+                    {recheck.flag && <BandBadge band={recheck.flag} />}
                   </>
                 ) : (
                   'No recheck task'

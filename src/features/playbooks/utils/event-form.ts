@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import type { EventInput } from '#shared/schemas/playbook'
 
 export type EventFormValues = {
@@ -17,14 +18,14 @@ export const LOCAL_START = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/
 
 export const eventFormSchema = z
   .object({
-    playbookId: z.string().min(1, 'Choose a playbook'),
-    title: z.string().trim().min(1, 'Required').max(160),
-    localStart: z.string().regex(LOCAL_START, 'Give a date and a time'),
+    playbookId: text().min(1, 'Choose a playbook'),
+    title: text().trim().min(1, 'Required').max(160),
+    localStart: text().regex(LOCAL_START, 'Give a date and a time'),
     target: z.enum(['tanks', 'batch']),
     tankIds: z.array(z.number().int()),
-    batchId: z.string(),
-    notes: z.string().trim().max(4000),
-    fastingHours: z.string().trim().regex(/^(\d{1,3})?$/, 'Whole hours, 0 to 168'),
+    batchId: text(),
+    notes: text().trim().max(4000),
+    fastingHours: text().trim().regex(/^(\d{1,3})?$/, 'Whole hours, 0 to 168'),
   })
   .superRefine((v, ctx) => {
     if (v.target === 'tanks' && v.tankIds.length === 0) ctx.addIssue({ code: 'custom', path: ['tankIds'], message: 'Choose at least one tank' })

@@ -1,10 +1,11 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 
 // The report endpoints have no shared zod schemas yet (shared/reports/compliance.ts has an interface only).
 const count = z.number().int()
 export const ComplianceRowSchema = z.object({
-  period: z.string(),
-  group: z.string(),
+  period: text(),
+  group: text(),
   total: count,
   onTime: count,
   late: count,
@@ -17,44 +18,44 @@ export const ComplianceRowSchema = z.object({
 export type ComplianceRow = z.infer<typeof ComplianceRowSchema>
 
 export const ResponseRowSchema = z.object({
-  date: z.string(),
-  time: z.string(),
-  task: z.string(),
-  where: z.string(),
-  flag: z.string(),
-  alert: z.string(),
-  alertStartedAt: z.string(),
-  acknowledgedBy: z.string(),
+  date: text(),
+  time: text(),
+  task: text(),
+  where: text(),
+  flag: text(),
+  alert: text(),
+  alertStartedAt: text(),
+  acknowledgedBy: text(),
   minutesToAcknowledge: z.number().nullable(),
-  recheckStatus: z.string(),
+  recheckStatus: text(),
   minutesToRecheck: z.number().nullable(),
 })
 export type ResponseRow = z.infer<typeof ResponseRowSchema>
 
 export const WelfareRowSchema = z.object({
-  date: z.string(),
-  due: z.string(),
-  task: z.string(),
-  tank: z.string(),
-  status: z.string(),
-  doneAt: z.string(),
-  doneBy: z.string(),
+  date: text(),
+  due: text(),
+  task: text(),
+  tank: text(),
+  status: text(),
+  doneAt: text(),
+  doneBy: text(),
   lateMinutes: z.union([z.number(), z.literal('')]),
-  readings: z.string(),
-  flag: z.string(),
+  readings: text(),
+  flag: text(),
 })
 export type WelfareRow = z.infer<typeof WelfareRowSchema>
 
 export const AuditRowSchema = z.object({
-  id: z.union([z.string(), z.number()]).transform(String),
-  at: z.string(),
+  id: z.union([text(), z.number()]).transform(String),
+  at: text(),
   personId: z.number().int().nullable(),
-  entity: z.string(),
-  entityId: z.string(),
-  action: z.string(),
+  entity: text(),
+  entityId: text(),
+  action: text(),
   /** JSON text, as the server stores it. */
-  before: z.string(),
-  after: z.string(),
+  before: text(),
+  after: text(),
 })
 export type AuditRow = z.infer<typeof AuditRowSchema>
 

@@ -1,12 +1,13 @@
-import { CircleX, OctagonAlert, TriangleAlert } from 'lucide-react'
+import { BAND_LOOK } from '../../../components/ui/band-badge'
+import { STATUS_LOOK } from '../../../components/ui/task-status-label'
 
 const FLAGS = {
-  watch: { label: 'Watch', icon: TriangleAlert, tone: 'text-ember-700' },
-  critical: { label: 'Critical', icon: OctagonAlert, tone: 'text-alarm-700' },
-  missed: { label: 'Missed', icon: CircleX, tone: 'text-alarm-700' },
+  watch: { ...BAND_LOOK.watch, tone: BAND_LOOK.watch.text },
+  critical: { ...BAND_LOOK.critical, tone: BAND_LOOK.critical.text },
+  missed: STATUS_LOOK.missed,
 } as const
 
-/** A flag or a miss as icon + word; anything else as plain text. */
+/** A flag or a miss as icon + word (the same words as the badges and statuses elsewhere); anything else as plain text. */
 export function FlagText({ flag }: { flag: string }) {
   const f = FLAGS[flag as keyof typeof FLAGS]
   if (!f) return <>{flag || '—'}</>

@@ -1,14 +1,15 @@
 import { clsx } from 'clsx'
-import { BellRing, ClipboardCheck, HeartPulse, type LucideIcon } from 'lucide-react'
+import { BellRing, ClipboardCheck, Fish, HeartPulse, type LucideIcon } from 'lucide-react'
 import { Link, useSearchParams } from 'react-router-dom'
 
-export const REPORT_VIEWS = ['compliance', 'responses', 'welfare'] as const
+export const REPORT_VIEWS = ['compliance', 'responses', 'welfare', 'animals'] as const
 export type ReportView = (typeof REPORT_VIEWS)[number]
 
 const VIEWS: Record<ReportView, { label: string; icon: LucideIcon }> = {
   compliance: { label: 'Compliance', icon: ClipboardCheck },
   responses: { label: 'Response times', icon: BellRing },
   welfare: { label: 'Welfare checks', icon: HeartPulse },
+  animals: { label: 'Animal record', icon: Fish },
 }
 
 export const parseReportView = (value: string | null): ReportView => REPORT_VIEWS.find((v) => v === value) ?? 'compliance'

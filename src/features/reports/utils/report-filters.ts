@@ -1,10 +1,11 @@
 import { rangeFrom } from './date-range'
-import { GROUPINGS, PERIODS, type ComplianceFilter, type DateRange, type WelfareFilter } from './report-paths'
+import { GROUPINGS, PERIODS, type ComplianceFilter, type DateRange, type StockFilter, type WelfareFilter } from './report-paths'
 
 export interface ReportFilters {
   range: DateRange
   compliance: ComplianceFilter
   welfare: WelfareFilter
+  stock: StockFilter
 }
 
 /** Everything the reports page shows, read from its address so it can be bookmarked and printed again. */
@@ -13,5 +14,6 @@ export function reportFilters(search: URLSearchParams, timeZone: string): Report
   const by = GROUPINGS.find((g) => g === search.get('by')) ?? 'category'
   const period = PERIODS.find((p) => p === search.get('period')) ?? 'day'
   const tankIds = (search.get('tankIds') ?? '').split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0)
-  return { range, compliance: { ...range, by, period }, welfare: { ...range, tankIds } }
+  const batchId = /^[1-9]\d*$/.test(search.get('batchId') ?? '') ? search.get('batchId')! : ''
+  return { range, compliance: { ...range, by, period }, welfare: { ...range, tankIds }, stock: { ...range, batchId } }
 }

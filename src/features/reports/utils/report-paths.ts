@@ -7,8 +7,10 @@ export const PERIODS = ['day', 'week'] as const
 export type ComplianceFilter = DateRange & { by: (typeof GROUPINGS)[number]; period: (typeof PERIODS)[number] }
 export type WelfareFilter = DateRange & { tankIds: number[] }
 export type AuditFilter = DateRange & { entity: string }
+/** One batch by id, or '' for every batch. */
+export type StockFilter = DateRange & { batchId: string }
 
-type Filters = { compliance: ComplianceFilter; responses: DateRange; welfare: WelfareFilter; audit: AuditFilter }
+type Filters = { compliance: ComplianceFilter; responses: DateRange; welfare: WelfareFilter; audit: AuditFilter; stock: StockFilter; incidents: DateRange }
 
 function search(filter: object) {
   const params = new URLSearchParams()

@@ -1,6 +1,7 @@
 import { CircleCheck, OctagonAlert, TriangleAlert } from 'lucide-react'
 import type { CompletionResult } from '#shared/schemas/completion'
 import type { ReadingSpec } from '#shared/schemas/round'
+import { BAND_LOOK } from '../../../components/ui/band-badge'
 import { clockTime } from '../utils/sheet-format'
 
 /** What the server made of a typed-in task: saved, and flagged if a reading was out of range. */
@@ -21,7 +22,7 @@ export function PaperResult({ result, specs, timeZone }: { result: CompletionRes
       {task.flag && (
         <p className={`flex items-center gap-1.5 font-semibold ${task.flag === 'critical' ? 'text-alarm-700' : 'text-ember-700'}`}>
           {task.flag === 'critical' ? <OctagonAlert aria-hidden className="size-4" /> : <TriangleAlert aria-hidden className="size-4" />}
-          Flag: {task.flag === 'critical' ? 'Critical' : 'Watch'} ({flagged.map((r) => `${name(r.parameterKey)} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a
+          Flag: {BAND_LOOK[task.flag].label} ({flagged.map((r) => `${name(r.parameterKey)} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a
           sheet typed in later raises no recheck.
         </p>
       )}

@@ -1,9 +1,10 @@
 import { useMutation } from '@tanstack/react-query'
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { apiFetch } from '../../../lib/api-client'
 
 // The photo route answers with this shape; shared/ has no schema for it yet.
-const UploadedPhotoSchema = z.object({ id: z.string(), mimeType: z.string(), sizeBytes: z.number() })
+const UploadedPhotoSchema = z.object({ id: text(), mimeType: text(), sizeBytes: z.number() })
 
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp']
 export const PHOTO_MAX_BYTES = 8 * 1024 * 1024

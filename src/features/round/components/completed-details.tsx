@@ -3,7 +3,7 @@ import type { CompletionResult } from '#shared/schemas/completion'
 import type { Round, RoundTask } from '#shared/schemas/round'
 import { DERIVED_NAMES } from '../utils/derived-names'
 import { doneAt } from '../utils/format'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 
 interface Props {
   task: RoundTask
@@ -28,7 +28,7 @@ export function CompletedDetails({ task, round, result }: Props) {
         <ul className="flex flex-col gap-1">
           {flagged.map((r) => (
             <li key={r.parameterKey} className="flex flex-wrap items-center gap-2">
-              <BandBadge band={r.band} />
+              <BandBadge band={r.band} ringed />
               {names.get(r.parameterKey) ?? r.parameterKey} {r.value} {r.unit}
             </li>
           ))}

@@ -5,7 +5,7 @@ import { describeOkRange } from '#shared/readings/band'
 import type { ReadingSpec } from '#shared/schemas/round'
 import { checkTypedReading } from '#shared/readings/typed-reading'
 import { bandReason } from '../utils/reading-value'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 
 interface ReadingInputProps {
   spec: ReadingSpec
@@ -14,10 +14,12 @@ interface ReadingInputProps {
   last: boolean
   onChange: (value: string) => void
   onEnter: () => void
+  /** A fact to read beside the field, e.g. the fish on the register beside the mortality count. */
+  aside?: string
 }
 
 /** One reading: big decimal field with its unit and ok range, and the band as the person types. */
-export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(function ReadingInput({ spec, value, error, last, onChange, onEnter }, ref) {
+export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(function ReadingInput({ spec, value, error, last, onChange, onEnter, aside }, ref) {
   const id = useId()
   const check = checkTypedReading(value, spec)
   const range = describeOkRange(spec, spec.unit)
@@ -27,6 +29,7 @@ export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(func
       <label htmlFor={id} className="flex flex-wrap items-baseline justify-between gap-x-2 font-semibold text-tide-900">
         {spec.name}
         {range && <span className="text-sm font-normal text-tide-600">OK {range}</span>}
+        {aside && <span className="w-full text-sm font-normal text-tide-700">{aside}</span>}
       </label>
       <div className={clsx('flex items-center rounded-xl border-2 bg-white focus-within:border-tide-500', message ? 'border-alarm-500' : 'border-tide-200')}>
         <input
@@ -57,7 +60,7 @@ export const ReadingInput = forwardRef<HTMLInputElement, ReadingInputProps>(func
           </span>
         ) : check.state === 'valid' ? (
           <span className="inline-flex flex-wrap items-center gap-2">
-            <BandBadge band={check.band} />
+            <BandBadge band={check.band} ringed />
             <span className="text-tide-700">{bandReason(check.value, check.band, spec) ?? 'In range'}</span>
           </span>
         ) : null}

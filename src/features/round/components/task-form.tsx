@@ -1,13 +1,15 @@
 import { useQueryClient } from '@tanstack/react-query'
 import { Check, CircleAlert, Loader2, NotebookPen, X } from 'lucide-react'
-import { useEffect, useRef } from 'react'
+import { Fragment, useEffect, useRef } from 'react'
 import type { RoundTask } from '#shared/schemas/round'
+import { MORTALITY_READING } from '#shared/schemas/stock'
 import { taskKeys } from '../../../api/tasks/task-keys'
 import { ApiError } from '../../../lib/api-client'
 import { useSubmitCompletion, type SubmitOutcome } from '../api/use-submit-completion'
 import { useDraft } from '../state/drafts'
 import { buildCompletion, draftErrorsFrom } from '../utils/build-completion'
 import { DerivedReadings } from './derived-readings'
+import { MortalityDetail, useTankCount } from './mortality-detail'
 import { PhotoPicker } from './photo-picker'
 import { ReadingInput } from './reading-input'
 import { SkipForm } from './skip-form'
@@ -28,6 +30,9 @@ export function TaskForm({ task, personId, online, onFinished }: Props) {
   const submit = useSubmitCompletion(personId)
   const queryClient = useQueryClient()
   const inputs = useRef<Array<HTMLInputElement | null>>([])
+  const countsDead = task.readingSpecs.some((s) => s.key === MORTALITY_READING)
+  const inTank = useTankCount(task.tankId, countsDead)
+  const dead = Number((draft.readings[MORTALITY_READING] ?? '').replace(',', '.'))
 
   // Opening a task puts the cursor in its first reading: tap to open, type, tap Done.
   useEffect(() => {
@@ -82,16 +87,21 @@ export function TaskForm({ task, personId, online, onFinished }: Props) {
   return (
     <form noValidate onSubmit={(e) => { e.preventDefault(); send('done') }} className="flex flex-col gap-4">
       {task.readingSpecs.map((spec, i) => (
+        <Fragment key={spec.key}>
         <ReadingInput
-          key={spec.key}
           ref={(el) => { inputs.current[i] = el }}
           spec={spec}
+          aside={spec.key === MORTALITY_READING && inTank !== null ? `${inTank.toLocaleString('en-GB')} fish in this tank on the register` : undefined}
           value={draft.readings[spec.key] ?? ''}
           error={draft.errors[`readings.${spec.key}`]}
           last={i === task.readingSpecs.length - 1}
           onChange={(value) => update((d) => ({ readings: { ...d.readings, [spec.key]: value }, errors: without(d.errors, `readings.${spec.key}`) }))}
           onEnter={() => (i < task.readingSpecs.length - 1 ? inputs.current[i + 1]?.focus() : send('done'))}
         />
+        {spec.key === MORTALITY_READING && dead > 0 && (
+          <MortalityDetail value={draft.mortality} errors={draft.errors} onChange={(patch) => update((d) => ({ mortality: { ...d.mortality, ...patch }, errors: without(without(d.errors, 'mortality.cause'), 'mortality.causeText') }))} />
+        )}
+        </Fragment>
       ))}
       <DerivedReadings specs={task.readingSpecs} raw={draft.readings} salinitySetpoint={task.salinitySetpoint} />
       {draft.noteOpen ? (

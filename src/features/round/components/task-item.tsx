@@ -6,7 +6,7 @@ import type { SubmitOutcome } from '../api/use-submit-completion'
 import type { OutboxEntry } from '../outbox/outbox-store'
 import { useCompletionResult } from '../state/result-store'
 import { isFinished } from '../utils/group-round'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 import { CompletedDetails } from './completed-details'
 import { OutboxNotice } from './outbox-notice'
 import { TakeButton } from './take-button'
@@ -48,7 +48,7 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
           </span>
           <span className="flex flex-wrap items-center gap-1.5">
             <TaskStatusBadge status={task.status} />
-            {task.flag && <BandBadge band={task.flag} prefix="Flag" />}
+            {task.flag && <BandBadge band={task.flag} prefix="Flag" ringed />}
             {entry && !entry.failure && (
               <span className="inline-flex items-center gap-1 rounded-md bg-tide-100 px-1.5 py-0.5 text-sm font-semibold text-tide-800">
                 <CloudUpload aria-hidden className="size-4" /> Waiting to send

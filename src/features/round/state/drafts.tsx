@@ -1,5 +1,6 @@
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from 'react'
 import type { SKIP_REASONS } from '#shared/schemas/completion'
+import { UNKNOWN_CAUSE } from '#shared/schemas/stock'
 
 export type SkipReason = (typeof SKIP_REASONS)[number]
 
@@ -10,11 +11,21 @@ export interface Draft {
   noteOpen: boolean
   mode: 'done' | 'skip'
   skipReason: SkipReason | null
+  /** What is known about the fish counted dead: the cause and whether one is kept for necropsy. */
+  mortality: MortalityDraft
   /** Keyed like the server's fieldErrors ("readings.do_mgL", "note", "skipReason"); "form" for the task as a whole. */
   errors: Record<string, string>
 }
 
-export const EMPTY_DRAFT: Draft = { readings: {}, note: '', noteOpen: false, mode: 'done', skipReason: null, errors: {} }
+export interface MortalityDraft {
+  cause: string
+  causeText: string
+  necropsy: boolean
+}
+
+export const EMPTY_DRAFT: Draft = {
+  readings: {}, note: '', noteOpen: false, mode: 'done', skipReason: null, mortality: { cause: UNKNOWN_CAUSE, causeText: '', necropsy: false }, errors: {},
+}
 
 interface DraftsValue {
   drafts: Record<number, Draft>

@@ -1,4 +1,5 @@
 import type { RoundTask } from '#shared/schemas/round'
+import { MORTALITY_READING, OTHER_CAUSE } from '#shared/schemas/stock'
 import type { CompletionPayload } from '../api/completion-api'
 import type { Draft } from '../state/drafts'
 import { checkTypedReading } from '#shared/readings/typed-reading'
@@ -21,6 +22,9 @@ export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' |
     if (!draft.skipReason) errors.skipReason = 'Choose why it could not be done'
     else if (draft.skipReason === 'other' && !note) errors.note = 'Say why it could not be done'
   }
+  const dead = readings[MORTALITY_READING] ?? 0
+  const causeText = draft.mortality.causeText.trim()
+  if (dead > 0 && draft.mortality.cause === OTHER_CAUSE && !causeText) errors['mortality.causeText'] = 'Say what the cause was'
   if (Object.keys(errors).length) return { ok: false, errors }
   return {
     ok: true,
@@ -31,6 +35,7 @@ export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' |
       readings,
       skipReason: outcome === 'skipped' ? (draft.skipReason ?? undefined) : undefined,
       note,
+      mortality: dead > 0 ? { cause: draft.mortality.cause, causeText: draft.mortality.cause === OTHER_CAUSE ? causeText : undefined, necropsy: draft.mortality.necropsy } : undefined,
       // When it was really done, so lateness is right even if the phone sends it an hour later.
       doneAt: new Date().toISOString(),
     },

@@ -1,4 +1,5 @@
 import { z } from 'zod'
+import { text } from '#shared/schemas/text'
 import { AreaSchema, BatchSchema, SystemSchema, TankSchema } from '#shared/schemas/facility'
 import { BandSchema, LIMIT_SCOPES } from '#shared/schemas/parameter'
 import { TaskSchema } from '#shared/schemas/task'
@@ -7,9 +8,9 @@ import { TaskSchema } from '#shared/schemas/task'
 const bound = z.number().nullable()
 
 export const TankLimitSchema = z.object({
-  key: z.string(),
-  name: z.string(),
-  unit: z.string(),
+  key: text(),
+  name: text(),
+  unit: text(),
   derived: z.boolean(),
   scope: z.enum(LIMIT_SCOPES).nullable(),
   okMin: bound,
@@ -24,26 +25,26 @@ export const TankOverviewSchema = z.object({
   area: AreaSchema.nullable(),
   system: SystemSchema.nullable(),
   batches: z.array(BatchSchema),
-  batchRecords: z.array(z.object({ id: z.number().int(), batchId: z.number().int(), kind: z.string(), createdAt: z.string() })),
+  batchRecords: z.array(z.object({ id: z.number().int(), batchId: z.number().int(), kind: text(), createdAt: text() })),
   limits: z.array(TankLimitSchema),
   recentTasks: z.array(TaskSchema),
-  events: z.array(z.object({ id: z.number().int(), title: z.string(), kind: z.string(), localStart: z.string(), status: z.string() })),
+  events: z.array(z.object({ id: z.number().int(), title: text(), kind: text(), localStart: text(), status: text() })),
 })
 export type TankOverview = z.infer<typeof TankOverviewSchema>
 
 export const TrendReadingSchema = z.object({
-  parameterKey: z.string(),
+  parameterKey: text(),
   value: z.number(),
-  unit: z.string(),
+  unit: text(),
   band: BandSchema,
   derived: z.boolean(),
-  takenAt: z.string(),
+  takenAt: text(),
 })
 export type TrendReading = z.infer<typeof TrendReadingSchema>
 
 export const TankReadingsSchema = z.object({
   tank: z.array(TrendReadingSchema),
   system: z.array(TrendReadingSchema),
-  mortalityByDay: z.array(z.object({ date: z.string(), count: z.number() })),
+  mortalityByDay: z.array(z.object({ date: text(), count: z.number() })),
 })
 export type TankReadings = z.infer<typeof TankReadingsSchema>

@@ -1,7 +1,7 @@
 import type { TankLimit } from '../api/tank-page-schemas'
 import { formatWhen, withUnit } from '../utils/format'
 import type { TrendPoint } from '../utils/trend-series'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 
 interface FlaggedReadingsProps {
   limit: TankLimit

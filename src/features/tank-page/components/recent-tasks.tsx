@@ -2,7 +2,7 @@ import { ChevronRight } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { Task } from '#shared/schemas/task'
 import { formatLocalDay } from '../utils/format'
-import { BandBadge } from './band-badge'
+import { BandBadge } from '../../../components/ui/band-badge'
 import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 /** The tank's latest tasks, newest first, each opening its own record. */
