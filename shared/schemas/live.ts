@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { TaskSchema } from './task'
+import { text } from './text'
 
 /**
  * What the server's change outbox records and the live feed names: one task (`task`), many tasks
@@ -21,7 +22,7 @@ export const LIVE_EVENTS = {
 export const TasksUpdatedEventSchema = z.object({ tasks: z.array(TaskSchema) })
 export type TasksUpdatedEvent = z.infer<typeof TasksUpdatedEventSchema>
 
-export const TasksChangedEventSchema = z.object({ reasons: z.array(z.string()) })
+export const TasksChangedEventSchema = z.object({ reasons: z.array(text()) })
 export type TasksChangedEvent = z.infer<typeof TasksChangedEventSchema>
 
 export const DataChangedEventSchema = z.object({ kinds: z.array(z.enum(CHANGE_KINDS)) })
