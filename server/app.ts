@@ -10,6 +10,7 @@ import type { AppConfig } from './lib/config'
 import { errorHandler } from './lib/error-handler'
 import { notFound } from './lib/errors'
 import { requestContext } from './lib/request-context'
+import { requestTransaction } from './db/request-transaction'
 import { logger } from './lib/logger'
 import { authRouter } from './modules/auth/auth.routes'
 import { configurePassport } from './modules/auth/passport'
@@ -31,6 +32,14 @@ import { reportsRouter } from './modules/reports/reports.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { stockRouter } from './modules/stock/stock.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
+
+/**
+ * State-changing routes that do not run in one request-long transaction: signing in and out
+ * (the session store keeps its own connection), uploads (the body streams in after the route
+ * starts, and would hold a connection meanwhile) and the tank import, which commits its tanks
+ * and then plans their tasks tank by tank. Each commits its own writes as it goes.
+ */
+const UNWRAPPED_WRITES = [/^\/session$/, /^\/tasks\/\d+\/photos$/, /^\/tanks\/import$/]
 
 export interface AppDeps {
   config: AppConfig
@@ -73,7 +82,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use(express.json({ limit: '256kb' }))
   api.use(requireSameOrigin(config.allowedOrigins))
   api.use('/health', healthRouter)
-  api.use(sessionMiddleware, passport.session(), requestContext)
+  api.use(sessionMiddleware, passport.session(), requestContext, requestTransaction(UNWRAPPED_WRITES))
   api.use('/', authRouter(config))
   api.use('/people', peopleRouter)
   api.use('/staff', staffRouter)

@@ -12,6 +12,7 @@ import { startFakeTextProvider } from './sms/fake-text-provider'
 import { createTextSender } from './sms/text-client'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
+import { startPublisher } from './realtime/publisher'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
 
 /** Starts the whole server (DB, HTTP, sockets); used by server/index.ts and by browser tests. */
@@ -45,6 +46,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
   const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
   const transport = createTransport(mailConfig)
+  const publisher = startPublisher({ intervalMs: config.publishIntervalMs })
   const channels = { text: createTextSender(config) }
   const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
@@ -54,9 +56,11 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
     /** The configuration in force, with the secrets generated or read from the database. */
     config,
     scheduler,
+    publisher,
     smtpPort: smtp?.port ?? null,
     async stop() {
       await scheduler?.stop()
+      await publisher.stop()
       transport.close()
       await smtp?.close()
       await fakeTexts?.close()

@@ -1,4 +1,5 @@
 import { io, type Socket } from 'socket.io-client'
+import { LIVE_EVENTS, type TasksUpdatedEvent } from '#shared/schemas/live'
 import { completionBody, openReadingTaskIds } from './open-tasks'
 import { log, ms, summary, type Row } from './stats'
 
@@ -13,7 +14,7 @@ function connect(url: string, cookie: string): Promise<Socket> {
   })
 }
 
-/** Measurement 4: from a completion's HTTP response until all 50 signed-in clients have its task:updated. */
+/** Measurement 4: from a completion's HTTP response until all 50 signed-in clients have the changed task (tasks:updated). */
 export async function measureSocketFanout(url: string, cookie: string, date: string): Promise<Row> {
   const ids = (await openReadingTaskIds(date)).slice(0, COMPLETIONS)
   if (ids.length < COMPLETIONS) throw new Error(`only ${ids.length} open tasks on ${date}`)
@@ -24,8 +25,8 @@ export async function measureSocketFanout(url: string, cookie: string, date: str
     // The task being watched: when each client saw its update, and who to wake when all have.
     let watch: { id: number; arrivals: number[]; done: () => void } | null = null
     for (const socket of sockets) {
-      socket.on('task:updated', (task: { id: number }) => {
-        if (!watch || task.id !== watch.id) return
+      socket.on(LIVE_EVENTS.tasksUpdated, ({ tasks }: TasksUpdatedEvent) => {
+        if (!watch || !tasks.some((t) => t.id === watch!.id)) return
         watch.arrivals.push(performance.now())
         if (watch.arrivals.length === CLIENTS) watch.done()
       })

@@ -12,6 +12,7 @@ import { BatchRecordEntity, EventEntity, PlaybookEntity } from '../modules/playb
 import { RoutineEntity } from '../modules/routines/routine.entity'
 import { MovementEntity, StockSettingsEntity } from '../modules/stock/stock.entities'
 import { TaskEntity } from '../modules/tasks/task.entity'
+import { ChangeOutboxEntity } from '../realtime/change-outbox.entity'
 
 /** Every table the app maps; a migration must match these. */
 export const entities = [
@@ -19,5 +20,5 @@ export const entities = [
   ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
   ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity, TextOutboxEntity, TextQuotaEntity,
   PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity, AuditEntity, AmendmentEntity,
-  MovementEntity, StockSettingsEntity, IncidentEntity,
+  MovementEntity, StockSettingsEntity, IncidentEntity, ChangeOutboxEntity,
 ]

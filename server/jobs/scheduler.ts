@@ -1,4 +1,5 @@
-import type { DataSource, QueryRunner } from 'typeorm'
+import { DataSource, type EntityManager, type QueryRunner } from 'typeorm'
+import { db } from '../db/data-source'
 import type { AppConfig } from '../lib/config'
 import { logger } from '../lib/logger'
 import { deliverPending, type Channels, type Transport } from '../modules/escalation/deliver'
@@ -6,8 +7,6 @@ import { sendDailyDigestIfDue } from '../modules/escalation/digest'
 import { runEscalations } from '../modules/escalation/escalate'
 import { escalateOverdueIncidents } from '../modules/incidents/incidents.service'
 import { materialise } from '../modules/tasks/materialiser'
-import { getTask } from '../modules/tasks/tasks.service'
-import { publishTask } from '../realtime/task-events'
 import { advanceTaskStatuses } from './status-clock'
 
 const LOCK_NAME = 'roundtide_scheduler'
@@ -27,7 +26,8 @@ export interface SchedulerOptions {
  * lock (GET_LOCK, tied to one connection) to tick, so several app processes on one database
  * never double-act; if the holder dies its connection drops and another takes over.
  */
-export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
+export function startScheduler(source: DataSource | EntityManager, opts: SchedulerOptions = {}) {
+  const ds = source instanceof DataSource ? source : source.dataSource
   const intervalMs = opts.intervalMs ?? 30_000
   const now = opts.now ?? (() => new Date())
   const lockName = opts.lockName ?? LOCK_NAME
@@ -67,10 +67,14 @@ export function startScheduler(ds: DataSource, opts: SchedulerOptions = {}) {
     if (stopped || !(await ensureLock())) return
     try {
       const at = now()
-      const { changed } = await advanceTaskStatuses(ds, at)
-      for (const id of changed.slice(0, 500)) publishTask('task:updated', await getTask(id))
-      await escalateOverdueIncidents(at)
-      await runEscalations(at)
+      // One commit for the tick's state: statuses, their alerts and incidents, the ladders'
+      // next steps and the outbox rows that tell the live feed. Mail goes after it: each
+      // message is claimed and committed before it is sent (record 009).
+      await db().transaction(async () => {
+        await advanceTaskStatuses(db(), at)
+        await escalateOverdueIncidents(at)
+        await runEscalations(at)
+      })
       if (opts.mail) {
         await deliverPending(opts.mail.config, opts.mail.transport, at, opts.mail.channels)
         await sendDailyDigestIfDue(opts.mail.config, opts.mail.transport, at).catch((err) => logger.warn({ err }, 'daily digest not sent'))

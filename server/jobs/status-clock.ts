@@ -1,8 +1,9 @@
-import { In, type DataSource } from 'typeorm'
+import { In, type DataSource, type EntityManager } from 'typeorm'
 import type { TaskStatus } from '#shared/schemas/task'
 import { AlertEntity } from '../modules/completions/completion.entities'
 import { proposeForMissedTasks } from '../modules/incidents/incidents.service'
 import { TaskEntity } from '../modules/tasks/task.entity'
+import { recordTaskChanges } from '../realtime/change-outbox'
 
 interface Step {
   to: TaskStatus
@@ -20,9 +21,15 @@ const STEPS: Step[] = [
 
 /**
  * Moves every task whose time has come, however long the server was away: a task whose grace
- * passed during downtime goes straight to missed, once, and starts one missed-task alert.
+ * passed during downtime goes straight to missed, once, and starts one missed-task alert. The
+ * moves, alerts, proposed incidents and outbox rows commit together (joining the caller's
+ * transaction when there is one).
  */
-export async function advanceTaskStatuses(ds: DataSource, now: Date): Promise<{ changed: number[]; missed: number[] }> {
+export function advanceTaskStatuses(source: DataSource | EntityManager, now: Date): Promise<{ changed: number[]; missed: number[] }> {
+  return source.transaction((manager) => advance(manager, now))
+}
+
+async function advance(ds: EntityManager, now: Date): Promise<{ changed: number[]; missed: number[] }> {
   const repo = ds.getRepository(TaskEntity)
   const changed: number[] = []
   const missed: number[] = []
@@ -51,5 +58,6 @@ export async function advanceTaskStatuses(ds: DataSource, now: Date): Promise<{ 
     const critical = await repo.findBy({ id: In(missed), priority: 'welfare_critical' })
     await proposeForMissedTasks(critical, now)
   }
+  await recordTaskChanges(changed)
   return { changed, missed }
 }

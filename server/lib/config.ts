@@ -40,6 +40,8 @@ const EnvSchema = z.object({
   ROUNDTIDE_REDIS_URL: text().url().optional(),
   /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
   ROUNDTIDE_SCHEDULER_INTERVAL_MS: z.coerce.number().int().min(100).max(3_600_000).default(30_000),
+  /** How often the live-event publisher looks for unsent changes besides after each commit (and its first look after start). */
+  ROUNDTIDE_PUBLISH_INTERVAL_MS: z.coerce.number().int().min(100).max(600_000).default(2_000),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 })
 
@@ -85,6 +87,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       accountSid: e.TWILIO_ACCOUNT_SID ?? (e.ROUNDTIDE_SMS_MODE === 'local' ? LOCAL_ACCOUNT_SID : ''),
       authToken: e.TWILIO_AUTH_TOKEN ?? '',
     },
+    publishIntervalMs: e.ROUNDTIDE_PUBLISH_INTERVAL_MS,
     mail: {
       mode: e.ROUNDTIDE_MAIL_MODE,
       host: e.ROUNDTIDE_SMTP_HOST,

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
-import type { Task } from '#shared/schemas/task'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { connected, nextEvent, startLiveServer, type LiveServer } from '#tests/support/live-server'
+import { connected, nextTask, startLiveServer, type LiveServer } from '#tests/support/live-server'
 import { completion, makeTankTask } from '#tests/support/task-fixtures'
 
 let live: LiveServer
@@ -15,7 +14,7 @@ beforeAll(async () => {
 afterAll(() => live?.stop())
 
 describe('socket.io live updates', () => {
-  test('when one person completes a task over HTTP, then another signed-in socket receives task:updated with it', async () => {
+  test('when one person completes a task over HTTP, then another signed-in socket receives the changed task', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const tech = await signIn('technician')
@@ -23,12 +22,12 @@ describe('socket.io live updates', () => {
     const socket = connect({ extraHeaders: { cookie: watcher.cookie } })
     await connected(socket)
 
-    const updated = nextEvent<Task>(socket, 'task:updated', (t) => t.id === task.id)
+    const updated = nextTask(socket, (t) => t.id === task.id)
     await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 6.8, temp_c: 28.2 })).expect(200)
     expect(await updated).toMatchObject({ id: task.id, status: 'done', completedById: tech.person.id, flag: null })
   })
 
-  test('when a flagged completion makes a recheck, then sockets (websocket transport too) receive task:created for it', async () => {
+  test('when a flagged completion makes a recheck, then sockets (websocket transport too) receive the new recheck task', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const tech = await signIn('technician')
@@ -36,7 +35,7 @@ describe('socket.io live updates', () => {
     const socket = connect({ extraHeaders: { cookie: watcher.cookie }, transports: ['websocket'] })
     await connected(socket)
 
-    const created = nextEvent<Task>(socket, 'task:created', (t) => t.recheckOfTaskId === task.id)
+    const created = nextTask(socket, (t) => t.recheckOfTaskId === task.id)
     const res = await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 3.2, temp_c: 28 })).expect(200)
     expect(await created).toMatchObject({ id: res.body.recheckTaskId, status: 'open', assigneeId: tech.person.id })
   })

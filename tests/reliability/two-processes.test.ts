@@ -3,6 +3,7 @@ import { io, type Socket } from 'socket.io-client'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import type { DataSource } from 'typeorm'
 import { startLocalSmtp } from '#server/mail/local-smtp'
+import { LIVE_EVENTS, type TasksUpdatedEvent } from '#shared/schemas/live'
 import type { Task } from '#shared/schemas/task'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { DEMO, call, freePort, openDb, schedulerLeader, signIn, sleep, startApp, startRedis, summary, waitFor, type AppProcess } from './support/harness'
@@ -37,11 +38,12 @@ function connect(url: string, cookie: string, transports?: Array<'polling' | 'we
   })
 }
 
-function nextTask(socket: Socket, event: string, id: number, ms = 5000) {
+function nextTask(socket: Socket, id: number, ms = 5000) {
   return new Promise<Task>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`no ${event} for task ${id} within ${ms} ms`)), ms)
-    socket.on(event, (task: Task) => {
-      if (task.id !== id) return
+    const timer = setTimeout(() => reject(new Error(`no ${LIVE_EVENTS.tasksUpdated} for task ${id} within ${ms} ms`)), ms)
+    socket.on(LIVE_EVENTS.tasksUpdated, ({ tasks }: TasksUpdatedEvent) => {
+      const task = tasks.find((t) => t.id === id)
+      if (!task) return
       clearTimeout(timer)
       resolve(task)
     })
@@ -85,7 +87,7 @@ describe('more than one machine', () => {
     const onB = [await connect(b.url, supervisor), await connect(b.url, supervisor, ['websocket'])]
     const onA = await connect(a.url, tech, ['websocket'])
     const task = await makeTankTask(tanks[0], { title: `Two processes live ${run}`, assigneeId: null, status: 'open', priority: 'routine' })
-    const arrivals = onB.map((s) => nextTask(s, 'task:updated', task.id))
+    const arrivals = onB.map((s) => nextTask(s, task.id))
     const sentAt = performance.now()
     const done = await call(a.url, `/api/tasks/${task.id}/completion`, { method: 'POST', cookie: tech, body: { completionId: randomUUID(), readings: OK_READINGS } })
     expect(done.status).toBe(200)
@@ -95,7 +97,7 @@ describe('more than one machine', () => {
 
     // And the other way: an assignment made on B reaches a socket on A.
     const other = await makeTankTask(tanks[1], { title: `Two processes move ${run}`, assigneeId: null, status: 'open', priority: 'routine' })
-    const onAArrival = nextTask(onA, 'task:updated', other.id)
+    const onAArrival = nextTask(onA, other.id)
     const moved = await call(b.url, `/api/tasks/${other.id}`, { method: 'PATCH', cookie: supervisor, body: { version: other.version, assigneeId: null } })
     expect(moved.status).toBe(200)
     expect((await onAArrival).version).toBe(moved.body.version)
@@ -129,7 +131,7 @@ describe('more than one machine', () => {
 
     summary('two-processes', {
       'processes (ports)': `A :${a.port} (local SMTP), B :${b.port}; Redis ${redis!.url}`,
-      'completion on A → task:updated on B (polling + websocket), ms': crossMs,
+      'completion on A → tasks:updated on B (polling + websocket), ms': crossMs,
       'assignment on B → socket on A': 'received',
       'missed task: messages / notification rows': `${firstTally.mails} / ${firstTally.rows}`,
       'scheduler leader before the kill': leader!.name,

@@ -1,9 +1,8 @@
 import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { TEST_PASSWORD } from '#seed/factories'
-import type { Task } from '#shared/schemas/task'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { connected, disconnected, nextEvent, rawPollingConnect, startLiveServer, type LiveServer } from '#tests/support/live-server'
+import { connected, disconnected, nextTask, rawPollingConnect, startLiveServer, type LiveServer } from '#tests/support/live-server'
 import { completion, makeTankTask } from '#tests/support/task-fixtures'
 
 let live: LiveServer
@@ -18,14 +17,14 @@ describe('the live feed needs a signed-in person', () => {
     expect(await rawPollingConnect(live.url, query)).toBe('refused')
   })
 
-  test('an anonymous polling client with an empty sid receives no task:updated when a task is completed', async () => {
+  test('an anonymous polling client with an empty sid receives no changed task when a task is completed', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const tech = await live.signIn('technician')
     const anonymous = live.connect({ query: { sid: '' }, transports: ['polling'] })
     const error = await connected(anonymous).then(() => null, (e: Error) => e)
     expect(error).toBeInstanceOf(Error)
-    const leaked = nextEvent<Task>(anonymous, 'task:updated', (t) => t.id === task.id, 1500).then(() => true, () => false)
+    const leaked = nextTask(anonymous, (t) => t.id === task.id, 1500).then(() => true, () => false)
     await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 6.9, temp_c: 28 })).expect(200)
     expect(await leaked).toBe(false)
   })

@@ -6,11 +6,14 @@ import { startServer } from '#server/start-server'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
 import type { Role } from '#shared/schemas/person'
 import type { AppConfig } from '#server/lib/config'
+import { LIVE_EVENTS, type TasksUpdatedEvent } from '#shared/schemas/live'
+import type { Task } from '#shared/schemas/task'
 import { testConfig } from './test-app'
 
 /** The whole server on a free port (HTTP and socket.io), with helpers for signed-in sockets. */
 export async function startLiveServer(overrides: Partial<AppConfig> = {}) {
-  const server = await startServer(testConfig({ port: 0, ...overrides }), { scheduler: false })
+  // Live events go out a moment after each commit; the first pass comes one publish interval after start.
+  const server = await startServer(testConfig({ port: 0, publishIntervalMs: 100, ...overrides }), { scheduler: false })
   const sockets: Socket[] = []
 
   /** A new person of that role, signed in over HTTP; returns their agent and the session cookie. */
@@ -52,6 +55,12 @@ export function nextEvent<T>(socket: Socket, event: string, match: (payload: T) 
       resolve(payload)
     })
   })
+}
+
+/** The next batch of changed tasks (`tasks:updated`) holding a task that matches; resolves with that task. */
+export async function nextTask(socket: Socket, match: (task: Task) => boolean, ms = 5000): Promise<Task> {
+  const batch = await nextEvent<TasksUpdatedEvent>(socket, LIVE_EVENTS.tasksUpdated, ({ tasks }) => tasks.some(match), ms)
+  return batch.tasks.find(match)!
 }
 
 export const connected = (socket: Socket) =>

@@ -6,6 +6,7 @@ import type { Person } from '#shared/schemas/person'
 import { MORTALITY_READING } from '#shared/schemas/stock'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
+import { recordChange } from '../../realtime/change-outbox'
 import { audit } from '../audit/audit.service'
 import { ParameterEntity } from '../parameters/parameter.entities'
 import { adjustRoundMortality } from '../stock/round-mortality'
@@ -54,6 +55,7 @@ export async function amendCompletion(completionId: string, person: Person, inpu
       if (rows.length) await readingsRepo.insert(rows)
       await adjustRoundMortality(manager, { completionId, amendmentId: amendment.id, tankId: context.tankId, count: data.readings[MORTALITY_READING], reason: data.reason, personId: person.id, at: new Date() })
     }
+    await recordChange('amendment', [completionId])
     await audit('completion', completionId, 'amend', { readings: current.map((r) => ({ key: r.parameterKey, value: r.value })) }, { reason: data.reason, readings: data.readings, note: data.note ?? null })
     return { id: amendment.id, completionId, reason: amendment.reason, readings: amendment.readings, note: amendment.note, createdAt: amendment.createdAt.toISOString(), personName: person.name }
   })

@@ -6,9 +6,7 @@ import { IdParamSchema } from '#shared/schemas/facility'
 import { PHOTO_CACHE_CONTROL } from '../../lib/cache-control'
 import type { AppConfig } from '../../lib/config'
 import { AppError } from '../../lib/errors'
-import { publishTask } from '../../realtime/task-events'
 import { requireRole, signedIn } from '../auth/require-role'
-import { getTask } from '../tasks/tasks.service'
 import { takeTask } from '../tasks/take-task.service'
 import { amendCompletion, completionHistory } from './amendments.service'
 import { completeTask } from './completions.service'
@@ -22,10 +20,7 @@ export function completionsRouter(config: AppConfig) {
 
   router.post('/tasks/:id/completion', doers, async (req, res) => {
     const { id } = IdParamSchema.parse(req.params)
-    const result = await completeTask(id, req.user!, req.body)
-    publishTask('task:updated', result.task)
-    if (result.recheckTaskId) publishTask('task:created', await getTask(result.recheckTaskId))
-    res.json(result)
+    res.json(await completeTask(id, req.user!, req.body))
   })
 
   router.get('/tasks/:id/completion', signedIn, async (req, res) => {
@@ -38,9 +33,7 @@ export function completionsRouter(config: AppConfig) {
   })
 
   router.post('/tasks/:id/take', doers, async (req, res) => {
-    const task = await takeTask(IdParamSchema.parse(req.params).id, req.user!)
-    publishTask('task:updated', task)
-    res.json(task)
+    res.json(await takeTask(IdParamSchema.parse(req.params).id, req.user!))
   })
 
   router.post('/tasks/:id/photos', doers, upload.single('photo'), async (req, res) => {

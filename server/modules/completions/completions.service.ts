@@ -6,11 +6,12 @@ import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
+import { audit } from '../audit/audit.service'
 import { PersonEntity } from '../people/person.entity'
 import { toPerson } from '../people/person.mapper'
 import { ParameterEntity } from '../parameters/parameter.entities'
 import { assessRoundMortality, writeRoundMortality } from '../stock/round-mortality'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { closeTask, recheckOf, type TaskRow } from '../tasks/task-writes.service'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
 import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
@@ -30,8 +31,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
   if (replay) {
     if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
-    // The first attempt may have been cut off between its commit and recording its answer
-    // (the database went away): answer the retry from the stored completion instead.
+    // A retry of a committed completion gets the stored answer; completions stored before the
+    // answer joined their commit may have none: answer from the record instead.
     return (replay.response as CompletionResult | null) ?? answerFromRecord(replay)
   }
   const task = await getTaskRow(taskId)
@@ -53,22 +54,8 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
   const result = await db().transaction(async (manager) => {
-    const claimed = await manager
-      .createQueryBuilder()
-      .update(TaskEntity)
-      .set({
-        status: data.outcome,
-        flag: flag === 'ok' ? null : flag,
-        lateMinutes,
-        completedAt: doneAt,
-        completedById: performer.id,
-        assigneeId: task.assigneeId ?? performer.id,
-        version: () => 'version + 1',
-      })
-      .where('id = :id AND version = :version', { id: task.id, version: task.version })
-      .andWhere("status NOT IN ('done', 'skipped')")
-      .execute()
-    if (!claimed.affected) return null
+    const closing = { outcome: data.outcome, flag: flag === 'ok' ? null : flag, lateMinutes, completedAt: doneAt, completedById: performer.id, assigneeId: task.assigneeId ?? performer.id }
+    if (!(await closeTask(task, closing))) return null
     await manager.getRepository(CompletionEntity).insert({
       id: data.completionId, taskId: task.id, personId: performer.id, enteredById: performer.id === person.id ? null : person.id, outcome: data.outcome,
       skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
@@ -82,29 +69,32 @@ export async function completeTask(taskId: number, person: Person, input: unknow
       )
     }
     if (mortality?.plan) await writeRoundMortality(manager, mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
-    return true
+
+    // The recheck, the alert, the stored answer and the outbox rows commit with the completion:
+    // a crash can lose all of it (the retry then does it all) but never half.
+    const updated = await getTaskRow(taskId)
+    // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
+    const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
+    if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
+    await proposeIncidentsAfterCompletion(updated, flag, readings.rows, mortality?.plan, data.completionId, new Date())
+    const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
+    await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
+    await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
+    return response
   })
   if (!result) {
     // Lost the race: say who won.
     await assertStillOpen(await getTaskRow(taskId))
     throw conflict('This task changed while you were completing it. Check it and try again.')
   }
-
-  const updated = await getTaskRow(taskId)
-  // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
-  const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
-  if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
-  await proposeIncidentsAfterCompletion(updated, flag, readings.rows, mortality?.plan, data.completionId, new Date())
-  const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
-  await db().getRepository(CompletionEntity).update(data.completionId, { response: response as never })
-  return response
+  return result
 }
 
 async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
   const [task, readings, recheck] = await Promise.all([
     getTaskRow(row.taskId),
     db().getRepository(ReadingEntity).find({ where: { completionId: row.id, amendmentId: IsNull() }, order: { id: 'ASC' } }),
-    db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: row.taskId }),
+    recheckOf(row.taskId),
   ])
   return {
     task: toTask(task, await loadTaskContext()),

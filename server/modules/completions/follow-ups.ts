@@ -4,7 +4,7 @@ import type { Reading } from '#shared/schemas/completion'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
 import { getFacility } from '../facility/facility.service'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { createTask, type TaskRow } from '../tasks/task-writes.service'
 import { AlertEntity } from './completion.entities'
 
 export const RECHECK_AFTER_MINUTES = 30
@@ -12,36 +12,33 @@ export const RECHECK_AFTER_MINUTES = 30
 /** A flagged completion asks for the same check again soon, by the same person. */
 export async function createRecheck(task: TaskRow, personId: number): Promise<TaskRow> {
   const due = new Date(Date.now() + RECHECK_AFTER_MINUTES * 60_000)
-  const repo = db().getRepository(TaskEntity)
   const zone = (await getFacility()).timeZone
   const localStart = DateTime.fromJSDate(due).setZone(zone).toFormat("yyyy-MM-dd'T'HH:mm:ss")
-  return repo.save(
-    repo.create({
-      routineId: null,
-      eventId: task.eventId,
-      title: `Recheck: ${task.title.replace(/^Recheck: /, '')}`,
-      category: task.category,
-      instructions: `Flagged at the last check. Read again and compare. ${task.instructions}`.trim(),
-      priority: task.flag === 'critical' ? 'welfare_critical' : task.priority,
-      targetKind: task.targetKind,
-      targetId: task.targetId,
-      tankId: task.tankId,
-      areaId: task.areaId,
-      localDate: localStart.slice(0, 10),
-      localStart,
-      occurrenceStart: localStart,
-      dueAt: due,
-      windowStartAt: new Date(),
-      graceUntil: new Date(due.getTime() + 30 * 60_000),
-      durationMinutes: task.durationMinutes,
-      status: 'open',
-      assigneeId: personId,
-      assignedManually: true,
-      requiredReadings: task.requiredReadings,
-      recheckOfTaskId: task.id,
-      version: 1,
-    }),
-  )
+  return createTask({
+    routineId: null,
+    eventId: task.eventId,
+    title: `Recheck: ${task.title.replace(/^Recheck: /, '')}`,
+    category: task.category,
+    instructions: `Flagged at the last check. Read again and compare. ${task.instructions}`.trim(),
+    priority: task.flag === 'critical' ? 'welfare_critical' : task.priority,
+    targetKind: task.targetKind,
+    targetId: task.targetId,
+    tankId: task.tankId,
+    areaId: task.areaId,
+    localDate: localStart.slice(0, 10),
+    localStart,
+    occurrenceStart: localStart,
+    dueAt: due,
+    windowStartAt: new Date(),
+    graceUntil: new Date(due.getTime() + 30 * 60_000),
+    durationMinutes: task.durationMinutes,
+    status: 'open',
+    assigneeId: personId,
+    assignedManually: true,
+    requiredReadings: task.requiredReadings,
+    recheckOfTaskId: task.id,
+    version: 1,
+  })
 }
 
 /** A critical reading starts the escalation at once; the ladder sends the mail. */

@@ -2,7 +2,7 @@ import type { Limit } from '#shared/schemas/parameter'
 import { db } from '../../db/data-source'
 import { BatchEntity, SystemEntity, TankEntity } from '../facility/facility.entities'
 import { LimitEntity } from '../parameters/parameter.entities'
-import type { TaskRow } from '../tasks/task.entity'
+import type { TaskRow } from '../tasks/task-writes.service'
 
 export interface ReadingContext {
   tankId: number | null

@@ -1,6 +1,6 @@
 import type { Person } from '#shared/schemas/person'
 import { forbidden } from '../../lib/errors'
-import type { TaskRow } from '../tasks/task.entity'
+import type { TaskRow } from '../tasks/task-writes.service'
 
 /**
  * Observers never complete; a technician completes their own tasks or unassigned ones

@@ -2,6 +2,7 @@ import type { EntitySchema, ObjectLiteral } from 'typeorm'
 import type { z } from 'zod'
 import { db } from '../../db/data-source'
 import { conflict, notFound } from '../../lib/errors'
+import { recordChange } from '../../realtime/change-outbox'
 
 type WithId = ObjectLiteral & { id: number }
 
@@ -45,6 +46,7 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
       await opts.checkRefs?.(data as Partial<T>)
       const saved = (await repo().save(repo().create(data as never))) as unknown as T
       await opts.onChange?.(null, saved)
+      await recordChange('catalogue', [saved.id])
       return saved
     },
     async update(id: number, input: unknown): Promise<T> {
@@ -54,6 +56,7 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
       await opts.checkRefs?.(data)
       const after = await repo().save({ ...before, ...data })
       await opts.onChange?.(before, after)
+      await recordChange('catalogue', [id])
       return after
     },
     async remove(id: number): Promise<void> {
@@ -66,6 +69,7 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
         throw err
       }
       await opts.onChange?.(before, null)
+      await recordChange('catalogue', [id])
     },
   }
 }

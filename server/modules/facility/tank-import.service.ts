@@ -2,6 +2,7 @@ import Papa from 'papaparse'
 import { TankInputSchema, type TankImportResult, type TankInput } from '#shared/schemas/facility'
 import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
+import { recordChange } from '../../realtime/change-outbox'
 import { AreaEntity, SystemEntity, TankEntity } from './facility.entities'
 import { materialiseForTank, removeUntouchedFutureTasks } from '../tasks/materialiser'
 
@@ -90,6 +91,7 @@ async function saveTanks(rows: TankInput[]): Promise<TankImportResult> {
       result.updated++
       if (current.inUse !== row.inUse) changedUse.push({ id: current.id, inUse: row.inUse })
     }
+    if (result.created || result.updated) await recordChange('catalogue')
   })
   for (const change of changedUse) {
     if (change.inUse) await materialiseForTank(change.id)

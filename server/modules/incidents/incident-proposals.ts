@@ -1,4 +1,5 @@
 import { db } from '../../db/data-source'
+import { recordChange } from '../../realtime/change-outbox'
 import { getStockSettings } from '../stock/stock-settings.service'
 import { IncidentEntity } from './incident.entity'
 
@@ -38,6 +39,7 @@ export async function proposeIncident(p: IncidentProposal, now: Date): Promise<v
     })
     .orIgnore()
     .execute()
+  await recordChange('incident')
 }
 
 /** Missed welfare-critical checks: one proposal each (the clock passes the tasks it just marked missed). */

@@ -6,6 +6,7 @@ import {
 } from '#shared/schemas/incident'
 import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
+import { recordChange } from '../../realtime/change-outbox'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { closeIncidentAlert } from '../completions/follow-ups'
 import { listPeople } from '../people/people.service'
@@ -58,6 +59,7 @@ export async function decideIncident(id: number, decision: 'confirm' | 'dismiss'
     const row = await load(id)
     throw conflict(`This incident is already ${row.status}; nothing was changed.`)
   }
+  await recordChange('incident', [id])
   return getIncident(id)
 }
 
@@ -81,6 +83,7 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
   }
   await repo().update(id, next)
   if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
+  await recordChange('incident', [id])
   return getIncident(id)
 }
 
@@ -94,5 +97,6 @@ export async function addIncidentNote(id: number, input: unknown, who: Actor, no
   const { text } = IncidentNoteInputSchema.parse(input)
   const row = await load(id)
   await repo().update(id, { notes: [...row.notes, { at: now.toISOString(), personId: who.id, personName: who.name, text }] })
+  await recordChange('incident', [id])
   return getIncident(id)
 }

@@ -15,6 +15,8 @@ export interface CylinderRow {
   flowLPerMin: number
   lastReadAt: Date | null
   active: boolean
+  /** The replace task raised for this cylinder, found by id (a title can be typed by anyone). */
+  replaceTaskId: number | null
 }
 
 export const CylinderEntity = new EntitySchema<CylinderRow>({
@@ -33,5 +35,6 @@ export const CylinderEntity = new EntitySchema<CylinderRow>({
     flowLPerMin: { type: 'double', default: 0 },
     lastReadAt: { type: 'datetime', precision: 3, nullable: true },
     active: { type: 'boolean', default: true },
+    replaceTaskId: { type: 'int', nullable: true },
   },
 })

@@ -1,6 +1,5 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
-import { broadcast } from '../../realtime/socket-server'
 import { requireRole, signedIn } from '../auth/require-role'
 import { createCylinder, listCylinders, recordCylinderReading } from './oxygen.service'
 
@@ -13,7 +12,5 @@ oxygenRouter.post('/oxygen/cylinders', requireRole('manager', 'supervisor'), asy
   res.status(201).json(await createCylinder(req.body))
 })
 oxygenRouter.post('/oxygen/cylinders/:id/readings', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
-  const status = await recordCylinderReading(IdParamSchema.parse(req.params).id, req.body)
-  if (status.replaceTaskId) broadcast('tasks:changed', { reason: 'oxygen' })
-  res.json(status)
+  res.json(await recordCylinderReading(IdParamSchema.parse(req.params).id, req.body))
 })

@@ -1,12 +1,11 @@
 import { DateTime } from 'luxon'
-import { In, Not } from 'typeorm'
 import { estimateSupply, pressureUnitFor, type CylinderSettings } from '#shared/oxygen-supply/cylinder'
 import { CylinderInputSchema, CylinderReadingInputSchema, type CylinderStatus } from '#shared/schemas/oxygen'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { AlertEntity } from '../completions/completion.entities'
 import { getFacility } from '../facility/facility.service'
-import { TaskEntity } from '../tasks/task.entity'
+import { createTask, openTask } from '../tasks/task-writes.service'
 import { CylinderEntity, type CylinderRow } from './oxygen.entities'
 
 const repo = () => db().getRepository(CylinderEntity)
@@ -28,7 +27,7 @@ const replaceTitle = (c: CylinderRow) => `Replace oxygen cylinder ${c.code}`
 
 async function toStatus(c: CylinderRow, minHours: number): Promise<CylinderStatus> {
   const estimate = c.lastPressure !== null && c.flowLPerMin > 0 ? estimateSupply(settingsOf(c), { gaugePressure: c.lastPressure, flowLPerMin: c.flowLPerMin }) : null
-  const openReplace = await db().getRepository(TaskEntity).findOne({ where: { title: replaceTitle(c), status: Not(In(['done', 'skipped'])) } })
+  const openReplace = c.replaceTaskId === null ? null : await openTask(c.replaceTaskId)
   return {
     id: c.id, code: c.code, label: c.label, method: c.method, unit: pressureUnitFor(settingsOf(c)), reservePressure: c.reservePressure,
     lastPressure: c.lastPressure, flowLPerMin: c.flowLPerMin, lastReadAt: c.lastReadAt?.toISOString() ?? null,
@@ -47,7 +46,7 @@ export async function listCylinders(): Promise<CylinderStatus[]> {
 export async function createCylinder(input: unknown): Promise<CylinderStatus> {
   const data = CylinderInputSchema.parse(input)
   if (await repo().findOneBy({ code: data.code })) throw conflict(`Another cylinder already has the code ${data.code}.`)
-  const row = await repo().save({ ...data, lastPressure: null, lastReadAt: null, active: true })
+  const row = await repo().save({ ...data, lastPressure: null, lastReadAt: null, active: true, replaceTaskId: null })
   return toStatus(row, (await getFacility()).minOxygenHours)
 }
 
@@ -76,16 +75,16 @@ export async function recordCylinderReading(id: number, input: unknown): Promise
 
 async function raiseReplaceTask(c: CylinderRow, status: CylinderStatus, zone: string): Promise<number> {
   const due = DateTime.now().setZone(zone).plus({ minutes: 30 })
-  const repoT = db().getRepository(TaskEntity)
   const critical = status.level === 'critical'
-  const task = await repoT.save(repoT.create({
+  const task = await createTask({
     routineId: null, eventId: null, title: replaceTitle(c), category: 'life_support',
     instructions: `${status.hoursToReserve} h of oxygen left to the reserve pressure at ${c.flowLPerMin} L/min. Change over to a full cylinder and record the new pressure.`,
     priority: critical ? 'welfare_critical' : 'routine', targetKind: 'facility', targetId: 0, tankId: null, areaId: null,
     localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), occurrenceStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
     dueAt: due.toJSDate(), windowStartAt: new Date(), graceUntil: due.plus({ minutes: 30 }).toJSDate(), durationMinutes: 15,
     status: 'open', assigneeId: null, requiredReadings: [], version: 1,
-  }))
+  })
+  await repo().update(c.id, { replaceTaskId: task.id })
   if (critical) {
     await db().getRepository(AlertEntity).insert({ taskId: task.id, kind: 'critical_reading', detail: `cylinder_bar ${c.lastPressure} at ${c.code}: ${status.hoursToReserve} h to reserve`, ladderId: null, startedAt: new Date() })
   }

@@ -1,13 +1,13 @@
 import { stepOccurrences } from '#shared/playbooks/step-times'
-import type { TaskRow } from '../tasks/task.entity'
+import type { NewTask } from '../tasks/task-writes.service'
 import type { Catalogue } from '../tasks/targets'
 import type { EventRow, PlaybookRow } from './playbook.entities'
 
 /** The tasks a playbook makes for one event: per tank where the step says so, else one for the event. */
-export function planEventTasks(event: EventRow, playbook: PlaybookRow, tankIds: number[], cat: Catalogue): Array<Partial<TaskRow>> {
+export function planEventTasks(event: EventRow, playbook: PlaybookRow, tankIds: number[], cat: Catalogue): NewTask[] {
   const zone = cat.facility.timeZone
   const tanks = tankIds.map((id) => cat.tanks.get(id)).filter((t) => !!t)
-  const rows: Array<Partial<TaskRow>> = []
+  const rows: NewTask[] = []
   for (const step of playbook.steps) {
     const targets = step.perTank || !tanks.length
       ? tanks.map((t) => ({ kind: 'tank' as const, id: t.id, tankId: t.id, areaId: t.areaId }))

@@ -1,11 +1,10 @@
 import { DateTime } from 'luxon'
-import { In } from 'typeorm'
 import { EventInputSchema, FASTING_KINDS, UpdateEventInputSchema, type FacilityEvent } from '#shared/schemas/playbook'
 import type { Person } from '#shared/schemas/person'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
-import { TaskEntity } from '../tasks/task.entity'
+import { countEventTasks, createEventTasks, eventTasks, removeUntouchedEventTasks } from '../tasks/task-writes.service'
 import { loadCatalogue } from '../tasks/targets'
 import { planEventTasks } from './event-tasks'
 import { holdFeedsForEvent, releaseFeedsForEvent } from './fasting'
@@ -14,7 +13,7 @@ import { EventEntity, PlaybookEntity, type EventRow } from './playbook.entities'
 const events = () => db().getRepository(EventEntity)
 
 async function toEvent(row: EventRow): Promise<FacilityEvent> {
-  const taskCount = await db().getRepository(TaskEntity).countBy({ eventId: row.id })
+  const taskCount = await countEventTasks(row.id)
   return {
     ...row,
     startsAt: row.startsAt.toISOString(),
@@ -71,8 +70,8 @@ export async function startEvent(input: unknown, person: Person): Promise<Facili
       status: 'planned' as const, createdById: person.id, version: 1, ...timing(data.localStart, cat.facility.timeZone, fastingHours),
     })
     const rows = planEventTasks(row, playbook, ids, cat)
-    for (let i = 0; i < rows.length; i += 500) await manager.getRepository(TaskEntity).insert(rows.slice(i, i + 500))
-    await holdFeedsForEvent(row, manager)
+    await createEventTasks(rows)
+    await holdFeedsForEvent(row)
     return row
   })
   await audit('event', saved.id, 'create', null, saved)
@@ -93,24 +92,14 @@ export async function updateEvent(id: number, input: unknown): Promise<FacilityE
   const next: EventRow = { ...current, tankIds: ids, notes: data.notes ?? current.notes, version: current.version + 1, ...timing(data.localStart ?? current.localStart, cat.facility.timeZone, FASTING_KINDS.includes(current.kind) ? hours : 0) }
   await db().transaction(async (manager) => {
     await manager.getRepository(EventEntity).save(next)
-    await removeUntouchedEventTasks(id, manager)
-    const kept = new Set((await manager.getRepository(TaskEntity).find({ where: { eventId: id } })).map((t) => `${t.title}|${t.tankId}|${t.occurrenceStart}`))
+    await removeUntouchedEventTasks(id)
+    const kept = new Set((await eventTasks(id)).map((t) => `${t.title}|${t.tankId}|${t.occurrenceStart}`))
     const rows = planEventTasks(next, playbook, ids, cat).filter((r) => !kept.has(`${r.title}|${r.tankId}|${r.occurrenceStart}`))
-    for (let i = 0; i < rows.length; i += 500) await manager.getRepository(TaskEntity).insert(rows.slice(i, i + 500))
-    await holdFeedsForEvent(next, manager)
+    await createEventTasks(rows)
+    await holdFeedsForEvent(next)
   })
   await audit('event', id, 'update', current, next)
   return getEvent(id)
-}
-
-async function removeUntouchedEventTasks(eventId: number, manager = db().manager) {
-  await manager
-    .createQueryBuilder()
-    .delete()
-    .from(TaskEntity)
-    .where({ eventId, status: In(['planned', 'open', 'overdue']) })
-    .andWhere('assignedManually = 0 AND edited = 0 AND completedAt IS NULL')
-    .execute()
 }
 
 /** Cancelling removes the event's untouched tasks and gives back the held feeds still ahead. */

@@ -1,38 +1,23 @@
-import { In, type EntityManager } from 'typeorm'
 import { db } from '../../db/data-source'
-import { TaskEntity } from '../tasks/task.entity'
+import { holdFeeds, releaseFeeds } from '../tasks/task-writes.service'
 import { EventEntity, type EventRow } from './playbook.entities'
+
+const fastingReason = (event: EventRow) => `Fasting before ${event.title}`.slice(0, 300)
 
 /**
  * Holds the feeding tasks of an event's tanks inside its fasting window: status `held` with
  * the reason, never counted as missed or escalated. Idempotent, so it can run after every
  * materialisation too.
  */
-export async function holdFeedsForEvent(event: EventRow, manager: EntityManager = db().manager): Promise<number> {
+export async function holdFeedsForEvent(event: EventRow): Promise<number> {
   if (!event.fastingFrom || !event.fastingTo || event.status !== 'planned' || !event.tankIds.length) return 0
-  const result = await manager
-    .createQueryBuilder()
-    .update(TaskEntity)
-    .set({ status: 'held', heldReason: `Fasting before ${event.title}`.slice(0, 300), version: () => 'version + 1' })
-    .where({ category: 'feeding', tankId: In(event.tankIds), status: In(['planned', 'open', 'overdue']) })
-    .andWhere('dueAt >= :from AND dueAt < :to', { from: event.fastingFrom, to: event.fastingTo })
-    .andWhere('eventId IS NULL')
-    .execute()
-  return result.affected ?? 0
+  return holdFeeds({ tankIds: event.tankIds, reason: fastingReason(event) }, event.fastingFrom, event.fastingTo)
 }
 
 /** Ending or cancelling an event gives back the held feeds that are still ahead; past ones stay held. */
-export async function releaseFeedsForEvent(event: EventRow, now = new Date(), manager: EntityManager = db().manager): Promise<number> {
+export async function releaseFeedsForEvent(event: EventRow, now = new Date()): Promise<number> {
   if (!event.fastingFrom || !event.tankIds.length) return 0
-  const result = await manager
-    .createQueryBuilder()
-    .update(TaskEntity)
-    .set({ status: 'planned', heldReason: null, version: () => 'version + 1' })
-    .where({ status: 'held', category: 'feeding', tankId: In(event.tankIds) })
-    .andWhere('dueAt > :now', { now })
-    .andWhere('heldReason = :reason', { reason: `Fasting before ${event.title}`.slice(0, 300) })
-    .execute()
-  return result.affected ?? 0
+  return releaseFeeds({ tankIds: event.tankIds, reason: fastingReason(event) }, now)
 }
 
 /** Re-applies every planned event's fasting window (new feeding tasks may have been materialised). */

@@ -2,7 +2,6 @@ import { Router } from 'express'
 import { z } from 'zod'
 import { calendarDate } from '#shared/schemas/calendar'
 import { IdParamSchema } from '#shared/schemas/facility'
-import { broadcast } from '../../realtime/socket-server'
 import { requireRole, signedIn } from '../auth/require-role'
 import { addBatchRecord, listBatchRecords } from './batch-records.service'
 import { cancelEvent, endEvent, getEvent, listEvents, startEvent, updateEvent } from './events.service'
@@ -35,22 +34,18 @@ playbooksRouter.get('/events/:id', signedIn, async (req, res) => {
 })
 playbooksRouter.post('/events', planners, async (req, res) => {
   const event = await startEvent(req.body, req.user!)
-  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
   res.status(201).json(event)
 })
 playbooksRouter.patch('/events/:id', planners, async (req, res) => {
   const event = await updateEvent(IdParamSchema.parse(req.params).id, req.body)
-  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
   res.json(event)
 })
 playbooksRouter.post('/events/:id/cancel', planners, async (req, res) => {
   const event = await cancelEvent(IdParamSchema.parse(req.params).id)
-  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
   res.json(event)
 })
 playbooksRouter.post('/events/:id/end', planners, async (req, res) => {
   const event = await endEvent(IdParamSchema.parse(req.params).id)
-  broadcast('tasks:changed', { reason: 'event', eventId: event.id })
   res.json(event)
 })
 

@@ -1,6 +1,7 @@
 import { Between, In } from 'typeorm'
 import type { AssigneeRule } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { PersonEntity } from '../people/person.entity'
 import { RoutineEntity } from '../routines/routine.entity'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
@@ -77,5 +78,6 @@ export async function applyAssigneeRules(from: string, to: string, opts: { routi
       await db().getRepository(TaskEntity).update({ id: In(ids.slice(i, i + 1000)), assignedManually: false }, { assigneeId, version: () => 'version + 1' })
     }
   }
+  await recordTaskChanges([...updates.keys()], 'assignees')
   return updates.size
 }

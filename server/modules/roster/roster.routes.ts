@@ -4,7 +4,7 @@ import { z } from 'zod'
 import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RosterRangeQuerySchema } from '#shared/schemas/roster'
-import { broadcast } from '../../realtime/socket-server'
+import { recordChange } from '../../realtime/change-outbox'
 import { requireRole, signedIn } from '../auth/require-role'
 import { applyAssigneeRules } from './assignee-rules.service'
 import { getCalendar } from './calendar.service'
@@ -16,11 +16,11 @@ import { generateRotation } from './rotation.service'
 export const rosterRouter = Router()
 const planners = requireRole('manager', 'supervisor')
 
-/** A roster change may change who a rule assigns; re-apply the rules over the next weeks. */
+/** A roster change may change who a rule assigns; re-apply the rules over the next weeks (in the request's commit). */
 async function afterRosterChange() {
   const today = DateTime.utc().minus({ days: 1 }).toISODate()!
-  const changed = await applyAssigneeRules(today, DateTime.utc().plus({ days: 43 }).toISODate()!)
-  if (changed) broadcast('tasks:changed', { reason: 'roster' })
+  await applyAssigneeRules(today, DateTime.utc().plus({ days: 43 }).toISODate()!)
+  await recordChange('roster')
 }
 
 rosterRouter.get('/shifts', signedIn, async (req, res) => {

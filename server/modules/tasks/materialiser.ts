@@ -3,6 +3,7 @@ import { expandRuleBounded, type Occurrence } from '#shared/schedule/expand-rule
 import { RULE_LIMITS } from '#shared/schedule/rule-limits'
 import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
+import { recordBulkTaskChange } from '../../realtime/change-outbox'
 import { logger } from '../../lib/logger'
 import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
@@ -76,6 +77,7 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     }
     // New feeding tasks may fall inside a planned event's fasting window.
     await holdFeedsForAllEvents()
+    await recordBulkTaskChange('planned')
   }
   return { created, routines: routines.length }
 }
@@ -187,6 +189,7 @@ export async function removeUntouchedFutureTasks(where: { routineId?: number; ta
   if (where.routineId !== undefined) qb.andWhere('routineId = :routineId', { routineId: where.routineId })
   if (where.tankId !== undefined) qb.andWhere('tankId = :tankId AND routineId IS NOT NULL', { tankId: where.tankId })
   const result = await qb.execute()
+  if (result.affected) await recordBulkTaskChange('removed')
   return result.affected ?? 0
 }
 

@@ -5,6 +5,7 @@ import { MoveTaskInputSchema, type Task } from '#shared/schemas/task'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { getFacility } from '../facility/facility.service'
 import { PersonEntity } from '../people/person.entity'
 import { ShiftEntity } from '../roster/roster.entities'
@@ -35,16 +36,18 @@ export async function moveTask(taskId: number, actor: Person, input: unknown): P
   } else if (changes.localDate && task.assigneeId && task.assignedManually) {
     await assertOnShift(task.assigneeId, day)
   }
-  const result = await db().transaction((manager: EntityManager) =>
-    manager
+  // The move, its audit row and its outbox row commit together, or not at all.
+  await db().transaction(async (manager: EntityManager) => {
+    const result = await manager
       .createQueryBuilder()
       .update(TaskEntity)
       .set({ ...changes, version: () => 'version + 1' })
       .where('id = :id AND version = :version', { id: task.id, version: task.version })
-      .execute(),
-  )
-  if (!result.affected) throw conflict('Someone changed this task a moment ago; the board has been refreshed.')
-  await audit('assignment', task.id, 'update', { assigneeId: task.assigneeId, localDate: task.localDate }, { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate })
+      .execute()
+    if (!result.affected) throw conflict('Someone changed this task a moment ago; the board has been refreshed.')
+    await audit('assignment', task.id, 'update', { assigneeId: task.assigneeId, localDate: task.localDate }, { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate })
+    await recordTaskChanges([task.id])
+  })
   return getTask(task.id)
 }
 

@@ -2,6 +2,7 @@ import type { Person } from '#shared/schemas/person'
 import type { Task } from '#shared/schemas/task'
 import { db } from '../../db/data-source'
 import { conflict, forbidden } from '../../lib/errors'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { TaskEntity } from './task.entity'
 import { getTask, getTaskRow } from './tasks.service'
 
@@ -18,5 +19,6 @@ export async function takeTask(taskId: number, person: Person): Promise<Task> {
     .where('id = :id AND assigneeId IS NULL', { id: taskId })
     .execute()
   if (!result.affected) throw conflict('Someone else took this task a moment ago.')
+  await recordTaskChanges([taskId])
   return getTask(taskId)
 }

@@ -4,9 +4,9 @@ import { RoundQuerySchema } from '#shared/schemas/round'
 import { BulkMoveInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
 import { z } from 'zod'
 import { calendarDate } from '#shared/schemas/calendar'
-import { forbidden } from '../../lib/errors'
+import { AppError, forbidden } from '../../lib/errors'
+import { db } from '../../db/data-source'
 import { requireRole, signedIn } from '../auth/require-role'
-import { publishTask } from '../../realtime/task-events'
 import { getBoard } from './board.service'
 import { moveTask } from './move-task.service'
 import { getRound, getRoundSheet } from './round.service'
@@ -38,22 +38,20 @@ tasksRouter.post('/bulk-move', requireRole('manager', 'supervisor'), async (req,
   const { tasks, ...move } = BulkMoveInputSchema.parse(req.body)
   const moved = []
   const refused = []
-  // One at a time, so each card gets its own verdict (a stale one does not block the rest).
+  // One at a time, each in a savepoint, so each card gets its own verdict (a stale one does not
+  // block the rest). Only a refusal is a verdict: a database error fails the whole request.
   for (const t of tasks) {
     try {
-      const task = await moveTask(t.id, req.user!, { ...move, version: t.version })
-      publishTask('task:updated', task)
-      moved.push(task)
+      moved.push(await db().transaction(() => moveTask(t.id, req.user!, { ...move, version: t.version })))
     } catch (err) {
-      refused.push({ id: t.id, message: (err as Error).message })
+      if (!(err instanceof AppError)) throw err
+      refused.push({ id: t.id, message: err.message })
     }
   }
   res.json({ moved, refused })
 })
 tasksRouter.patch('/:id', requireRole('manager', 'supervisor'), async (req, res) => {
-  const task = await moveTask(IdParamSchema.parse(req.params).id, req.user!, req.body)
-  publishTask('task:updated', task)
-  res.json(task)
+  res.json(await moveTask(IdParamSchema.parse(req.params).id, req.user!, req.body))
 })
 tasksRouter.get('/:id', signedIn, async (req, res) => {
   res.json(await getTask(IdParamSchema.parse(req.params).id))

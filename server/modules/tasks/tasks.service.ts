@@ -1,7 +1,9 @@
 import { DateTime } from 'luxon'
+import { In } from 'typeorm'
 import { CreateTaskInputSchema, type Task, type TaskListQuery } from '#shared/schemas/task'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
+import { recordTaskChanges } from '../../realtime/change-outbox'
 import { PersonEntity } from '../people/person.entity'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { toTask, type TaskContext } from './task.mapper'
@@ -39,6 +41,13 @@ export async function getTaskRow(id: number): Promise<TaskRow> {
 
 export async function getTask(id: number): Promise<Task> {
   return toTask(await getTaskRow(id), await loadTaskContext())
+}
+
+/** Several tasks in one read (the live feed's batches); ids that no longer exist are left out. */
+export async function getTasks(ids: readonly number[]): Promise<Task[]> {
+  if (!ids.length) return []
+  const [rows, ctx] = await Promise.all([repo().find({ where: { id: In([...ids]) }, order: { id: 'ASC' } }), loadTaskContext()])
+  return rows.map((r) => toTask(r, ctx))
 }
 
 /** A one-off task, outside any routine (e.g. "check the spare pump today"). */
@@ -79,5 +88,6 @@ export async function createOneOffTask(input: unknown): Promise<Task> {
       version: 1,
     }),
   )
+  await recordTaskChanges([saved.id])
   return toTask(saved, ctx)
 }

@@ -150,7 +150,7 @@ export interface AppOptions {
   schedulerIntervalMs?: number
   redisUrl?: string
   readyTimeoutMs?: number
-  /** Further environment for this process (e.g. the text provider settings). */
+  /** Further environment for this process (the text provider's settings, ROUNDTIDE_CRASH_AT of server/lib/crash-point.ts). */
   env?: Record<string, string>
 }
 

@@ -1,7 +1,8 @@
 import { useQueryClient, type QueryKey } from '@tanstack/react-query'
 import { useEffect, useRef, useState, type ReactNode } from 'react'
 import type { Socket } from 'socket.io-client'
-import { TaskSchema } from '#shared/schemas/task'
+import { DataChangedEventSchema, LIVE_EVENTS, TasksUpdatedEventSchema } from '#shared/schemas/live'
+import { refetchChangedKinds } from '../../../api/live-changes'
 import { patchTaskViews, refetchTaskViews } from '../../../api/tasks/task-cache'
 import { LiveStatusContext, type LiveStatus } from '../hooks/use-live-status'
 import { useSessionPersonId } from '../hooks/use-session-person-id'
@@ -14,7 +15,7 @@ interface Props {
   children: ReactNode
 }
 
-/** One socket per signed-in person; task events patch the caches in place, a reconnect refetches once. */
+/** One socket per signed-in person; changed tasks patch the caches in place, other changes and a reconnect refetch once. */
 export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props) {
   const queryClient = useQueryClient()
   const personId = useSessionPersonId(sessionKey)
@@ -35,24 +36,27 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
     // socket.io-client loads after the first paint: the page needs its data first, live changes next.
     let cancelled = false
     let teardown: (() => void) | undefined
-    void import('../api/socket-client').then(({ createLiveSocket, TASK_EVENTS }) => {
-      if (!cancelled) teardown = connect(createLiveSocket(), TASK_EVENTS)
+    void import('../api/socket-client').then(({ createLiveSocket }) => {
+      if (!cancelled) teardown = connect(createLiveSocket())
     }, () => !cancelled && setState({ personId, status: 'offline' }))
-    const connect = (socket: Socket, taskEvents: readonly string[]) => {
+    const connect = (socket: Socket) => {
       const report = (status: LiveStatus) => setState({ personId, status })
       let missed = false
       const lost = () => {
         missed = true
         report(navigator.onLine ? 'reconnecting' : 'offline')
       }
-      const handle = (payload: unknown) => {
-        const parsed = TaskSchema.safeParse(payload)
+      socket.on(LIVE_EVENTS.tasksUpdated, (payload: unknown) => {
+        const parsed = TasksUpdatedEventSchema.safeParse(payload)
         if (!parsed.success) return
-        patchTaskViews(queryClient, parsed.data, personId)
-      }
-      for (const event of taskEvents) socket.on(event, handle)
-      // Bulk changes (a roster change re-assigning, an event holding feeds) come without tasks: refetch once.
-      socket.on('tasks:changed', () => void refetchTaskViews(queryClient))
+        for (const task of parsed.data.tasks) patchTaskViews(queryClient, task, personId)
+      })
+      // Bulk changes (a roster change re-assigning, a routine re-planned) come without tasks: refetch once.
+      socket.on(LIVE_EVENTS.tasksChanged, () => void refetchTaskViews(queryClient))
+      socket.on(LIVE_EVENTS.dataChanged, (payload: unknown) => {
+        const parsed = DataChangedEventSchema.safeParse(payload)
+        if (parsed.success) void refetchChangedKinds(queryClient, parsed.data.kinds)
+      })
       socket.on('connect', () => {
         report('live')
         // What changed while we were away came as events nobody heard: catch up once.
