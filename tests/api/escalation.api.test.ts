@@ -19,7 +19,7 @@ import { startTestApp, type TestApp } from '#tests/support/test-app'
 let t: TestApp
 let mail: Awaited<ReturnType<typeof startMailCatcher>>
 beforeAll(async () => {
-  t = await startTestApp()
+  t = await startTestApp({}, { ownDatabase: true })
   await ensureFacilityAndParameters()
   mail = await startMailCatcher(t.config)
 })

@@ -12,7 +12,7 @@ import { startTestApp, type TestApp } from '#tests/support/test-app'
 
 let t: TestApp
 beforeAll(async () => {
-  t = await startTestApp()
+  t = await startTestApp({}, { ownDatabase: true })
   await ensureFacilityAndParameters()
 })
 afterAll(() => t.close())

@@ -22,7 +22,7 @@ let t: TestApp
 let mail: Awaited<ReturnType<typeof startMailCatcher>>
 let texts: Awaited<ReturnType<typeof startTextCatcher>>
 beforeAll(async () => {
-  t = await startTestApp()
+  t = await startTestApp({}, { ownDatabase: true })
   await ensureFacilityAndParameters()
   mail = await startMailCatcher(t.config)
   texts = await startTextCatcher(t.app, { ...mail.config, sms: { ...mail.config.sms, maxPerHour: 6 } })

@@ -1,44 +1,19 @@
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core'
 import path from 'node:path'
-import { randomUUID } from 'node:crypto'
-import { createDataSource, setDataSource } from '#server/db/data-source'
+import { setDataSource } from '#server/db/data-source'
 import { startServer } from '#server/start-server'
 import { createPerson } from '#server/modules/people/people.service'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
 import type { Role } from '#shared/schemas/person'
+import { createOwnDatabase, dropOwnDatabase } from './own-database'
 import { testConfig } from './test-app'
 
 export const PHONE = { width: 390, height: 844 }
 export const DESKTOP = { width: 1366, height: 900 }
 
-/**
- * A database of its own for one browser journey: journeys read whole days (a round, a board,
- * who is on call), so rows left by other test files would change what they see.
- */
-async function freshDatabase() {
-  const base = testConfig()
-  const name = `${base.db.database}_e2e_${randomUUID().slice(0, 8)}`
-  const admin = createDataSource(base.db)
-  await admin.initialize()
-  await admin.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`)
-  await admin.destroy()
-  const ds = createDataSource({ ...base.db, database: name })
-  await ds.initialize()
-  await ds.runMigrations()
-  await ds.destroy()
-  return name
-}
-
-async function dropDatabase(name: string) {
-  const admin = createDataSource(testConfig().db)
-  await admin.initialize()
-  await admin.query(`DROP DATABASE IF EXISTS \`${name}\``)
-  await admin.destroy()
-}
-
 /** The built client and API on a free port, and Debian's chromium driven by playwright-core. */
 export async function startBrowserSession() {
-  const database = await freshDatabase()
+  const database = await createOwnDatabase(testConfig().db, 'e2e')
   const config = testConfig({ port: 0 })
   const server = await startServer({ ...config, db: { ...config.db, database } }, { clientDir: path.resolve('dist') })
   const browser: Browser = await chromium.launch({
@@ -73,7 +48,7 @@ export async function startBrowserSession() {
       await browser.close()
       await server.stop()
       setDataSource(undefined as never)
-      await dropDatabase(database)
+      await dropOwnDatabase(testConfig().db, database)
     },
   }
 }

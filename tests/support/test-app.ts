@@ -4,6 +4,7 @@ import { createApp } from '#server/app'
 import { createDataSource, setDataSource } from '#server/db/data-source'
 import { loadConfig, type AppConfig } from '#server/lib/config'
 import { withStoredSecrets } from '#server/lib/secrets'
+import { createOwnDatabase, dropOwnDatabase } from './own-database'
 import { createSessionStore } from '#server/modules/auth/session'
 import { createPerson } from '#server/modules/people/people.service'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
@@ -12,12 +13,18 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
   return { ...loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: process.env.ROUNDTIDE_DB_NAME ?? 'roundtide_test', ROUNDTIDE_SMTP_PORT: '0' }), ...overrides }
 }
 
-/** One in-process app on the test database, with helpers to sign people in. */
-export async function startTestApp(overrides: Partial<AppConfig> = {}) {
-  const dataSource = createDataSource(testConfig(overrides).db)
+/**
+ * One in-process app on the test database, with helpers to sign people in. `ownDatabase` gives
+ * the file a fresh database of its own (files that run the escalation clock over every alert).
+ */
+export async function startTestApp(overrides: Partial<AppConfig> = {}, opts: { ownDatabase?: boolean } = {}) {
+  const shared = testConfig(overrides)
+  const own = opts.ownDatabase ? await createOwnDatabase(shared.db, 'own') : null
+  const given = own ? { ...shared, db: { ...shared.db, database: own } } : shared
+  const dataSource = createDataSource(given.db)
   await dataSource.initialize()
   setDataSource(dataSource)
-  const config = await withStoredSecrets(testConfig(overrides), dataSource)
+  const config = await withStoredSecrets(given, dataSource)
   const stores: Array<ReturnType<typeof createSessionStore>> = []
 
   function newApp() {
@@ -50,6 +57,7 @@ export async function startTestApp(overrides: Partial<AppConfig> = {}) {
     async close() {
       await Promise.all(stores.map((s) => s.close()))
       await dataSource.destroy()
+      if (own) await dropOwnDatabase(shared.db, own)
     },
   }
 }

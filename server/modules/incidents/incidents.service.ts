@@ -81,7 +81,8 @@ export async function updateIncident(id: number, input: unknown, now = new Date(
     if (missing.length) throw validationError('Nothing was saved: the full report needs the root cause and the corrective actions before the incident is closed.', Object.fromEntries(missing.map((k) => [k, ['Required to close']])))
     Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
   }
-  await repo().update(id, next)
+  // An empty patch changes nothing (TypeORM refuses an UPDATE without values).
+  if (Object.keys(next).length) await repo().update(id, next)
   if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
   await recordChange('incident', [id])
   return getIncident(id)
