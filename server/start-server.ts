@@ -10,6 +10,7 @@ import { withStoredSecrets } from './lib/secrets'
 import { startLocalSmtp } from './mail/local-smtp'
 import { startFakeTextProvider } from './sms/fake-text-provider'
 import { createTextSender } from './sms/text-client'
+import { createPushSender } from './push/push-client'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
 import { attachSocketServer, closeSocketServer } from './realtime/socket-server'
@@ -45,7 +46,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.
   const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
   const transport = createTransport(mailConfig)
-  const channels = { text: createTextSender(config) }
+  const channels = { text: createTextSender(config), push: createPushSender(config) }
   const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {
