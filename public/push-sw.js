@@ -39,10 +39,11 @@ async function acknowledgeFromNotification(notification) {
 
 async function openFromNotification(notification) {
   const url = new URL((notification.data && notification.data.url) || '/', self.location.origin).href
-  const windows = await self.clients.matchAll({ type: 'window', includeUncontrolled: true })
-  const open = windows.find((w) => new URL(w.url).origin === self.location.origin)
+  // Only a window this worker controls can be moved to the task; otherwise a new one opens.
+  const [open] = await self.clients.matchAll({ type: 'window' })
   if (open) {
-    await open.focus()
+    // Focus needs the click's activation; the page still moves to the task without it.
+    await open.focus().catch(() => undefined)
     return open.navigate(url)
   }
   return self.clients.openWindow(url)
