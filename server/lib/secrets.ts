@@ -64,6 +64,6 @@ export async function withStoredSecrets(config: AppConfig, dataSource: DataSourc
   // The local stand-in signs its callbacks with a token of its own, kept so every process agrees.
   const smsToken = config.sms.authToken || (config.sms.mode === 'local' ? await storedSecret(dataSource, 'sms_local') : '')
   // The push key pair (VAPID, RFC 8292) is generated once and kept: every browser subscribed with its public half.
-  const vapid = JSON.parse(await storedSecret(dataSource, 'vapid', () => JSON.stringify(webpush.generateVAPIDKeys()))) as { publicKey: string; privateKey: string }
+  const vapid = config.push.enabled ? (JSON.parse(await storedSecret(dataSource, 'vapid', () => JSON.stringify(webpush.generateVAPIDKeys()))) as { publicKey: string; privateKey: string }) : null
   return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack, sms: { ...config.sms, authToken: smsToken }, push: { ...config.push, vapid } }
 }
