@@ -10,7 +10,7 @@ import { PersonEntity } from '#server/modules/people/person.entity'
 import { OnCallEntity } from '#server/modules/roster/roster.entities'
 import { startFakePushService, type FakePushService } from '#server/push/fake-push-service'
 import { createPushSender } from '#server/push/push-client'
-import { PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
+import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { startMailCatcher } from '#tests/support/mail-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
@@ -107,6 +107,10 @@ describe('push alerts on the installed app', () => {
     await page.waitForURL(`**/tasks/${task.id}`)
     await page.getByText(`Acknowledged by ${person.name} at`).waitFor()
     await screenshot(page, 'push-acknowledged-phone')
+    await page.setViewportSize(DESKTOP)
+    await page.goto('/settings')
+    await page.getByRole('button', { name: 'Send alerts to this device' }).waitFor()
+    await screenshot(page, 'push-settings-desktop')
     await context.close()
   })
 })
