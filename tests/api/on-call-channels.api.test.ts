@@ -146,6 +146,22 @@ describe('on-call channels: e-mail, text and push', () => {
     expect(await db().getRepository(PushSubscriptionEntity).findBy({ personId: onCall.id })).toHaveLength(0)
   })
 
+  test('a device is registered and removed only by its own person; a malformed subscription is refused', async () => {
+    const [owner, other] = [await t.createPersonWithRole('technician'), await t.createPersonWithRole('technician')]
+    const [ownerAgent, otherAgent] = [await signIn(owner.email), await signIn(other.email)]
+    const device = pushService.subscribe(t.config.push.vapid!.publicKey)
+    await ownerAgent.post('/api/me/push-subscriptions').send({ endpoint: 'javascript:alert(1)', keys: device.keys }).expect(400)
+    await ownerAgent.post('/api/me/push-subscriptions').send(device).expect(204)
+    await ownerAgent.post('/api/me/push-subscriptions').send(device).expect(204)
+    const devicesOf = (personId: number) => db().getRepository(PushSubscriptionEntity).findBy({ personId })
+    expect(await devicesOf(owner.id)).toHaveLength(1)
+
+    await otherAgent.delete('/api/me/push-subscriptions').send({ endpoint: device.endpoint }).expect(204)
+    expect(await devicesOf(owner.id)).toHaveLength(1)
+    await ownerAgent.delete('/api/me/push-subscriptions').send({ endpoint: device.endpoint }).expect(204)
+    expect(await devicesOf(owner.id)).toHaveLength(0)
+  })
+
   test('a reply with the code acknowledges the alert in the name of the person texted, and no further step is sent', async () => {
     const missedAt = new Date(Date.now() + 34_000 * MIN)
     const onCall = await onCallPerson(missedAt, ['sms'])
