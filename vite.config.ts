@@ -30,6 +30,8 @@ export default defineConfig({
         ],
       },
       workbox: {
+        // Push alerts (show, acknowledge, open) live in a small file of their own beside the generated worker.
+        importScripts: ['/push-sw.js'],
         globPatterns: ['**/*.{js,css,html,svg,png,woff2}'],
         navigateFallback: '/index.html',
         navigateFallbackDenylist: [/^\/api\//, /^\/socket\.io\//],

@@ -10,6 +10,7 @@ import { withStoredSecrets } from './lib/secrets'
 import { startLocalSmtp } from './mail/local-smtp'
 import { startFakeTextProvider } from './sms/fake-text-provider'
 import { createTextSender } from './sms/text-client'
+import { createPushSender } from './push/push-client'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
 import { startPublisher } from './realtime/publisher'
@@ -47,7 +48,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   const mailConfig = smtp ? { ...config, mail: { ...config.mail, port: smtp.port } } : config
   const transport = createTransport(mailConfig)
   const publisher = startPublisher({ intervalMs: config.publishIntervalMs })
-  const channels = { text: createTextSender(config) }
+  const channels = { text: createTextSender(config), push: createPushSender(config) }
   const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {

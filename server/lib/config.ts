@@ -36,6 +36,9 @@ const EnvSchema = z.object({
   ROUNDTIDE_SMS_MAX_PER_HOUR: z.coerce.number().int().min(1).max(1000).default(6),
   TWILIO_ACCOUNT_SID: text().optional(),
   TWILIO_AUTH_TOKEN: text().optional(),
+  /** Web Push: `on` (default) sends to subscribed devices; `off` sends none. The contact in the VAPID claim. */
+  ROUNDTIDE_PUSH_MODE: z.enum(['on', 'off']).default('on'),
+  ROUNDTIDE_PUSH_SUBJECT: text().regex(/^(mailto:|https:\/\/)/, 'Use a mailto: address or an https: URL').default('mailto:roundtide@example.org'),
   /** Set to share live events between several app processes (socket.io's Redis adapter). */
   ROUNDTIDE_REDIS_URL: text().url().optional(),
   /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
@@ -88,6 +91,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
       authToken: e.TWILIO_AUTH_TOKEN ?? '',
     },
     publishIntervalMs: e.ROUNDTIDE_PUBLISH_INTERVAL_MS,
+    push: {
+      enabled: e.ROUNDTIDE_PUSH_MODE === 'on',
+      subject: e.ROUNDTIDE_PUSH_SUBJECT,
+      /** Filled by `withStoredSecrets` from the database (generated on first start). */
+      vapid: null as { publicKey: string; privateKey: string } | null,
+    },
     mail: {
       mode: e.ROUNDTIDE_MAIL_MODE,
       host: e.ROUNDTIDE_SMTP_HOST,

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto'
 import type { DataSource } from 'typeorm'
+import webpush from 'web-push'
 import type { AppConfig } from './config'
 import { logger } from './logger'
 
@@ -9,7 +10,7 @@ export const MIN_SECRET_LENGTH = 32
 const DEFAULT_DB_PASSWORD = 'roundtide-local'
 const LOOPBACK = new Set(['127.0.0.1', 'localhost', '::1'])
 
-type SecretName = 'session' | 'ack' | 'sms_local'
+type SecretName = 'session' | 'ack' | 'sms_local' | 'vapid'
 const VARIABLES: Record<'session' | 'ack', string> = { session: 'ROUNDTIDE_SESSION_SECRET', ack: 'ROUNDTIDE_ACK_SECRET' }
 
 export class UnsafeConfigError extends Error {}
@@ -25,8 +26,8 @@ export function weakSecretReason(value: string): string | null {
  * The database keeps one generated secret per name (256 random bits). INSERT IGNORE then SELECT
  * means several processes starting at once on one database all end up with the same value.
  */
-async function storedSecret(dataSource: DataSource, name: SecretName): Promise<string> {
-  await dataSource.query('INSERT IGNORE INTO app_secrets (name, value) VALUES (?, ?)', [name, randomBytes(32).toString('base64url')])
+async function storedSecret(dataSource: DataSource, name: SecretName, generate = () => randomBytes(32).toString('base64url')): Promise<string> {
+  await dataSource.query('INSERT IGNORE INTO app_secrets (name, value) VALUES (?, ?)', [name, generate()])
   const [row] = (await dataSource.query('SELECT value FROM app_secrets WHERE name = ?', [name])) as Array<{ value: string }>
   return row.value
 }
@@ -62,5 +63,7 @@ export async function withStoredSecrets(config: AppConfig, dataSource: DataSourc
   }
   // The local stand-in signs its callbacks with a token of its own, kept so every process agrees.
   const smsToken = config.sms.authToken || (config.sms.mode === 'local' ? await storedSecret(dataSource, 'sms_local') : '')
-  return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack, sms: { ...config.sms, authToken: smsToken } }
+  // The push key pair (VAPID, RFC 8292) is generated once and kept: every browser subscribed with its public half.
+  const vapid = config.push.enabled ? (JSON.parse(await storedSecret(dataSource, 'vapid', () => JSON.stringify(webpush.generateVAPIDKeys()))) as { publicKey: string; privateKey: string }) : null
+  return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack, sms: { ...config.sms, authToken: smsToken }, push: { ...config.push, vapid } }
 }

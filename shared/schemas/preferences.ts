@@ -34,3 +34,12 @@ export const PreferencesInputSchema = z
   })
   .refine((p) => !p.channels?.includes('sms') || p.phone !== null, { path: ['phone'], message: 'Texts need a mobile number' })
 export type PreferencesInput = z.infer<typeof PreferencesInputSchema>
+
+const base64url = text().regex(/^[A-Za-z0-9_-]+=*$/, 'Not base64url')
+/** A browser's push subscription as `PushSubscription.toJSON()` gives it (RFC 8030 endpoint, RFC 8291 keys). */
+export const PushSubscriptionInputSchema = z.object({
+  endpoint: text().url().max(1000).refine((u) => /^https?:\/\//.test(u), 'The endpoint must be an http(s) URL'),
+  keys: z.object({ p256dh: base64url.max(200), auth: base64url.max(100) }),
+})
+export type PushSubscriptionInput = z.infer<typeof PushSubscriptionInputSchema>
+export const PushUnsubscribeInputSchema = z.object({ endpoint: text().url().max(1000) })

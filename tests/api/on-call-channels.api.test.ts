@@ -8,26 +8,33 @@ import { AlertEntity } from '#server/modules/completions/completion.entities'
 import { deliverPending } from '#server/modules/escalation/deliver'
 import { runEscalations } from '#server/modules/escalation/escalate'
 import { NotificationEntity } from '#server/modules/escalation/escalation.entities'
+import { PushSubscriptionEntity } from '#server/modules/escalation/push-subscription.entity'
 import { createLadder } from '#server/modules/escalation/ladders.service'
 import { PersonEntity } from '#server/modules/people/person.entity'
 import { OnCallEntity } from '#server/modules/roster/roster.entities'
+import { createPushSender } from '#server/push/push-client'
+import { startFakePushService } from '#server/push/fake-push-service'
 import { UNREACHABLE_NUMBER_PREFIX } from '#server/sms/fake-text-provider'
 import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
 import { messagesTo, startMailCatcher } from '#tests/support/mail-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
+import { TEST_PASSWORD } from '#seed/factories'
 import { postWebhook, startTextCatcher, textsTo, uniquePhone } from '#tests/support/text-fixtures'
 
 let t: TestApp
 let mail: Awaited<ReturnType<typeof startMailCatcher>>
 let texts: Awaited<ReturnType<typeof startTextCatcher>>
+let pushService: Awaited<ReturnType<typeof startFakePushService>>
 beforeAll(async () => {
   t = await startTestApp({}, { ownDatabase: true })
   await ensureFacilityAndParameters()
   mail = await startMailCatcher(t.config)
   texts = await startTextCatcher(t.app, { ...mail.config, sms: { ...mail.config.sms, maxPerHour: 6 } })
+  pushService = await startFakePushService()
 })
 afterAll(async () => {
+  await pushService.close()
   await texts.close()
   await mail.close()
   await t.close()
@@ -60,11 +67,16 @@ async function missedWelfareTasks(missedAt: Date, steps: LadderStep[], count = 1
 
 const tick = async (at: Date) => {
   await runEscalations(at)
-  await deliverPending(texts.config, mail.transport, at, { text: texts.sender })
+  await deliverPending(texts.config, mail.transport, at, { text: texts.sender, push: createPushSender(texts.config) })
+}
+const signIn = async (email: string) => {
+  const agent = request.agent(t.app)
+  await agent.post('/api/session').send({ email, password: TEST_PASSWORD }).expect(200)
+  return agent
 }
 const rowsOf = (alertId: number) => db().getRepository(NotificationEntity).find({ where: { alertId }, order: { id: 'ASC' } })
 
-describe('on-call channels: e-mail and text', () => {
+describe('on-call channels: e-mail, text and push', () => {
   test('a missed welfare-critical task reaches the person on call at that moment by every channel they enabled, even where the step names only e-mail', async () => {
     const missedAt = new Date(Date.now() + 30_000 * MIN)
     const onCall = await onCallPerson(missedAt, ['email', 'sms'])
@@ -85,6 +97,69 @@ describe('on-call channels: e-mail and text', () => {
     expect(text.from).toBe(texts.config.sms.from)
     expect(sms.providerId).toBe(text.sid)
     expect(sms.providerStatus).toBe('queued')
+  })
+
+  test('with push accepted and this phone subscribed, the person on call gets e-mail, text and an encrypted push whose acknowledge action answers in their name', async () => {
+    const missedAt = new Date(Date.now() + 32_000 * MIN)
+    const onCall = await onCallPerson(missedAt, ['email', 'sms', 'push'])
+    const agent = await signIn(onCall.email)
+    const { publicKey } = (await agent.get('/api/push/public-key').expect(200)).body
+    // The phone subscribes with the server's key, as PushManager.subscribe would, and registers the result.
+    const device = pushService.subscribe(publicKey)
+    await agent.post('/api/me/push-subscriptions').send(device).expect(204)
+    const { tasks, alerts } = await missedWelfareTasks(missedAt, [{ afterMinutes: 0, notify: [{ kind: 'on_call' }], channels: ['email'] }])
+    await tick(new Date(missedAt.getTime() + 2000))
+
+    const rows = await rowsOf(alerts[0].id)
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([['email', 'sent'], ['sms', 'sent'], ['push', 'sent']])
+    expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))).toHaveLength(1)
+    expect(await textsTo(onCall.phone)).toHaveLength(1)
+    // The fake push service checked the VAPID signature and decrypted the body with the phone's private key.
+    const [pushed] = pushService.receivedAt(device.endpoint)
+    expect(pushed.urgency).toBe('high')
+    const payload = pushed.payload as { title: string; url: string; ackUrl: string; tag: string }
+    expect(payload).toMatchObject({ title: expect.stringMatching(/^MISSED: Oxygen check/), url: `/tasks/${tasks[0].id}`, tag: `alert-${alerts[0].id}` })
+    expect(rows[2].providerId).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/message\//)
+
+    // The notification's Acknowledge action posts the token for JSON, once.
+    const answered = await request(t.app).post(payload.ackUrl).set('accept', 'application/json').expect(200)
+    expect(answered.body).toMatchObject({ status: 'acknowledged', taskId: tasks[0].id })
+    expect((await db().getRepository(AlertEntity).findOneByOrFail({ id: alerts[0].id })).acknowledgedById).toBe(onCall.id)
+    expect((await request(t.app).post(payload.ackUrl).set('accept', 'application/json').expect(409)).body.status).toBe('used')
+  })
+
+  test('a push subscription the push service calls gone is forgotten, and the person is reached by e-mail instead', async () => {
+    const missedAt = new Date(Date.now() + 36_000 * MIN)
+    const onCall = await onCallPerson(missedAt, ['push'])
+    const agent = await signIn(onCall.email)
+    const device = pushService.subscribe(t.config.push.vapid!.publicKey)
+    await agent.post('/api/me/push-subscriptions').send(device).expect(204)
+    pushService.unsubscribe(device.endpoint)
+    const { tasks, alerts } = await missedWelfareTasks(missedAt, [{ afterMinutes: 0, notify: [{ kind: 'on_call' }], channels: ['push'] }])
+    await tick(new Date(missedAt.getTime() + 2000))
+    await deliverPending(texts.config, mail.transport, new Date(missedAt.getTime() + 3000), { push: createPushSender(texts.config) })
+
+    const rows = await rowsOf(alerts[0].id)
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([['push', 'undelivered'], ['email', 'sent']])
+    expect(rows[0].lastError).toContain('stopped accepting push alerts')
+    expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))).toHaveLength(1)
+    expect(await db().getRepository(PushSubscriptionEntity).findBy({ personId: onCall.id })).toHaveLength(0)
+  })
+
+  test('a device is registered and removed only by its own person; a malformed subscription is refused', async () => {
+    const [owner, other] = [await t.createPersonWithRole('technician'), await t.createPersonWithRole('technician')]
+    const [ownerAgent, otherAgent] = [await signIn(owner.email), await signIn(other.email)]
+    const device = pushService.subscribe(t.config.push.vapid!.publicKey)
+    await ownerAgent.post('/api/me/push-subscriptions').send({ endpoint: 'javascript:alert(1)', keys: device.keys }).expect(400)
+    await ownerAgent.post('/api/me/push-subscriptions').send(device).expect(204)
+    await ownerAgent.post('/api/me/push-subscriptions').send(device).expect(204)
+    const devicesOf = (personId: number) => db().getRepository(PushSubscriptionEntity).findBy({ personId })
+    expect(await devicesOf(owner.id)).toHaveLength(1)
+
+    await otherAgent.delete('/api/me/push-subscriptions').send({ endpoint: device.endpoint }).expect(204)
+    expect(await devicesOf(owner.id)).toHaveLength(1)
+    await ownerAgent.delete('/api/me/push-subscriptions').send({ endpoint: device.endpoint }).expect(204)
+    expect(await devicesOf(owner.id)).toHaveLength(0)
   })
 
   test('a reply with the code acknowledges the alert in the name of the person texted, and no further step is sent', async () => {

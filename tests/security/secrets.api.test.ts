@@ -78,8 +78,12 @@ describe('secrets are generated, kept and checked', () => {
     expect(second.ackSecret).toBe(first.ackSecret)
     expect(first.sessionSecret).not.toBe(PUBLISHED_DEFAULT)
     const rows = (await t.dataSource.query('SELECT name, value FROM app_secrets ORDER BY name')) as Array<{ name: string; value: string }>
-    // sms_local: the local text stand-in's token (ROUNDTIDE_SMS_MODE=local is the default).
-    expect(rows.map((r) => r.name)).toEqual(['ack', 'session', 'sms_local'])
+    // sms_local: the local text stand-in's token (ROUNDTIDE_SMS_MODE=local is the default); vapid: the push key pair.
+    expect(rows.map((r) => r.name)).toEqual(['ack', 'session', 'sms_local', 'vapid'])
+    // Browsers subscribed with the public half, so a restart must sign with the same pair.
+    expect(second.push.vapid).toEqual(first.push.vapid)
+    const publicKey = Buffer.from(first.push.vapid!.publicKey, 'base64url')
+    expect([publicKey.length, publicKey[0]]).toEqual([65, 4]) // an uncompressed P-256 point (RFC 8292 §3.2)
   })
 
   test.each([

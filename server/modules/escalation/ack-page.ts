@@ -36,7 +36,10 @@ export function ackRouter(config: AppConfig) {
     const outcome = await acknowledgeByToken(config.ackSecret, req.params.token)
     const [title, text] = MESSAGES[outcome.status]
     const ok = outcome.status === 'acknowledged' || outcome.status === 'already'
-    res.status(ok ? 200 : outcome.status === 'used' ? 409 : outcome.status === 'inactive' ? 403 : 400).type('html').send(page(title, `<h1>${title}</h1><p>${text}</p>${outcome.taskId ? `<p><a href="/tasks/${outcome.taskId}">Open the task</a></p>` : ''}`))
+    res.status(ok ? 200 : outcome.status === 'used' ? 409 : outcome.status === 'inactive' ? 403 : 400)
+    // The push notification's Acknowledge action (service worker) asks for JSON; the same single-use claim applies.
+    if (req.accepts(['html', 'json']) === 'json') return void res.json({ status: outcome.status, title, message: text, taskId: outcome.taskId ?? null })
+    res.type('html').send(page(title, `<h1>${title}</h1><p>${text}</p>${outcome.taskId ? `<p><a href="/tasks/${outcome.taskId}">Open the task</a></p>` : ''}`))
   })
   return router
 }

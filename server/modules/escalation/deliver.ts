@@ -5,6 +5,7 @@ import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { logger } from '../../lib/logger'
 import { signAckToken } from '../../mail/ack-token'
+import type { PushSender } from '../../push/push-client'
 import { isPermanentTextError, type TextSender } from '../../sms/text-client'
 import { AlertEntity, type AlertRow } from '../completions/completion.entities'
 import { TaskEntity, type TaskRow } from '../tasks/task.entity'
@@ -12,6 +13,7 @@ import { loadCatalogue, targetLabel } from '../tasks/targets'
 import { queueFallback } from './channels'
 import { NotificationEntity, type NotificationRow } from './escalation.entities'
 import { composeMessage, composeText } from './messages'
+import { sendPushAlert } from './push-delivery'
 import { sendStormSummaries, takeTextSlot } from './text-quota'
 
 const MAX_BACKOFF_MS = 30 * 60_000
@@ -34,6 +36,7 @@ export type Transport = ReturnType<typeof createTransport>
 /** The senders beyond mail; a channel without one is recorded as undelivered and falls back. */
 export interface Channels {
   text?: TextSender | null
+  push?: PushSender | null
 }
 
 /** What one attempt came to: sent, held back by the text limit, or finally refused (which falls back). */
@@ -96,8 +99,8 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
 async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
   const taskUrl = `${c.config.publicUrl}/tasks/${c.task.id}`
   const input = { alert: c.alert, task: c.task, step: row.step, now: c.now, targetLabel: c.label, taskUrl }
+  const token = signAckToken(c.config.ackSecret, row.id, new Date(c.now.getTime() + c.config.mail.ackTtlHours * 3_600_000))
   if (row.channel === 'email') {
-    const token = signAckToken(c.config.ackSecret, row.id, new Date(c.now.getTime() + c.config.mail.ackTtlHours * 3_600_000))
     const message = composeMessage({ ...input, ackUrl: `${c.config.publicUrl}/ack/${token}` })
     await c.transport.sendMail({ from: c.config.mail.from, to: row.email, subject: message.subject, text: message.text, html: message.html })
     return { status: 'sent', subject: message.subject }
@@ -113,7 +116,11 @@ async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
     const message = await c.channels.text.send(row.destination, composeText({ ...input, replyCode }))
     return { status: 'sent', subject, providerId: message.sid, providerStatus: message.status, replyCode }
   }
-  return { status: 'undelivered', subject, note: 'Push notifications are not set up on this server' }
+  if (!c.channels.push) return { status: 'undelivered', subject, note: 'Push notifications are not set up on this server' }
+  // The same single-use acknowledge token as the mail link; the notification's action posts it.
+  const body = composeMessage({ ...input, ackUrl: '' }).text.split('\n')[0]
+  const pushed = await sendPushAlert(c.channels.push, row, { title: subject, body, tag: `alert-${c.alert.id}`, url: `/tasks/${c.task.id}`, ackUrl: `/ack/${token}` })
+  return pushed.status === 'sent' ? { status: 'sent', subject, providerId: pushed.providerId ?? undefined } : { ...pushed, subject }
 }
 
 export type { NotificationRow }

@@ -7,6 +7,7 @@ import { notFound } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
 import { passwordCheckLimiter } from '../auth/sign-in-limits'
 import { myPreferences, updateMyPreferences } from './preferences.service'
+import { registerPushSubscription, removePushSubscription } from './push-subscriptions.service'
 import { localTexts, replyAsRecipient } from './text-outbox.service'
 import { OutboxEntity } from './escalation.entities'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
@@ -39,6 +40,20 @@ export function escalationRouter(config: AppConfig) {
   })
   router.patch('/me/preferences', signedIn, passwordCheckLimiter(config), async (req, res) => {
     res.json(await updateMyPreferences(config, req.user!.id, req.body))
+  })
+
+  // This device's push subscription (the settings page's "Send alerts to this device").
+  router.get('/push/public-key', signedIn, (_req, res) => {
+    if (!config.push.enabled || !config.push.vapid) throw notFound('Push alerts (turned off on this server)')
+    res.json({ publicKey: config.push.vapid.publicKey })
+  })
+  router.post('/me/push-subscriptions', signedIn, async (req, res) => {
+    await registerPushSubscription(req.user!.id, req.body)
+    res.status(204).end()
+  })
+  router.delete('/me/push-subscriptions', signedIn, async (req, res) => {
+    await removePushSubscription(req.user!.id, req.body)
+    res.status(204).end()
   })
 
   // Local mode only: the mail the app sent, as the local SMTP server received it.

@@ -13,7 +13,7 @@ const toPreferences = (config: AppConfig, p: Contact): Preferences => ({
   channels: acceptedChannels(p),
   quietStart: p.quietStart,
   quietEnd: p.quietEnd,
-  available: { sms: config.sms.mode !== 'off', push: false },
+  available: { sms: config.sms.mode !== 'off', push: config.push.enabled && config.push.vapid !== null },
 })
 
 export async function myPreferences(config: AppConfig, personId: number): Promise<Preferences> {

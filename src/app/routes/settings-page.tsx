@@ -6,6 +6,7 @@ import { authQueries } from '../../features/auth/api/auth-queries'
 import { escalationQueries } from '../../features/escalation/api/escalation-queries'
 import { LadderEditor } from '../../features/escalation/components/ladder-editor'
 import { PreferencesForm } from '../../features/escalation/components/preferences-form'
+import { PushDeviceControl } from '../../features/escalation/components/push-device-control'
 
 export const loader = (queryClient: QueryClient) => async () => {
   const me = await queryClient.ensureQueryData(authQueries.me())
@@ -42,6 +43,7 @@ export function Component() {
       <section aria-labelledby="prefs-heading" className="flex flex-col gap-3">
         <h2 id="prefs-heading" className="text-xl font-bold text-tide-900">How escalations reach me</h2>
         <PreferencesForm preferences={preferences} timeZone={timeZone} />
+        <PushDeviceControl available={preferences.available.push} accepted={preferences.channels.includes('push')} />
       </section>
       {me.role === 'manager' && <Ladders />}
     </section>
