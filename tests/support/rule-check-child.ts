@@ -6,7 +6,9 @@ import { expandRuleBounded } from '#shared/schedule/expand-rule'
 import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
 import { RULE_LIMITS } from '#shared/schedule/rule-limits'
 
-const [dtstart, tzid] = ['2026-01-05T07:30:00', 'Europe/Oslo']
+// The routine's start and the facility's zone, as the server will judge the rule (a rule with
+// UNTIL can have dates in one zone and none in another).
+const [dtstart, tzid] = [process.argv[2] ?? '2026-01-05T07:30:00', process.argv[3] ?? 'Europe/Oslo']
 
 /** A rule the check accepts must really give a first date and stay under the density limit. */
 function reallyPlannable(rrule: string) {
