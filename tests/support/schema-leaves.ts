@@ -59,7 +59,8 @@ export function stringLeaves(schema: z.ZodType, where: string, out: StringLeaf[]
 
 /** Every zod schema exported by the files in shared/schemas, by export name. */
 export async function sharedSchemas(): Promise<Array<[string, z.ZodType]>> {
-  const dir = path.resolve(import.meta.dirname, '../../shared/schemas')
+  // The project's own shared/schemas, from the project root (tests/support is two levels down).
+  const dir = path.join(path.resolve(import.meta.dirname, '..', '..'), 'shared', 'schemas')
   const found: Array<[string, z.ZodType]> = []
   for (const file of readdirSync(dir).filter((f) => f.endsWith('.ts')).sort()) {
     const mod = (await import(path.join(dir, file))) as Record<string, unknown>
