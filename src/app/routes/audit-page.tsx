@@ -10,6 +10,7 @@ import { AuditKindSelect } from '../../features/reports/components/audit-kind-se
 import { AuditList } from '../../features/reports/components/audit-list'
 import { PrintHeading } from '../../features/reports/components/print-heading'
 import { RangeForm } from '../../features/reports/components/range-form'
+import { useSearchUpdate } from '../../lib/use-search-update'
 import { ReportActions } from '../../features/reports/components/report-actions'
 import { describeRange, rangeFrom, rangeProblem } from '../../features/reports/utils/date-range'
 import { csvHref, type AuditFilter } from '../../features/reports/utils/report-paths'
@@ -29,20 +30,12 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
 }
 
 export function Component() {
-  const [search, setSearch] = useSearchParams()
+  const [search] = useSearchParams()
+  const update = useSearchUpdate()
   const { data: facility } = useSuspenseQuery(facilityQueries.required())
   const { data: me } = useSuspenseQuery(authQueries.me())
   const filter = filterFrom(search, facility.timeZone)
   const problem = rangeProblem(filter)
-  const update = (changes: Record<string, string>) =>
-    setSearch((current) => {
-      const next = new URLSearchParams(current)
-      for (const [k, v] of Object.entries(changes)) {
-        if (v) next.set(k, v)
-        else next.delete(k)
-      }
-      return next
-    })
 
   return (
     <section data-print-layout className="flex flex-col gap-4">

@@ -16,6 +16,7 @@ import { WelfareReport } from '../../features/reports/components/welfare-report'
 import { describeRange, rangeProblem } from '../../features/reports/utils/date-range'
 import { reportFilters } from '../../features/reports/utils/report-filters'
 import type { DateRange } from '../../features/reports/utils/report-paths'
+import { useSearchUpdate } from '../../lib/use-search-update'
 import '../../features/reports/report-print.css'
 
 export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
@@ -36,20 +37,12 @@ export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFu
 const TITLES = { compliance: 'Compliance', responses: 'Response times', welfare: 'Welfare-check record', animals: 'Animal record: numbers per batch and incidents' }
 
 export function Component() {
-  const [search, setSearch] = useSearchParams()
+  const [search] = useSearchParams()
+  const update = useSearchUpdate({ preventScrollReset: true })
   const { data: facility } = useSuspenseQuery(facilityQueries.required())
   const view = parseReportView(search.get('view'))
   const f = reportFilters(search, facility.timeZone)
   const problem = rangeProblem(f.range)
-  const update = (changes: Record<string, string>) =>
-    setSearch((current) => {
-      const next = new URLSearchParams(current)
-      for (const [k, v] of Object.entries(changes)) {
-        if (v) next.set(k, v)
-        else next.delete(k)
-      }
-      return next
-    }, { preventScrollReset: true })
   const setRange = (r: DateRange) => update({ from: r.from, to: r.to })
 
   return (
