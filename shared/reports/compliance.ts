@@ -1,24 +1,11 @@
 import { DateTime } from 'luxon'
+import type { ComplianceRow } from '../schemas/report'
 
 export interface ComplianceTask {
   localDate: string
   status: string
   lateMinutes: number | null
   group: string
-}
-
-export interface ComplianceRow {
-  period: string
-  group: string
-  total: number
-  onTime: number
-  late: number
-  missed: number
-  skipped: number
-  held: number
-  open: number
-  /** Done on time as a share of the tasks that were due and not held; null when none were. */
-  onTimeRate: number | null
 }
 
 /** ISO week label, e.g. "2026-W49", for weekly reports. */

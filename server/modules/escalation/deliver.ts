@@ -7,8 +7,8 @@ import { logger } from '../../lib/logger'
 import { signAckToken } from '../../mail/ack-token'
 import type { PushSender } from '../../push/push-client'
 import { isPermanentTextError, type TextSender } from '../../sms/text-client'
-import { AlertEntity, type AlertRow } from '../completions/completion.entities'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { findAlert, type AlertRow } from '../completions/alert-records'
+import { findTaskRow, type TaskRow } from '../tasks/task-lookups'
 import { loadCatalogue, targetLabel } from '../tasks/targets'
 import { queueFallback } from './channels'
 import { NotificationEntity, type NotificationRow } from './escalation.entities'
@@ -60,8 +60,8 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
   for (const row of due) {
     const claim = await repo.update({ id: row.id, status: row.status }, { status: 'sending' })
     if (!claim.affected) continue
-    const alert = await db().getRepository(AlertEntity).findOneBy({ id: row.alertId })
-    const task = alert ? await db().getRepository(TaskEntity).findOneBy({ id: alert.taskId }) : null
+    const alert = await findAlert(row.alertId)
+    const task = alert ? await findTaskRow(alert.taskId) : null
     if (!alert || !task || alert.acknowledgedAt || alert.closedAt) {
       await repo.update(row.id, { status: 'superseded' })
       continue

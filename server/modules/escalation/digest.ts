@@ -1,11 +1,10 @@
 import { DateTime } from 'luxon'
-import { In } from 'typeorm'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
-import { AlertEntity } from '../completions/completion.entities'
+import { alertsOfTasks } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
-import { PersonEntity } from '../people/person.entity'
-import { TaskEntity } from '../tasks/task.entity'
+import { listContacts } from '../people/contact.service'
+import { taskRowsBetween } from '../tasks/task-lookups'
 import { loadCatalogue, targetLabel } from '../tasks/targets'
 import { DigestEntity } from './escalation.entities'
 import type { Transport } from './deliver'
@@ -24,12 +23,12 @@ export async function sendDailyDigestIfDue(config: AppConfig, transport: Transpo
   const claimed = (await db().query(sql, params)) as { affectedRows?: number }
   if (!claimed.affectedRows) return false
   const yesterday = local.minus({ days: 1 }).toISODate()!
-  const tasks = await db().getRepository(TaskEntity).find({ where: { localDate: yesterday } })
+  const tasks = await taskRowsBetween(yesterday, yesterday)
   const missed = tasks.filter((t) => t.status === 'missed')
   const flagged = tasks.filter((t) => t.flag)
   const late = tasks.filter((t) => t.status === 'done' && t.lateMinutes)
-  const alerts = flagged.length ? await db().getRepository(AlertEntity).findBy({ taskId: In(flagged.map((t) => t.id)) }) : []
-  const people = new Map((await db().getRepository(PersonEntity).find()).map((p) => [p.id, p]))
+  const alerts = await alertsOfTasks(flagged.map((t) => t.id))
+  const people = new Map((await listContacts()).map((p) => [p.id, p]))
   const cat = await loadCatalogue()
   const where = (t: (typeof tasks)[number]) => targetLabel(t.targetKind, t.targetId, cat)
   const lines = [

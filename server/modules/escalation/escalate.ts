@@ -1,9 +1,10 @@
-import { In, IsNull, LessThanOrEqual } from 'typeorm'
+import { In } from 'typeorm'
 import { db } from '../../db/data-source'
 import { stepChannels } from '#shared/schemas/ladder'
-import { AlertEntity, type AlertRow } from '../completions/completion.entities'
+import { acknowledgeOpenAlert, closeAlert, openAlertsStartedBy, type AlertRow } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
+import { taskRowsByIds, type TaskRow } from '../tasks/task-lookups'
+import { recheckOf } from '../tasks/task-writes.service'
 import { NotificationEntity } from './escalation.entities'
 import { ladderFor } from './ladders.service'
 import { channelsFor, destinationFor } from './channels'
@@ -17,16 +18,16 @@ export const isUrgent = (alert: AlertRow, task: TaskRow) => alert.kind === 'crit
  * the latest is sent, so nobody gets a burst of stale messages.
  */
 export async function runEscalations(now: Date): Promise<{ queued: number; closed: number }> {
-  const alerts = await db().getRepository(AlertEntity).find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull(), startedAt: LessThanOrEqual(now) } })
+  const alerts = await openAlertsStartedBy(now)
   if (!alerts.length) return { queued: 0, closed: 0 }
   const zone = (await getFacility()).timeZone
-  const tasks = new Map((await db().getRepository(TaskEntity).findBy({ id: In(alerts.map((a) => a.taskId)) })).map((t) => [t.id, t]))
+  const tasks = new Map((await taskRowsByIds(alerts.map((a) => a.taskId))).map((t) => [t.id, t]))
   let queued = 0
   let closed = 0
   for (const alert of alerts) {
     const task = tasks.get(alert.taskId)
     if (!task || (await answered(alert, task))) {
-      await db().getRepository(AlertEntity).update(alert.id, { closedAt: now })
+      await closeAlert(alert.id, now)
       closed++
       continue
     }
@@ -62,13 +63,13 @@ async function answered(alert: AlertRow, task: TaskRow): Promise<boolean> {
   if (alert.kind === 'missed_task') return task.status === 'done' || task.status === 'skipped'
   // An overdue incident's alert is closed by the incident when its deadline is met, or acknowledged.
   if (alert.kind !== 'critical_reading') return false
-  const recheck = await db().getRepository(TaskEntity).findOneBy({ recheckOfTaskId: task.id })
+  const recheck = await recheckOf(task.id)
   return !!recheck && recheck.status === 'done' && recheck.flag !== 'critical'
 }
 
 /** Acknowledging in the app or through a mail link stops the ladder and records who answered. */
 export async function acknowledgeAlert(alertId: number, personId: number, at = new Date()): Promise<boolean> {
-  const result = await db().getRepository(AlertEntity).update({ id: alertId, acknowledgedAt: IsNull() }, { acknowledgedAt: at, acknowledgedById: personId })
+  const first = await acknowledgeOpenAlert(alertId, personId, at)
   await db().getRepository(NotificationEntity).update({ alertId, status: In(['pending', 'held', 'failed']) }, { status: 'superseded' })
-  return !!result.affected
+  return first
 }

@@ -1,6 +1,7 @@
 import { Router } from 'express'
-import { TextReplyInputSchema } from '#shared/schemas/ladder'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { LadderInputSchema, TextReplyInputSchema } from '#shared/schemas/ladder'
+import { PreferencesInputSchema, PushSubscriptionInputSchema, PushUnsubscribeInputSchema } from '#shared/schemas/preferences'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { notFound } from '../../lib/errors'
@@ -13,7 +14,6 @@ import { OutboxEntity } from './escalation.entities'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
 import { createLadder, listLadders, updateLadder } from './ladders.service'
 
-
 export function escalationRouter(config: AppConfig) {
   const router = Router()
 
@@ -21,10 +21,11 @@ export function escalationRouter(config: AppConfig) {
     res.json(await listLadders())
   })
   router.post('/ladders', requireRole('manager'), async (req, res) => {
-    res.status(201).json(await createLadder(req.body))
+    res.status(201).json(await createLadder(LadderInputSchema.parse(req.body)))
   })
   router.put('/ladders/:id', requireRole('manager'), async (req, res) => {
-    res.json(await updateLadder(IdParamSchema.parse(req.params).id, req.body))
+    const { id } = IdParamSchema.parse(req.params)
+    res.json(await updateLadder(id, LadderInputSchema.parse(req.body)))
   })
 
   router.get('/tasks/:id/escalations', signedIn, async (req, res) => {
@@ -39,7 +40,7 @@ export function escalationRouter(config: AppConfig) {
     res.json(await myPreferences(config, req.user!.id))
   })
   router.patch('/me/preferences', signedIn, passwordCheckLimiter(config), async (req, res) => {
-    res.json(await updateMyPreferences(config, req.user!.id, req.body))
+    res.json(await updateMyPreferences(config, req.user!.id, PreferencesInputSchema.parse(req.body)))
   })
 
   // This device's push subscription (the settings page's "Send alerts to this device").
@@ -48,11 +49,11 @@ export function escalationRouter(config: AppConfig) {
     res.json({ publicKey: config.push.vapid.publicKey })
   })
   router.post('/me/push-subscriptions', signedIn, async (req, res) => {
-    await registerPushSubscription(req.user!.id, req.body)
+    await registerPushSubscription(req.user!.id, PushSubscriptionInputSchema.parse(req.body))
     res.status(204).end()
   })
   router.delete('/me/push-subscriptions', signedIn, async (req, res) => {
-    await removePushSubscription(req.user!.id, req.body)
+    await removePushSubscription(req.user!.id, PushUnsubscribeInputSchema.parse(req.body).endpoint)
     res.status(204).end()
   })
 

@@ -3,21 +3,21 @@ import type { EscalationRecord } from '#shared/schemas/ladder'
 import { db } from '../../db/data-source'
 import { forbidden, notFound } from '../../lib/errors'
 import { verifyAckToken } from '../../mail/ack-token'
-import { AlertEntity } from '../completions/completion.entities'
-import { PersonEntity } from '../people/person.entity'
-import { TaskEntity } from '../tasks/task.entity'
+import { alertsOfTask, findAlert } from '../completions/alert-records'
+import { findContact, listContacts } from '../people/contact.service'
+import { findTaskRow } from '../tasks/task-lookups'
 import { acknowledgeAlert } from './escalate'
 import { NotificationEntity } from './escalation.entities'
 import { ladderFor } from './ladders.service'
 
 /** Each alert on a task: the steps sent, to whom, when, whether delivered, and who answered. */
 export async function escalationRecord(taskId: number): Promise<EscalationRecord[]> {
-  const task = await db().getRepository(TaskEntity).findOneBy({ id: taskId })
+  const task = await findTaskRow(taskId)
   if (!task) throw notFound('That task')
-  const alerts = await db().getRepository(AlertEntity).find({ where: { taskId }, order: { startedAt: 'ASC' } })
+  const alerts = await alertsOfTask(taskId)
   if (!alerts.length) return []
   const notes = await db().getRepository(NotificationEntity).find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { step: 'ASC', id: 'ASC' } })
-  const names = new Map((await db().getRepository(PersonEntity).find()).map((p) => [p.id, p.name]))
+  const names = new Map((await listContacts()).map((p) => [p.id, p.name]))
   return Promise.all(
     alerts.map(async (a) => ({
       alertId: a.id,
@@ -40,7 +40,7 @@ export async function acknowledgeInApp(alertId: number, person: { id: number; ro
     // Observers may sit on a ladder; they answer through their mail link, which names them.
     throw forbidden('Observers acknowledge through the link in their e-mail.')
   }
-  const alert = await db().getRepository(AlertEntity).findOneBy({ id: alertId })
+  const alert = await findAlert(alertId)
   if (!alert) throw notFound('That alert')
   await acknowledgeAlert(alertId, person.id)
 }
@@ -55,11 +55,13 @@ export async function acknowledgeByToken(secret: string, token: string, now = ne
   const row = await repo.findOneBy({ id: check.notificationId })
   if (!row) return { status: 'forged' }
   // A link mailed to someone who has since left must not silence an escalation in their name.
-  const person = await db().getRepository(PersonEntity).findOneBy({ id: row.personId })
+  const person = await findContact(row.personId)
   if (!person?.active) return { status: 'inactive' }
   const claimed = await repo.createQueryBuilder().update().set({ ackUsedAt: now }).where('id = :id AND ackUsedAt IS NULL', { id: row.id }).execute()
   if (!claimed.affected) return { status: 'used' }
-  const alert = await db().getRepository(AlertEntity).findOneByOrFail({ id: row.alertId })
+  const alert = await findAlert(row.alertId)
+  // Alerts are never deleted, so a notification always has one; this only guards the type.
+  if (!alert) throw notFound('That alert')
   const first = await acknowledgeAlert(alert.id, row.personId, now)
   return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId, byName: person.name }
 }

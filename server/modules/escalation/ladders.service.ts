@@ -1,12 +1,12 @@
-import { LadderInputSchema, stepChannels, type Ladder, type LadderStep } from '#shared/schemas/ladder'
+import { stepChannels, type Ladder, type LadderInput, type LadderStep } from '#shared/schemas/ladder'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
-import type { AlertRow } from '../completions/completion.entities'
+import type { AlertRow } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
-import { ParameterEntity } from '../parameters/parameter.entities'
-import { RoutineEntity } from '../routines/routine.entity'
-import type { TaskRow } from '../tasks/task.entity'
+import { listParameters } from '../parameters/parameters.service'
+import { routineLadderId } from '../routines/routine-lookups'
+import type { TaskRow } from '../tasks/task-lookups'
 import { LadderEntity } from './escalation.entities'
 
 /** Used when the facility has not chosen ladders yet (common practice: assignee, then on call, then managers). */
@@ -28,16 +28,16 @@ const withChannels = <L extends { steps: LadderStep[] }>(ladder: L): L => ({ ...
 const repo = () => db().getRepository(LadderEntity)
 export const listLadders = async (): Promise<Ladder[]> => (await repo().find({ order: { id: 'ASC' } })).map(withChannels)
 
-export async function createLadder(input: unknown): Promise<Ladder> {
-  const saved = await repo().save(LadderInputSchema.parse(input))
+export async function createLadder(input: LadderInput): Promise<Ladder> {
+  const saved = await repo().save(input)
   await audit('ladder', saved.id, 'create', null, saved)
   return saved
 }
 
-export async function updateLadder(id: number, input: unknown): Promise<Ladder> {
+export async function updateLadder(id: number, input: LadderInput): Promise<Ladder> {
   const current = await repo().findOneBy({ id })
   if (!current) throw notFound('That ladder')
-  const saved = await repo().save({ ...current, ...LadderInputSchema.parse(input) })
+  const saved = await repo().save({ ...current, ...input })
   await audit('ladder', id, 'update', current, saved)
   return saved
 }
@@ -49,10 +49,10 @@ export async function updateLadder(id: number, input: unknown): Promise<Ladder> 
  */
 export async function ladderFor(alert: AlertRow, task: TaskRow): Promise<{ name: string; steps: LadderStep[] }> {
   let id = alert.ladderId
-  if (!id && alert.kind === 'missed_task' && task.routineId) id = (await db().getRepository(RoutineEntity).findOneBy({ id: task.routineId }))?.ladderId ?? null
+  if (!id && alert.kind === 'missed_task' && task.routineId) id = await routineLadderId(task.routineId)
   if (!id && alert.kind === 'critical_reading') {
     const keys = alert.detail.split(', ').map((part) => part.split(' ')[0])
-    const params = await db().getRepository(ParameterEntity).find()
+    const params = await listParameters()
     id = params.find((p) => keys.includes(p.key) && p.ladderId)?.ladderId ?? null
   }
   const fast = alert.kind === 'critical_reading' || task.priority === 'welfare_critical'

@@ -1,5 +1,5 @@
-import type { AlertRow } from '../completions/completion.entities'
-import type { TaskRow } from '../tasks/task.entity'
+import type { AlertRow } from '../completions/alert-records'
+import type { TaskRow } from '../tasks/task-lookups'
 
 export interface MessageInput {
   alert: AlertRow

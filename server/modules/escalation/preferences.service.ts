@@ -1,5 +1,5 @@
 import bcrypt from 'bcryptjs'
-import { PreferencesInputSchema, type Preferences } from '#shared/schemas/preferences'
+import type { Preferences, PreferencesInput } from '#shared/schemas/preferences'
 import type { AppConfig } from '../../lib/config'
 import { notFound, validationError } from '../../lib/errors'
 import { audit } from '../audit/audit.service'
@@ -28,8 +28,8 @@ export async function myPreferences(config: AppConfig, personId: number): Promis
  * address (so "already in use" is no free account probe); an address someone else has is refused
  * by the unique key as a 409.
  */
-export async function updateMyPreferences(config: AppConfig, personId: number, body: unknown): Promise<Preferences> {
-  const { currentPassword, ...input } = PreferencesInputSchema.parse(body)
+export async function updateMyPreferences(config: AppConfig, personId: number, changes: PreferencesInput): Promise<Preferences> {
+  const { currentPassword, ...input } = changes
   const current = await getPersonRow(personId)
   if (input.email !== undefined && input.email !== current.email) {
     if (!currentPassword) throw validationError('Enter your current password to change the address you sign in with.', { currentPassword: ['Enter your current password'] })

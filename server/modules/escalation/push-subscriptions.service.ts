@@ -1,5 +1,5 @@
 import { createHash } from 'node:crypto'
-import { PushSubscriptionInputSchema, PushUnsubscribeInputSchema } from '#shared/schemas/preferences'
+import type { PushSubscriptionInput } from '#shared/schemas/preferences'
 import { db } from '../../db/data-source'
 import { PushSubscriptionEntity, type PushSubscriptionRow } from './push-subscription.entity'
 
@@ -9,16 +9,14 @@ const hashOf = (endpoint: string) => createHash('sha256').update(endpoint).diges
  * Registers this device for a person. An endpoint belongs to one browser profile, so when it
  * comes again (another person signs in on that phone) it moves to the newest person.
  */
-export async function registerPushSubscription(personId: number, body: unknown) {
-  const input = PushSubscriptionInputSchema.parse(body)
+export async function registerPushSubscription(personId: number, input: PushSubscriptionInput) {
   const endpointHash = hashOf(input.endpoint)
   const row = { personId, endpointHash, endpoint: input.endpoint, p256dh: input.keys.p256dh, auth: input.keys.auth, createdAt: new Date() }
   await db().getRepository(PushSubscriptionEntity).upsert(row, ['endpointHash'])
 }
 
 /** Forgets this device for the person (only their own). */
-export async function removePushSubscription(personId: number, body: unknown) {
-  const { endpoint } = PushUnsubscribeInputSchema.parse(body)
+export async function removePushSubscription(personId: number, endpoint: string) {
   await db().getRepository(PushSubscriptionEntity).delete({ personId, endpointHash: hashOf(endpoint) })
 }
 

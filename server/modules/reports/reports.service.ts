@@ -1,31 +1,27 @@
-import { In } from 'typeorm'
-import { complianceRows, type ComplianceRow } from '#shared/reports/compliance'
-import { db } from '../../db/data-source'
-import { AlertEntity, ReadingEntity } from '../completions/completion.entities'
-import { TaskEntity } from '../tasks/task.entity'
+import { complianceRows } from '#shared/reports/compliance'
+import type { ComplianceRow, ResponseRow, WelfareRow } from '#shared/schemas/report'
+import { alertsOfTasks } from '../completions/alert-records'
+import { readingsOfTasks } from '../completions/reading-lookups'
+import { flaggedOrMissedBetween, rechecksOfTasks, taskRowsBetween, welfareChecksBetween, type TaskRow } from '../tasks/task-lookups'
 import { loadTaskContext } from '../tasks/tasks.service'
 import { targetLabel } from '../tasks/targets'
 
 export type GroupBy = 'category' | 'area' | 'person'
 
 export async function complianceReport(from: string, to: string, by: GroupBy, period: 'day' | 'week'): Promise<ComplianceRow[]> {
-  const rows = await db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).getMany()
+  const rows = await taskRowsBetween(from, to)
   const ctx = await loadTaskContext()
-  const groupOf = (t: (typeof rows)[number]) =>
+  const groupOf = (t: TaskRow) =>
     by === 'category' ? t.category : by === 'area' ? (ctx.cat.areas.get(t.areaId ?? -1)?.name ?? 'No area') : (ctx.names.get(t.completedById ?? t.assigneeId ?? -1) ?? 'Unassigned')
   return complianceRows(rows.map((t) => ({ localDate: t.localDate, status: t.status, lateMinutes: t.lateMinutes, group: groupOf(t) })), period)
 }
 
 /** How fast flags and escalations were answered: alert to acknowledgement, flag to recheck done. */
-export async function responseReport(from: string, to: string) {
-  const tasks = await db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).andWhere('(t.flag IS NOT NULL OR t.status = :missed)', { missed: 'missed' }).getMany()
+export async function responseReport(from: string, to: string): Promise<ResponseRow[]> {
+  const tasks = await flaggedOrMissedBetween(from, to)
   if (!tasks.length) return []
   const ids = tasks.map((t) => t.id)
-  const [alerts, rechecks, ctx] = await Promise.all([
-    db().getRepository(AlertEntity).findBy({ taskId: In(ids) }),
-    db().getRepository(TaskEntity).findBy({ recheckOfTaskId: In(ids) }),
-    loadTaskContext(),
-  ])
+  const [alerts, rechecks, ctx] = await Promise.all([alertsOfTasks(ids), rechecksOfTasks(ids), loadTaskContext()])
   const minutesBetween = (a: Date | null | undefined, b: Date | null | undefined) => (a && b ? Math.round((b.getTime() - a.getTime()) / 60_000) : null)
   return tasks.map((t) => {
     const alert = alerts.find((a) => a.taskId === t.id)
@@ -41,12 +37,10 @@ export async function responseReport(from: string, to: string) {
 }
 
 /** The welfare-check record for a date range and tanks: each check with its readings, who and when. */
-export async function welfareReport(from: string, to: string, tankIds: number[]) {
-  const qb = db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).andWhere('t.category IN (:...cats)', { cats: ['welfare', 'quarantine'] })
-  if (tankIds.length) qb.andWhere('t.tankId IN (:...tankIds)', { tankIds })
-  const tasks = await qb.orderBy('t.dueAt', 'ASC').getMany()
+export async function welfareReport(from: string, to: string, tankIds: number[]): Promise<WelfareRow[]> {
+  const tasks = await welfareChecksBetween(from, to, tankIds)
   const ctx = await loadTaskContext()
-  const readings = tasks.length ? await db().getRepository(ReadingEntity).find({ where: { taskId: In(tasks.map((t) => t.id)) } }) : []
+  const readings = await readingsOfTasks(tasks.map((t) => t.id))
   return tasks.map((t) => {
     const own = readings.filter((r) => r.taskId === t.id && !r.supersededAt)
     return {

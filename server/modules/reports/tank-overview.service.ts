@@ -1,27 +1,21 @@
-import { In, IsNull } from 'typeorm'
 import { pickLimit } from '#shared/readings/band'
-import { db } from '../../db/data-source'
+import type { TankOverview, TankReadings, TrendReading } from '#shared/schemas/tank-page'
 import { notFound } from '../../lib/errors'
-import { ReadingEntity } from '../completions/completion.entities'
-import { LimitEntity, ParameterEntity } from '../parameters/parameter.entities'
-import { BatchRecordEntity, EventEntity } from '../playbooks/playbook.entities'
-import { TaskEntity } from '../tasks/task.entity'
+import { currentReadingsAt, type ReadingRow } from '../completions/reading-lookups'
+import { listLimits, listParameters } from '../parameters/parameters.service'
+import { latestBatchRecords, latestEventsOfTank } from '../playbooks/playbook-lookups'
+import { latestTasksOfTank } from '../tasks/task-lookups'
 import { toTask } from '../tasks/task.mapper'
 import { loadTaskContext } from '../tasks/tasks.service'
 
 /** A tank's page: its place, batches, the limits that apply there, recent tasks and events. */
-export async function tankOverview(tankId: number) {
+export async function tankOverview(tankId: number): Promise<TankOverview> {
   const ctx = await loadTaskContext()
   const tank = ctx.cat.tanks.get(tankId)
   if (!tank) throw notFound('That tank')
   const batches = [...ctx.cat.batches.values()].filter((b) => b.tankIds.includes(tankId))
-  const [parameters, limits, tasks, records] = await Promise.all([
-    db().getRepository(ParameterEntity).find(),
-    db().getRepository(LimitEntity).find(),
-    db().getRepository(TaskEntity).find({ where: { tankId }, order: { dueAt: 'DESC' }, take: 40 }),
-    batches.length ? db().getRepository(BatchRecordEntity).find({ where: { batchId: In(batches.map((b) => b.id)) }, order: { createdAt: 'DESC' }, take: 20 }) : [],
-  ])
-  const events = (await db().getRepository(EventEntity).find({ order: { startsAt: 'DESC' }, take: 100 })).filter((e) => e.tankIds.includes(tankId))
+  const [parameters, limits, tasks, records] = await Promise.all([listParameters(), listLimits(), latestTasksOfTank(tankId, 40), latestBatchRecords(batches.map((b) => b.id), 20)])
+  const events = await latestEventsOfTank(tankId, 100)
   const where = { systemId: tank.systemId, batchIds: batches.filter((b) => b.status === 'active' || b.status === 'quarantine').map((b) => b.id) }
   return {
     tank,
@@ -38,23 +32,20 @@ export async function tankOverview(tankId: number) {
   }
 }
 
+const toTrendReading = (r: ReadingRow): TrendReading => ({ parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: r.takenAt.toISOString() })
+
 /** Readings for trend charts: the tank's own, its system's (chemistry sampled at the loop), and deaths per day. */
-export async function tankReadings(tankId: number, from: Date, to: Date) {
+export async function tankReadings(tankId: number, from: Date, to: Date): Promise<TankReadings> {
   const ctx = await loadTaskContext()
   const tank = ctx.cat.tanks.get(tankId)
   if (!tank) throw notFound('That tank')
-  const repo = db().getRepository(ReadingEntity)
-  const qb = (column: 'tankId' | 'systemId', id: number) =>
-    repo.createQueryBuilder('r').where(`r.${column} = :id`, { id }).andWhere('r.takenAt BETWEEN :from AND :to', { from, to }).andWhere({ supersededAt: IsNull() }).orderBy('r.takenAt', 'ASC').getMany()
-  const own = await qb('tankId', tankId)
-  const system = tank.systemId ? (await qb('systemId', tank.systemId)).filter((r) => r.tankId === null) : []
-  const shape = (r: (typeof own)[number]) => ({ parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: r.takenAt.toISOString() })
+  const own = await currentReadingsAt('tankId', tankId, from, to)
+  const system = tank.systemId ? (await currentReadingsAt('systemId', tank.systemId, from, to)).filter((r) => r.tankId === null) : []
   const deaths = new Map<string, number>()
   const zone = ctx.cat.facility.timeZone
   for (const r of own.filter((x) => x.parameterKey === 'mortalities')) {
     const day = new Intl.DateTimeFormat('en-CA', { timeZone: zone }).format(r.takenAt)
     deaths.set(day, (deaths.get(day) ?? 0) + r.value)
   }
-  return { tank: own.map(shape), system: system.map(shape), mortalityByDay: [...deaths].map(([date, count]) => ({ date, count })) }
+  return { tank: own.map(toTrendReading), system: system.map(toTrendReading), mortalityByDay: [...deaths].map(([date, count]) => ({ date, count })) }
 }
-

@@ -3,7 +3,7 @@ import { z } from 'zod'
 import { apiFetch } from '../../../lib/api-client'
 import { IncidentReportRowSchema, StockReportRowSchema } from '#shared/schemas/animal-report'
 import { reportPath, type AuditFilter, type ComplianceFilter, type DateRange, type StockFilter, type WelfareFilter } from '../utils/report-paths'
-import { AuditRowSchema, ComplianceRowSchema, ResponseRowSchema, WelfareRowSchema } from './report-schemas'
+import { AuditRowSchema, ComplianceRowSchema, ResponseRowSchema, WelfareRowSchema } from '#shared/schemas/report'
 
 export const reportKeys = {
   all: ['reports'] as const,

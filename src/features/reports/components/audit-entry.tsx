@@ -1,5 +1,5 @@
 import { ChevronRight, PencilLine } from 'lucide-react'
-import type { AuditRow } from '../api/report-schemas'
+import type { AuditRow } from '#shared/schemas/report'
 import { auditDiff, prettyJson } from '../utils/audit-diff'
 
 const ACTIONS: Record<string, string> = { create: 'Created', update: 'Changed', delete: 'Deleted', amend: 'Corrected' }

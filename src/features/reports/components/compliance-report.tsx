@@ -1,6 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query'
 import { reportQueries } from '../api/report-queries'
-import { csvHref, GROUPINGS, PERIODS, type ComplianceFilter } from '../utils/report-paths'
+import { COMPLIANCE_GROUPINGS, REPORT_PERIODS } from '#shared/schemas/report'
+import { csvHref, type ComplianceFilter } from '../utils/report-paths'
 import { ComplianceTable } from './compliance-table'
 import { OnTimeChart } from './on-time-chart'
 import { ReportActions } from './report-actions'
@@ -26,8 +27,8 @@ export function ComplianceReport({ filter, onFilterChange }: ComplianceReportPro
         <ReportActions csvHref={csvHref('compliance', filter)} label="compliance" />
       </div>
       <div className="flex flex-wrap gap-3 print:hidden">
-        <ReportSelect label="Group by" value={filter.by} options={GROUPINGS.map((v) => ({ value: v, label: BY_LABELS[v] }))} onChange={(by) => onFilterChange({ by })} />
-        <ReportSelect label="Per" value={filter.period} options={PERIODS.map((v) => ({ value: v, label: PERIOD_LABELS[v] }))} onChange={(period) => onFilterChange({ period })} />
+        <ReportSelect label="Group by" value={filter.by} options={COMPLIANCE_GROUPINGS.map((v) => ({ value: v, label: BY_LABELS[v] }))} onChange={(by) => onFilterChange({ by })} />
+        <ReportSelect label="Per" value={filter.period} options={REPORT_PERIODS.map((v) => ({ value: v, label: PERIOD_LABELS[v] }))} onChange={(period) => onFilterChange({ period })} />
       </div>
       <OnTimeChart rows={rows} />
       <ComplianceTable rows={rows} />

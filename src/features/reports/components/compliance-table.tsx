@@ -1,5 +1,5 @@
 import { CATEGORY_LABELS, CategorySchema } from '#shared/schemas/routine'
-import type { ComplianceRow } from '../api/report-schemas'
+import type { ComplianceRow } from '#shared/schemas/report'
 import { percent } from '../utils/on-time'
 import { ReportTable, type ReportColumn } from './report-table'
 

@@ -1,5 +1,5 @@
 import { CartesianGrid, Line, LineChart, XAxis, YAxis } from 'recharts'
-import type { ComplianceRow } from '../api/report-schemas'
+import type { ComplianceRow } from '#shared/schemas/report'
 import { onTimeTrend, overallOnTime } from '../utils/on-time'
 
 /** The on-time rate per period across all groups, small, with the overall figure in words. */

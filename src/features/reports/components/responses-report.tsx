@@ -1,6 +1,6 @@
 import { useSuspenseQuery } from '@tanstack/react-query'
 import { reportQueries } from '../api/report-queries'
-import type { ResponseRow } from '../api/report-schemas'
+import type { ResponseRow } from '#shared/schemas/report'
 import { csvHref, type DateRange } from '../utils/report-paths'
 import { FlagText } from './flag-text'
 import { ReportActions } from './report-actions'

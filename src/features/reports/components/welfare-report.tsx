@@ -1,7 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query'
 import { catalogueQueries } from '../../../api/catalogues'
 import { reportQueries } from '../api/report-queries'
-import type { WelfareRow } from '../api/report-schemas'
+import type { WelfareRow } from '#shared/schemas/report'
 import { csvHref, type WelfareFilter } from '../utils/report-paths'
 import { FlagText } from './flag-text'
 import { ReportActions } from './report-actions'

@@ -1,4 +1,4 @@
-import type { ComplianceRow } from '../api/report-schemas'
+import type { ComplianceRow } from '#shared/schemas/report'
 
 export interface OnTimePoint {
   period: string

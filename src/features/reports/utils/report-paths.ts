@@ -1,10 +1,10 @@
+import type { ComplianceGrouping, ReportPeriod } from '#shared/schemas/report'
+
 export interface DateRange {
   from: string
   to: string
 }
-export const GROUPINGS = ['category', 'area', 'person'] as const
-export const PERIODS = ['day', 'week'] as const
-export type ComplianceFilter = DateRange & { by: (typeof GROUPINGS)[number]; period: (typeof PERIODS)[number] }
+export type ComplianceFilter = DateRange & { by: ComplianceGrouping; period: ReportPeriod }
 export type WelfareFilter = DateRange & { tankIds: number[] }
 export type AuditFilter = DateRange & { entity: string }
 /** One batch by id, or '' for every batch. */

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query'
 import { apiFetch } from '../../../lib/api-client'
-import { TankOverviewSchema, TankReadingsSchema } from './tank-page-schemas'
+import { TankOverviewSchema, TankReadingsSchema } from '#shared/schemas/tank-page'
 
 export const TREND_RANGES = [7, 30, 90] as const
 export type TrendRange = (typeof TREND_RANGES)[number]

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react'
-import type { TankLimit } from '../api/tank-page-schemas'
+import type { TankLimit } from '#shared/schemas/tank-page'
 import { BAND_FILL_OPACITY, CHART_COLOURS } from '../utils/chart-colours'
 import { criticalText, hasLimits, okText } from '../utils/limit-text'
 import { DotShape } from './dot-shape'

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom'
-import type { TankOverview } from '../api/tank-page-schemas'
+import type { TankOverview } from '#shared/schemas/tank-page'
 import { formatLocalDay, formatWhen } from '../utils/format'
 
 const STATUS: Record<TankOverview['batches'][number]['status'], string> = {

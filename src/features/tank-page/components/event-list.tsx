@@ -1,6 +1,6 @@
 import { CalendarRange } from 'lucide-react'
 import { Link } from 'react-router-dom'
-import type { TankOverview } from '../api/tank-page-schemas'
+import type { TankOverview } from '#shared/schemas/tank-page'
 import { formatLocalDay } from '../utils/format'
 
 const STATUS: Record<string, string> = { planned: 'Planned', ended: 'Ended', cancelled: 'Cancelled' }

@@ -1,4 +1,4 @@
-import type { TankLimit } from '../api/tank-page-schemas'
+import type { TankLimit } from '#shared/schemas/tank-page'
 import { formatWhen, withUnit } from '../utils/format'
 import type { TrendPoint } from '../utils/trend-series'
 import { BandBadge } from '../../../components/ui/band-badge'

@@ -1,4 +1,4 @@
-import type { TankLimit } from '../api/tank-page-schemas'
+import type { TankLimit } from '#shared/schemas/tank-page'
 import { criticalText, hasLimits, okText } from '../utils/limit-text'
 
 const SCOPE: Record<NonNullable<TankLimit['scope']>, string> = { facility: 'Whole facility', system: 'This system', batch: 'This batch' }

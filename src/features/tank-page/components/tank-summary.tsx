@@ -1,6 +1,6 @@
 import { MapPin, Network, QrCode, ShieldAlert } from 'lucide-react'
 import { Link } from 'react-router-dom'
-import type { TankOverview } from '../api/tank-page-schemas'
+import type { TankOverview } from '#shared/schemas/tank-page'
 
 const litres = new Intl.NumberFormat('en', { maximumFractionDigits: 1 })
 

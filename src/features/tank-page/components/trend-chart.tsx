@@ -1,6 +1,6 @@
 import { CartesianGrid, ComposedChart, Line, ReferenceArea, XAxis, YAxis } from 'recharts'
 import type { DotItemDotProps } from 'recharts'
-import type { TankLimit } from '../api/tank-page-schemas'
+import type { TankLimit } from '#shared/schemas/tank-page'
 import { bandAreas, valueScale } from '../utils/band-areas'
 import { BAND_FILL_OPACITY, CHART_COLOURS } from '../utils/chart-colours'
 import { formatTick, formatValue } from '../utils/format'

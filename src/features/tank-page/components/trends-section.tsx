@@ -1,5 +1,5 @@
 import type { TrendRange } from '../api/tank-page-queries'
-import type { TankReadings } from '../api/tank-page-schemas'
+import type { TankReadings } from '#shared/schemas/tank-page'
 import type { TrendParameter } from '../utils/trend-series'
 import { MortalityChart } from './mortality-chart'
 import { ParameterChoice } from './parameter-choice'

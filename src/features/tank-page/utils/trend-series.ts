@@ -1,5 +1,5 @@
 import type { Band } from '#shared/schemas/parameter'
-import type { TankLimit, TrendReading } from '../api/tank-page-schemas'
+import type { TankLimit, TrendReading } from '#shared/schemas/tank-page'
 
 export interface TrendPoint {
   t: number
