@@ -2,15 +2,13 @@ import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { LadderInputSchema, TextReplyInputSchema } from '#shared/schemas/ladder'
 import { PreferencesInputSchema, PushSubscriptionInputSchema, PushUnsubscribeInputSchema } from '#shared/schemas/preferences'
-import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { notFound } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
 import { passwordCheckLimiter } from '../auth/sign-in-limits'
 import { myPreferences, updateMyPreferences } from './preferences.service'
 import { registerPushSubscription, removePushSubscription } from './push-subscriptions.service'
-import { localTexts, replyAsRecipient } from './text-outbox.service'
-import { OutboxEntity } from './escalation.entities'
+import { localMail, localTexts, replyAsRecipient } from './text-outbox.service'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
 import { createLadder, listLadders, updateLadder } from './ladders.service'
 
@@ -59,9 +57,7 @@ export function escalationRouter(config: AppConfig) {
 
   // Local mode only: the mail the app sent, as the local SMTP server received it.
   router.get('/outbox', requireRole('manager'), async (_req, res) => {
-    if (config.mail.mode !== 'local') throw notFound('The outbox (only in local mail mode)')
-    const rows = await db().getRepository(OutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
-    res.json(rows.map((r) => ({ ...r, receivedAt: r.receivedAt.toISOString() })))
+    res.json(await localMail(config))
   })
   // Local text mode only: what the stand-in provider received, and a reply sent as the recipient.
   router.get('/outbox/texts', requireRole('manager'), async (_req, res) => {

@@ -1,8 +1,15 @@
-import type { TextOutboxMessage } from '#shared/schemas/ladder'
+import type { OutboxMessage, TextOutboxMessage } from '#shared/schemas/ladder'
 import { db } from '../../db/data-source'
 import type { AppConfig } from '../../lib/config'
 import { AppError, notFound } from '../../lib/errors'
-import { TextOutboxEntity } from './escalation.entities'
+import { OutboxEntity, TextOutboxEntity } from './escalation.entities'
+
+/** Local mail mode only: the latest mail the app sent, as the local SMTP server received it. */
+export async function localMail(config: AppConfig): Promise<OutboxMessage[]> {
+  if (config.mail.mode !== 'local') throw notFound('The outbox (only in local mail mode)')
+  const rows = await db().getRepository(OutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
+  return rows.map((r) => ({ ...r, receivedAt: r.receivedAt.toISOString() }))
+}
 
 const localOnly = (config: AppConfig) => {
   if (config.sms.mode !== 'local' || !config.sms.apiBaseUrl) throw notFound('The text outbox (only in local text mode)')
