@@ -1,7 +1,8 @@
 import { z } from 'zod'
 import { BatchRecordSchema } from './batch-record'
 import { AreaSchema, BatchSchema, SystemSchema, TankSchema } from './facility'
-import { BandSchema, LIMIT_SCOPES } from './parameter'
+import { ReadingSchema } from './completion'
+import { LIMIT_SCOPES } from './parameter'
 import { EventSchema } from './playbook'
 import { TaskSchema } from './task'
 import { text } from './text'
@@ -37,14 +38,7 @@ export const TankOverviewSchema = z.object({
 export type TankOverview = z.infer<typeof TankOverviewSchema>
 
 /** One current reading on a trend chart. */
-export const TrendReadingSchema = z.object({
-  parameterKey: text(),
-  value: z.number(),
-  unit: text(),
-  band: BandSchema,
-  derived: z.boolean(),
-  takenAt: text(),
-})
+export const TrendReadingSchema = ReadingSchema.extend({ takenAt: text() })
 export type TrendReading = z.infer<typeof TrendReadingSchema>
 
 /** The tank's own readings, its system's (chemistry sampled at the loop) and deaths per facility day. */
