@@ -2,7 +2,19 @@ import type { Reading } from '../schemas/completion'
 import type { Band } from '../schemas/parameter'
 import { bandFor, worstBand, type Bounds } from './band'
 import { deriveReadings } from './derive'
-import { impossibleReading, type PhysicalRange } from './typed-reading'
+
+/** What a reading may physically be: the one range every check of a typed value uses. */
+export interface PhysicalRange {
+  unit: string
+  physicalMin: number
+  physicalMax: number
+}
+
+/** Why a value cannot be a real reading of this parameter ("Not possible: must be 0–30 °C"), or null. */
+export function impossibleReading(value: number, range: PhysicalRange): string | null {
+  if (value >= range.physicalMin && value <= range.physicalMax) return null
+  return `Not possible: must be ${range.physicalMin}–${range.physicalMax}${range.unit ? ` ${range.unit}` : ''}`
+}
 
 /** What one reading is judged by: its physical range and the limits that apply where it was taken. */
 export interface ReadingRule extends Bounds, PhysicalRange {
