@@ -1,10 +1,12 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import type request from 'supertest'
 import { db } from '#server/db/data-source'
+import { AmendmentEntity } from '#server/modules/completions/amendment.entity'
 import { AlertEntity, ReadingEntity } from '#server/modules/completions/completion.entities'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
 import type { Tank } from '#shared/schemas/facility'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { failingInsert } from '#tests/support/failing-insert'
 import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 
@@ -95,5 +97,15 @@ describe('a supervisor corrects a reading on a finished check, and the record is
     expect(res.body.error.fieldErrors['readings.do_mgL'][0]).toMatch(/impossible/)
     expect((await taskRow(task.id)).flag).toBeNull()
     expect(await criticalAlerts(task.id)).toHaveLength(0)
+  })
+
+  test('when the alert cannot be written, the correction is not kept either: one commit holds the amendment, the new flag and its follow-ups', async () => {
+    const { task, completionId } = await completedCheck(6.8)
+    await failingInsert('alerts', `NEW.taskId = ${task.id}`, () => amend(completionId, 3.1, 'The meter was read on the wrong probe; the tank read 3.1').expect(500))
+    expect((await taskRow(task.id)).flag).toBeNull()
+    expect(await db().getRepository(AmendmentEntity).countBy({ completionId })).toBe(0)
+    expect(await rechecks(task.id)).toHaveLength(0)
+    const readings = await db().getRepository(ReadingEntity).find({ where: { completionId } })
+    expect(readings.every((r) => r.supersededAt === null && r.amendmentId === null)).toBe(true)
   })
 })
