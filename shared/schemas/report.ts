@@ -1,5 +1,6 @@
 import { z } from 'zod'
 import { ReportRangeSchema } from './animal-report'
+import { TaskStatusSchema } from './task'
 import { text } from './text'
 
 // The answers of the compliance, response, welfare and audit reports (the stock and incident reports are in animal-report.ts).
@@ -58,7 +59,7 @@ export const WelfareRowSchema = z.object({
   due: text(),
   task: text(),
   tank: text(),
-  status: text(),
+  status: TaskStatusSchema,
   doneAt: text(),
   doneBy: text(),
   lateMinutes: z.union([z.number(), z.literal('')]),
