@@ -40,9 +40,10 @@ export type Ladder = z.infer<typeof LadderSchema>
 
 /**
  * `failed` is retried with back-off; `undelivered` is final (the provider refused or could not
- * deliver it, and the next channel was queued); `suppressed` was held back by the text limit.
+ * deliver it, and the next channel was queued); `suppressed` was held back by the text limit;
+ * `unknown` was claimed by a process that stopped before the provider answered (never resent).
  */
-export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded', 'undelivered', 'suppressed'] as const
+export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded', 'undelivered', 'suppressed', 'unknown'] as const
 
 export const EscalationRecordSchema = z.object({
   alertId: z.number().int(),

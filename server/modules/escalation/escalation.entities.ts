@@ -38,6 +38,8 @@ export interface NotificationRow {
   urgent: boolean
   attempts: number
   nextAttemptAt: Date
+  /** When a process claimed it for sending (`pending → sending`); a claim far older is a sender that stopped. */
+  claimedAt: Date | null
   lastError: string | null
   sentAt: Date | null
   ackUsedAt: Date | null
@@ -63,6 +65,7 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
     urgent: { type: 'boolean', default: false },
     attempts: { type: 'int', default: 0 },
     nextAttemptAt: { type: 'datetime', precision: 3 },
+    claimedAt: { type: 'datetime', precision: 3, nullable: true },
     lastError: { type: 'varchar', length: 500, nullable: true },
     sentAt: { type: 'datetime', precision: 3, nullable: true },
     ackUsedAt: { type: 'datetime', precision: 3, nullable: true },
