@@ -98,3 +98,18 @@ export const TextOutboxMessageSchema = z.object({
 export type TextOutboxMessage = z.infer<typeof TextOutboxMessageSchema>
 
 export const TextReplyInputSchema = z.object({ body: text().trim().min(1, 'Type a reply').max(160) })
+
+/** A push message as the local push service decrypted it (or refused it), with the person whose device it was. */
+export const PushOutboxMessageSchema = z.object({
+  id: z.number().int(),
+  /** Null when no person has that device any more (unsubscribed or gone). */
+  personName: text().nullable(),
+  endpoint: text(),
+  status: z.enum(['received', 'refused']),
+  title: text(),
+  body: text(),
+  note: text().nullable(),
+  urgency: text().nullable(),
+  receivedAt: text(),
+})
+export type PushOutboxMessage = z.infer<typeof PushOutboxMessageSchema>

@@ -140,6 +140,34 @@ export const TextOutboxEntity = new EntitySchema<TextOutboxRow>({
   },
 })
 
+export interface PushOutboxRow {
+  id: number
+  endpoint: string
+  /** `received`: VAPID checked and the body decrypted; `refused`: the stand-in turned it away (see `note`). */
+  status: 'received' | 'refused'
+  title: string
+  body: string
+  note: string | null
+  urgency: string | null
+  receivedAt: Date
+}
+
+/** What the local push service decrypted or refused (local mode), for the Outbox page. */
+export const PushOutboxEntity = new EntitySchema<PushOutboxRow>({
+  name: 'PushOutboxMessage',
+  tableName: 'push_outbox',
+  columns: {
+    id: { type: 'int', primary: true, generated: 'increment' },
+    endpoint: { type: 'varchar', length: 1000 },
+    status: { type: 'enum', enum: ['received', 'refused'] },
+    title: { type: 'varchar', length: 300 },
+    body: { type: 'text' },
+    note: { type: 'varchar', length: 300, nullable: true },
+    urgency: { type: 'varchar', length: 20, nullable: true },
+    receivedAt: { type: 'datetime', precision: 3 },
+  },
+})
+
 export interface TextQuotaRow {
   personId: number
   hourStart: Date
