@@ -29,6 +29,8 @@ export function usePushDevice() {
 export function useSubscribePushDevice() {
   const queryClient = useQueryClient()
   return useMutation({
+    // PushDeviceControl shows why it failed beside the button.
+    meta: { errorShownInline: true },
     mutationFn: async () => {
       if ((await Notification.requestPermission()) !== 'granted') {
         throw new ApiError(0, 'validation_failed', 'Notifications are blocked for Roundtide in this browser. Allow them in the site settings, then try again.')
