@@ -5,6 +5,7 @@ import { PersonEntity } from '#server/modules/people/person.entity'
 import { PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { launchPushProfile, startGcmStandIn, type GcmStandIn } from '#tests/support/gcm-stand-in'
 import { ensureFacilityAndParameters } from '#tests/support/facility-fixtures'
+import { openPushSettings } from '#tests/support/push-settings'
 
 let s: BrowserSession
 let gcm: GcmStandIn
@@ -25,12 +26,7 @@ async function settingsPageOf(name: string) {
   const browser = await launchPushProfile(gcm, { baseURL: s.url, viewport: PHONE })
   const page = await browser.context.newPage()
   await s.signIn(page, person.email)
-  await page.goto('/settings')
-  await page.getByRole('heading', { name: 'Send alerts to this device' }).waitFor()
-  await page.evaluate(() => navigator.serviceWorker.ready.then(() => true))
-  await page.reload()
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null)
-  await page.getByText('This device does not receive alerts.').waitFor()
+  await openPushSettings(page)
   return { person, page, browser }
 }
 

@@ -1,15 +1,11 @@
 import { BellOff, BellRing } from 'lucide-react'
 import type { PushOutboxMessage } from '#shared/schemas/ladder'
 import { formatWhen } from '../../../lib/zone-format'
+import { OutboxEmpty } from './outbox-empty'
 
 /** Push messages as the local push service decrypted them, newest first; a refused one says why. */
 export function PushOutboxList({ pushes, timeZone }: { pushes: PushOutboxMessage[]; timeZone: string }) {
-  if (pushes.length === 0)
-    return (
-      <p className="flex items-center gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
-        <BellRing aria-hidden className="size-5 shrink-0" /> No push notifications have been sent yet.
-      </p>
-    )
+  if (pushes.length === 0) return <OutboxEmpty icon={BellRing}>No push notifications have been sent yet.</OutboxEmpty>
   return (
     <ul aria-label="Push notifications" className="divide-y divide-tide-100 overflow-hidden rounded-xl border border-tide-200 bg-white">
       {pushes.map((p) => {
