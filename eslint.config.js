@@ -19,22 +19,9 @@ const ENTITY_IMPORTS_BEING_REMOVED = {
   'escalation/messages.ts': ['completions/completion.entities.ts', 'tasks/task.entity.ts'],
   'escalation/recipients.ts': ['people/person.entity.ts', 'roster/roster.entities.ts', 'tasks/task.entity.ts'],
   'oxygen/oxygen.service.ts': ['completions/completion.entities.ts'],
-  'playbooks/batch-records.service.ts': ['facility/facility.entities.ts'],
   'reports/reports.routes.ts': ['audit/audit.entity.ts'],
   'reports/reports.service.ts': ['completions/completion.entities.ts', 'tasks/task.entity.ts'],
   'reports/tank-overview.service.ts': ['completions/completion.entities.ts', 'parameters/parameter.entities.ts', 'playbooks/playbook.entities.ts', 'tasks/task.entity.ts'],
-  'roster/assignee-rules.service.ts': ['people/person.entity.ts', 'routines/routine.entity.ts', 'tasks/task.entity.ts'],
-  'roster/calendar.service.ts': ['playbooks/playbook.entities.ts', 'tasks/task.entity.ts'],
-  'roster/coverage.service.ts': ['tasks/task.entity.ts'],
-  'roster/on-call.service.ts': ['completions/completion.entities.ts', 'people/person.entity.ts', 'tasks/task.entity.ts'],
-  'roster/roster.service.ts': ['people/person.entity.ts'],
-  'roster/rotation.service.ts': ['people/person.entity.ts'],
-  'routines/routines.service.ts': ['parameters/parameter.entities.ts'],
-  'tasks/materialiser.ts': ['routines/routine.entity.ts'],
-  'tasks/move-task.service.ts': ['people/person.entity.ts', 'roster/roster.entities.ts'],
-  'tasks/round.service.ts': ['parameters/parameter.entities.ts'],
-  'tasks/targets.ts': ['facility/facility.entities.ts'],
-  'tasks/tasks.service.ts': ['people/person.entity.ts'],
 }
 
 // Keeps the list honest: once a file stops importing an entity, lint asks for its entry to go.
