@@ -13,6 +13,11 @@ export const findPerson = (id: number): Promise<PersonRow | null> => people().fi
 /** The people with these ids that exist. */
 export const findPeople = (ids: number[]): Promise<PersonRow[]> => (ids.length ? people().findBy({ id: In(ids) }) : Promise.resolve([]))
 
+/** The ids of everyone still active (a routine's named person who left assigns nobody). */
+export async function activePersonIds(): Promise<Set<number>> {
+  return new Set((await people().find({ select: { id: true }, where: { active: true } })).map((p) => p.id))
+}
+
 /** Everyone's name by id, former staff too (old records still name them). */
 export async function personNames(): Promise<Map<number, string>> {
   return new Map((await people().find({ select: { id: true, name: true } })).map((p) => [p.id, p.name]))

@@ -5,6 +5,7 @@ import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
 import { recordBulkTaskChange } from '../../realtime/change-outbox'
 import { logger } from '../../lib/logger'
+import { activePersonIds } from '../people/person-reads'
 import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { notePlanningError, routinesToPlan } from '../routines/routine-planning'
@@ -79,11 +80,6 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     await recordBulkTaskChange('planned')
   }
   return { created, routines: routines.length }
-}
-
-async function activePersonIds(): Promise<Set<number>> {
-  const rows = (await db().query('SELECT id FROM people WHERE active = 1')) as Array<{ id: number }>
-  return new Set(rows.map((r) => r.id))
 }
 
 const planningErrorText = (err: unknown) => `Tasks could not be planned: ${err instanceof Error ? err.message : String(err)}`.slice(0, 500)
