@@ -6,6 +6,7 @@ import { createFacilityIfMissing, updateFacility } from '#server/modules/facilit
 import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { createPerson, getPersonRow } from '#server/modules/people/people.service'
 import { createCylinder, recordCylinderReading } from '#server/modules/oxygen/oxygen.service'
+import { CylinderInputSchema } from '#shared/schemas/oxygen'
 import { startEvent } from '#server/modules/playbooks/events.service'
 import { createPlaybook } from '#server/modules/playbooks/playbooks.service'
 import { tanks as tanksCatalogue } from '#server/modules/facility/catalogues'
@@ -115,7 +116,7 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   )
   const playbooks = []
   for (const p of DEMO_PLAYBOOKS) playbooks.push(await createPlaybook(PlaybookInputSchema.parse(p)))
-  for (const c of DEMO_CYLINDERS) await createCylinder(c)
+  for (const c of DEMO_CYLINDERS) await createCylinder(CylinderInputSchema.parse(c))
   const manager = { ...(await getPersonRow(people.get('maren.holloway@brackenwater.example')!)), createdAt: '' } as never
 
   // Two weeks of history, then today from its start, so the morning's round is there whenever it is run.

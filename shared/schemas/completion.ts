@@ -35,6 +35,8 @@ export const CompletionInputSchema = z
     if (c.outcome === 'skipped' && c.skipReason === 'other' && !c.note) ctx.addIssue({ code: 'custom', path: ['note'], message: 'Say why it could not be done' })
   })
 export type CompletionInput = z.input<typeof CompletionInputSchema>
+/** What the server's completion takes, once the route has parsed the body. */
+export type ParsedCompletionInput = z.output<typeof CompletionInputSchema>
 
 export const ReadingSchema = z.object({
   parameterKey: text(),
@@ -59,3 +61,4 @@ export const AmendmentInputSchema = z.object({
   note: text().trim().max(2000).optional(),
 })
 export type AmendmentInput = z.input<typeof AmendmentInputSchema>
+export type ParsedAmendmentInput = z.output<typeof AmendmentInputSchema>

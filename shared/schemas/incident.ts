@@ -56,6 +56,8 @@ export type Incident = z.infer<typeof IncidentSchema>
 
 export const DecideIncidentInputSchema = z.object({ reason: text(500).min(3, 'Say why in a few words') })
 export const IncidentNoteInputSchema = z.object({ text: text(2000).min(1, 'Write the note') })
+export type DecideIncidentInput = z.infer<typeof DecideIncidentInputSchema>
+export type IncidentNoteInput = z.infer<typeof IncidentNoteInputSchema>
 
 /** The record's fields a supervisor or manager fills in; status moves open → reported → closed only. */
 export const UpdateIncidentInputSchema = z

@@ -17,11 +17,13 @@ export const CylinderInputSchema = z
     if (c.method === 'psi-factor' && !c.factorLPerPsi) ctx.addIssue({ code: 'custom', path: ['factorLPerPsi'], message: 'Give the cylinder factor (L per psi)' })
   })
 export type CylinderInput = z.input<typeof CylinderInputSchema>
+export type ParsedCylinderInput = z.output<typeof CylinderInputSchema>
 
 export const CylinderReadingInputSchema = z.object({
   pressure: z.number().min(0, 'Pressure cannot be negative').max(5000),
   flowLPerMin: z.number().positive('Flow must be above 0').max(1000),
 })
+export type CylinderReadingInput = z.infer<typeof CylinderReadingInputSchema>
 
 export const CylinderStatusSchema = z.object({
   id: z.number().int(),

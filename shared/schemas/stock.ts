@@ -149,6 +149,7 @@ export const MovementListQuerySchema = z.object({
   batchId: z.coerce.number().int().positive().optional(),
   tankId: z.coerce.number().int().positive().optional(),
 })
+export type MovementListQuery = z.infer<typeof MovementListQuerySchema>
 
 export const StockSettingsSchema = z.object({
   /** The facility's own short list of causes of death; "unknown" and free text are always offered. */
@@ -161,3 +162,4 @@ export const StockSettingsSchema = z.object({
 })
 export type StockSettings = z.infer<typeof StockSettingsSchema>
 export const UpdateStockSettingsInputSchema = StockSettingsSchema.partial()
+export type UpdateStockSettingsInput = z.infer<typeof UpdateStockSettingsInputSchema>

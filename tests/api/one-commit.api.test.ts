@@ -1,4 +1,3 @@
-import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { In } from 'typeorm'
 import { db } from '#server/db/data-source'
@@ -9,6 +8,7 @@ import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { ChangeOutboxEntity } from '#server/realtime/change-outbox.entity'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { completion, makeTankTask } from '#tests/support/task-fixtures'
+import { failingInsert } from '#tests/support/failing-insert'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 
 let t: TestApp
@@ -17,20 +17,6 @@ beforeAll(async () => {
   await ensureFacilityAndParameters()
 })
 afterAll(() => t.close())
-
-/**
- * Makes the database refuse one kind of insert while `work` runs: a trigger that raises an error
- * for rows matching `when` (SQL over NEW), as a full disk or a lost connection would mid-request.
- */
-async function failingInsert<T>(table: string, when: string, work: () => Promise<T>): Promise<T> {
-  const name = `fail_${table}_${randomUUID().slice(0, 8)}`
-  await db().query(`CREATE TRIGGER ${name} BEFORE INSERT ON ${table} FOR EACH ROW BEGIN IF ${when} THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'refused by the test'; END IF; END`)
-  try {
-    return await work()
-  } finally {
-    await db().query(`DROP TRIGGER ${name}`)
-  }
-}
 
 const outboxFor = (taskIds: number[]) => db().getRepository(ChangeOutboxEntity).findBy({ kind: 'task', entityId: In(taskIds.map(String)) })
 

@@ -11,6 +11,7 @@ import { getPersonRow } from '#server/modules/people/people.service'
 import { DESKTOP, PHONE, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks, routineData } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
+import { MovementInputSchema } from '#shared/schemas/stock'
 
 let s: BrowserSession
 let pages: string[]
@@ -28,7 +29,7 @@ beforeAll(async () => {
   const batch = await batches.create({ code: 'B-A11Y', species: 'Barramundi', origin: SCRIPT, arrivalDate: today, count: 100, meanWeightG: 5, tankIds: [tanks[0].id], status: 'active', feedRatePct: 2 })
   const routine = await createRoutine(routineData({ name: `Routine ${SCRIPT}`, targetIds: [tanks[0].id], instructions: SCRIPT }))
   await addHandoverNote(toPerson(await getPersonRow(manager.id)), { text: `Watch bin 2 ${SCRIPT}` })
-  await recordMovement(toPerson(await getPersonRow(manager.id)), { kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT })
+  await recordMovement(toPerson(await getPersonRow(manager.id)), MovementInputSchema.parse({ kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT }))
   await proposeIncident({ source: 'missed_task', sourceKey: `a11y:${task.id}`, taskId: task.id, title: `Missed ${SCRIPT}`, whatHappened: SCRIPT, startedAt: new Date(), tankIds: [tanks[0].id] }, new Date())
   pages = [
     '/round', `/board?date=${today}`, '/calendar', '/on-call', '/tanks', `/tanks/${tanks[0].id}`, '/routines', `/routines/${routine.id}`,

@@ -9,7 +9,7 @@ import { ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { DEMO_PARAMETERS } from '#seed/demo-parameters'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
+import { parsedCompletion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
@@ -38,13 +38,13 @@ async function arrange() {
   }
   const doneAt = (ago: number, minutes: number) => day(ago).plus({ minutes }).toUTC().toISO()!
   const ok = { do_mgL: 6.5, temp_c: 28 }
-  await completeTask((await task(tanks[0], 5)).id, supervisor, completion(ok, { doneAt: doneAt(5, -5), performedById: tech.id }))
-  await completeTask((await task(tanks[1], 5)).id, supervisor, completion(ok, { doneAt: doneAt(5, 25), performedById: tech.id }))
+  await completeTask((await task(tanks[0], 5)).id, supervisor, parsedCompletion(ok, { doneAt: doneAt(5, -5), performedById: tech.id }))
+  await completeTask((await task(tanks[1], 5)).id, supervisor, parsedCompletion(ok, { doneAt: doneAt(5, 25), performedById: tech.id }))
   await task(tanks[0], 4, { status: 'missed' })
-  await completeTask((await task(tanks[1], 4)).id, supervisor, completion({}, { outcome: 'skipped', skipReason: 'no_access', doneAt: doneAt(4, 10), performedById: tech.id }))
+  await completeTask((await task(tanks[1], 4)).id, supervisor, parsedCompletion({}, { outcome: 'skipped', skipReason: 'no_access', doneAt: doneAt(4, 10), performedById: tech.id }))
   await task(tanks[0], 3, { status: 'held', heldReason: 'Fasting before dispatch' })
   const critical = await task(tanks[1], 3, { title: `Oxygen check ${tag}` })
-  await completeTask(critical.id, supervisor, completion({ do_mgL: 3.1, temp_c: 28 }, { doneAt: doneAt(3, -4), performedById: tech.id }))
+  await completeTask(critical.id, supervisor, parsedCompletion({ do_mgL: 3.1, temp_c: 28 }, { doneAt: doneAt(3, -4), performedById: tech.id }))
   return { tag, area, tanks, critical, from: day(5).toISODate()!, to: day(3).toISODate()! }
 }
 

@@ -5,7 +5,7 @@ import { MovementEntity } from '#server/modules/stock/stock.entities'
 import { recordMovement } from '#server/modules/stock/stock.service'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { arrival, makeBatch } from '#tests/support/stock-fixtures'
+import { makeBatch, parsedArrival } from '#tests/support/stock-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
@@ -23,7 +23,7 @@ describe('deaths counted on the round reach the stock register', () => {
     const { tanks } = await makeAreaWithTanks(1, { roundOrder: 1 })
     const tank = tanks[0]
     const batch = await makeBatch([], { meanWeightG: 50 })
-    await recordMovement(supervisor, arrival(batch.id, tank, 400))
+    await recordMovement(supervisor, parsedArrival(batch.id, tank, 400))
     const due = DateTime.now().plus({ minutes: 10 }).setZone(zone)
     await makeTankTask(tank, {
       title: 'Morning tank check', assigneeId: tech.id, requiredReadings: ['mortalities', 'do_mgL', 'temp_c'],

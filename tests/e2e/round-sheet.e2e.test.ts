@@ -7,7 +7,7 @@ import { DEMO_PARAMETERS } from '#seed/demo-parameters'
 import type { Tank } from '#shared/schemas/facility'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
+import { parsedCompletion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
@@ -101,7 +101,7 @@ describe('the round sheet', () => {
     await third.getByLabel('Dissolved oxygen (mg/L)').fill('7.2')
     await third.getByLabel('Temperature (°C)').fill('28')
     await third.getByLabel('Time on paper').fill('06:10')
-    await completeTask(tasks.q1.id, supervisor, completion({ do_mgL: 7, temp_c: 28 }, { doneAt: DateTime.fromISO(`${date}T06:20`, { zone }).toUTC().toISO() }))
+    await completeTask(tasks.q1.id, supervisor, parsedCompletion({ do_mgL: 7, temp_c: 28 }, { doneAt: DateTime.fromISO(`${date}T06:20`, { zone }).toUTC().toISO() }))
     await third.getByRole('button', { name: 'Save this task' }).click()
     await third.getByRole('alert').getByText(/Not saved: already done in Roundtide by .* at 06:20\./).waitFor()
     await screenshot(page, 'round-sheet-type-in-desktop')

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { recordMovement } from '#server/modules/stock/stock.service'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
-import { arrival, makeBatch } from '#tests/support/stock-fixtures'
+import { makeBatch, parsedArrival } from '#tests/support/stock-fixtures'
 
 let s: BrowserSession
 beforeAll(async () => {
@@ -17,7 +17,7 @@ describe('the stock register on the tank page', () => {
     const { tanks } = await makeAreaWithTanks(2)
     const [first, second] = tanks
     const batch = await makeBatch([], { meanWeightG: 120 })
-    await recordMovement(supervisor, arrival(batch.id, first, 500))
+    await recordMovement(supervisor, parsedArrival(batch.id, first, 500))
 
     const { page, context } = await s.newPage(DESKTOP)
     await s.signIn(page, supervisor.email)

@@ -7,7 +7,7 @@ import { ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { DEMO_PARAMETERS } from '#seed/demo-parameters'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
-import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
+import { parsedCompletion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 const KEYS = ['do_mgL', 'do_pct', 'temp_c', 'ph', 'mortalities']
 
@@ -44,7 +44,7 @@ async function arrange() {
       requiredReadings: ['do_mgL', 'temp_c', 'mortalities'], assigneeId: tech.id,
     })
     const readings = { do_mgL: dissolved, temp_c: 28 + (i % 3) * 0.4, mortalities: i % 4 === 0 ? 2 : 0 }
-    await completeTask(task.id, supervisor, completion(readings, { doneAt: due.plus({ minutes: 6 }).toUTC().toISO(), performedById: tech.id }))
+    await completeTask(task.id, supervisor, parsedCompletion(readings, { doneAt: due.plus({ minutes: 6 }).toUTC().toISO(), performedById: tech.id }))
   }
   for (const i of [1, 4, 7]) {
     const due = DateTime.now().setZone(zone).minus({ days: i }).set({ hour: 9, minute: 30, second: 0, millisecond: 0 })
@@ -52,7 +52,7 @@ async function arrange() {
       title: 'Loop chemistry', targetKind: 'system', targetId: system.id, tankId: null, dueAt: due.toJSDate(), localDate: due.toISODate()!,
       localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), requiredReadings: ['ph', 'temp_c'],
     })
-    await completeTask(task.id, supervisor, completion({ ph: 7.4 + i * 0.05, temp_c: 28.2 }, { doneAt: due.plus({ minutes: 3 }).toUTC().toISO(), performedById: tech.id }))
+    await completeTask(task.id, supervisor, parsedCompletion({ ph: 7.4 + i * 0.05, temp_c: 28.2 }, { doneAt: due.plus({ minutes: 3 }).toUTC().toISO(), performedById: tech.id }))
   }
   return { area, system, tank, batch }
 }

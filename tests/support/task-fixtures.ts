@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto'
 import { db } from '#server/db/data-source'
 import { LimitEntity } from '#server/modules/parameters/parameter.entities'
 import { TaskEntity, type TaskRow } from '#server/modules/tasks/task.entity'
+import { CompletionInputSchema } from '#shared/schemas/completion'
 import type { Tank } from '#shared/schemas/facility'
 
 /** One task on a tank, due at `dueAt`, with the readings it needs. */
@@ -21,6 +22,8 @@ export async function makeTankTask(tank: Tank, opts: Partial<TaskRow> = {}): Pro
 }
 
 export const completion = (readings: Record<string, number>, extra: Record<string, unknown> = {}) => ({ completionId: randomUUID(), readings, ...extra })
+/** The same, parsed as the route parses it, for tests that call the completion service directly. */
+export const parsedCompletion = (readings: Record<string, number>, extra: Record<string, unknown> = {}) => CompletionInputSchema.parse(completion(readings, extra))
 
 export async function setSystemLimit(systemId: number, parameterKey: string, bounds: { okMin: number | null; okMax: number | null; criticalMin: number | null; criticalMax: number | null }) {
   await db().getRepository(LimitEntity).save({ parameterKey, scope: 'system', scopeId: systemId, ...bounds })

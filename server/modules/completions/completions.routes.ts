@@ -1,6 +1,7 @@
 import { Router } from 'express'
 import multer from 'multer'
 import { z } from 'zod'
+import { AmendmentInputSchema, CompletionInputSchema } from '#shared/schemas/completion'
 import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { PHOTO_CACHE_CONTROL } from '../../lib/cache-control'
@@ -20,7 +21,7 @@ export function completionsRouter(config: AppConfig) {
 
   router.post('/tasks/:id/completion', doers, async (req, res) => {
     const { id } = IdParamSchema.parse(req.params)
-    res.json(await completeTask(id, req.user!, req.body))
+    res.json(await completeTask(id, req.user!, CompletionInputSchema.parse(req.body)))
   })
 
   router.get('/tasks/:id/completion', signedIn, async (req, res) => {
@@ -29,7 +30,7 @@ export function completionsRouter(config: AppConfig) {
 
   router.post('/completions/:completionId/amendments', doers, async (req, res) => {
     const { completionId } = z.object({ completionId: text().uuid() }).parse(req.params)
-    res.status(201).json(await amendCompletion(completionId, req.user!, req.body))
+    res.status(201).json(await amendCompletion(completionId, req.user!, AmendmentInputSchema.parse(req.body)))
   })
 
   router.post('/tasks/:id/take', doers, async (req, res) => {

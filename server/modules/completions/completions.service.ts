@@ -1,15 +1,14 @@
-import { bandFor, pickLimit, worstBand } from '#shared/readings/band'
-import { deriveReadings } from '#shared/readings/derive'
-import { CompletionInputSchema, type CompletionResult, type Reading } from '#shared/schemas/completion'
+import { worstBand } from '#shared/readings/band'
+import { judgeReadings, type ReadingJudgement } from '#shared/readings/judge-readings'
+import type { CompletionResult, ParsedCompletionInput } from '#shared/schemas/completion'
 import { MORTALITY_READING } from '#shared/schemas/stock'
 import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { audit } from '../audit/audit.service'
-import { PersonEntity } from '../people/person.entity'
+import { getPersonRow } from '../people/people.service'
 import { toPerson } from '../people/person.mapper'
-import { ParameterEntity } from '../parameters/parameter.entities'
 import { assessRoundMortality, writeRoundMortality } from '../stock/round-mortality'
 import { closeTask, recheckOf, type TaskRow } from '../tasks/task-writes.service'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
@@ -26,8 +25,7 @@ import { assertMayComplete } from './who-may-complete'
  * a flag and a recheck when anything is out of the ok range, and exactly one winner when two
  * people complete the same task.
  */
-export async function completeTask(taskId: number, person: Person, input: unknown): Promise<CompletionResult> {
-  const data = CompletionInputSchema.parse(input)
+export async function completeTask(taskId: number, person: Person, data: ParsedCompletionInput): Promise<CompletionResult> {
   const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
   if (replay) {
     if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
@@ -47,10 +45,10 @@ export async function completeTask(taskId: number, person: Person, input: unknow
   const doneAt = data.doneAt ? new Date(data.doneAt) : new Date()
   const performer = await performerFor(person, data.performedById)
   if (doneAt.getTime() > Date.now() + 60_000) throw validationError('A task cannot be completed in the future.', { doneAt: ['In the future'] })
-  const readings = data.outcome === 'done' ? await judgeReadings(task, data.readings, context) : { rows: [] as Reading[], notes: [] as string[] }
+  const judged: ReadingJudgement = data.outcome === 'done' ? judgeTyped(task, data.readings, context) : { readings: [], flag: 'ok', notes: [], problems: {} }
   const mortality = data.outcome === 'done' ? await assessRoundMortality(context.tankId, data.readings[MORTALITY_READING], data.mortality, doneAt) : null
-  readings.notes.push(...(mortality?.notes ?? []))
-  const flag = data.outcome === 'done' ? worstBand([...readings.rows.map((r) => r.band), mortality?.band ?? 'ok']) : 'ok'
+  judged.notes.push(...(mortality?.notes ?? []))
+  const flag = data.outcome === 'done' ? worstBand([judged.flag, mortality?.band ?? 'ok']) : 'ok'
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
   const result = await db().transaction(async (manager) => {
@@ -60,9 +58,9 @@ export async function completeTask(taskId: number, person: Person, input: unknow
       id: data.completionId, taskId: task.id, personId: performer.id, enteredById: performer.id === person.id ? null : person.id, outcome: data.outcome,
       skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
     })
-    if (readings.rows.length) {
+    if (judged.readings.length) {
       await manager.getRepository(ReadingEntity).insert(
-        readings.rows.map((r) => ({
+        judged.readings.map((r) => ({
           completionId: data.completionId, taskId: task.id, tankId: context.tankId, systemId: context.systemId,
           parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: doneAt, personId: performer.id,
         })),
@@ -75,9 +73,9 @@ export async function completeTask(taskId: number, person: Person, input: unknow
     const updated = await getTaskRow(taskId)
     // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
     const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
-    if (flag === 'critical') await startCriticalAlert(updated, readings.rows.filter((r) => r.band === 'critical'))
-    await proposeIncidentsAfterCompletion(updated, flag, readings.rows, mortality?.plan, data.completionId, new Date())
-    const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: readings.rows, recheckTaskId, notes: readings.notes }
+    if (flag === 'critical') await startCriticalAlert(updated, judged.readings.filter((r) => r.band === 'critical'))
+    await proposeIncidentsAfterCompletion(updated, flag, judged.readings, mortality?.plan, data.completionId, new Date())
+    const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: judged.readings, recheckTaskId, notes: judged.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
     return response
@@ -107,7 +105,7 @@ async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
 async function performerFor(person: Person, performedById: number | undefined): Promise<Person> {
   if (performedById === undefined || performedById === person.id) return person
   if (person.role !== 'manager' && person.role !== 'supervisor') throw forbidden('Only supervisors and managers can enter work done by someone else.')
-  const row = await db().getRepository(PersonEntity).findOneBy({ id: performedById })
+  const row = await getPersonRow(performedById).catch(() => null)
   if (!row) throw validationError('That person does not exist.', { performedById: ['Choose who did the work'] })
   return toPerson(row)
 }
@@ -123,33 +121,13 @@ async function assertStillOpen(task: TaskRow) {
   })
 }
 
-async function judgeReadings(task: TaskRow, values: Record<string, number>, context: ReadingContext) {
-  const parameters = new Map((await db().getRepository(ParameterEntity).find()).map((p) => [p.key, p]))
-  const fieldErrors: Record<string, string[]> = {}
-  for (const key of task.requiredReadings) {
-    if (values[key] === undefined) fieldErrors[`readings.${key}`] = [`${parameters.get(key)?.name ?? key} is required`]
+/** The shared judgement; anything it finds wrong refuses the whole completion. */
+function judgeTyped(task: TaskRow, values: Record<string, number>, context: ReadingContext) {
+  const judgement = judgeReadings(values, context.ruleFor, { required: task.requiredReadings, salinitySetpoint: context.salinitySetpoint })
+  const problems = Object.entries(judgement.problems)
+  if (problems.length) {
+    const fieldErrors = Object.fromEntries(problems.map(([key, p]) => [`readings.${key}`, [p.message]]))
+    throw validationError(`Nothing was saved: ${problems[0][1].message}.`, fieldErrors)
   }
-  for (const [key, value] of Object.entries(values)) {
-    const p = parameters.get(key)
-    if (!p) fieldErrors[`readings.${key}`] = ['Unknown reading']
-    else if (p.derived) fieldErrors[`readings.${key}`] = [`${p.name} is worked out by Roundtide, not typed in`]
-    else if (value < p.physicalMin || value > p.physicalMax) {
-      fieldErrors[`readings.${key}`] = [`${p.name} ${value} ${p.unit} is impossible (must be ${p.physicalMin}–${p.physicalMax})`]
-    }
-  }
-  if (Object.keys(fieldErrors).length) {
-    const first = Object.values(fieldErrors)[0][0]
-    throw validationError(`Nothing was saved: ${first}.`, fieldErrors)
-  }
-  const derived = deriveReadings(values, context.salinitySetpoint)
-  const rows: Reading[] = [...Object.entries(values).map(([k, v]) => [k, v, false] as const), ...Object.entries(derived.values).map(([k, v]) => [k, v, true] as const)].map(
-    ([parameterKey, value, isDerived]) => ({
-      parameterKey,
-      value,
-      unit: parameters.get(parameterKey)?.unit ?? '',
-      band: bandFor(value, pickLimit(context.limits, parameterKey, context)),
-      derived: isDerived,
-    }),
-  )
-  return { rows, notes: derived.notes }
+  return judgement
 }

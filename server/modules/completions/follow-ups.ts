@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon'
-import { IsNull } from 'typeorm'
+import { IsNull, Not } from 'typeorm'
 import type { Reading } from '#shared/schemas/completion'
 import { db } from '../../db/data-source'
 import { logger } from '../../lib/logger'
@@ -41,11 +41,28 @@ export async function createRecheck(task: TaskRow, personId: number): Promise<Ta
   })
 }
 
-/** A critical reading starts the escalation at once; the ladder sends the mail. */
-export async function startCriticalAlert(task: TaskRow, critical: Reading[]) {
-  const detail = critical.map((r) => `${r.parameterKey} ${r.value} ${r.unit}`).join(', ')
-  await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId: task.id, kind: 'critical_reading', detail, ladderId: null, startedAt: new Date() }).orIgnore().execute()
-  logger.warn({ taskId: task.id, detail }, 'critical reading: escalation started')
+/**
+ * A critical reading starts the escalation at once; the ladder sends the mail. One alert per task:
+ * a repeat (a retry, a second amendment) changes nothing, and one closed because an amendment
+ * cleared the reading starts again when a later amendment makes it critical once more.
+ */
+export async function startCriticalAlert(task: Pick<TaskRow, 'id'>, critical: Array<Pick<Reading, 'parameterKey' | 'value' | 'unit'>>) {
+  await raiseCriticalAlert(task.id, critical.map((r) => `${r.parameterKey} ${r.value} ${r.unit}`).join(', '))
+}
+
+/** The same for a critical state described in words (an oxygen cylinder near its reserve). */
+export async function raiseCriticalAlert(taskId: number, text: string) {
+  const detail = text.slice(0, 500)
+  const alerts = db().getRepository(AlertEntity)
+  const now = new Date()
+  await alerts.createQueryBuilder().insert().values({ taskId, kind: 'critical_reading', detail, ladderId: null, startedAt: now }).orIgnore().execute()
+  await alerts.update({ taskId, kind: 'critical_reading', closedAt: Not(IsNull()) }, { detail, startedAt: now, closedAt: null, acknowledgedAt: null, acknowledgedById: null })
+  logger.warn({ taskId, detail }, 'critical reading: escalation started')
+}
+
+/** The reading is no longer critical (an amendment corrected it): its alert stops climbing the ladder. */
+export async function closeCriticalAlert(taskId: number, at: Date) {
+  await db().getRepository(AlertEntity).update({ taskId, kind: 'critical_reading', closedAt: IsNull() }, { closedAt: at })
 }
 
 export type IncidentAlertKind = 'incident_overdue' | 'incident_welfare_overdue' | 'incident_report_overdue'

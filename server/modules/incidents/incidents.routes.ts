@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { DecideIncidentInputSchema, IncidentNoteInputSchema, UpdateIncidentInputSchema } from '#shared/schemas/incident'
 import { requireRole, signedIn } from '../auth/require-role'
 import { addIncidentNote, decideIncident, getIncident, listIncidents, updateIncident } from './incidents.service'
 
@@ -14,14 +15,14 @@ incidentsRouter.get('/incidents/:id', signedIn, async (req, res) => {
   res.json(await getIncident(id(req.params)))
 })
 incidentsRouter.post('/incidents/:id/confirm', requireRole('manager', 'supervisor'), async (req, res) => {
-  res.json(await decideIncident(id(req.params), 'confirm', req.body, req.user!))
+  res.json(await decideIncident(id(req.params), 'confirm', DecideIncidentInputSchema.parse(req.body), req.user!))
 })
 incidentsRouter.post('/incidents/:id/dismiss', requireRole('manager', 'supervisor'), async (req, res) => {
-  res.json(await decideIncident(id(req.params), 'dismiss', req.body, req.user!))
+  res.json(await decideIncident(id(req.params), 'dismiss', DecideIncidentInputSchema.parse(req.body), req.user!))
 })
 incidentsRouter.patch('/incidents/:id', requireRole('manager', 'supervisor'), async (req, res) => {
-  res.json(await updateIncident(id(req.params), req.body))
+  res.json(await updateIncident(id(req.params), UpdateIncidentInputSchema.parse(req.body)))
 })
 incidentsRouter.post('/incidents/:id/notes', requireRole('manager', 'supervisor', 'observer'), async (req, res) => {
-  res.status(201).json(await addIncidentNote(id(req.params), req.body, req.user!))
+  res.status(201).json(await addIncidentNote(id(req.params), IncidentNoteInputSchema.parse(req.body), req.user!))
 })

@@ -1,9 +1,4 @@
-import {
-  DecideIncidentInputSchema,
-  IncidentNoteInputSchema,
-  UpdateIncidentInputSchema,
-  type Incident,
-} from '#shared/schemas/incident'
+import type { DecideIncidentInput, Incident, IncidentNoteInput, UpdateIncidentInput } from '#shared/schemas/incident'
 import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
 import { recordChange } from '../../realtime/change-outbox'
@@ -52,8 +47,7 @@ export const getIncident = async (id: number) => toIncident(await load(id), awai
 type Actor = { id: number; name: string }
 
 /** Confirm or dismiss a proposal, always with a reason that stays on the record. */
-export async function decideIncident(id: number, decision: 'confirm' | 'dismiss', input: unknown, who: Actor, now = new Date()) {
-  const { reason } = DecideIncidentInputSchema.parse(input)
+export async function decideIncident(id: number, decision: 'confirm' | 'dismiss', { reason }: DecideIncidentInput, who: Actor, now = new Date()) {
   const result = await repo().update({ id, status: 'proposed' }, { status: decision === 'confirm' ? 'open' : 'dismissed', decisionReason: reason, decidedById: who.id, decidedAt: now })
   if (!result.affected) {
     const row = await load(id)
@@ -63,8 +57,7 @@ export async function decideIncident(id: number, decision: 'confirm' | 'dismiss'
   return getIncident(id)
 }
 
-export async function updateIncident(id: number, input: unknown, now = new Date()) {
-  const data = UpdateIncidentInputSchema.parse(input)
+export async function updateIncident(id: number, data: UpdateIncidentInput, now = new Date()) {
   const row = await load(id)
   if (row.status === 'proposed' || row.status === 'dismissed') throw conflict('Confirm the incident before filling in its record.')
   const { status, startedAt, noticedAt, welfareNotifiedAt, ...fields } = data
@@ -94,8 +87,7 @@ async function closeMetDeadlineAlerts(taskId: number, row: IncidentRow, now: Dat
 }
 
 /** Observers (veterinarian, welfare officer) may add a note; nothing else. */
-export async function addIncidentNote(id: number, input: unknown, who: Actor, now = new Date()) {
-  const { text } = IncidentNoteInputSchema.parse(input)
+export async function addIncidentNote(id: number, { text }: IncidentNoteInput, who: Actor, now = new Date()) {
   const row = await load(id)
   await repo().update(id, { notes: [...row.notes, { at: now.toISOString(), personId: who.id, personName: who.name, text }] })
   await recordChange('incident', [id])

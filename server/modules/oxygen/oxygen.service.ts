@@ -1,9 +1,9 @@
 import { DateTime } from 'luxon'
 import { estimateSupply, pressureUnitFor, type CylinderSettings } from '#shared/oxygen-supply/cylinder'
-import { CylinderInputSchema, CylinderReadingInputSchema, type CylinderStatus } from '#shared/schemas/oxygen'
+import type { CylinderReadingInput, CylinderStatus, ParsedCylinderInput } from '#shared/schemas/oxygen'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
-import { AlertEntity } from '../completions/completion.entities'
+import { raiseCriticalAlert } from '../completions/follow-ups'
 import { getFacility } from '../facility/facility.service'
 import { createTask, openTask } from '../tasks/task-writes.service'
 import { CylinderEntity, type CylinderRow } from './oxygen.entities'
@@ -43,8 +43,7 @@ export async function listCylinders(): Promise<CylinderStatus[]> {
   return Promise.all((await repo().find({ where: { active: true }, order: { code: 'ASC' } })).map((c) => toStatus(c, minOxygenHours)))
 }
 
-export async function createCylinder(input: unknown): Promise<CylinderStatus> {
-  const data = CylinderInputSchema.parse(input)
+export async function createCylinder(data: ParsedCylinderInput): Promise<CylinderStatus> {
   if (await repo().findOneBy({ code: data.code })) throw conflict(`Another cylinder already has the code ${data.code}.`)
   const row = await repo().save({ ...data, lastPressure: null, lastReadAt: null, active: true, replaceTaskId: null })
   return toStatus(row, (await getFacility()).minOxygenHours)
@@ -55,8 +54,7 @@ export async function createCylinder(input: unknown): Promise<CylinderStatus> {
  * use. Less than the facility's minimum hours raises a "replace cylinder" task on the board;
  * a critical level also starts the escalation ladder.
  */
-export async function recordCylinderReading(id: number, input: unknown): Promise<CylinderStatus> {
-  const reading = CylinderReadingInputSchema.parse(input)
+export async function recordCylinderReading(id: number, reading: CylinderReadingInput): Promise<CylinderStatus> {
   const cylinder = await repo().findOneBy({ id })
   if (!cylinder) throw notFound('That cylinder')
   try {
@@ -86,7 +84,7 @@ async function raiseReplaceTask(c: CylinderRow, status: CylinderStatus, zone: st
   })
   await repo().update(c.id, { replaceTaskId: task.id })
   if (critical) {
-    await db().getRepository(AlertEntity).insert({ taskId: task.id, kind: 'critical_reading', detail: `cylinder_bar ${c.lastPressure} at ${c.code}: ${status.hoursToReserve} h to reserve`, ladderId: null, startedAt: new Date() })
+    await raiseCriticalAlert(task.id, `cylinder_bar ${c.lastPressure} at ${c.code}: ${status.hoursToReserve} h to reserve`)
   }
   return task.id
 }

@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { LimitInputSchema } from '#shared/schemas/parameter'
 import { requireRole, signedIn } from '../auth/require-role'
 import { deleteLimit, listLimits, listParameters, upsertLimit } from './parameters.service'
 
@@ -12,7 +13,7 @@ parametersRouter.get('/limits', signedIn, async (_req, res) => {
   res.json(await listLimits())
 })
 parametersRouter.put('/limits', requireRole('manager'), async (req, res) => {
-  res.json(await upsertLimit(req.body))
+  res.json(await upsertLimit(LimitInputSchema.parse(req.body)))
 })
 parametersRouter.delete('/limits/:id', requireRole('manager'), async (req, res) => {
   await deleteLimit(IdParamSchema.parse(req.params).id)

@@ -1,4 +1,4 @@
-import { LimitInputSchema, type Limit, type Parameter } from '#shared/schemas/parameter'
+import type { Limit, LimitInput, Parameter } from '#shared/schemas/parameter'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
@@ -8,8 +8,7 @@ export const listParameters = (): Promise<Parameter[]> => db().getRepository(Par
 export const listLimits = (): Promise<Limit[]> => db().getRepository(LimitEntity).find({ order: { parameterKey: 'ASC', scope: 'ASC' } })
 
 /** Sets the limits for one parameter at one scope, replacing what was there. */
-export async function upsertLimit(input: unknown): Promise<Limit> {
-  const data = LimitInputSchema.parse(input)
+export async function upsertLimit(data: LimitInput): Promise<Limit> {
   const repo = db().getRepository(LimitEntity)
   if (!(await db().getRepository(ParameterEntity).findOneBy({ key: data.parameterKey }))) throw notFound(`The parameter ${data.parameterKey}`)
   const existing = await repo.findOneBy({ parameterKey: data.parameterKey, scope: data.scope, scopeId: data.scopeId ?? 0 } as never)

@@ -1,5 +1,5 @@
 import { compareWater } from '#shared/arrival/compare-water'
-import type { BatchRecord, BatchRecordData } from '#shared/schemas/batch-record'
+import type { BatchRecord, ParsedBatchRecordInput } from '#shared/schemas/batch-record'
 import type { Person } from '#shared/schemas/person'
 import { describeSample } from '#shared/stats/sample-stats'
 import { unionizedAmmoniaMgL } from '#shared/water/ammonia'
@@ -15,7 +15,7 @@ import { BatchRecordEntity } from './playbook.entities'
  * warnings, NH3 of the transport water, the weighing's statistics) so the record holds it,
  * and a weighing updates the batch's mean weight, which the rations follow.
  */
-export async function addBatchRecord(batchId: number, person: Person, { eventId, ...data }: BatchRecordData): Promise<BatchRecord> {
+export async function addBatchRecord(batchId: number, person: Person, { eventId, ...data }: ParsedBatchRecordInput): Promise<BatchRecord> {
   const batch = await findBatch(batchId)
   if (!batch) throw notFound('That batch')
   let stored: Record<string, unknown> = { ...data }

@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon'
-import { FASTING_KINDS, type EventData, type FacilityEvent, type UpdateEventInput } from '#shared/schemas/playbook'
+import { FASTING_KINDS, type ParsedEventInput, type FacilityEvent, type UpdateEventInput } from '#shared/schemas/playbook'
 import type { Person } from '#shared/schemas/person'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
@@ -58,7 +58,7 @@ function timing(localStart: string, zone: string, fastingHours: number) {
 }
 
 /** Starting an event creates its playbook's tasks and, for handling or dispatch, holds the feeds before it. */
-export async function startEvent(data: EventData, person: Person): Promise<FacilityEvent> {
+export async function startEvent(data: ParsedEventInput, person: Person): Promise<FacilityEvent> {
   const playbook = await db().getRepository(PlaybookEntity).findOneBy({ id: data.playbookId })
   if (!playbook) throw validationError('That playbook does not exist.', { playbookId: ['Choose a playbook'] })
   const { cat, ids } = await resolveTanks(data.tankIds, data.batchId)

@@ -1,4 +1,4 @@
-import type { Playbook, PlaybookData } from '#shared/schemas/playbook'
+import type { Playbook, ParsedPlaybookInput } from '#shared/schemas/playbook'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
@@ -14,13 +14,13 @@ export async function getPlaybook(id: number): Promise<Playbook> {
   return row
 }
 
-export async function createPlaybook(data: PlaybookData): Promise<Playbook> {
+export async function createPlaybook(data: ParsedPlaybookInput): Promise<Playbook> {
   const saved = await repo().save(data)
   await audit('playbook', saved.id, 'create', null, saved)
   return saved
 }
 
-export async function updatePlaybook(id: number, data: PlaybookData): Promise<Playbook> {
+export async function updatePlaybook(id: number, data: ParsedPlaybookInput): Promise<Playbook> {
   const current = await getPlaybook(id)
   const saved = await repo().save({ ...current, ...data })
   await audit('playbook', id, 'update', current, saved)

@@ -1,5 +1,5 @@
 import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
-import type { Routine, RoutineData, UpdateRoutineData } from '#shared/schemas/routine'
+import type { Routine, RoutineData, ParsedUpdateRoutineInput } from '#shared/schemas/routine'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
@@ -44,7 +44,7 @@ export async function createRoutine(data: RoutineData): Promise<Routine> {
   return toRoutine(saved)
 }
 
-export async function updateRoutine(id: number, { version, ...data }: UpdateRoutineData): Promise<Routine> {
+export async function updateRoutine(id: number, { version, ...data }: ParsedUpdateRoutineInput): Promise<Routine> {
   const current = await repo().findOneBy({ id })
   if (!current) throw notFound('That routine')
   if (current.version !== version) {

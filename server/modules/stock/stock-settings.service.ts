@@ -1,4 +1,4 @@
-import { UpdateStockSettingsInputSchema, type StockSettings } from '#shared/schemas/stock'
+import type { StockSettings, UpdateStockSettingsInput } from '#shared/schemas/stock'
 import { db } from '../../db/data-source'
 import { StockSettingsEntity } from './stock.entities'
 
@@ -24,8 +24,7 @@ export async function getStockSettings(): Promise<StockSettings> {
   return settings
 }
 
-export async function updateStockSettings(input: unknown): Promise<StockSettings> {
-  const data = UpdateStockSettingsInputSchema.parse(input)
+export async function updateStockSettings(data: UpdateStockSettingsInput): Promise<StockSettings> {
   const next = { ...(await getStockSettings()), ...data }
   await repo().save({ id: 1, ...next })
   return next

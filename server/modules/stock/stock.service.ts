@@ -1,6 +1,6 @@
 import { In } from 'typeorm'
 import type { Person } from '#shared/schemas/person'
-import { MovementInputSchema, MovementListQuerySchema, TECHNICIAN_MOVEMENT_KINDS, type BatchStock, type Movement, type TankStock } from '#shared/schemas/stock'
+import { TECHNICIAN_MOVEMENT_KINDS, type BatchStock, type Movement, type MovementListQuery, type ParsedMovementInput, type TankStock } from '#shared/schemas/stock'
 import { biomassKg, round, stockingDensityKgM3 } from '#shared/stock/density'
 import { balances } from '#shared/stock/ledger'
 import { db } from '../../db/data-source'
@@ -13,8 +13,7 @@ import { MovementEntity, type MovementRow } from './stock.entities'
 const TECHNICIAN_KINDS = new Set(TECHNICIAN_MOVEMENT_KINDS)
 
 /** A person records a movement: checked against the batch's register, refused if it would go below zero. */
-export async function recordMovement(person: Person, input: unknown): Promise<Movement> {
-  const data = MovementInputSchema.parse(input)
+export async function recordMovement(person: Person, data: ParsedMovementInput): Promise<Movement> {
   if (person.role === 'observer') throw forbidden('Observers read the stock register; they do not change it.')
   if (person.role === 'technician' && !TECHNICIAN_KINDS.has(data.kind)) throw forbidden('Arrivals, gradings, dispatches and corrections are recorded by a supervisor or manager.')
   const batch = await batches.get(data.batchId).catch(() => null)
@@ -29,8 +28,7 @@ export async function recordMovement(person: Person, input: unknown): Promise<Mo
   return (await toMovements([saved]))[0]
 }
 
-export async function listMovements(query: unknown): Promise<Movement[]> {
-  const q = MovementListQuerySchema.parse(query)
+export async function listMovements(q: MovementListQuery): Promise<Movement[]> {
   const where = q.tankId ? [{ fromTankId: q.tankId, ...(q.batchId ? { batchId: q.batchId } : {}) }, { toTankId: q.tankId, ...(q.batchId ? { batchId: q.batchId } : {}) }] : q.batchId ? { batchId: q.batchId } : {}
   const rows = await db().getRepository(MovementEntity).find({ where, order: { occurredAt: 'DESC', id: 'DESC' }, take: 2000 })
   return toMovements(rows)

@@ -48,6 +48,12 @@ export async function closeTask(task: Pick<TaskRow, 'id' | 'version'>, closing: 
   return !!claimed.affected
 }
 
+/** A finished task's flag after its readings were corrected and judged again (an amendment). */
+export async function reflagTask(taskId: number, flag: TaskRow['flag']): Promise<void> {
+  const changed = await tasks().update({ id: taskId, status: In([...FINISHED]) }, { flag, version: () => 'version + 1' })
+  if (changed.affected) await recordTaskChanges([taskId])
+}
+
 /** The recheck raised after this task, if any. */
 export const recheckOf = (taskId: number) => tasks().findOneBy({ recheckOfTaskId: taskId })
 

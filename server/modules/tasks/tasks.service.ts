@@ -1,6 +1,6 @@
 import { DateTime } from 'luxon'
 import { In } from 'typeorm'
-import type { CreateTaskData, Task, TaskListQuery } from '#shared/schemas/task'
+import type { ParsedCreateTaskInput, Task, TaskListQuery } from '#shared/schemas/task'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
 import { recordTaskChanges } from '../../realtime/change-outbox'
@@ -51,7 +51,7 @@ export async function getTasks(ids: readonly number[]): Promise<Task[]> {
 }
 
 /** A one-off task, outside any routine (e.g. "check the spare pump today"). */
-export async function createOneOffTask(data: CreateTaskData): Promise<Task> {
+export async function createOneOffTask(data: ParsedCreateTaskInput): Promise<Task> {
   const ctx = await loadTaskContext()
   const zone = ctx.cat.facility.timeZone
   const local = DateTime.fromISO(data.localStart, { zone })

@@ -1,5 +1,6 @@
 import { describe, expect, test } from 'vitest'
-import { checkTypedReading, impossibleReading } from '#shared/readings/typed-reading'
+import { impossibleReading } from '#shared/readings/judge-readings'
+import { checkTypedReading } from '#shared/readings/typed-reading'
 
 // Dissolved oxygen with invented limits; the physical range 0–30 mg/L is common practice for a DO probe.
 const DO = { unit: 'mg/L', physicalMin: 0, physicalMax: 30, okMin: 5, okMax: null, criticalMin: 3, criticalMax: null }

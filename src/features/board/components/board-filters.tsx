@@ -3,7 +3,7 @@ import type { Area } from '#shared/schemas/facility'
 import { CATEGORY_LABELS, ROUTINE_CATEGORIES, type Category } from '#shared/schemas/routine'
 import { TASK_STATUSES, type TaskStatus } from '#shared/schemas/task'
 import { isFiltered, type BoardFilters } from '../utils/board-filters'
-import { STATUS_LOOK } from '../utils/status-look'
+import { STATUS_LOOK } from '../../../components/ui/task-status-label'
 
 interface Props {
   areas: Area[]

@@ -2,7 +2,7 @@ import { clsx } from 'clsx'
 import { CirclePause } from 'lucide-react'
 import type { BoardCard } from '#shared/schemas/board'
 import { FlagLabel, WelfareLabel } from './flag-label'
-import { StatusLabel } from './status-label'
+import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
 /** What a card says about its task; shared by the card and the preview that follows a drag. */
 export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; cornerTaken?: boolean }) {
@@ -11,7 +11,7 @@ export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; c
     <div className="flex min-w-0 flex-1 flex-col gap-0.5">
       <p className={clsx('flex flex-wrap items-center gap-x-2', cornerTaken && 'pr-8')}>
         <span className="font-bold tabular-nums text-tide-900">{task.localTime}</span>
-        <StatusLabel status={task.status} />
+        <TaskStatusLabel status={task.status} />
       </p>
       <p className="leading-snug font-semibold text-tide-950">{task.title}</p>
       <p className="truncate text-sm text-tide-700" title={task.targetLabel}>{task.targetLabel}</p>

@@ -1,7 +1,7 @@
 import { useState } from 'react'
 import { bathDose, stockVolumeForBath } from '#shared/dosing/bath-dose'
 import { attempt, formatAmount, parseDecimal } from '../utils/numbers'
-import { BathCautions } from './bath-cautions'
+import { BathCautions } from '../../../components/ui/bath-cautions'
 import { NumberInput } from './number-input'
 import { PublishedBaths } from './published-baths'
 import { ResultBox } from './result-box'

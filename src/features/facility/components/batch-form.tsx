@@ -5,7 +5,7 @@ import { useCatalogueForm } from '../hooks/use-catalogue-form'
 import { BATCH_STATUS_LABELS } from './batch-status'
 import { FormShell } from './form-shell'
 import { TankPicker } from './tank-picker'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 const today = () => new Date().toLocaleDateString('en-CA')
 

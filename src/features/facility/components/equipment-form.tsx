@@ -4,7 +4,7 @@ import { Field } from '../../../components/ui/field'
 import { useCatalogueForm } from '../hooks/use-catalogue-form'
 import { toOptionalNumber } from '../utils/form-values'
 import { FormShell } from './form-shell'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 const KIND_SUGGESTIONS = ['pump', 'blower', 'chiller', 'heater', 'UV steriliser', 'biofilter', 'drum filter', 'oxygen cone', 'probe', 'alarm unit']
 

@@ -3,7 +3,7 @@ import { Field } from '../../../components/ui/field'
 import { useCatalogueForm } from '../hooks/use-catalogue-form'
 import { toOptionalNumber } from '../utils/form-values'
 import { FormShell } from './form-shell'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 
 export function SystemForm({ system, areas, onDone }: { system?: System; areas: Area[]; onDone: () => void }) {

@@ -4,7 +4,7 @@ import { useCatalogueForm } from '../hooks/use-catalogue-form'
 import { toOptionalNumber, toRequiredNumber } from '../utils/form-values'
 import { CheckboxField } from './checkbox-field'
 import { FormShell } from './form-shell'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 interface TankFormProps {
   tank?: Tank

@@ -1,6 +1,6 @@
-import { clsx } from 'clsx'
 import { BellRing, ClipboardCheck, Fish, HeartPulse, type LucideIcon } from 'lucide-react'
-import { Link, useSearchParams } from 'react-router-dom'
+import { useSearchParams } from 'react-router-dom'
+import { LinkTabs } from '../../../components/ui/link-tabs'
 
 export const REPORT_VIEWS = ['compliance', 'responses', 'welfare', 'animals'] as const
 export type ReportView = (typeof REPORT_VIEWS)[number]
@@ -22,29 +22,6 @@ export function ReportTabs({ current }: { current: ReportView }) {
     next.set('view', view)
     return { search: `?${next}` }
   }
-  return (
-    <nav aria-label="Reports" className="-mx-4 overflow-x-auto px-4 md:mx-0 md:px-0 print:hidden">
-      <ul className="flex min-w-max gap-1 border-b border-tide-200">
-        {(Object.keys(VIEWS) as ReportView[]).map((view) => {
-          const { label, icon: Icon } = VIEWS[view]
-          const active = view === current
-          return (
-            <li key={view}>
-              <Link
-                to={to(view)}
-                aria-current={active ? 'page' : undefined}
-                preventScrollReset
-                className={clsx(
-                  '-mb-px flex min-h-11 items-center gap-2 border-b-[3px] px-3 font-semibold',
-                  active ? 'border-tide-700 text-tide-900' : 'border-transparent text-tide-600 hover:text-tide-900',
-                )}
-              >
-                <Icon aria-hidden className="size-4" /> {label}
-              </Link>
-            </li>
-          )
-        })}
-      </ul>
-    </nav>
-  )
+  const tabs = REPORT_VIEWS.map((view) => ({ key: view, ...VIEWS[view], to: to(view) }))
+  return <LinkTabs label="Reports" tabs={tabs} current={current} className="print:hidden" />
 }

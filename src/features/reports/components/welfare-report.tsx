@@ -1,5 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query'
+import type { TaskStatus } from '#shared/schemas/task'
 import { catalogueQueries } from '../../../api/catalogues'
+import { STATUS_LOOK } from '../../../components/ui/task-status-label'
 import { reportQueries } from '../api/report-queries'
 import type { WelfareRow } from '../api/report-schemas'
 import { csvHref, type WelfareFilter } from '../utils/report-paths'
@@ -8,14 +10,12 @@ import { ReportActions } from './report-actions'
 import { ReportTable, type ReportColumn } from './report-table'
 import { TankFilter } from './tank-filter'
 
-const STATUS: Record<string, string> = { done: 'Done', missed: 'Missed', skipped: 'Skipped', held: 'Held', open: 'Open', overdue: 'Overdue', planned: 'Planned' }
-
 const COLUMNS: ReadonlyArray<ReportColumn<WelfareRow>> = [
   { label: 'Date', cell: (r) => r.date },
   { label: 'Due', cell: (r) => r.due },
   { label: 'Check', cell: (r) => r.task, wrap: true },
   { label: 'Tank', cell: (r) => r.tank, wrap: true },
-  { label: 'Status', cell: (r) => (r.status === 'missed' ? <FlagText flag="missed" /> : (STATUS[r.status] ?? r.status)) },
+  { label: 'Status', cell: (r) => (r.status === 'missed' ? <FlagText flag="missed" /> : (STATUS_LOOK[r.status as TaskStatus]?.label ?? r.status)) },
   { label: 'Done by', cell: (r) => r.doneBy || '—' },
   { label: 'Late', cell: (r) => (r.lateMinutes === '' ? '—' : `${r.lateMinutes} min`), numeric: true },
   { label: 'Readings', cell: (r) => r.readings || '—', wrap: true },

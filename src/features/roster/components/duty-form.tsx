@@ -9,7 +9,7 @@ import { applyServerErrors, personError } from '../utils/form-errors'
 import { addDays } from '../utils/roster-dates'
 import { FormFooter } from './form-footer'
 import { PersonOptions } from './person-options'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 /** One on-call duty: from the handover on the first day to the handover on the last. */
 export function DutyForm({ staff, from, handoverTime }: { staff: StaffMember[]; from: string; handoverTime: string | null }) {

@@ -10,7 +10,7 @@ import { addDays } from '../utils/roster-dates'
 import { SHIFT_KIND_LOOK } from '../utils/shift-kinds'
 import { FormFooter } from './form-footer'
 import { PersonOptions } from './person-options'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 import { WeekdayPicker } from './weekday-picker'
 
 /** A weekly pattern (e.g. early shifts Monday to Friday) turned into shifts over a period. */

@@ -11,7 +11,7 @@ import { SHIFT_KIND_LOOK } from '../utils/shift-kinds'
 import { DeleteShiftButton } from './delete-shift-button'
 import { FormFooter } from './form-footer'
 import { PersonOptions } from './person-options'
-import { SelectField } from './select-field'
+import { SelectField } from '../../../components/ui/select-field'
 
 /** Add one shift, or edit or delete the one chosen in the grid. */
 export function ShiftForm({ shift, initial, staff, onDone }: {

@@ -1,4 +1,4 @@
-import { checkTypedReading } from '#shared/readings/typed-reading'
+import { judgeTypedReadings } from '#shared/readings/typed-reading'
 import type { RoundTask } from '#shared/schemas/round'
 import { ApiError } from '../../../lib/api-client'
 import { clockTime, paperTime } from './sheet-format'
@@ -14,13 +14,12 @@ export type PaperCheck = { ok: true; readings: Record<string, number>; doneAt: s
 /** What was copied from paper, checked before it is sent: every reading a possible number, a time, a person. */
 export function checkPaperDraft(task: RoundTask, draft: PaperDraft, date: string, timeZone: string): PaperCheck {
   const errors: Record<string, string> = {}
-  const readings: Record<string, number> = {}
+  const typed = judgeTypedReadings(draft.values, task.readingSpecs, task.salinitySetpoint)
   for (const spec of task.readingSpecs) {
-    const check = checkTypedReading(draft.values[spec.key] ?? '', spec)
-    if (check.state === 'empty') errors[spec.key] = 'Copy this reading from the sheet'
-    else if (check.state === 'invalid') errors[spec.key] = check.message
-    else readings[spec.key] = check.value
+    if (typed.empty.includes(spec.key)) errors[spec.key] = 'Copy this reading from the sheet'
+    else if (typed.errors[spec.key]) errors[spec.key] = typed.errors[spec.key]
   }
+  const readings = typed.values
   const doneAt = paperTime(date, draft.time, timeZone)
   if (!doneAt) errors.time = 'Use the time on the sheet, HH:MM'
   else if (Date.parse(doneAt) > Date.now() + 60_000) errors.time = 'That time has not come yet'

@@ -1,21 +1,18 @@
 import { clsx } from 'clsx'
-import { AlarmClock, Ban, CalendarClock, CircleCheck, CircleDashed, CirclePause, CircleX, type LucideIcon } from 'lucide-react'
 import type { TaskStatus } from '#shared/schemas/task'
+import { STATUS_LOOK } from '../../../components/ui/task-status-label'
 
-const STATUS: Record<TaskStatus, { label: string; icon: LucideIcon; className: string }> = {
-  planned: { label: 'Planned', icon: CalendarClock, className: 'text-tide-600' },
-  open: { label: 'Open', icon: CircleDashed, className: 'text-tide-700' },
-  overdue: { label: 'Overdue', icon: AlarmClock, className: 'bg-ember-100 px-1.5 text-ember-700 font-bold' },
-  missed: { label: 'Missed', icon: CircleX, className: 'bg-alarm-100 px-1.5 text-alarm-700 font-bold' },
-  done: { label: 'Done', icon: CircleCheck, className: 'text-kelp-700' },
-  skipped: { label: "Couldn't do", icon: Ban, className: 'text-tide-700' },
-  held: { label: 'On hold', icon: CirclePause, className: 'text-tide-600' },
+// Beside a tank at 7 a.m. late work must stand out from across the room, so the Round fills it.
+const EMPHASIS: Partial<Record<TaskStatus, string>> = {
+  overdue: 'bg-ember-100 px-1.5 font-bold',
+  missed: 'bg-alarm-100 px-1.5 font-bold',
 }
 
+/** The app's status words and icons, with late work filled in. */
 export function TaskStatusBadge({ status }: { status: TaskStatus }) {
-  const { label, icon: Icon, className } = STATUS[status]
+  const { label, icon: Icon, tone } = STATUS_LOOK[status]
   return (
-    <span className={clsx('inline-flex items-center gap-1 rounded-md py-0.5 text-sm font-semibold', className)}>
+    <span className={clsx('inline-flex items-center gap-1 rounded-md py-0.5 text-sm font-semibold', tone, EMPHASIS[status])}>
       <Icon aria-hidden className="size-4" /> {label}
     </span>
   )

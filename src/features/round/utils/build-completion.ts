@@ -2,22 +2,22 @@ import type { RoundTask } from '#shared/schemas/round'
 import { MORTALITY_READING, OTHER_CAUSE } from '#shared/schemas/stock'
 import type { CompletionPayload } from '../api/completion-api'
 import type { Draft } from '../state/drafts'
-import { checkTypedReading } from '#shared/readings/typed-reading'
+import { judgeTypedReadings } from '#shared/readings/typed-reading'
 
 export type BuiltCompletion = { ok: true; payload: CompletionPayload } | { ok: false; errors: Record<string, string> }
 
 /** Checks the draft the way the server will, so nothing that would be refused is sent or queued. */
 export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' | 'skipped'): BuiltCompletion {
   const errors: Record<string, string> = {}
-  const readings: Record<string, number> = {}
+  let readings: Record<string, number> = {}
   const note = draft.note.trim() || undefined
   if (outcome === 'done') {
+    const typed = judgeTypedReadings(draft.readings, task.readingSpecs, task.salinitySetpoint)
     for (const spec of task.readingSpecs) {
-      const check = checkTypedReading(draft.readings[spec.key] ?? '', spec)
-      if (check.state === 'empty') errors[`readings.${spec.key}`] = `Enter ${spec.name.toLowerCase()}`
-      else if (check.state === 'invalid') errors[`readings.${spec.key}`] = check.message
-      else readings[spec.key] = check.value
+      if (typed.empty.includes(spec.key)) errors[`readings.${spec.key}`] = `Enter ${spec.name.toLowerCase()}`
+      else if (typed.errors[spec.key]) errors[`readings.${spec.key}`] = typed.errors[spec.key]
     }
+    readings = typed.values
   } else {
     if (!draft.skipReason) errors.skipReason = 'Choose why it could not be done'
     else if (draft.skipReason === 'other' && !note) errors.note = 'Say why it could not be done'
