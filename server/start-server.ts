@@ -11,6 +11,7 @@ import { startLocalSmtp } from './mail/local-smtp'
 import { startFakeTextProvider } from './sms/fake-text-provider'
 import { createTextSender } from './sms/text-client'
 import { createPushSender } from './push/push-client'
+import { startLocalPushIfFree } from './push/local-push'
 import { createTransport } from './modules/escalation/deliver'
 import { createRedisAdapter } from './realtime/redis-adapter'
 import { startPublisher } from './realtime/publisher'
@@ -35,8 +36,10 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   })
   // Local text mode: the provider SDK talks to a stand-in on loopback, started before the app so its URL is known.
   const fakeTexts = stored.sms.mode === 'local' && !stored.sms.apiBaseUrl ? await startFakeTextProvider({ accountSid: stored.sms.accountSid, authToken: stored.sms.authToken, publicUrl: stored.publicUrl, port: stored.sms.localPort, autoStatus: true }) : null
-  const config = fakeTexts ? { ...stored, sms: { ...stored.sms, apiBaseUrl: fakeTexts.url } } : stored
   if (fakeTexts) logger.info(`Local text provider on ${fakeTexts.url} (texts are kept for the Outbox page)`)
+  // Local push mode: a stand-in push service on loopback, for devices made from the Outbox page.
+  const localPush = await startLocalPushIfFree(stored)
+  const config = { ...stored, sms: fakeTexts ? { ...stored.sms, apiBaseUrl: fakeTexts.url } : stored.sms, push: { ...stored.push, localUrl: localPush?.url ?? null } }
   const sessionStore = createSessionStore(config)
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)
@@ -65,6 +68,7 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
       transport.close()
       await smtp?.close()
       await fakeTexts?.close()
+      await localPush?.close()
       await closeSocketServer()
       await redis?.close()
       await new Promise<void>((resolve) => server.close(() => resolve()))

@@ -5,6 +5,7 @@ import { logger } from '../lib/logger'
 import { deliverPending, type Channels, type Transport } from '../modules/escalation/deliver'
 import { sendDailyDigestIfDue } from '../modules/escalation/digest'
 import { runEscalations } from '../modules/escalation/escalate'
+import { resolveStuckSends } from '../modules/escalation/stuck-sends'
 import { escalateOverdueIncidents } from '../modules/incidents/incidents.service'
 import { materialise } from '../modules/tasks/materialiser'
 import { advanceTaskStatuses } from './status-clock'
@@ -76,6 +77,8 @@ export function startScheduler(source: DataSource | EntityManager, opts: Schedul
         await runEscalations(at)
       })
       if (opts.mail) {
+        // Before delivery, so the fallback for a message its sender never finished goes out in this tick.
+        await resolveStuckSends(at)
         await deliverPending(opts.mail.config, opts.mail.transport, at, opts.mail.channels)
         await sendDailyDigestIfDue(opts.mail.config, opts.mail.transport, at).catch((err) => logger.warn({ err }, 'daily digest not sent'))
       }

@@ -36,8 +36,10 @@ const EnvSchema = z.object({
   ROUNDTIDE_SMS_MAX_PER_HOUR: z.coerce.number().int().min(1).max(1000).default(6),
   TWILIO_ACCOUNT_SID: text().optional(),
   TWILIO_AUTH_TOKEN: text().optional(),
-  /** Web Push: `on` (default) sends to subscribed devices; `off` sends none. The contact in the VAPID claim. */
-  ROUNDTIDE_PUSH_MODE: z.enum(['on', 'off']).default('on'),
+  /** Web Push: `local` (default) also runs a stand-in push service on loopback; `on` sends to subscribed devices only; `off` sends none. The contact in the VAPID claim. */
+  ROUNDTIDE_PUSH_MODE: z.enum(['local', 'on', 'off']).default('local'),
+  /** The local push service's port: fixed, because the devices made there keep it in their endpoint. */
+  ROUNDTIDE_PUSH_LOCAL_PORT: z.coerce.number().int().min(0).max(65535).default(2527),
   ROUNDTIDE_PUSH_SUBJECT: text().regex(/^(mailto:|https:\/\/)/, 'Use a mailto: address or an https: URL').default('mailto:roundtide@example.org'),
   /** Set to share live events between several app processes (socket.io's Redis adapter). */
   ROUNDTIDE_REDIS_URL: text().url().optional(),
@@ -92,7 +94,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     },
     publishIntervalMs: e.ROUNDTIDE_PUBLISH_INTERVAL_MS,
     push: {
-      enabled: e.ROUNDTIDE_PUSH_MODE === 'on',
+      enabled: e.ROUNDTIDE_PUSH_MODE !== 'off',
+      mode: e.ROUNDTIDE_PUSH_MODE,
+      localPort: e.ROUNDTIDE_PUSH_LOCAL_PORT,
+      /** Where the local push service listens, once started (local mode); its Outbox and stand-in devices need it. */
+      localUrl: null as string | null,
       subject: e.ROUNDTIDE_PUSH_SUBJECT,
       /** Filled by `withStoredSecrets` from the database (generated on first start). */
       vapid: null as { publicKey: string; privateKey: string } | null,

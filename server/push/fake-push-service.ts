@@ -1,6 +1,9 @@
 import { createDecipheriv, createECDH, createPublicKey, hkdfSync, randomBytes, verify } from 'node:crypto'
 import type { AddressInfo } from 'node:net'
 import express from 'express'
+import { db } from '../db/data-source'
+import { logger } from '../lib/logger'
+import { PushOutboxEntity, type PushOutboxRow } from '../modules/escalation/escalation.entities'
 
 /** A device's private half, as the browser keeps it: the ECDH P-256 key and the 16-byte auth secret. */
 export interface DeviceKeys {
@@ -82,7 +85,7 @@ export function decryptPushBody(body: Buffer, device: DeviceKeys): Buffer {
  * VAPID header for the application server key the device subscribed with, and each body is
  * decrypted to prove it, then kept. An unknown or removed device answers 410 Gone.
  */
-export async function startFakePushService(opts: { port?: number } = {}) {
+export async function startFakePushService(opts: { port?: number; host?: string; /** Keep each message (or refusal) in `push_outbox` for the Outbox page (local mode). */ keep?: boolean } = {}) {
   const app = express()
   // The body is read as it came: express's body parsers would try to undo the aes128gcm content coding.
   app.use((req, res, next) => {
@@ -101,41 +104,67 @@ export async function startFakePushService(opts: { port?: number } = {}) {
   const devices = new Map<string, DeviceKeys & { applicationServerKey: string }>()
   const received: ReceivedPush[] = []
 
-  app.post('/push/:id', (req, res) => {
+  /** Keeps what happened for the Outbox page; a failure to keep it never changes the answer to the sender. */
+  const keep = (row: Omit<PushOutboxRow, 'id' | 'receivedAt'>) =>
+    opts.keep ? db().getRepository(PushOutboxEntity).insert({ ...row, receivedAt: new Date() }).catch((err: unknown) => logger.warn({ err }, 'local push service could not keep a message')) : undefined
+
+  app.post('/push/:id', async (req, res) => {
+    const endpoint = `${url}/push/${req.params.id}`
+    const urgency = req.header('urgency') ?? null
+    const refuse = async (status: number, note: string) => {
+      await keep({ endpoint, status: 'refused', title: '', body: '', note: `${status}: ${note}`.slice(0, 300), urgency })
+      res.status(status).send(note)
+    }
     const device = devices.get(req.params.id)
-    if (!device) return void res.status(410).send('No such subscription')
+    if (!device) return refuse(410, 'No such subscription')
     const problem = vapidProblem(req.header('authorization'), url, device.applicationServerKey)
-    if (problem) return void res.status(403).send(problem)
-    if (req.header('content-encoding') !== 'aes128gcm') return void res.status(415).send('Only aes128gcm')
-    if (req.header('ttl') === undefined) return void res.status(400).send('TTL is required')
+    if (problem) return refuse(403, problem)
+    if (req.header('content-encoding') !== 'aes128gcm') return refuse(415, 'Only aes128gcm')
+    if (req.header('ttl') === undefined) return refuse(400, 'TTL is required')
     let payload: unknown
     try {
       payload = JSON.parse(decryptPushBody(req.body as Buffer, device).toString('utf8'))
     } catch (err) {
-      return void res.status(400).send(`Could not decrypt: ${(err as Error).message}`)
+      return refuse(400, `Could not decrypt: ${(err as Error).message}`)
     }
     const id = b64u(randomBytes(9))
-    received.push({ endpoint: `${url}/push/${req.params.id}`, urgency: req.header('urgency') ?? null, ttl: Number(req.header('ttl')), payload, receivedAt: new Date() })
+    received.push({ endpoint, urgency, ttl: Number(req.header('ttl')), payload, receivedAt: new Date() })
+    const shown = payload as { title?: unknown; body?: unknown }
+    await keep({ endpoint, status: 'received', title: String(shown.title ?? '').slice(0, 300), body: String(shown.body ?? ''), note: null, urgency })
     res.status(201).setHeader('location', `${url}/message/${id}`).end()
   })
 
+  // Local mode: a stand-in device for a person, made here because a browser subscribes at its own vendor's push service.
+  app.post('/local/devices', (req, res) => {
+    let key: unknown
+    try {
+      key = (JSON.parse((req.body as Buffer).toString('utf8')) as { applicationServerKey?: unknown }).applicationServerKey
+    } catch {
+      key = undefined
+    }
+    if (typeof key !== 'string' || !/^[\w-]{80,100}$/.test(key)) return void res.status(400).send('applicationServerKey (base64url P-256 public key) is required')
+    res.status(201).json(subscribe(key))
+  })
+
   const server = await new Promise<ReturnType<typeof app.listen>>((resolve, reject) => {
-    const s = app.listen(opts.port ?? 0, '127.0.0.1', () => resolve(s))
+    const s = app.listen(opts.port ?? 0, opts.host ?? '127.0.0.1', () => resolve(s))
     s.once('error', reject)
   })
-  const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`
+  const url = `http://${opts.host ?? '127.0.0.1'}:${(server.address() as AddressInfo).port}`
+  /** What `PushManager.subscribe({ applicationServerKey })` would give a page: a fresh device, its keys kept here. */
+  function subscribe(applicationServerKey: string) {
+    const ecdh = createECDH('prime256v1')
+    ecdh.generateKeys()
+    const keys: DeviceKeys = { privateKey: ecdh.getPrivateKey(), publicKey: ecdh.getPublicKey(), auth: randomBytes(16) }
+    const id = b64u(randomBytes(12))
+    devices.set(id, { ...keys, applicationServerKey })
+    return { endpoint: `${url}/push/${id}`, keys: { p256dh: b64u(keys.publicKey), auth: b64u(keys.auth) } }
+  }
   return {
     url,
+    port: (server.address() as AddressInfo).port,
     received,
-    /** What `PushManager.subscribe({ applicationServerKey })` would give a page: a fresh device, its keys kept here. */
-    subscribe(applicationServerKey: string) {
-      const ecdh = createECDH('prime256v1')
-      ecdh.generateKeys()
-      const keys: DeviceKeys = { privateKey: ecdh.getPrivateKey(), publicKey: ecdh.getPublicKey(), auth: randomBytes(16) }
-      const id = b64u(randomBytes(12))
-      devices.set(id, { ...keys, applicationServerKey })
-      return { endpoint: `${url}/push/${id}`, keys: { p256dh: b64u(keys.publicKey), auth: b64u(keys.auth) } }
-    },
+    subscribe,
     /** The browser dropped the subscription: later messages to it answer 410. */
     unsubscribe(endpoint: string) {
       devices.delete(endpoint.split('/').pop()!)

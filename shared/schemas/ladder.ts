@@ -40,9 +40,10 @@ export type Ladder = z.infer<typeof LadderSchema>
 
 /**
  * `failed` is retried with back-off; `undelivered` is final (the provider refused or could not
- * deliver it, and the next channel was queued); `suppressed` was held back by the text limit.
+ * deliver it, and the next channel was queued); `suppressed` was held back by the text limit;
+ * `unknown` was claimed by a process that stopped before the provider answered (never resent).
  */
-export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded', 'undelivered', 'suppressed'] as const
+export const NOTIFICATION_STATUSES = ['pending', 'sending', 'sent', 'failed', 'held', 'superseded', 'undelivered', 'suppressed', 'unknown'] as const
 
 export const EscalationRecordSchema = z.object({
   alertId: z.number().int(),
@@ -97,3 +98,18 @@ export const TextOutboxMessageSchema = z.object({
 export type TextOutboxMessage = z.infer<typeof TextOutboxMessageSchema>
 
 export const TextReplyInputSchema = z.object({ body: text().trim().min(1, 'Type a reply').max(160) })
+
+/** A push message as the local push service decrypted it (or refused it), with the person whose device it was. */
+export const PushOutboxMessageSchema = z.object({
+  id: z.number().int(),
+  /** Null when no person has that device any more (unsubscribed or gone). */
+  personName: text().nullable(),
+  endpoint: text(),
+  status: z.enum(['received', 'refused']),
+  title: text(),
+  body: text(),
+  note: text().nullable(),
+  urgency: text().nullable(),
+  receivedAt: text(),
+})
+export type PushOutboxMessage = z.infer<typeof PushOutboxMessageSchema>

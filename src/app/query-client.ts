@@ -27,9 +27,11 @@ export function createQueryClient() {
       },
     }),
     mutationCache: new MutationCache({
-      onError: (error) => {
+      onError: (error, _variables, _context, mutation) => {
         if (error instanceof ApiError && error.status === 401) return sendToSignIn()
         if (error instanceof ApiError && error.code === 'validation_failed' && error.fieldErrors) return
+        // The screen shows this error beside the control that failed; a toast would say it twice.
+        if (mutation.meta?.errorShownInline) return
         toastError(error.message)
       },
     }),

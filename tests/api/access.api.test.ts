@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { ROLES, type Role } from '#shared/schemas/person'
 import { buildPersonInput } from '#seed/factories'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
+import { requestByMethod } from '../support/request-by-method'
 
 let t: TestApp
 const agents = {} as Record<Role, request.Agent>
@@ -46,7 +47,7 @@ describe('role matrix', () => {
     }
     test(`${row.name} without signing in answers 401`, async () => {
       const { method, path, body } = row.call
-      await request(t.app)[method](path()).send(body?.() ?? {}).expect(401)
+      await requestByMethod(request(t.app), method, path()).send(body?.() ?? {}).expect(401)
     })
   }
 })

@@ -4,6 +4,9 @@ import { db } from '#server/db/data-source'
 import { advanceTaskStatuses } from '#server/jobs/status-clock'
 import { deliverPending } from '#server/modules/escalation/deliver'
 import { runEscalations } from '#server/modules/escalation/escalate'
+import { OnCallEntity } from '#server/modules/roster/roster.entities'
+import { PersonEntity } from '#server/modules/people/person.entity'
+import { createPushSender } from '#server/push/push-client'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { messagesTo, startMailCatcher } from '#tests/support/mail-fixtures'
@@ -78,5 +81,54 @@ describe('the outbox in local mail mode', () => {
     await phone.page.locator('iframe').scrollIntoViewIfNeeded()
     await screenshot(phone.page, 'outbox-phone')
     await phone.context.close()
+  })
+})
+
+describe('push notifications in the Outbox (local push mode)', () => {
+  test('the server started the local push service; a manager adds a stand-in device and reads the alert it decrypted, on a phone and a desktop', async () => {
+    expect(s.config.push.localUrl).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/)
+    const manager = await s.createPerson('manager', { name: 'Maren Tollis', onCallEligible: true })
+    const now = Date.now()
+    await db().getRepository(PersonEntity).update(manager.id, { channels: ['push'] })
+    await db().getRepository(OnCallEntity).save({ personId: manager.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
+
+    const { page, context } = await s.newPage(PHONE)
+    await s.signIn(page, manager.email)
+    await page.goto('/outbox')
+    await page.getByText('No push notifications have been sent yet.').waitFor()
+    await screenshot(page, 'push-outbox-empty-phone')
+    await page.getByRole('button', { name: 'Add a stand-in device for me' }).click()
+    await page.getByText('A stand-in device now receives your push alerts.').waitFor()
+
+    const { tanks } = await makeAreaWithTanks(1)
+    const title = `Fry tank DO ${randomUUID().slice(0, 4)}`
+    await makeTankTask(tanks[0], { title, priority: 'welfare_critical', status: 'overdue', dueAt: new Date(now - 61 * MIN), graceUntil: new Date(now - MIN) })
+    await advanceTaskStatuses(db(), new Date())
+    await runEscalations(new Date())
+    await deliverPending(mail.config, mail.transport, new Date(), { push: createPushSender(s.config) })
+
+    await page.reload()
+    const pushes = page.getByRole('list', { name: 'Push notifications' })
+    const item = pushes.getByRole('listitem').filter({ hasText: `MISSED: ${title}` })
+    await item.waitFor()
+    expect(await item.textContent()).toMatch(/^Decrypted · To Maren Tollis · /)
+    await item.scrollIntoViewIfNeeded()
+    await screenshot(page, 'push-outbox-phone')
+    await page.setViewportSize(DESKTOP)
+    await screenshot(page, 'push-outbox-desktop')
+    await context.close()
+  })
+
+  test('when the push list cannot load, the Outbox says so with a retry and the mail stays readable', async () => {
+    const manager = await s.createPerson('manager')
+    const { page, context } = await s.newPage(PHONE)
+    await s.signIn(page, manager.email)
+    await page.route('**/api/outbox/pushes', (route) => route.fulfill({ status: 500, contentType: 'application/json', body: JSON.stringify({ error: { code: 'internal', message: 'The server could not answer.' } }) }))
+    await page.goto('/outbox')
+    await page.getByText('Could not load the push notifications').waitFor()
+    await page.getByRole('button', { name: 'Try again' }).waitFor()
+    await page.getByText('Local mail mode: the e-mail Roundtide sent is kept here').waitFor()
+    await screenshot(page, 'push-outbox-error-phone')
+    await context.close()
   })
 })

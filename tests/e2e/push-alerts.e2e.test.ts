@@ -13,6 +13,7 @@ import { createPushSender } from '#server/push/push-client'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { startMailCatcher } from '#tests/support/mail-fixtures'
+import { openPushSettings } from '#tests/support/push-settings'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const MIN = 60_000
@@ -52,14 +53,8 @@ describe('push alerts on the installed app', () => {
     await context.grantPermissions(['notifications'], { origin: s.url })
     const page = await context.newPage()
     await s.signIn(page, person.email)
-    await page.goto('/settings')
-    await page.getByRole('heading', { name: 'Send alerts to this device' }).waitFor()
-    await page.evaluate(() => navigator.serviceWorker.ready.then(() => true))
-    // As the installed app is on every later start: the page is controlled by the worker.
-    await page.reload()
-    await page.waitForFunction(() => navigator.serviceWorker.controller !== null)
+    await openPushSettings(page)
     const worker = context.serviceWorkers()[0] ?? (await context.waitForEvent('serviceworker'))
-    await page.getByText('This device does not receive alerts.').waitFor()
     await screenshot(page, 'push-settings-phone')
 
     // Chromium's own push service is out of reach here, so the subscription a browser would make

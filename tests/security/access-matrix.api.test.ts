@@ -5,6 +5,7 @@ import { listRoutes } from '#tests/support/route-list'
 import { ensureFacilityAndParameters } from '#tests/support/facility-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 import { ROUTE_ACCESS, concretePath } from './route-access'
+import { requestByMethod } from '../support/request-by-method'
 
 let t: TestApp
 const agents = {} as Record<Role, request.Agent>
@@ -16,8 +17,7 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const STATE_CHANGING = new Set(['POST', 'PUT', 'PATCH', 'DELETE'])
-const call = (agent: request.Agent | ReturnType<typeof request>, method: string, path: string) =>
-  (agent as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()](path).send({})
+const call = (agent: request.Agent | ReturnType<typeof request>, method: string, path: string) => requestByMethod(agent, method, path).send({})
 
 describe('every route has an access rule', () => {
   test('the router and the access table list the same routes', async () => {
@@ -52,7 +52,7 @@ describe('cross-site requests', () => {
   const changing = Object.keys(ROUTE_ACCESS).filter((k) => STATE_CHANGING.has(k.split(' ')[0]))
   test.each(changing)('%s from another origin is refused with 403 before anything runs', async (key) => {
     const [method, pattern] = key.split(' ')
-    const res = await (agents.manager as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()](concretePath(pattern)).set('origin', 'https://elsewhere.example').send({})
+    const res = await requestByMethod(agents.manager, method, concretePath(pattern)).set('origin', 'https://elsewhere.example').send({})
     expect(res.status).toBe(403)
     expect(res.body.error?.message ?? res.text).toMatch(/another site/)
   })

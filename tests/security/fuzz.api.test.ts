@@ -5,6 +5,7 @@ import { ensureFacilityAndParameters } from '#tests/support/facility-fixtures'
 import { impossibleDate, malformedText, odditiesRule } from '#tests/support/fuzz-values'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 import { ROUTE_ACCESS } from './route-access'
+import { requestByMethod } from '../support/request-by-method'
 
 const RUNS = Number(process.env.ROUNDTIDE_FUZZ_RUNS ?? 500)
 const TABLES = ['tasks', 'routines', 'people', 'areas', 'systems', 'tanks', 'equipment', 'batches', 'completions', 'readings', 'events', 'shifts', 'on_call_duties', 'limits', 'ladders', 'playbooks', 'batch_records', 'handover_notes', 'oxygen_cylinders', 'completion_amendments']
@@ -43,7 +44,7 @@ describe(`fuzzing every state-changing route (${RUNS} cases each)`, () => {
     let accepted = 0
     await fc.assert(
       fc.asyncProperty(body, fc.array(id.map(String), { minLength: 2, maxLength: 2 }), async (payload, ids) => {
-        const res = await (manager as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()](fill(pattern, ids)).set('content-type', 'application/json').send(JSON.stringify(payload ?? null))
+        const res = await requestByMethod(manager, method, fill(pattern, ids)).set('content-type', 'application/json').send(JSON.stringify(payload ?? null))
         if (res.status < 300) accepted++
         return res.status < 500
       }),

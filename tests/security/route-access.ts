@@ -84,6 +84,8 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/outbox': M,
   'GET /api/outbox/texts': M,
   'POST /api/outbox/texts/:id/reply': M,
+  'GET /api/outbox/pushes': M,
+  'POST /api/outbox/push-devices': M,
   'GET /api/playbooks': ALL,
   'GET /api/playbooks/:id': ALL,
   'POST /api/playbooks': M,

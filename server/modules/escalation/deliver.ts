@@ -58,7 +58,7 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
   let failed = 0
   const cat = due.length ? await loadCatalogue() : null
   for (const row of due) {
-    const claim = await repo.update({ id: row.id, status: row.status }, { status: 'sending' })
+    const claim = await repo.update({ id: row.id, status: row.status }, { status: 'sending', claimedAt: now })
     if (!claim.affected) continue
     const alert = await db().getRepository(AlertEntity).findOneBy({ id: row.alertId })
     const task = alert ? await db().getRepository(TaskEntity).findOneBy({ id: alert.taskId }) : null

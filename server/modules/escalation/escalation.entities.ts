@@ -38,6 +38,8 @@ export interface NotificationRow {
   urgent: boolean
   attempts: number
   nextAttemptAt: Date
+  /** When a process claimed it for sending (`pending → sending`); a claim far older is a sender that stopped. */
+  claimedAt: Date | null
   lastError: string | null
   sentAt: Date | null
   ackUsedAt: Date | null
@@ -63,6 +65,7 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
     urgent: { type: 'boolean', default: false },
     attempts: { type: 'int', default: 0 },
     nextAttemptAt: { type: 'datetime', precision: 3 },
+    claimedAt: { type: 'datetime', precision: 3, nullable: true },
     lastError: { type: 'varchar', length: 500, nullable: true },
     sentAt: { type: 'datetime', precision: 3, nullable: true },
     ackUsedAt: { type: 'datetime', precision: 3, nullable: true },
@@ -133,6 +136,34 @@ export const TextOutboxEntity = new EntitySchema<TextOutboxRow>({
     body: { type: 'text' },
     status: { type: 'varchar', length: 20 },
     statusCallback: { type: 'varchar', length: 500, nullable: true },
+    receivedAt: { type: 'datetime', precision: 3 },
+  },
+})
+
+export interface PushOutboxRow {
+  id: number
+  endpoint: string
+  /** `received`: VAPID checked and the body decrypted; `refused`: the stand-in turned it away (see `note`). */
+  status: 'received' | 'refused'
+  title: string
+  body: string
+  note: string | null
+  urgency: string | null
+  receivedAt: Date
+}
+
+/** What the local push service decrypted or refused (local mode), for the Outbox page. */
+export const PushOutboxEntity = new EntitySchema<PushOutboxRow>({
+  name: 'PushOutboxMessage',
+  tableName: 'push_outbox',
+  columns: {
+    id: { type: 'int', primary: true, generated: 'increment' },
+    endpoint: { type: 'varchar', length: 1000 },
+    status: { type: 'enum', enum: ['received', 'refused'] },
+    title: { type: 'varchar', length: 300 },
+    body: { type: 'text' },
+    note: { type: 'varchar', length: 300, nullable: true },
+    urgency: { type: 'varchar', length: 20, nullable: true },
     receivedAt: { type: 'datetime', precision: 3 },
   },
 })

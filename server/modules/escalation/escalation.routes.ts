@@ -9,6 +9,7 @@ import { passwordCheckLimiter } from '../auth/sign-in-limits'
 import { myPreferences, updateMyPreferences } from './preferences.service'
 import { registerPushSubscription, removePushSubscription } from './push-subscriptions.service'
 import { localTexts, replyAsRecipient } from './text-outbox.service'
+import { addStandInDevice, localPushes } from './push-outbox.service'
 import { OutboxEntity } from './escalation.entities'
 import { acknowledgeInApp, escalationRecord } from './escalation.service'
 import { createLadder, listLadders, updateLadder } from './ladders.service'
@@ -68,6 +69,14 @@ export function escalationRouter(config: AppConfig) {
   })
   router.post('/outbox/texts/:id/reply', requireRole('manager'), async (req, res) => {
     res.json(await replyAsRecipient(config, IdParamSchema.parse(req.params).id, TextReplyInputSchema.parse(req.body).body))
+  })
+  // Local push mode only: what the stand-in push service decrypted, and a stand-in device for me.
+  router.get('/outbox/pushes', requireRole('manager'), async (_req, res) => {
+    res.json(await localPushes(config))
+  })
+  router.post('/outbox/push-devices', requireRole('manager'), async (req, res) => {
+    await addStandInDevice(config, req.user!.id)
+    res.status(204).end()
   })
 
   return router

@@ -22,6 +22,8 @@ export async function removePushSubscription(personId: number, body: unknown) {
   await db().getRepository(PushSubscriptionEntity).delete({ personId, endpointHash: hashOf(endpoint) })
 }
 
+export const pushSubscriptionByEndpoint = (endpoint: string): Promise<PushSubscriptionRow | null> => db().getRepository(PushSubscriptionEntity).findOneBy({ endpointHash: hashOf(endpoint) })
+
 export const pushSubscriptionsOf = (personId: number): Promise<PushSubscriptionRow[]> => db().getRepository(PushSubscriptionEntity).findBy({ personId })
 
 /** The push service said the subscription is gone (404/410): never send to it again. */

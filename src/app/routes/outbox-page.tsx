@@ -8,6 +8,7 @@ import { PageHeader } from '../../components/ui/page-state'
 import { outboxQueries } from '../../features/outbox/api/outbox-queries'
 import { OutboxList } from '../../features/outbox/components/outbox-list'
 import { OutboxMessageView } from '../../features/outbox/components/outbox-message-view'
+import { PushOutboxSection } from '../../features/outbox/components/push-outbox-section'
 import { TextOutboxList } from '../../features/outbox/components/text-outbox-list'
 
 export const loader = (queryClient: QueryClient) => () =>
@@ -37,6 +38,7 @@ export function Component() {
           <TextOutboxList texts={texts} timeZone={timeZone} />
         </section>
       )}
+      <PushOutboxSection timeZone={timeZone} />
       {messages === null ? (
         <p className="flex max-w-xl items-start gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
           <Info aria-hidden className="mt-0.5 size-5 shrink-0" /> This server sends real e-mail through its mail host, so there is no outbox to show. The outbox exists only in local mail mode.

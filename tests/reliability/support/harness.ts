@@ -172,6 +172,8 @@ export async function startApp(name: string, opts: AppOptions): Promise<AppProce
     ROUNDTIDE_MAIL_MODE: 'local',
     ROUNDTIDE_SMTP_HOST: '127.0.0.1',
     ROUNDTIDE_SMTP_PORT: String(opts.smtpPort),
+    // Each app its own local push service on a free port, so runs beside each other never meet on the fixed one.
+    ROUNDTIDE_PUSH_LOCAL_PORT: '0',
     ROUNDTIDE_SCHEDULER_INTERVAL_MS: String(opts.schedulerIntervalMs ?? 30_000),
     ...opts.env,
   }

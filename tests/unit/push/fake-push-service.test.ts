@@ -12,7 +12,7 @@ afterAll(() => service.close())
 
 const serverKeys = webpush.generateVAPIDKeys()
 const subject = 'mailto:night-desk@example.org'
-const config = { ...loadConfig({}), push: { enabled: true, subject, vapid: serverKeys } }
+const config = { ...loadConfig({}), push: { ...loadConfig({}).push, enabled: true, subject, vapid: serverKeys } }
 
 /** Posts an encrypted body the way web-push would, but with the Authorization header a test chooses. */
 async function postWith(endpoint: string, keys: { p256dh: string; auth: string }, authorization: string) {

@@ -29,14 +29,26 @@ export function usePushDevice() {
 export function useSubscribePushDevice() {
   const queryClient = useQueryClient()
   return useMutation({
+    // PushDeviceControl shows why it failed beside the button.
+    meta: { errorShownInline: true },
     mutationFn: async () => {
       if ((await Notification.requestPermission()) !== 'granted') {
         throw new ApiError(0, 'validation_failed', 'Notifications are blocked for Roundtide in this browser. Allow them in the site settings, then try again.')
       }
       const { publicKey } = await apiFetch('/push/public-key', PublicKeySchema)
       const registration = await workerRegistration()
-      const subscription = await registration.pushManager.subscribe({ userVisibleOnly: true, applicationServerKey: publicKey })
-      await apiFetch('/me/push-subscriptions', z.null(), { method: 'POST', ...jsonBody(subscription.toJSON()) })
+      const subscription = await registration.pushManager.subscribe({ userVisibleOnly: true, applicationServerKey: publicKey }).catch((error: unknown) => {
+        // The browser registers at its vendor's push service; its own words ("Registration failed - …") say little to a person.
+        const reason = error instanceof Error ? error.message : String(error)
+        throw new ApiError(0, 'network', `This browser could not register this device with its push service, so nothing was saved and this device gets no alerts. You are still reached by your other channels. Check the connection and try again. (Browser said: ${reason})`)
+      })
+      try {
+        await apiFetch('/me/push-subscriptions', z.null(), { method: 'POST', ...jsonBody(subscription.toJSON()) })
+      } catch (error) {
+        // Not registered with Roundtide: drop the browser's half too, so the page never claims this device receives alerts.
+        await subscription.unsubscribe().catch(() => undefined)
+        throw error
+      }
     },
     onSettled: () => queryClient.invalidateQueries({ queryKey: deviceKey() }),
   })

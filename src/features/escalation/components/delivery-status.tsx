@@ -1,5 +1,5 @@
 import { clsx } from 'clsx'
-import { CircleSlash, Clock, Layers, MailCheck, MailWarning, MailX, MoonStar, Send, type LucideIcon } from 'lucide-react'
+import { CircleHelp, CircleSlash, Clock, Layers, MailCheck, MailWarning, MailX, MoonStar, Send, type LucideIcon } from 'lucide-react'
 import type { EscalationRecord } from '#shared/schemas/ladder'
 
 type Status = EscalationRecord['notifications'][number]['status']
@@ -13,6 +13,7 @@ const LOOK: Record<Status, { label: string; icon: LucideIcon; tone: string }> = 
   superseded: { label: 'Not needed (answered first)', icon: CircleSlash, tone: 'text-tide-600' },
   undelivered: { label: 'Not delivered; next channel tried', icon: MailX, tone: 'text-alarm-700' },
   suppressed: { label: 'Held back (text limit); in a summary', icon: Layers, tone: 'text-tide-700' },
+  unknown: { label: 'Unknown (app stopped while sending); next channel tried', icon: CircleHelp, tone: 'text-alarm-700' },
 }
 
 export function DeliveryStatus({ status }: { status: Status }) {

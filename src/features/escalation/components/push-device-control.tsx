@@ -30,11 +30,17 @@ export function PushDeviceControl({ available, accepted }: { available: boolean;
           variant={device.data ? 'secondary' : 'primary'}
           disabled={busy}
           className="self-start"
-          onClick={() => (device.data ? unsubscribe.mutate(undefined, { onError, onSuccess: () => toast.success('This device no longer receives alerts.') }) : subscribe.mutate(undefined, { onError, onSuccess: () => toast.success('This device now receives your alerts.') }))}
+          onClick={() => (device.data ? unsubscribe.mutate(undefined, { onError, onSuccess: () => toast.success('This device no longer receives alerts.') }) : subscribe.mutate(undefined, { onSuccess: () => toast.success('This device now receives your alerts.') }))}
         >
           {device.data ? <BellOff aria-hidden className="size-5" /> : <BellRing aria-hidden className="size-5" />}
           {busy ? 'Working…' : device.data ? 'Stop alerts on this device' : 'Send alerts to this device'}
         </Button>
+      )}
+      {/* Shown beside the button rather than as a toast: the person needs to read why, and it stays until they try again. */}
+      {subscribe.isError && !device.data && (
+        <p role="alert" className="flex items-start gap-2 text-sm text-alarm-700">
+          <CircleAlert aria-hidden className="mt-0.5 size-4 shrink-0" /> {subscribe.error.message}
+        </p>
       )}
       <p className="text-xs text-tide-700">An alert shows Acknowledge and Open. Acknowledging from the notification stops the escalation, as the link in the e-mail does.</p>
     </section>

@@ -3,16 +3,11 @@ import { Inbox, Mail } from 'lucide-react'
 import { Link } from 'react-router-dom'
 import type { OutboxMessage } from '#shared/schemas/ladder'
 import { formatWhen } from '../../../lib/zone-format'
+import { OutboxEmpty } from './outbox-empty'
 
 /** The mail the app sent, newest first; choosing one puts its id in the address. */
 export function OutboxList({ messages, selectedId, timeZone }: { messages: OutboxMessage[]; selectedId: number | null; timeZone: string }) {
-  if (messages.length === 0) {
-    return (
-      <p className="flex items-center gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
-        <Inbox aria-hidden className="size-5" /> No mail has been sent yet.
-      </p>
-    )
-  }
+  if (messages.length === 0) return <OutboxEmpty icon={Inbox}>No mail has been sent yet.</OutboxEmpty>
   const sorted = [...messages].sort((a, b) => b.receivedAt.localeCompare(a.receivedAt) || b.id - a.id)
   return (
     <ul aria-label="Messages" className="divide-y divide-tide-100 overflow-hidden rounded-xl border border-tide-200 bg-white">

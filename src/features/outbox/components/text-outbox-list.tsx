@@ -4,18 +4,14 @@ import type { TextOutboxMessage } from '#shared/schemas/ladder'
 import { Button } from '../../../components/ui/button'
 import { formatWhen } from '../../../lib/zone-format'
 import { useReplyToText } from '../api/use-reply-to-text'
+import { OutboxEmpty } from './outbox-empty'
 
 const replyCode = (body: string) => /Reply (\d{4}) to acknowledge/.exec(body)?.[1] ?? null
 
 /** Texts the local provider received (and replies it delivered), newest first; a sent alert can be answered as its recipient would. */
 export function TextOutboxList({ texts, timeZone }: { texts: TextOutboxMessage[]; timeZone: string }) {
   const reply = useReplyToText()
-  if (texts.length === 0)
-    return (
-      <p className="flex items-center gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
-        <MessageSquareText aria-hidden className="size-5" /> No text messages have been sent yet.
-      </p>
-    )
+  if (texts.length === 0) return <OutboxEmpty icon={MessageSquareText}>No text messages have been sent yet.</OutboxEmpty>
   return (
     <ul aria-label="Text messages" className="divide-y divide-tide-100 overflow-hidden rounded-xl border border-tide-200 bg-white">
       {texts.map((t) => {
