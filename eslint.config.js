@@ -2,30 +2,7 @@ import js from '@eslint/js'
 import globals from 'globals'
 import reactHooks from 'eslint-plugin-react-hooks'
 import tseslint from 'typescript-eslint'
-import { boundaryConfig, staleEntityImports } from './eslint.boundaries.js'
-
-// TEMPORARY (#13): module files that still read another module's entities (paths under server/modules), as found
-// when the rule came in. The server half of #13 moves these behind service APIs; delete each entry as its fix lands.
-// Add none: a new cross-module entity import fails lint.
-const ENTITY_IMPORTS_BEING_REMOVED = {
-  'playbooks/batch-records.service.ts': ['facility/facility.entities.ts'],
-  'roster/assignee-rules.service.ts': ['people/person.entity.ts', 'routines/routine.entity.ts', 'tasks/task.entity.ts'],
-  'roster/calendar.service.ts': ['playbooks/playbook.entities.ts', 'tasks/task.entity.ts'],
-  'roster/coverage.service.ts': ['tasks/task.entity.ts'],
-  'roster/on-call.service.ts': ['completions/completion.entities.ts', 'people/person.entity.ts', 'tasks/task.entity.ts'],
-  'roster/roster.service.ts': ['people/person.entity.ts'],
-  'roster/rotation.service.ts': ['people/person.entity.ts'],
-  'routines/routines.service.ts': ['parameters/parameter.entities.ts'],
-  'tasks/materialiser.ts': ['routines/routine.entity.ts'],
-  'tasks/move-task.service.ts': ['people/person.entity.ts', 'roster/roster.entities.ts'],
-  'tasks/round.service.ts': ['parameters/parameter.entities.ts'],
-  'tasks/targets.ts': ['facility/facility.entities.ts'],
-  'tasks/tasks.service.ts': ['people/person.entity.ts'],
-}
-
-// Keeps the list honest: once a file stops importing an entity, lint asks for its entry to go.
-const stale = staleEntityImports(import.meta.dirname, ENTITY_IMPORTS_BEING_REMOVED)
-if (stale.length > 0) throw new Error(`eslint.config.js: delete from ENTITY_IMPORTS_BEING_REMOVED (no longer imported): ${stale.join(', ')}`)
+import { boundaryConfig } from './eslint.boundaries.js'
 
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', '.data', 'coverage', 'server/db/migrations/*-*.ts', 'tests/fixtures/lint'] },
@@ -69,5 +46,6 @@ export default tseslint.config(
       ],
     },
   },
-  ...boundaryConfig({ root: import.meta.dirname, allowedEntityImports: ENTITY_IMPORTS_BEING_REMOVED }),
+  // No module reads another module's entities any more (#13): a new cross-module entity import fails lint.
+  ...boundaryConfig({ root: import.meta.dirname }),
 )

@@ -14,6 +14,7 @@ import { applyShiftPattern } from '#server/modules/roster/roster.service'
 import { generateRotation } from '#server/modules/roster/rotation.service'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
 import { materialise } from '#server/modules/tasks/materialiser'
+import { EventInputSchema, PlaybookInputSchema } from '#shared/schemas/playbook'
 import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
 import { DEMO_BATCH_LIMITS, DEMO_PARAMETERS, DEMO_SYSTEM_LIMITS } from './demo-parameters'
@@ -114,7 +115,7 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
     })),
   )
   const playbooks = []
-  for (const p of DEMO_PLAYBOOKS) playbooks.push(await createPlaybook(p))
+  for (const p of DEMO_PLAYBOOKS) playbooks.push(await createPlaybook(PlaybookInputSchema.parse(p)))
   for (const c of DEMO_CYLINDERS) await createCylinder(CylinderInputSchema.parse(c))
   const manager = { ...(await getPersonRow(people.get('maren.holloway@brackenwater.example')!)), createdAt: '' } as never
 
@@ -129,8 +130,8 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   const spareBins = ['QUA-B03', 'QUA-B04'].map((c) => tanks.get(c)!)
   await tanksCatalogue.update(spareBins[0], { inUse: true })
   await tanksCatalogue.update(spareBins[1], { inUse: true })
-  await startEvent({ playbookId: playbooks[0].id, title: 'Arrival of juveniles from Tallowmere', localStart: `${today.plus({ days: 3 }).toISODate()}T09:30`, tankIds: spareBins, notes: 'Veterinarian on site that morning.' }, manager)
-  await startEvent({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }, manager)
+  await startEvent(EventInputSchema.parse({ playbookId: playbooks[0].id, title: 'Arrival of juveniles from Tallowmere', localStart: `${today.plus({ days: 3 }).toISODate()}T09:30`, tankIds: spareBins, notes: 'Veterinarian on site that morning.' }), manager)
+  await startEvent(EventInputSchema.parse({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }), manager)
   await recordCylinderReading(1, { pressure: 168, flowLPerMin: 6 })
 
   log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks, ${history} past completions, ${movements} stock movements and 2 incidents (today is ${today.toISODate()}).`)

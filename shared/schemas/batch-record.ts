@@ -41,6 +41,7 @@ export const BatchRecordInputSchema = z
   .discriminatedUnion('kind', [TransportBoxRecordSchema, TransportWaterRecordSchema, WeighingRecordSchema, BathRecordSchema, NoteRecordSchema])
   .and(z.object({ eventId: z.number().int().positive().nullable().default(null) }))
 export type BatchRecordInput = z.input<typeof BatchRecordInputSchema>
+export type ParsedBatchRecordInput = z.output<typeof BatchRecordInputSchema>
 
 export const BatchRecordSchema = z.object({
   id: z.number().int(),

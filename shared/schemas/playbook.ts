@@ -44,6 +44,7 @@ export const PlaybookInputSchema = z.object({
   steps: z.array(PlaybookStepSchema).min(1, 'A playbook needs at least one step').max(60),
 })
 export type PlaybookInput = z.input<typeof PlaybookInputSchema>
+export type ParsedPlaybookInput = z.output<typeof PlaybookInputSchema>
 export const PlaybookSchema = z.object({
   id: z.number().int(),
   name: text(),
@@ -70,6 +71,7 @@ export const EventInputSchema = z
   })
   .refine((e) => e.tankIds.length > 0 || e.batchId !== null, { path: ['tankIds'], message: 'Choose the tanks or the batch' })
 export type EventInput = z.input<typeof EventInputSchema>
+export type ParsedEventInput = z.output<typeof EventInputSchema>
 
 export const EventSchema = z.object({
   id: z.number().int(),
@@ -94,3 +96,4 @@ export const UpdateEventInputSchema = z.object({
   notes: text().trim().max(4000).optional(),
   fastingHours: z.number().int().min(0).max(168).nullable().optional(),
 })
+export type UpdateEventInput = z.infer<typeof UpdateEventInputSchema>

@@ -19,10 +19,12 @@ export const ShiftSchema = z.object({
 })
 export type Shift = z.infer<typeof ShiftSchema>
 
-export const ShiftInputSchema = z
-  .object({ personId: z.number().int().positive(), date: isoDate, start: hhmm, end: hhmm, kind: ShiftKindSchema })
-  .refine((s) => s.start !== s.end, { path: ['end'], message: 'A shift needs some length' })
+const ShiftFieldsSchema = z.object({ personId: z.number().int().positive(), date: isoDate, start: hhmm, end: hhmm, kind: ShiftKindSchema })
+export const ShiftInputSchema = ShiftFieldsSchema.refine((s) => s.start !== s.end, { path: ['end'], message: 'A shift needs some length' })
 export type ShiftInput = z.infer<typeof ShiftInputSchema>
+/** A change to a shift: any of its fields; the server checks the shift they make with the rest. */
+export const ShiftPatchSchema = ShiftFieldsSchema.partial()
+export type ShiftPatch = z.infer<typeof ShiftPatchSchema>
 
 export const WEEKDAYS = ['MO', 'TU', 'WE', 'TH', 'FR', 'SA', 'SU'] as const
 export const ShiftPatternInputSchema = z
@@ -84,5 +86,6 @@ export const RosterRangeQuerySchema = z
   .refine((q) => (Date.parse(q.to) - Date.parse(q.from)) / 86_400_000 <= 93, { path: ['to'], message: 'Ask for at most 93 days at a time' })
 
 export const HandoverNoteInputSchema = z.object({ text: text().trim().min(1, 'Write something').max(4000) })
+export type HandoverNoteInput = z.infer<typeof HandoverNoteInputSchema>
 export const HandoverNoteSchema = z.object({ id: z.number().int(), personId: z.number().int(), personName: text(), text: text(), createdAt: text() })
 export type HandoverNote = z.infer<typeof HandoverNoteSchema>

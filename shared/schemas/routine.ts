@@ -97,3 +97,4 @@ export type RoutineInput = z.input<typeof RoutineInputSchema>
 export type RoutineData = z.output<typeof RoutineInputSchema>
 export const UpdateRoutineInputSchema = z.object({ version: z.number().int() }).and(RoutineInputSchema)
 export type UpdateRoutineInput = z.input<typeof UpdateRoutineInputSchema>
+export type ParsedUpdateRoutineInput = z.output<typeof UpdateRoutineInputSchema>

@@ -83,6 +83,7 @@ export const CreateTaskInputSchema = z.object({
   requiredReadings: z.array(text().min(1)).max(30).default([]),
 })
 export type CreateTaskInput = z.input<typeof CreateTaskInputSchema>
+export type ParsedCreateTaskInput = z.output<typeof CreateTaskInputSchema>
 
 export const MoveTaskInputSchema = z
   .object({

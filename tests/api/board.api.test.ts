@@ -8,7 +8,7 @@ import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { BoardWireSchema, unfoldBoard } from '#shared/schemas/board'
-import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput } from '#tests/support/facility-fixtures'
+import { ensureFacilityAndParameters, makeAreaWithTanks, routineData } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 
@@ -117,12 +117,12 @@ describe('assigning on the board', () => {
 describe('moving to another day', () => {
   test('a weekly routine task moves to the next day, keeps its time, and is not recreated on its old day', async () => {
     const { tanks } = await makeAreaWithTanks(1)
-    const routine = await createRoutine(routineInput({ rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
+    const routine = await createRoutine(routineData({ rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
     const [first] = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
     const target = DateTime.fromISO(first.localDate).plus({ days: 1 }).toISODate()!
     const { body } = await supervisor.patch(`/api/tasks/${first.id}`).send({ date: target, version: first.version }).expect(200)
     expect(body).toMatchObject({ localDate: target, localTime: '10:15' })
-    await updateRoutine(routine.id, { ...routineInput({ name: routine.name, rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id], instructions: 'edited' }), version: routine.version })
+    await updateRoutine(routine.id, { ...routineData({ name: routine.name, rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id], instructions: 'edited' }), version: routine.version })
     const all = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id } })
     expect(all.filter((x) => x.localDate === first.localDate)).toHaveLength(0)
     expect(all.filter((x) => x.localDate === target)).toHaveLength(1)
@@ -130,7 +130,7 @@ describe('moving to another day', () => {
 
   test('a daily routine task cannot move onto the next occurrence, and the refusal says why', async () => {
     const { tanks } = await makeAreaWithTanks(1)
-    const routine = await createRoutine(routineInput({ rrule: 'FREQ=DAILY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
+    const routine = await createRoutine(routineData({ rrule: 'FREQ=DAILY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
     const [first] = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
     const res = await supervisor.patch(`/api/tasks/${first.id}`).send({ date: DateTime.fromISO(first.localDate).plus({ days: 1 }).toISODate(), version: first.version }).expect(409)
     expect(res.body.error.message).toMatch(/already has this task on/)
@@ -143,14 +143,14 @@ describe('assignee rules', () => {
     const { tanks } = await makeAreaWithTanks(2)
     const date = inDays(5)
     const tech = await technicianOnShift(date)
-    const routine = await createRoutine(routineInput({ rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
+    const routine = await createRoutine(routineData({ rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
     await applyAssigneeRules(date, date)
     const onDay = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id, localDate: date } })
     // Other tests roster technicians too; ours must be among the assignees and nobody off shift.
     expect(onDay.every((x) => x.assigneeId !== null)).toBe(true)
     const other = await technicianOnShift(date)
     await supervisor.patch(`/api/tasks/${onDay[0].id}`).send({ assigneeId: other.id, version: (await taskRow(onDay[0].id)).version }).expect(200)
-    await updateRoutine(routine.id, { ...routineInput({ name: routine.name, rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' }, instructions: 'changed' }), version: routine.version })
+    await updateRoutine(routine.id, { ...routineData({ name: routine.name, rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' }, instructions: 'changed' }), version: routine.version })
     await applyAssigneeRules(date, date)
     expect((await taskRow(onDay[0].id)).assigneeId).toBe(other.id)
     expect(tech.id).toBeGreaterThan(0)
@@ -159,7 +159,7 @@ describe('assignee rules', () => {
   test('a named-person rule assigns that person on materialisation', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const person = await t.createPersonWithRole('supervisor')
-    const routine = await createRoutine(routineInput({ targetIds: [tanks[0].id], assigneeRule: { kind: 'person', personId: person.id } }))
+    const routine = await createRoutine(routineData({ targetIds: [tanks[0].id], assigneeRule: { kind: 'person', personId: person.id } }))
     const rows = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id } })
     expect(rows.length).toBeGreaterThan(0)
     expect(rows.every((x) => x.assigneeId === person.id)).toBe(true)

@@ -8,6 +8,7 @@ import { batches } from '#server/modules/facility/catalogues'
 import { createPlaybook } from '#server/modules/playbooks/playbooks.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { DEMO_PLAYBOOKS } from '#seed/demo-playbooks'
+import { PlaybookInputSchema } from '#shared/schemas/playbook'
 import { ensureFacilityAndParameters, makeAreaWithTanks, uniqueCode } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
@@ -20,7 +21,7 @@ beforeAll(async () => {
   t = await startTestApp()
   zone = (await ensureFacilityAndParameters()).timeZone
   supervisor = (await t.signedInAgent('supervisor')).agent
-  for (const p of DEMO_PLAYBOOKS) playbookIds[p.kind] = (await createPlaybook({ ...p, name: `${p.name} ${uniqueCode('pb')}` })).id
+  for (const p of DEMO_PLAYBOOKS) playbookIds[p.kind] = (await createPlaybook(PlaybookInputSchema.parse({ ...p, name: `${p.name} ${uniqueCode('pb')}` }))).id
 })
 afterAll(() => t.close())
 

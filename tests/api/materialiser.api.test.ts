@@ -6,7 +6,7 @@ import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { materialise } from '#server/modules/tasks/materialiser'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
-import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput } from '#tests/support/facility-fixtures'
+import { ensureFacilityAndParameters, makeAreaWithTanks, routineData } from '#tests/support/facility-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 
 let t: TestApp
@@ -23,13 +23,13 @@ describe('materialiser', () => {
     const { tanks: made } = await makeAreaWithTanks(1)
     const left = await t.createPersonWithRole('technician')
     await db().getRepository(PersonEntity).update(left.id, { active: false })
-    const named = await createRoutine(routineInput({ targetIds: [made[0].id], assigneeRule: { kind: 'person', personId: left.id } }))
+    const named = await createRoutine(routineData({ targetIds: [made[0].id], assigneeRule: { kind: 'person', personId: left.id } }))
     expect((await tasksOf(named.id)).every((x) => x.assigneeId === null)).toBe(true)
 
     const rostered = await t.createPersonWithRole('technician')
     const farDay = new Date(Date.now() + 500 * 86_400_000).toISOString().slice(0, 10)
     await createShift({ personId: rostered.id, date: farDay, start: '00:00', end: '23:59', kind: 'day' })
-    const onShift = await createRoutine(routineInput({ targetIds: [made[0].id], dtstart: `${farDay}T10:00:00`, rrule: 'FREQ=DAILY;COUNT=1', assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
+    const onShift = await createRoutine(routineData({ targetIds: [made[0].id], dtstart: `${farDay}T10:00:00`, rrule: 'FREQ=DAILY;COUNT=1', assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
     await materialise({ routineIds: [onShift.id], from: new Date(Date.parse(farDay) - 86_400_000), horizonDays: 3 })
     const [task] = await tasksOf(onShift.id)
     expect(task.localDate).toBe(farDay)
@@ -39,7 +39,7 @@ describe('materialiser', () => {
 
   test('when it runs twice, then the second run creates nothing', async () => {
     const { tanks: made } = await makeAreaWithTanks(2)
-    const routine = await createRoutine(routineInput({ targetIds: made.map((x) => x.id) }))
+    const routine = await createRoutine(routineData({ targetIds: made.map((x) => x.id) }))
     const before = (await tasksOf(routine.id)).length
     expect(before).toBeGreaterThanOrEqual(2 * 41) // 2 tanks × a 42-day horizon (today may be partly past)
     const again = await materialise({ routineIds: [routine.id] })
@@ -49,13 +49,13 @@ describe('materialiser', () => {
 
   test('when a routine is edited, then untouched future tasks move and a manually assigned or done one stays', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
-    const routine = await createRoutine(routineInput({ targetIds: [made[0].id], dtstart: '2026-01-05T07:30:00' }))
+    const routine = await createRoutine(routineData({ targetIds: [made[0].id], dtstart: '2026-01-05T07:30:00' }))
     const [first, second] = (await tasksOf(routine.id)).filter((x) => x.dueAt > new Date())
     const person = await t.createPersonWithRole('technician')
     await db().getRepository(TaskEntity).update(first.id, { assigneeId: person.id, assignedManually: true })
     await db().getRepository(TaskEntity).update(second.id, { status: 'done', completedAt: new Date(), completedById: person.id })
 
-    await updateRoutine(routine.id, { ...routineInput({ name: routine.name, targetIds: [made[0].id], dtstart: '2026-01-05T09:00:00' }), version: routine.version })
+    await updateRoutine(routine.id, { ...routineData({ name: routine.name, targetIds: [made[0].id], dtstart: '2026-01-05T09:00:00' }), version: routine.version })
 
     const after = await tasksOf(routine.id)
     const ids = after.map((x) => x.id)
@@ -68,21 +68,21 @@ describe('materialiser', () => {
 
   test('when a routine is edited with a stale version, then it answers conflict and nothing changes', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
-    const routine = await createRoutine(routineInput({ targetIds: [made[0].id] }))
-    await expect(updateRoutine(routine.id, { ...routineInput({ targetIds: [made[0].id] }), version: routine.version + 5 })).rejects.toMatchObject({ status: 409 })
+    const routine = await createRoutine(routineData({ targetIds: [made[0].id] }))
+    await expect(updateRoutine(routine.id, { ...routineData({ targetIds: [made[0].id] }), version: routine.version + 5 })).rejects.toMatchObject({ status: 409 })
   })
 
   test('when a routine is paused, then its future untouched tasks go and none come back on the next run', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
-    const routine = await createRoutine(routineInput({ targetIds: [made[0].id] }))
-    await updateRoutine(routine.id, { ...routineInput({ name: routine.name, targetIds: [made[0].id], paused: true }), version: routine.version })
+    const routine = await createRoutine(routineData({ targetIds: [made[0].id] }))
+    await updateRoutine(routine.id, { ...routineData({ name: routine.name, targetIds: [made[0].id], paused: true }), version: routine.version })
     await materialise()
     expect((await tasksOf(routine.id)).filter((x) => x.dueAt > new Date())).toHaveLength(0)
   })
 
   test('when a tank is emptied, then its future untouched tasks go; when refilled, they return', async () => {
     const { tanks: made } = await makeAreaWithTanks(2)
-    const routine = await createRoutine(routineInput({ targetIds: made.map((x) => x.id) }))
+    const routine = await createRoutine(routineData({ targetIds: made.map((x) => x.id) }))
     await tanks.update(made[0].id, { inUse: false })
     let future = (await tasksOf(routine.id)).filter((x) => x.dueAt > new Date())
     expect(future.some((x) => x.tankId === made[0].id)).toBe(false)
@@ -94,7 +94,7 @@ describe('materialiser', () => {
 
   test('when a routine has an invalid rule or an unknown reading, then it is refused naming the field', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
-    await expect(createRoutine(routineInput({ targetIds: [made[0].id], rrule: 'FREQ=SOMETIMES' }))).rejects.toMatchObject({ status: 400, fieldErrors: { rrule: expect.any(Array) } })
-    await expect(createRoutine(routineInput({ targetIds: [made[0].id], requiredReadings: ['unicorns'] }))).rejects.toMatchObject({ status: 400, fieldErrors: { requiredReadings: expect.any(Array) } })
+    await expect(createRoutine(routineData({ targetIds: [made[0].id], rrule: 'FREQ=SOMETIMES' }))).rejects.toMatchObject({ status: 400, fieldErrors: { rrule: expect.any(Array) } })
+    await expect(createRoutine(routineData({ targetIds: [made[0].id], requiredReadings: ['unicorns'] }))).rejects.toMatchObject({ status: 400, fieldErrors: { requiredReadings: expect.any(Array) } })
   })
 })

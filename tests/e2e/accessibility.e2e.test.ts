@@ -9,7 +9,7 @@ import { recordMovement } from '#server/modules/stock/stock.service'
 import { toPerson } from '#server/modules/people/person.mapper'
 import { getPersonRow } from '#server/modules/people/people.service'
 import { DESKTOP, PHONE, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput } from '#tests/support/facility-fixtures'
+import { ensureFacilityAndParameters, makeAreaWithTanks, routineData } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { MovementInputSchema } from '#shared/schemas/stock'
 
@@ -27,7 +27,7 @@ beforeAll(async () => {
   managerEmail = manager.email
   const task = await makeTankTask(tanks[0], { localDate: today, assigneeId: manager.id, title: `Check ${SCRIPT}` })
   const batch = await batches.create({ code: 'B-A11Y', species: 'Barramundi', origin: SCRIPT, arrivalDate: today, count: 100, meanWeightG: 5, tankIds: [tanks[0].id], status: 'active', feedRatePct: 2 })
-  const routine = await createRoutine(routineInput({ name: `Routine ${SCRIPT}`, targetIds: [tanks[0].id], instructions: SCRIPT }))
+  const routine = await createRoutine(routineData({ name: `Routine ${SCRIPT}`, targetIds: [tanks[0].id], instructions: SCRIPT }))
   await addHandoverNote(toPerson(await getPersonRow(manager.id)), { text: `Watch bin 2 ${SCRIPT}` })
   await recordMovement(toPerson(await getPersonRow(manager.id)), MovementInputSchema.parse({ kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT }))
   await proposeIncident({ source: 'missed_task', sourceKey: `a11y:${task.id}`, taskId: task.id, title: `Missed ${SCRIPT}`, whatHappened: SCRIPT, startedAt: new Date(), tankIds: [tanks[0].id] }, new Date())

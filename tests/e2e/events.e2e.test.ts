@@ -3,6 +3,7 @@ import { DateTime } from 'luxon'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { createPlaybook } from '#server/modules/playbooks/playbooks.service'
 import type { Tank } from '#shared/schemas/facility'
+import { PlaybookInputSchema } from '#shared/schemas/playbook'
 import type { Task } from '#shared/schemas/task'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
@@ -40,7 +41,7 @@ async function arrange() {
     after: await feedAt(tanks[0], start.set({ hour: 16 }), `Evening feed ${tag}`), // after the start
     otherTank: await feedAt(tanks[1], start.set({ hour: 8 }), `Early feed ${tag} (other tank)`),
   }
-  const playbook = await createPlaybook({
+  const playbook = await createPlaybook(PlaybookInputSchema.parse({
     name: `Grading ${tag}`, kind: 'grading', fastingHours: 24,
     description: 'Feed withheld before handling; checks before and after.',
     steps: [
@@ -48,7 +49,7 @@ async function arrange() {
       { title: 'Grade and count', category: 'stock', minutesOffset: 0, perTank: true, durationMinutes: 40 },
       { title: 'Post-handling check', category: 'welfare', dayOffset: 1, time: '08:00', perTank: true, priority: 'welfare_critical' },
     ],
-  })
+  }))
   return { tag, tank: tanks[0], start, feeds, playbook }
 }
 

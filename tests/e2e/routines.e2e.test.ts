@@ -8,6 +8,7 @@ import { createFacilityIfMissing } from '#server/modules/facility/facility.servi
 import { ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import type { Parameter } from '#shared/schemas/parameter'
+import { RoutineInputSchema, UpdateRoutineInputSchema } from '#shared/schemas/routine'
 import type { Task } from '#shared/schemas/task'
 import { DESKTOP, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 
@@ -48,11 +49,11 @@ async function arrange() {
   }
   const parameters = await repo.findBy(READINGS.map(({ key }) => ({ key })))
   // Neighbours for the list: one welfare-critical, one paused.
-  await createRoutine({
+  await createRoutine(RoutineInputSchema.parse({
     name: `Morning tank check ${tag}`, category: 'welfare', targetKind: 'area_tanks', targetIds: [area.id],
     rrule: 'FREQ=DAILY', dtstart: `${today}T07:30:00`, priority: 'welfare_critical', requiredReadings: ['do_mgL'],
-  })
-  await createRoutine({ name: `Stores count ${tag}`, category: 'stores', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T11:00:00`, paused: true })
+  }))
+  await createRoutine(RoutineInputSchema.parse({ name: `Stores count ${tag}`, category: 'stores', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T11:00:00`, paused: true }))
   return { timeZone: facility.timeZone, tag, tankCodes, tankIds, parameters }
 }
 
@@ -160,7 +161,7 @@ describe('Routines', () => {
   test('when someone else saved first, a supervisor is told and can reload their version', async () => {
     const { tag, today } = await facilityAndTag()
     const input = { name: `Alarm call-out test ${tag}`, category: 'alarms', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T14:00:00` } as const
-    const routine = await createRoutine(input)
+    const routine = await createRoutine(RoutineInputSchema.parse(input))
     const supervisor = await s.createPerson('supervisor')
     const { page, context } = await s.newPage(DESKTOP)
     await s.signIn(page, supervisor.email)
@@ -168,7 +169,7 @@ describe('Routines', () => {
     await expect.poll(() => page.getByLabel('Default assignee').locator('option').allTextContents()).not.toContain('A named person')
     await page.getByLabel('Name').fill(`Alarm test, renamed here ${tag}`)
 
-    await updateRoutine(routine.id, { ...input, instructions: 'Changed in the other office', version: routine.version })
+    await updateRoutine(routine.id, UpdateRoutineInputSchema.parse({ ...input, instructions: 'Changed in the other office', version: routine.version }))
     await page.getByRole('button', { name: 'Save changes' }).click()
     await page.getByText('Someone else changed this routine after you opened it.').waitFor()
     await screenshot(page, 'routine-conflict-desktop')

@@ -31,7 +31,7 @@ async function arrange() {
   const { area, system, tanks } = await makeAreaWithTanks(1, { roundOrder: 5 })
   const tank = tanks[0]
   const batch = await batches.create({
-    code: uniqueCode('B'), species: 'Barramundi (Lates calcarifer)', origin: 'Northside hatchery', arrivalDate: DateTime.now().setZone(zone).minus({ days: 40 }).toISODate(),
+    code: uniqueCode('B'), species: 'Barramundi (Lates calcarifer)', origin: 'Northside hatchery', arrivalDate: DateTime.now().setZone(zone).minus({ days: 40 }).toISODate()!,
     count: 180, meanWeightG: 12.5, tankIds: [tank.id], status: 'active', feedRatePct: 3,
   })
   // The demo's limits, pinned on this system so the test does not lean on the facility's.

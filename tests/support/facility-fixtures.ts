@@ -4,7 +4,7 @@ import { areas, systems, tanks } from '#server/modules/facility/catalogues'
 import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
 import { LimitEntity, ParameterEntity } from '#server/modules/parameters/parameter.entities'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
-import type { RoutineInput } from '#shared/schemas/routine'
+import { RoutineInputSchema, type RoutineData, type RoutineInput } from '#shared/schemas/routine'
 import { DEMO_FACILITY } from '#seed/demo-structure'
 import { DEMO_PARAMETERS } from '#seed/demo-parameters'
 
@@ -44,5 +44,8 @@ export function routineInput(overrides: Partial<RoutineInput> = {}): RoutineInpu
     ...overrides,
   }
 }
+
+/** A routine as a service takes it: `routineInput` with the schema's defaults filled in. */
+export const routineData = (overrides: Partial<RoutineInput> = {}): RoutineData => RoutineInputSchema.parse(routineInput(overrides))
 
 export const routineRow = (id: number) => db().getRepository(RoutineEntity).findOneByOrFail({ id })

@@ -23,7 +23,10 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
     checkRemovable?: (row: T) => Promise<void>
   } = {},
 ) {
+  type Input = z.output<S>
   const repo = () => db().getRepository(entity)
+  // A change may name any of the fields; the catalogues' input shapes are plain objects.
+  const updateSchema = (inputSchema as unknown as z.ZodObject).partial() as unknown as z.ZodType<Partial<Input>>
 
   async function get(id: number): Promise<T> {
     const row = await repo().findOneBy({ id } as never)
@@ -38,10 +41,12 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
   }
 
   return {
+    /** The shapes the routes parse a new entry and a change with. */
+    createSchema: inputSchema as unknown as z.ZodType<Input>,
+    updateSchema,
     list: () => repo().find({ order: (opts.order ?? { code: 'ASC' }) as never }),
     get,
-    async create(input: unknown): Promise<T> {
-      const data = inputSchema.parse(input) as Omit<T, 'id'>
+    async create(data: Input): Promise<T> {
       await assertCodeFree((data as ObjectLiteral).code)
       await opts.checkRefs?.(data as Partial<T>)
       const saved = (await repo().save(repo().create(data as never))) as unknown as T
@@ -49,11 +54,10 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
       await recordChange('catalogue', [saved.id])
       return saved
     },
-    async update(id: number, input: unknown): Promise<T> {
+    async update(id: number, data: Partial<Input>): Promise<T> {
       const before = await get(id)
-      const data = (inputSchema as unknown as z.ZodObject).partial().parse(input) as Partial<T>
       await assertCodeFree((data as ObjectLiteral).code, id)
-      await opts.checkRefs?.(data)
+      await opts.checkRefs?.(data as Partial<T>)
       const after = await repo().save({ ...before, ...data })
       await opts.onChange?.(before, after)
       await recordChange('catalogue', [id])

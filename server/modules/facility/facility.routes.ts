@@ -1,6 +1,7 @@
 import { Router } from 'express'
 import multer from 'multer'
-import { IdParamSchema } from '#shared/schemas/facility'
+import type { z } from 'zod'
+import { IdParamSchema, UpdateFacilityInputSchema } from '#shared/schemas/facility'
 import type { Role } from '#shared/schemas/person'
 import { AppError } from '../../lib/errors'
 import { requireRole, signedIn } from '../auth/require-role'
@@ -14,12 +15,21 @@ facilityRouter.get('/facility', signedIn, async (_req, res) => {
   res.json(await getFacility())
 })
 facilityRouter.patch('/facility', requireRole('manager'), async (req, res) => {
-  res.json(await updateFacility(req.body))
+  res.json(await updateFacility(UpdateFacilityInputSchema.parse(req.body)))
 })
 
-type Catalogue = typeof areas | typeof systems | typeof tanks | typeof equipment | typeof batches
+/** What a catalogue offers the routes: its functions and the shapes its input is parsed with. */
+interface MountedCatalogue<New, Change> {
+  createSchema: z.ZodType<New>
+  updateSchema: z.ZodType<Change>
+  list(): Promise<unknown>
+  get(id: number): Promise<unknown>
+  create(data: New): Promise<unknown>
+  update(id: number, data: Change): Promise<unknown>
+  remove(id: number): Promise<void>
+}
 
-function mount(path: string, c: Catalogue, editors: Role[]) {
+function mount<New, Change>(path: string, c: MountedCatalogue<New, Change>, editors: Role[]) {
   facilityRouter.get(path, signedIn, async (_req, res) => {
     res.json(await c.list())
   })
@@ -27,10 +37,11 @@ function mount(path: string, c: Catalogue, editors: Role[]) {
     res.json(await c.get(IdParamSchema.parse(req.params).id))
   })
   facilityRouter.post(path, requireRole(...editors), async (req, res) => {
-    res.status(201).json(await c.create(req.body))
+    res.status(201).json(await c.create(c.createSchema.parse(req.body)))
   })
   facilityRouter.patch(`${path}/:id`, requireRole(...editors), async (req, res) => {
-    res.json(await c.update(IdParamSchema.parse(req.params).id, req.body))
+    const { id } = IdParamSchema.parse(req.params)
+    res.json(await c.update(id, c.updateSchema.parse(req.body)))
   })
   facilityRouter.delete(`${path}/:id`, requireRole(...editors), async (req, res) => {
     await c.remove(IdParamSchema.parse(req.params).id)

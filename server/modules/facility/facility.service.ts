@@ -1,4 +1,4 @@
-import { UpdateFacilityInputSchema, type Facility } from '#shared/schemas/facility'
+import type { Facility, UpdateFacilityInput } from '#shared/schemas/facility'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
@@ -13,8 +13,7 @@ export async function getFacility(): Promise<Facility> {
   return row
 }
 
-export async function updateFacility(input: unknown): Promise<Facility> {
-  const data = UpdateFacilityInputSchema.parse(input)
+export async function updateFacility(data: UpdateFacilityInput): Promise<Facility> {
   const current = await getFacility()
   const saved = await repo().save({ ...current, ...data })
   await audit('facility', current.id, 'update', current, saved)

@@ -1,11 +1,11 @@
 import { compareWater } from '#shared/arrival/compare-water'
-import { BatchRecordInputSchema, type BatchRecord } from '#shared/schemas/batch-record'
+import type { BatchRecord, ParsedBatchRecordInput } from '#shared/schemas/batch-record'
 import type { Person } from '#shared/schemas/person'
 import { describeSample } from '#shared/stats/sample-stats'
 import { unionizedAmmoniaMgL } from '#shared/water/ammonia'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
-import { BatchEntity } from '../facility/facility.entities'
+import { findBatch, setBatchMeanWeight } from '../facility/batches.service'
 import { getFacility } from '../facility/facility.service'
 import { loadTaskContext } from '../tasks/tasks.service'
 import { BatchRecordEntity } from './playbook.entities'
@@ -15,10 +15,9 @@ import { BatchRecordEntity } from './playbook.entities'
  * warnings, NH3 of the transport water, the weighing's statistics) so the record holds it,
  * and a weighing updates the batch's mean weight, which the rations follow.
  */
-export async function addBatchRecord(batchId: number, person: Person, input: unknown): Promise<BatchRecord> {
-  const batch = await db().getRepository(BatchEntity).findOneBy({ id: batchId })
+export async function addBatchRecord(batchId: number, person: Person, { eventId, ...data }: ParsedBatchRecordInput): Promise<BatchRecord> {
+  const batch = await findBatch(batchId)
   if (!batch) throw notFound('That batch')
-  const { eventId, ...data } = BatchRecordInputSchema.parse(input)
   let stored: Record<string, unknown> = { ...data }
   if (data.kind === 'transport_box') {
     const facility = await getFacility()
@@ -37,7 +36,7 @@ export async function addBatchRecord(batchId: number, person: Person, input: unk
   if (data.kind === 'weighing') {
     const stats = describeSample(data.weightsG)
     stored = { ...data, ...stats }
-    if (data.updateBatchMean) await db().getRepository(BatchEntity).update(batchId, { meanWeightG: Math.round(stats.mean * 100) / 100 })
+    if (data.updateBatchMean) await setBatchMeanWeight(batchId, Math.round(stats.mean * 100) / 100)
   }
   const row = await db().getRepository(BatchRecordEntity).save({ batchId, eventId, kind: data.kind, data: stored, personId: person.id })
   return { id: row.id, batchId, eventId, kind: row.kind, data: stored, personName: person.name, createdAt: row.createdAt.toISOString() }

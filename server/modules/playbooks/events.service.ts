@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon'
-import { EventInputSchema, FASTING_KINDS, UpdateEventInputSchema, type FacilityEvent } from '#shared/schemas/playbook'
+import { FASTING_KINDS, type ParsedEventInput, type FacilityEvent, type UpdateEventInput } from '#shared/schemas/playbook'
 import type { Person } from '#shared/schemas/person'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
@@ -58,8 +58,7 @@ function timing(localStart: string, zone: string, fastingHours: number) {
 }
 
 /** Starting an event creates its playbook's tasks and, for handling or dispatch, holds the feeds before it. */
-export async function startEvent(input: unknown, person: Person): Promise<FacilityEvent> {
-  const data = EventInputSchema.parse(input)
+export async function startEvent(data: ParsedEventInput, person: Person): Promise<FacilityEvent> {
   const playbook = await db().getRepository(PlaybookEntity).findOneBy({ id: data.playbookId })
   if (!playbook) throw validationError('That playbook does not exist.', { playbookId: ['Choose a playbook'] })
   const { cat, ids } = await resolveTanks(data.tankIds, data.batchId)
@@ -79,8 +78,7 @@ export async function startEvent(input: unknown, person: Person): Promise<Facili
 }
 
 /** Moving an event or changing its tanks rebuilds its untouched tasks; started or assigned ones stay. */
-export async function updateEvent(id: number, input: unknown): Promise<FacilityEvent> {
-  const data = UpdateEventInputSchema.parse(input)
+export async function updateEvent(id: number, data: UpdateEventInput): Promise<FacilityEvent> {
   const current = await events().findOneBy({ id })
   if (!current) throw notFound('That event')
   if (current.status !== 'planned') throw conflict(`This event is ${current.status}; it can no longer change.`)

@@ -1,7 +1,9 @@
 import { Router } from 'express'
 import { z } from 'zod'
 import { calendarDate } from '#shared/schemas/calendar'
+import { BatchRecordInputSchema } from '#shared/schemas/batch-record'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { EventInputSchema, PlaybookInputSchema, UpdateEventInputSchema } from '#shared/schemas/playbook'
 import { requireRole, signedIn } from '../auth/require-role'
 import { addBatchRecord, listBatchRecords } from './batch-records.service'
 import { cancelEvent, endEvent, getEvent, listEvents, startEvent, updateEvent } from './events.service'
@@ -19,10 +21,11 @@ playbooksRouter.get('/playbooks/:id', signedIn, async (req, res) => {
   res.json(await getPlaybook(IdParamSchema.parse(req.params).id))
 })
 playbooksRouter.post('/playbooks', requireRole('manager'), async (req, res) => {
-  res.status(201).json(await createPlaybook(req.body))
+  res.status(201).json(await createPlaybook(PlaybookInputSchema.parse(req.body)))
 })
 playbooksRouter.put('/playbooks/:id', requireRole('manager'), async (req, res) => {
-  res.json(await updatePlaybook(IdParamSchema.parse(req.params).id, req.body))
+  const { id } = IdParamSchema.parse(req.params)
+  res.json(await updatePlaybook(id, PlaybookInputSchema.parse(req.body)))
 })
 
 playbooksRouter.get('/events', signedIn, async (req, res) => {
@@ -33,11 +36,12 @@ playbooksRouter.get('/events/:id', signedIn, async (req, res) => {
   res.json(await getEvent(IdParamSchema.parse(req.params).id))
 })
 playbooksRouter.post('/events', planners, async (req, res) => {
-  const event = await startEvent(req.body, req.user!)
+  const event = await startEvent(EventInputSchema.parse(req.body), req.user!)
   res.status(201).json(event)
 })
 playbooksRouter.patch('/events/:id', planners, async (req, res) => {
-  const event = await updateEvent(IdParamSchema.parse(req.params).id, req.body)
+  const { id } = IdParamSchema.parse(req.params)
+  const event = await updateEvent(id, UpdateEventInputSchema.parse(req.body))
   res.json(event)
 })
 playbooksRouter.post('/events/:id/cancel', planners, async (req, res) => {
@@ -53,5 +57,6 @@ playbooksRouter.get('/batches/:id/records', signedIn, async (req, res) => {
   res.json(await listBatchRecords(IdParamSchema.parse(req.params).id))
 })
 playbooksRouter.post('/batches/:id/records', doers, async (req, res) => {
-  res.status(201).json(await addBatchRecord(IdParamSchema.parse(req.params).id, req.user!, req.body))
+  const { id } = IdParamSchema.parse(req.params)
+  res.status(201).json(await addBatchRecord(id, req.user!, BatchRecordInputSchema.parse(req.body)))
 })

@@ -1,4 +1,4 @@
-import { PlaybookInputSchema, type Playbook } from '#shared/schemas/playbook'
+import type { Playbook, ParsedPlaybookInput } from '#shared/schemas/playbook'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
@@ -14,15 +14,15 @@ export async function getPlaybook(id: number): Promise<Playbook> {
   return row
 }
 
-export async function createPlaybook(input: unknown): Promise<Playbook> {
-  const saved = await repo().save(PlaybookInputSchema.parse(input))
+export async function createPlaybook(data: ParsedPlaybookInput): Promise<Playbook> {
+  const saved = await repo().save(data)
   await audit('playbook', saved.id, 'create', null, saved)
   return saved
 }
 
-export async function updatePlaybook(id: number, input: unknown): Promise<Playbook> {
+export async function updatePlaybook(id: number, data: ParsedPlaybookInput): Promise<Playbook> {
   const current = await getPlaybook(id)
-  const saved = await repo().save({ ...current, ...PlaybookInputSchema.parse(input) })
+  const saved = await repo().save({ ...current, ...data })
   await audit('playbook', id, 'update', current, saved)
   return saved
 }

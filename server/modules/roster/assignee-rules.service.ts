@@ -1,11 +1,10 @@
-import { Between, In } from 'typeorm'
-import type { AssigneeRule } from '#shared/schemas/routine'
+import { Between } from 'typeorm'
 import { db } from '../../db/data-source'
-import { recordTaskChanges } from '../../realtime/change-outbox'
-import { PersonEntity } from '../people/person.entity'
-import { RoutineEntity } from '../routines/routine.entity'
-import { TaskEntity, type TaskRow } from '../tasks/task.entity'
-import { loadCatalogue } from '../tasks/targets'
+import { loadCatalogue } from '../facility/facility-catalogue'
+import { listStaff } from '../people/people.service'
+import { assigneeRulesOf } from '../routines/routine-planning'
+import { tasksForAssigneeRules } from '../tasks/task-queries'
+import { assignByRule, type TaskRow } from '../tasks/task-writes.service'
 import { OnCallEntity, ShiftEntity, type ShiftRow } from './roster.entities'
 
 const minutes = (hhmm: string) => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3, 5))
@@ -22,20 +21,14 @@ const covers = (s: ShiftRow, hhmm: string) => {
  * hand, and finished ones, are never touched.
  */
 export async function applyAssigneeRules(from: string, to: string, opts: { routineIds?: number[] } = {}): Promise<number> {
-  const tasks = await db().getRepository(TaskEntity).find({
-    select: { id: true, routineId: true, localDate: true, localStart: true, dueAt: true, areaId: true, targetKind: true, targetId: true, assigneeId: true },
-    where: {
-      localDate: Between(from, to), assignedManually: false, status: In(['planned', 'open', 'overdue']),
-      ...(opts.routineIds ? { routineId: In(opts.routineIds) } : {}),
-    },
-  })
+  const tasks = await tasksForAssigneeRules(from, to, opts.routineIds)
   const withRoutine = tasks.filter((t) => t.routineId !== null)
   if (!withRoutine.length) return 0
-  const routines = new Map((await db().getRepository(RoutineEntity).findBy({ id: In([...new Set(withRoutine.map((t) => t.routineId!))]) })).map((r) => [r.id, r.assigneeRule]))
+  const routines = await assigneeRulesOf([...new Set(withRoutine.map((t) => t.routineId!))])
   const [shifts, duties, people, cat] = await Promise.all([
     db().getRepository(ShiftEntity).find({ where: { date: Between(from, to) } }),
     db().getRepository(OnCallEntity).find(),
-    db().getRepository(PersonEntity).find({ where: { active: true } }),
+    listStaff(),
     loadCatalogue(),
   ])
   const roleOf = new Map(people.map((p) => [p.id, p.role]))
@@ -50,7 +43,7 @@ export async function applyAssigneeRules(from: string, to: string, opts: { routi
   }
   const updates = new Map<number, number | null>()
   for (const task of withRoutine) {
-    const rule = routines.get(task.routineId!) as AssigneeRule | undefined
+    const rule = routines.get(task.routineId!)
     if (!rule || rule.kind === 'none') continue
     let assignee: number | null = null
     if (rule.kind === 'person') assignee = roleOf.has(rule.personId) ? rule.personId : null
@@ -67,17 +60,6 @@ export async function applyAssigneeRules(from: string, to: string, opts: { routi
     }
     if (assignee !== task.assigneeId) updates.set(task.id, assignee)
   }
-  const byAssignee = new Map<number | null, number[]>()
-  for (const [id, assigneeId] of updates) {
-    const ids = byAssignee.get(assigneeId) ?? []
-    ids.push(id)
-    byAssignee.set(assigneeId, ids)
-  }
-  for (const [assigneeId, ids] of byAssignee) {
-    for (let i = 0; i < ids.length; i += 1000) {
-      await db().getRepository(TaskEntity).update({ id: In(ids.slice(i, i + 1000)), assignedManually: false }, { assigneeId, version: () => 'version + 1' })
-    }
-  }
-  await recordTaskChanges([...updates.keys()], 'assignees')
+  await assignByRule(updates)
   return updates.size
 }

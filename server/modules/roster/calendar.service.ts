@@ -1,10 +1,8 @@
 import { DateTime } from 'luxon'
 import type { CalendarDay } from '#shared/schemas/board'
-import { db } from '../../db/data-source'
 import { getFacility } from '../facility/facility.service'
-import { Not } from 'typeorm'
-import { EventEntity } from '../playbooks/playbook.entities'
-import { TaskEntity } from '../tasks/task.entity'
+import { eventsNotCancelled } from '../playbooks/event-reads'
+import { taskCountsByDay } from '../tasks/task-queries'
 import { listOnCall, listShifts } from './roster.service'
 
 const OPEN = new Set(['planned', 'open', 'overdue'])
@@ -13,16 +11,10 @@ const OPEN = new Set(['planned', 'open', 'overdue'])
 export async function getCalendar(from: string, to: string): Promise<CalendarDay[]> {
   const zone = (await getFacility()).timeZone
   const [counts, shifts, duties, events] = await Promise.all([
-    db()
-      .getRepository(TaskEntity)
-      .createQueryBuilder('t')
-      .select(['t.localDate AS date', 't.status AS status', 't.category AS category', 'COUNT(*) AS n'])
-      .where('t.localDate BETWEEN :from AND :to', { from, to })
-      .groupBy('t.localDate').addGroupBy('t.status').addGroupBy('t.category')
-      .getRawMany<{ date: string; status: string; category: string; n: string }>(),
+    taskCountsByDay(from, to),
     listShifts(from, to),
     listOnCall(from, to),
-    db().getRepository(EventEntity).find({ where: { status: Not('cancelled') } }),
+    eventsNotCancelled(),
   ])
   const days: CalendarDay[] = []
   for (let d = DateTime.fromISO(from, { zone }); d.toISODate()! <= to; d = d.plus({ days: 1 })) {

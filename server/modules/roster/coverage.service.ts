@@ -1,9 +1,8 @@
 import { DateTime } from 'luxon'
 import { coverageWarnings } from '#shared/roster/coverage'
 import type { CoverageWarning } from '#shared/schemas/roster'
-import { db } from '../../db/data-source'
 import { getFacility } from '../facility/facility.service'
-import { TaskEntity } from '../tasks/task.entity'
+import { tasksStillToDo } from '../tasks/task-queries'
 import { loadTaskContext } from '../tasks/tasks.service'
 import { listOnCall, listShifts } from './roster.service'
 
@@ -14,7 +13,7 @@ export async function rosterCoverage(from: string, to: string): Promise<Coverage
   const [shifts, duties, rows, ctx] = await Promise.all([
     listShifts(from, to),
     listOnCall(from, to),
-    db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).andWhere("t.status NOT IN ('done', 'skipped', 'held')").getMany(),
+    tasksStillToDo(from, to),
     loadTaskContext(),
   ])
   return coverageWarnings({

@@ -1,13 +1,11 @@
 import { DateTime } from 'luxon'
-import { In, IsNull, MoreThan } from 'typeorm'
-import type { HandoverNote } from '#shared/schemas/roster'
-import { HandoverNoteInputSchema } from '#shared/schemas/roster'
+import type { HandoverNote, HandoverNoteInput } from '#shared/schemas/roster'
 import type { Person } from '#shared/schemas/person'
 import { db } from '../../db/data-source'
-import { AlertEntity } from '../completions/completion.entities'
+import { openUnacknowledgedAlerts } from '../completions/alert-reads'
 import { getFacility } from '../facility/facility.service'
-import { PersonEntity } from '../people/person.entity'
-import { TaskEntity } from '../tasks/task.entity'
+import { findPerson } from '../people/person-reads'
+import { flaggedSince, rechecksOf, taskRowsByIds, tasksBetween } from '../tasks/task-queries'
 import { toTask } from '../tasks/task.mapper'
 import { loadTaskContext } from '../tasks/tasks.service'
 import { HandoverNoteEntity } from './roster.entities'
@@ -25,16 +23,15 @@ export async function getOnCallSummary() {
   const now = new Date()
   const today = DateTime.now().setZone(facility.timeZone)
   const duty = await onCallAt(now)
-  const holder = duty ? await db().getRepository(PersonEntity).findOneBy({ id: duty.personId }) : null
+  const holder = duty ? await findPerson(duty.personId) : null
   const [next] = (await listOnCall(today.toISODate()!, today.plus({ days: 14 }).toISODate()!)).filter((d) => Date.parse(d.startsAt) > now.getTime())
   const weekend = weekendOf(today)
   const ctx = await loadTaskContext()
-  const repo = db().getRepository(TaskEntity)
-  const weekendTasks = await repo.createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', weekend).orderBy('t.dueAt', 'ASC').getMany()
-  const recentFlags = await repo.find({ where: { flag: In(['watch', 'critical']), completedAt: MoreThan(new Date(now.getTime() - 3 * 86_400_000)) }, order: { completedAt: 'DESC' } })
-  const rechecks = recentFlags.length ? await repo.find({ where: { recheckOfTaskId: In(recentFlags.map((f) => f.id)) } }) : []
-  const alerts = await db().getRepository(AlertEntity).find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull() }, order: { startedAt: 'DESC' }, take: 50 })
-  const alertTasks = alerts.length ? await repo.findBy({ id: In(alerts.map((a) => a.taskId)) }) : []
+  const weekendTasks = await tasksBetween(weekend.from, weekend.to)
+  const recentFlags = await flaggedSince(new Date(now.getTime() - 3 * 86_400_000))
+  const rechecks = await rechecksOf(recentFlags.map((f) => f.id))
+  const alerts = await openUnacknowledgedAlerts(50)
+  const alertTasks = await taskRowsByIds(alerts.map((a) => a.taskId))
   return {
     now: duty ? { ...duty, phone: holder?.phone ?? null, email: holder?.email ?? null } : null,
     next: next ?? null,
@@ -51,8 +48,7 @@ export async function listHandoverNotes(): Promise<HandoverNote[]> {
   return rows.map((r) => ({ id: r.id, personId: r.personId, personName: ctx.names.get(r.personId) ?? 'Unknown', text: r.text, createdAt: r.createdAt.toISOString() }))
 }
 
-export async function addHandoverNote(person: Person, input: unknown): Promise<HandoverNote> {
-  const { text } = HandoverNoteInputSchema.parse(input)
+export async function addHandoverNote(person: Person, { text }: HandoverNoteInput): Promise<HandoverNote> {
   const row = await db().getRepository(HandoverNoteEntity).save({ personId: person.id, text })
   return { id: row.id, personId: person.id, personName: person.name, text, createdAt: row.createdAt.toISOString() }
 }

@@ -1,9 +1,9 @@
 import { Router } from 'express'
 import { DateTime } from 'luxon'
-import { z } from 'zod'
-import { text } from '#shared/schemas/text'
 import { IdParamSchema } from '#shared/schemas/facility'
-import { RosterRangeQuerySchema } from '#shared/schemas/roster'
+import {
+  HandoverNoteInputSchema, OnCallInputSchema, RosterRangeQuerySchema, RotationInputSchema, ShiftInputSchema, ShiftPatchSchema, ShiftPatternInputSchema,
+} from '#shared/schemas/roster'
 import { recordChange } from '../../realtime/change-outbox'
 import { requireRole, signedIn } from '../auth/require-role'
 import { applyAssigneeRules } from './assignee-rules.service'
@@ -28,17 +28,18 @@ rosterRouter.get('/shifts', signedIn, async (req, res) => {
   res.json(await listShifts(from, to))
 })
 rosterRouter.post('/shifts', planners, async (req, res) => {
-  const shift = await createShift(req.body)
+  const shift = await createShift(ShiftInputSchema.parse(req.body))
   await afterRosterChange()
   res.status(201).json(shift)
 })
 rosterRouter.post('/shifts/pattern', planners, async (req, res) => {
-  const result = await applyShiftPattern(req.body)
+  const result = await applyShiftPattern(ShiftPatternInputSchema.parse(req.body))
   await afterRosterChange()
   res.status(201).json(result)
 })
 rosterRouter.patch('/shifts/:id', planners, async (req, res) => {
-  const shift = await updateShift(IdParamSchema.parse(req.params).id, req.body)
+  const { id } = IdParamSchema.parse(req.params)
+  const shift = await updateShift(id, ShiftPatchSchema.parse(req.body))
   await afterRosterChange()
   res.json(shift)
 })
@@ -53,12 +54,12 @@ rosterRouter.get('/on-call-duties', signedIn, async (req, res) => {
   res.json(await listOnCall(from, to))
 })
 rosterRouter.post('/on-call-duties', planners, async (req, res) => {
-  const duty = await createOnCall(req.body)
+  const duty = await createOnCall(OnCallInputSchema.parse(req.body))
   await afterRosterChange()
   res.status(201).json(duty)
 })
 rosterRouter.post('/on-call-duties/rotation', planners, async (req, res) => {
-  const result = await generateRotation(req.body)
+  const result = await generateRotation(RotationInputSchema.parse(req.body))
   await afterRosterChange()
   res.status(201).json(result)
 })
@@ -80,5 +81,5 @@ rosterRouter.get('/on-call', signedIn, async (_req, res) => {
   res.json(await getOnCallSummary())
 })
 rosterRouter.post('/on-call/notes', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
-  res.status(201).json(await addHandoverNote(req.user!, z.object({ text: text() }).parse(req.body)))
+  res.status(201).json(await addHandoverNote(req.user!, HandoverNoteInputSchema.parse(req.body)))
 })

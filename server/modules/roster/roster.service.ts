@@ -1,17 +1,15 @@
 import { DateTime } from 'luxon'
 import { Between, LessThan, MoreThan } from 'typeorm'
 import {
-  OnCallInputSchema, ShiftInputSchema, ShiftPatternInputSchema, WEEKDAYS,
-  type OnCallDuty, type Shift,
+  ShiftInputSchema, WEEKDAYS,
+  type OnCallDuty, type OnCallInput, type Shift, type ShiftInput, type ShiftPatch, type ShiftPatternInput,
 } from '#shared/schemas/roster'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
-import { PersonEntity } from '../people/person.entity'
+import { findPerson, personNames as names } from '../people/person-reads'
 import { OnCallEntity, ShiftEntity, type OnCallRow, type ShiftRow } from './roster.entities'
-
-const names = async () => new Map((await db().getRepository(PersonEntity).find({ select: { id: true, name: true } })).map((p) => [p.id, p.name]))
 
 const toShift = (row: ShiftRow, n: Map<number, string>): Shift => ({ ...row, personName: n.get(row.personId) ?? 'Unknown' })
 const toDuty = (row: OnCallRow, n: Map<number, string>): OnCallDuty => ({
@@ -26,24 +24,24 @@ export async function listShifts(from: string, to: string): Promise<Shift[]> {
 }
 
 async function assertPerson(personId: number) {
-  const person = await db().getRepository(PersonEntity).findOneBy({ id: personId })
+  const person = await findPerson(personId)
   if (!person || !person.active) throw validationError('Choose an active person.', { personId: ['Not an active person'] })
   return person
 }
 
-export async function createShift(input: unknown): Promise<Shift> {
-  const data = ShiftInputSchema.parse(input)
+export async function createShift(data: ShiftInput): Promise<Shift> {
   await assertPerson(data.personId)
   const row = await db().getRepository(ShiftEntity).save(data)
   await audit('shift', row.id, 'create', null, row)
   return toShift(row, await names())
 }
 
-export async function updateShift(id: number, input: unknown): Promise<Shift> {
+export async function updateShift(id: number, patch: ShiftPatch): Promise<Shift> {
   const repo = db().getRepository(ShiftEntity)
   const current = await repo.findOneBy({ id })
   if (!current) throw notFound('That shift')
-  const data = ShiftInputSchema.parse({ ...current, ...(input as object) })
+  // The changed fields were checked by the route; this checks the whole shift they make.
+  const data = ShiftInputSchema.parse({ ...current, ...patch })
   await assertPerson(data.personId)
   const saved = await repo.save({ ...current, ...data })
   await audit('shift', id, 'update', current, saved)
@@ -58,8 +56,7 @@ export async function deleteShift(id: number) {
 }
 
 /** A weekly pattern becomes shifts for each matching day; a day the person already works is left alone. */
-export async function applyShiftPattern(input: unknown): Promise<{ created: number; skipped: number }> {
-  const p = ShiftPatternInputSchema.parse(input)
+export async function applyShiftPattern(p: ShiftPatternInput): Promise<{ created: number; skipped: number }> {
   await assertPerson(p.personId)
   const repo = db().getRepository(ShiftEntity)
   const existing = new Set((await repo.find({ where: { personId: p.personId, date: Between(p.from, p.to) } })).map((s) => s.date))
@@ -89,8 +86,7 @@ export async function listOnCall(from: string, to: string): Promise<OnCallDuty[]
   return rows.map((r) => toDuty(r, n))
 }
 
-export async function createOnCall(input: unknown): Promise<OnCallDuty> {
-  const data = OnCallInputSchema.parse(input)
+export async function createOnCall(data: OnCallInput): Promise<OnCallDuty> {
   const person = await assertPerson(data.personId)
   if (!person.onCallEligible) throw validationError(`${person.name} is not set up to hold on-call duty.`, { personId: ['Not eligible for on-call'] })
   const row = await db().getRepository(OnCallEntity).save({ ...data, ...(await dutyInstants(data.fromDate, data.toDate)) })

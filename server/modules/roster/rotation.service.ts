@@ -1,10 +1,10 @@
 import { DateTime } from 'luxon'
 import { planRotation } from '#shared/roster/rotation'
-import { RotationInputSchema, type RotationResult } from '#shared/schemas/roster'
+import type { RotationInput, RotationResult } from '#shared/schemas/roster'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
-import { PersonEntity } from '../people/person.entity'
+import { findPeople } from '../people/person-reads'
 import { OnCallEntity } from './roster.entities'
 import { dutyInstants, listOnCall } from './roster.service'
 
@@ -13,11 +13,10 @@ import { dutyInstants, listOnCall } from './roster.service'
  * handover time, shared so that weekend counts differ by at most one. Existing duties in the
  * period are replaced.
  */
-export async function generateRotation(input: unknown): Promise<RotationResult> {
-  const data = RotationInputSchema.parse(input)
+export async function generateRotation(data: RotationInput): Promise<RotationResult> {
   const start = DateTime.fromISO(data.from)
   if (start.weekday !== 1) throw validationError('A rotation starts on a Monday.', { from: ['Choose a Monday'] })
-  const people = await db().getRepository(PersonEntity).findBy(data.personIds.map((id) => ({ id })))
+  const people = await findPeople(data.personIds)
   const refused = people.filter((p) => !p.active || !p.onCallEligible)
   if (people.length !== data.personIds.length || refused.length) {
     throw validationError('Everyone in a rotation must be active and eligible for on-call.', { personIds: refused.map((p) => `${p.name} cannot hold on-call duty`) })

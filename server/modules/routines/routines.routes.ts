@@ -1,5 +1,6 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
+import { RoutineInputSchema, UpdateRoutineInputSchema } from '#shared/schemas/routine'
 import { requireRole } from '../auth/require-role'
 import { createRoutine, deleteRoutine, getRoutine, listRoutines, updateRoutine } from './routines.service'
 
@@ -14,10 +15,11 @@ routinesRouter.get('/:id', readers, async (req, res) => {
   res.json(await getRoutine(IdParamSchema.parse(req.params).id))
 })
 routinesRouter.post('/', editors, async (req, res) => {
-  res.status(201).json(await createRoutine(req.body))
+  res.status(201).json(await createRoutine(RoutineInputSchema.parse(req.body)))
 })
 routinesRouter.put('/:id', editors, async (req, res) => {
-  res.json(await updateRoutine(IdParamSchema.parse(req.params).id, req.body))
+  const { id } = IdParamSchema.parse(req.params)
+  res.json(await updateRoutine(id, UpdateRoutineInputSchema.parse(req.body)))
 })
 routinesRouter.delete('/:id', requireRole('manager'), async (req, res) => {
   await deleteRoutine(IdParamSchema.parse(req.params).id)

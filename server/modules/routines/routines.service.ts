@@ -1,10 +1,10 @@
 import { plannableRuleProblem } from '#shared/schedule/plannable-rule'
-import { RoutineInputSchema, UpdateRoutineInputSchema, type Routine, type RoutineData } from '#shared/schemas/routine'
+import type { Routine, RoutineData, ParsedUpdateRoutineInput } from '#shared/schemas/routine'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
-import { ParameterEntity } from '../parameters/parameter.entities'
+import { listParameters } from '../parameters/parameters.service'
 import { materialise, rematerialiseRoutine, removeUntouchedFutureTasks } from '../tasks/materialiser'
 import { RoutineEntity, type RoutineRow } from './routine.entity'
 
@@ -31,13 +31,12 @@ export async function getRoutine(id: number): Promise<Routine> {
 async function checkRoutine(data: RoutineData) {
   const ruleError = plannableRuleProblem({ rrule: data.rrule, dtstart: data.dtstart, tzid: (await getFacility()).timeZone })
   if (ruleError) throw validationError(ruleError, { rrule: [ruleError] })
-  const known = new Set((await db().getRepository(ParameterEntity).find()).map((p) => p.key))
+  const known = new Set((await listParameters()).map((p) => p.key))
   const unknown = data.requiredReadings.filter((k) => !known.has(k))
   if (unknown.length) throw validationError(`Unknown reading: ${unknown.join(', ')}`, { requiredReadings: [`Unknown: ${unknown.join(', ')}`] })
 }
 
-export async function createRoutine(input: unknown): Promise<Routine> {
-  const data = RoutineInputSchema.parse(input)
+export async function createRoutine(data: RoutineData): Promise<Routine> {
   await checkRoutine(data)
   const saved = await repo().save(repo().create({ ...data, version: 1 }))
   await audit('routine', saved.id, 'create', null, toRoutine(saved))
@@ -45,8 +44,7 @@ export async function createRoutine(input: unknown): Promise<Routine> {
   return toRoutine(saved)
 }
 
-export async function updateRoutine(id: number, input: unknown): Promise<Routine> {
-  const { version, ...data } = UpdateRoutineInputSchema.parse(input)
+export async function updateRoutine(id: number, { version, ...data }: ParsedUpdateRoutineInput): Promise<Routine> {
   const current = await repo().findOneBy({ id })
   if (!current) throw notFound('That routine')
   if (current.version !== version) {

@@ -5,9 +5,10 @@ import type { Routine } from '#shared/schemas/routine'
 import { db } from '../../db/data-source'
 import { recordBulkTaskChange } from '../../realtime/change-outbox'
 import { logger } from '../../lib/logger'
+import { activePersonIds } from '../people/person-reads'
 import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
-import { RoutineEntity } from '../routines/routine.entity'
+import { notePlanningError, routinesToPlan } from '../routines/routine-planning'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
 
@@ -35,8 +36,7 @@ export interface MaterialiseOptions {
  */
 export async function materialise(opts: MaterialiseOptions = {}): Promise<{ created: number; routines: number }> {
   const [cat, activePeople] = await Promise.all([loadCatalogue(), activePersonIds()])
-  const repo = db().getRepository(RoutineEntity)
-  const routines = (opts.routineIds ? await repo.findBy(opts.routineIds.map((id) => ({ id }))) : await repo.find()).filter((r) => !r.paused)
+  const routines = await routinesToPlan(opts.routineIds)
   // From now on by default: earlier occurrences of a new rule would be born overdue.
   const from = opts.from ?? new Date()
   const until = new Date(from.getTime() + (opts.horizonDays ?? DEFAULT_HORIZON_DAYS) * 86_400_000)
@@ -47,12 +47,12 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     let rows: Array<Partial<TaskRow>> = []
     try {
       rows = planRoutineTasks(routine, cat, from, until, activePeople)
-      if (routine.planningError !== null) await repo.update(routine.id, { planningError: null })
+      if (routine.planningError !== null) await notePlanningError(routine.id, null)
     } catch (err) {
       // One broken routine (say, a date stored before dates were checked) must not stop the
       // planning of every routine after it: it is logged, marked for the routines page, and skipped.
       logger.error({ err, routineId: routine.id }, 'routine could not be planned')
-      await repo.update(routine.id, { planningError: planningErrorText(err) })
+      await notePlanningError(routine.id, planningErrorText(err))
     }
     for (const row of rows) {
       if (opts.tankId !== undefined && row.tankId !== opts.tankId) continue
@@ -80,11 +80,6 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     await recordBulkTaskChange('planned')
   }
   return { created, routines: routines.length }
-}
-
-async function activePersonIds(): Promise<Set<number>> {
-  const rows = (await db().query('SELECT id FROM people WHERE active = 1')) as Array<{ id: number }>
-  return new Set(rows.map((r) => r.id))
 }
 
 const planningErrorText = (err: unknown) => `Tasks could not be planned: ${err instanceof Error ? err.message : String(err)}`.slice(0, 500)

@@ -1,14 +1,14 @@
 import { DateTime } from 'luxon'
 import { Between, type EntityManager } from 'typeorm'
 import type { Person } from '#shared/schemas/person'
-import { MoveTaskInputSchema, type Task } from '#shared/schemas/task'
+import type { MoveTaskInput, Task } from '#shared/schemas/task'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { recordTaskChanges } from '../../realtime/change-outbox'
 import { getFacility } from '../facility/facility.service'
-import { PersonEntity } from '../people/person.entity'
-import { ShiftEntity } from '../roster/roster.entities'
+import { findPerson } from '../people/person-reads'
+import { isOnShift } from '../roster/shift-reads'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { getTask, getTaskRow } from './tasks.service'
 
@@ -19,8 +19,7 @@ const FINISHED = ['done', 'skipped']
  * checked here (role, the person on shift that day, the routine's neighbouring occurrences,
  * the version the board saw); a stale version answers 409 so the board refreshes that card.
  */
-export async function moveTask(taskId: number, actor: Person, input: unknown): Promise<Task> {
-  const data = MoveTaskInputSchema.parse(input)
+export async function moveTask(taskId: number, actor: Person, data: MoveTaskInput): Promise<Task> {
   if (actor.role !== 'manager' && actor.role !== 'supervisor') throw forbidden('Only supervisors and managers can assign or move tasks.')
   const task = await getTaskRow(taskId)
   if (task.version !== data.version) throw conflict('Someone changed this task a moment ago; the board has been refreshed.', { currentVersion: task.version })
@@ -52,10 +51,9 @@ export async function moveTask(taskId: number, actor: Person, input: unknown): P
 }
 
 async function assertOnShift(personId: number, date: string) {
-  const person = await db().getRepository(PersonEntity).findOneBy({ id: personId })
+  const person = await findPerson(personId)
   if (!person || !person.active) throw validationError('Choose an active person.', { assigneeId: ['Not an active person'] })
-  const onShift = await db().getRepository(ShiftEntity).countBy({ personId, date })
-  if (!onShift) throw conflict(`${person.name} is not on shift on ${date}. Add a shift on the roster first.`)
+  if (!(await isOnShift(personId, date))) throw conflict(`${person.name} is not on shift on ${date}. Add a shift on the roster first.`)
 }
 
 /** A routine task may move only between its neighbouring occurrences, and never into the past. */

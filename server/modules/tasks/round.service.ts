@@ -3,7 +3,7 @@ import { pickLimit } from '#shared/readings/band'
 import type { Person } from '#shared/schemas/person'
 import type { Round, RoundTask } from '#shared/schemas/round'
 import { db } from '../../db/data-source'
-import { LimitEntity, ParameterEntity } from '../parameters/parameter.entities'
+import { listLimits, listParameters } from '../parameters/parameters.service'
 import { rationsForDay } from './rations'
 import type { SelectQueryBuilder } from 'typeorm'
 import { TaskEntity, type TaskRow } from './task.entity'
@@ -34,7 +34,7 @@ async function roundFor(date: string | undefined, narrow: (qb: SelectQueryBuilde
   const qb = db().getRepository(TaskEntity).createQueryBuilder('t').where('t.localDate = :day', { day })
   narrow(qb)
   const rows = await qb.orderBy('t.dueAt', 'ASC').getMany()
-  const [parameters, limits] = await Promise.all([db().getRepository(ParameterEntity).find(), db().getRepository(LimitEntity).find()])
+  const [parameters, limits] = await Promise.all([listParameters(), listLimits()])
   const paramByKey = new Map(parameters.map((p) => [p.key, p]))
   const areas = [...ctx.cat.areas.values()].sort((a, b) => Number(a.quarantine) - Number(b.quarantine) || a.roundOrder - b.roundOrder)
   const areaRank = new Map(areas.map((a, i) => [a.id, i]))

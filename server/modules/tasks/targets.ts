@@ -1,8 +1,9 @@
-import type { Area, Batch, Equipment, Facility, System, Tank } from '#shared/schemas/facility'
+import type { Tank } from '#shared/schemas/facility'
 import type { Routine, TargetKind } from '#shared/schemas/routine'
-import { db } from '../../db/data-source'
-import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } from '../facility/facility.entities'
-import { getFacility } from '../facility/facility.service'
+import type { Catalogue } from '../facility/facility-catalogue'
+
+// The catalogue is the facility module's; planners here and elsewhere read it through this file too.
+export { loadCatalogue, type Catalogue } from '../facility/facility-catalogue'
 
 export interface Target {
   kind: Exclude<TargetKind, 'area_tanks'>
@@ -11,30 +12,6 @@ export interface Target {
   tankId: number | null
   areaId: number | null
   label: string
-}
-
-export interface Catalogue {
-  facility: Facility
-  areas: Map<number, Area>
-  systems: Map<number, System>
-  tanks: Map<number, Tank>
-  equipment: Map<number, Equipment>
-  batches: Map<number, Batch>
-}
-
-const byId = <T extends { id: number }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]))
-
-/** The facility's structure in memory: small enough to load whole, and it saves joins. */
-export async function loadCatalogue(): Promise<Catalogue> {
-  const [facility, areas, systems, tanks, equipment, batches] = await Promise.all([
-    getFacility(),
-    db().getRepository(AreaEntity).find(),
-    db().getRepository(SystemEntity).find(),
-    db().getRepository(TankEntity).find(),
-    db().getRepository(EquipmentEntity).find(),
-    db().getRepository(BatchEntity).find(),
-  ])
-  return { facility, areas: byId(areas), systems: byId(systems), tanks: byId(tanks), equipment: byId(equipment), batches: byId(batches) }
 }
 
 const tankTarget = (t: Tank): Target => ({ kind: 'tank', id: t.id, tankId: t.id, areaId: t.areaId, label: `${t.code} · ${t.name}` })

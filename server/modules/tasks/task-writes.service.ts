@@ -1,5 +1,6 @@
 import { In, Not } from 'typeorm'
 import { db } from '../../db/data-source'
+import type { TaskStatus } from '#shared/schemas/task'
 import { recordBulkTaskChange, recordTaskChanges } from '../../realtime/change-outbox'
 import { TaskEntity, type TaskRow } from './task.entity'
 
@@ -111,4 +112,63 @@ export async function releaseFeeds({ tankIds, reason }: FeedWindow, after: Date)
     .execute()
   if (result.affected) await recordBulkTaskChange('fasting')
   return result.affected ?? 0
+}
+
+interface StatusStep {
+  to: TaskStatus
+  from: TaskStatus[]
+  column: 'windowStartAt' | 'dueAt' | 'graceUntil'
+}
+
+// planned → open when the window opens; → overdue at the due time; → missed after the grace.
+// Held (fasting), done and skipped tasks never move. Latest step first, so a task whose grace
+// passed while the server was away goes straight to missed.
+const STATUS_STEPS: StatusStep[] = [
+  { to: 'missed', from: ['planned', 'open', 'overdue'], column: 'graceUntil' },
+  { to: 'overdue', from: ['planned', 'open'], column: 'dueAt' },
+  { to: 'open', from: ['planned'], column: 'windowStartAt' },
+]
+
+/**
+ * The status clock's moves: every task whose time has come takes its next status (one read and
+ * one update per step), and the changes go to the outbox once. Answers what moved and what went
+ * missed, for the clock's alerts.
+ */
+export async function advanceDueTasks(now: Date): Promise<{ changed: number[]; missed: number[] }> {
+  const changed: number[] = []
+  const missed: number[] = []
+  for (const step of STATUS_STEPS) {
+    const due = await tasks()
+      .createQueryBuilder('t')
+      .select('t.id', 'id')
+      .where(`t.${step.column} <= :now`, { now })
+      .andWhere('t.status IN (:...from)', { from: step.from })
+      .getRawMany<{ id: number }>()
+    if (!due.length) continue
+    const ids = due.map((d) => Number(d.id))
+    await tasks().createQueryBuilder().update().set({ status: step.to, version: () => 'version + 1' }).where({ id: In(ids), status: In(step.from) }).execute()
+    changed.push(...ids)
+    if (step.to === 'missed') missed.push(...ids)
+  }
+  await recordTaskChanges(changed)
+  return { changed, missed }
+}
+
+/**
+ * Sets the assignee a routine's rule chose (task id → person or nobody), one statement per
+ * person and 1,000 tasks; a task a supervisor assigned by hand meanwhile keeps its person.
+ */
+export async function assignByRule(assignments: ReadonlyMap<number, number | null>): Promise<void> {
+  const byAssignee = new Map<number | null, number[]>()
+  for (const [id, assigneeId] of assignments) {
+    const ids = byAssignee.get(assigneeId) ?? []
+    ids.push(id)
+    byAssignee.set(assigneeId, ids)
+  }
+  for (const [assigneeId, ids] of byAssignee) {
+    for (let i = 0; i < ids.length; i += 1000) {
+      await tasks().update({ id: In(ids.slice(i, i + 1000)), assignedManually: false }, { assigneeId, version: () => 'version + 1' })
+    }
+  }
+  await recordTaskChanges([...assignments.keys()], 'assignees')
 }

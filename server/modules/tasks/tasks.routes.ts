@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RoundQuerySchema } from '#shared/schemas/round'
-import { BulkMoveInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
+import { BulkMoveInputSchema, CreateTaskInputSchema, MoveTaskInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
 import { z } from 'zod'
 import { calendarDate } from '#shared/schemas/calendar'
 import { AppError, forbidden } from '../../lib/errors'
@@ -51,11 +51,12 @@ tasksRouter.post('/bulk-move', requireRole('manager', 'supervisor'), async (req,
   res.json({ moved, refused })
 })
 tasksRouter.patch('/:id', requireRole('manager', 'supervisor'), async (req, res) => {
-  res.json(await moveTask(IdParamSchema.parse(req.params).id, req.user!, req.body))
+  const { id } = IdParamSchema.parse(req.params)
+  res.json(await moveTask(id, req.user!, MoveTaskInputSchema.parse(req.body)))
 })
 tasksRouter.get('/:id', signedIn, async (req, res) => {
   res.json(await getTask(IdParamSchema.parse(req.params).id))
 })
 tasksRouter.post('/', requireRole('manager', 'supervisor'), async (req, res) => {
-  res.status(201).json(await createOneOffTask(req.body))
+  res.status(201).json(await createOneOffTask(CreateTaskInputSchema.parse(req.body)))
 })

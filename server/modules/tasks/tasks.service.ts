@@ -1,10 +1,10 @@
 import { DateTime } from 'luxon'
 import { In } from 'typeorm'
-import { CreateTaskInputSchema, type Task, type TaskListQuery } from '#shared/schemas/task'
+import type { ParsedCreateTaskInput, Task, TaskListQuery } from '#shared/schemas/task'
 import { db } from '../../db/data-source'
 import { notFound, validationError } from '../../lib/errors'
 import { recordTaskChanges } from '../../realtime/change-outbox'
-import { PersonEntity } from '../people/person.entity'
+import { personNames } from '../people/person-reads'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { toTask, type TaskContext } from './task.mapper'
 import { loadCatalogue, resolveTargets } from './targets'
@@ -12,8 +12,8 @@ import { loadCatalogue, resolveTargets } from './targets'
 const repo = () => db().getRepository(TaskEntity)
 
 export async function loadTaskContext(): Promise<TaskContext> {
-  const [cat, people] = await Promise.all([loadCatalogue(), db().getRepository(PersonEntity).find({ select: { id: true, name: true } })])
-  return { cat, names: new Map(people.map((p) => [p.id, p.name])) }
+  const [cat, names] = await Promise.all([loadCatalogue(), personNames()])
+  return { cat, names }
 }
 
 export async function listTasks(query: TaskListQuery): Promise<Task[]> {
@@ -51,8 +51,7 @@ export async function getTasks(ids: readonly number[]): Promise<Task[]> {
 }
 
 /** A one-off task, outside any routine (e.g. "check the spare pump today"). */
-export async function createOneOffTask(input: unknown): Promise<Task> {
-  const data = CreateTaskInputSchema.parse(input)
+export async function createOneOffTask(data: ParsedCreateTaskInput): Promise<Task> {
   const ctx = await loadTaskContext()
   const zone = ctx.cat.facility.timeZone
   const local = DateTime.fromISO(data.localStart, { zone })

@@ -1,0 +1,24 @@
+import { In } from 'typeorm'
+import { db } from '../../db/data-source'
+import { PersonEntity, type PersonRow } from './person.entity'
+
+/** Reads of people other modules need (roster checks, names on cards), so they never query the entity. */
+const people = () => db().getRepository(PersonEntity)
+
+export type { PersonRow }
+
+/** The person with this id, active or not, or null. */
+export const findPerson = (id: number): Promise<PersonRow | null> => people().findOneBy({ id })
+
+/** The people with these ids that exist. */
+export const findPeople = (ids: number[]): Promise<PersonRow[]> => (ids.length ? people().findBy({ id: In(ids) }) : Promise.resolve([]))
+
+/** The ids of everyone still active (a routine's named person who left assigns nobody). */
+export async function activePersonIds(): Promise<Set<number>> {
+  return new Set((await people().find({ select: { id: true }, where: { active: true } })).map((p) => p.id))
+}
+
+/** Everyone's name by id, former staff too (old records still name them). */
+export async function personNames(): Promise<Map<number, string>> {
+  return new Map((await people().find({ select: { id: true, name: true } })).map((p) => [p.id, p.name]))
+}
