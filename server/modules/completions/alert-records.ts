@@ -27,3 +27,7 @@ export async function acknowledgeOpenAlert(id: number, personId: number, at: Dat
   const result = await alerts().update({ id, acknowledgedAt: IsNull() }, { acknowledgedAt: at, acknowledgedById: personId })
   return !!result.affected
 }
+
+/** Alerts nobody has acknowledged or closed yet, latest first (the on-call summary). */
+export const openUnacknowledgedAlerts = (limit: number): Promise<AlertRow[]> =>
+  alerts().find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull() }, order: { startedAt: 'DESC' }, take: limit })

@@ -4,7 +4,7 @@ import type { AppConfig } from '../../lib/config'
 import { alertsOfTasks } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
 import { listContacts } from '../people/contact.service'
-import { taskRowsBetween } from '../tasks/task-lookups'
+import { tasksBetween } from '../tasks/task-queries'
 import { loadCatalogue, targetLabel } from '../tasks/targets'
 import { DigestEntity } from './escalation.entities'
 import type { Transport } from './deliver'
@@ -23,7 +23,7 @@ export async function sendDailyDigestIfDue(config: AppConfig, transport: Transpo
   const claimed = (await db().query(sql, params)) as { affectedRows?: number }
   if (!claimed.affectedRows) return false
   const yesterday = local.minus({ days: 1 }).toISODate()!
-  const tasks = await taskRowsBetween(yesterday, yesterday)
+  const tasks = await tasksBetween(yesterday, yesterday)
   const missed = tasks.filter((t) => t.status === 'missed')
   const flagged = tasks.filter((t) => t.flag)
   const late = tasks.filter((t) => t.status === 'done' && t.lateMinutes)

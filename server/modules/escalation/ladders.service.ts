@@ -5,8 +5,8 @@ import { notFound } from '../../lib/errors'
 import type { AlertRow } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
 import { listParameters } from '../parameters/parameters.service'
-import { routineLadderId } from '../routines/routine-lookups'
-import type { TaskRow } from '../tasks/task-lookups'
+import { routineLadderId } from '../routines/routine-planning'
+import type { TaskRow } from '../tasks/task-queries'
 import { LadderEntity } from './escalation.entities'
 
 /** Used when the facility has not chosen ladders yet (common practice: assignee, then on call, then managers). */

@@ -1,5 +1,5 @@
 import type { AlertRow } from '../completions/alert-records'
-import type { TaskRow } from '../tasks/task-lookups'
+import type { TaskRow } from '../tasks/task-queries'
 
 export interface MessageInput {
   alert: AlertRow

@@ -2,7 +2,7 @@ import { DateTime } from 'luxon'
 import type { Recipient } from '#shared/schemas/ladder'
 import { listContacts, type Contact } from '../people/contact.service'
 import { listShifts, onCallAt } from '../roster/roster.service'
-import type { TaskRow } from '../tasks/task-lookups'
+import type { TaskRow } from '../tasks/task-queries'
 
 const minutes = (hhmm: string) => Number(hhmm.slice(0, 2)) * 60 + Number(hhmm.slice(3, 5))
 

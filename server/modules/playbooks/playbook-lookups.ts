@@ -1,8 +1,8 @@
-import { In } from 'typeorm'
+import { In, Not } from 'typeorm'
 import { db } from '../../db/data-source'
 import { BatchRecordEntity, EventEntity, type BatchRecordRow, type EventRow } from './playbook.entities'
 
-// What the tank page reads of events and batch records; the report module never touches the entities (record 13b).
+// What other modules read of events and batch records (the tank page, the calendar); they never touch the entities (record 13b).
 
 /** The latest records of these batches, newest first. */
 export const latestBatchRecords = async (batchIds: readonly number[], take: number): Promise<BatchRecordRow[]> =>
@@ -11,3 +11,6 @@ export const latestBatchRecords = async (batchIds: readonly number[], take: numb
 /** The events among the latest `scanned` (by start, newest first) that involve this tank. */
 export const latestEventsOfTank = async (tankId: number, scanned: number): Promise<EventRow[]> =>
   (await db().getRepository(EventEntity).find({ order: { startsAt: 'DESC' }, take: scanned })).filter((e) => e.tankIds.includes(tankId))
+
+/** Events that still stand (planned or ended, not cancelled), for the calendar. */
+export const eventsNotCancelled = () => db().getRepository(EventEntity).find({ where: { status: Not('cancelled') } })

@@ -2,14 +2,14 @@ import { complianceRows } from '#shared/reports/compliance'
 import type { ComplianceRow, ResponseRow, WelfareRow } from '#shared/schemas/report'
 import { alertsOfTasks } from '../completions/alert-records'
 import { readingsOfTasks } from '../completions/reading-lookups'
-import { flaggedOrMissedBetween, rechecksOfTasks, taskRowsBetween, welfareChecksBetween, type TaskRow } from '../tasks/task-lookups'
+import { flaggedOrMissedBetween, rechecksOf, tasksBetween, welfareChecksBetween, type TaskRow } from '../tasks/task-queries'
 import { loadTaskContext } from '../tasks/tasks.service'
 import { targetLabel } from '../tasks/targets'
 
 export type GroupBy = 'category' | 'area' | 'person'
 
 export async function complianceReport(from: string, to: string, by: GroupBy, period: 'day' | 'week'): Promise<ComplianceRow[]> {
-  const rows = await taskRowsBetween(from, to)
+  const rows = await tasksBetween(from, to)
   const ctx = await loadTaskContext()
   const groupOf = (t: TaskRow) =>
     by === 'category' ? t.category : by === 'area' ? (ctx.cat.areas.get(t.areaId ?? -1)?.name ?? 'No area') : (ctx.names.get(t.completedById ?? t.assigneeId ?? -1) ?? 'Unassigned')
@@ -21,7 +21,7 @@ export async function responseReport(from: string, to: string): Promise<Response
   const tasks = await flaggedOrMissedBetween(from, to)
   if (!tasks.length) return []
   const ids = tasks.map((t) => t.id)
-  const [alerts, rechecks, ctx] = await Promise.all([alertsOfTasks(ids), rechecksOfTasks(ids), loadTaskContext()])
+  const [alerts, rechecks, ctx] = await Promise.all([alertsOfTasks(ids), rechecksOf(ids), loadTaskContext()])
   const minutesBetween = (a: Date | null | undefined, b: Date | null | undefined) => (a && b ? Math.round((b.getTime() - a.getTime()) / 60_000) : null)
   return tasks.map((t) => {
     const alert = alerts.find((a) => a.taskId === t.id)

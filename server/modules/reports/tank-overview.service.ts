@@ -4,7 +4,7 @@ import { notFound } from '../../lib/errors'
 import { currentReadingsAt, type ReadingRow } from '../completions/reading-lookups'
 import { listLimits, listParameters } from '../parameters/parameters.service'
 import { latestBatchRecords, latestEventsOfTank } from '../playbooks/playbook-lookups'
-import { latestTasksOfTank } from '../tasks/task-lookups'
+import { latestTasksOfTank } from '../tasks/task-queries'
 import { toTask } from '../tasks/task.mapper'
 import { loadTaskContext } from '../tasks/tasks.service'
 

@@ -1,7 +1,7 @@
 import { DateTime } from 'luxon'
 import type { CalendarDay } from '#shared/schemas/board'
 import { getFacility } from '../facility/facility.service'
-import { eventsNotCancelled } from '../playbooks/event-reads'
+import { eventsNotCancelled } from '../playbooks/playbook-lookups'
 import { taskCountsByDay } from '../tasks/task-queries'
 import { listOnCall, listShifts } from './roster.service'
 

@@ -4,8 +4,9 @@ import { db } from '../../db/data-source'
 import { RoutineEntity } from './routine.entity'
 
 /**
- * What the task planner and the assignee rules read from routines, and the one thing the planner
- * writes back (why a routine could not be planned), so they never touch the routine entity.
+ * What other modules read from routines (the planner, the assignee rules, escalation's ladder), and
+ * the one thing the planner writes back (why a routine could not be planned), so they never touch
+ * the routine entity.
  */
 const routines = () => db().getRepository(RoutineEntity)
 
@@ -25,4 +26,9 @@ export async function assigneeRulesOf(ids: number[]): Promise<Map<number, Assign
   if (!ids.length) return new Map()
   const rows = await routines().find({ select: { id: true, assigneeRule: true }, where: { id: In(ids) } })
   return new Map(rows.map((r) => [r.id, r.assigneeRule]))
+}
+
+/** The ladder a routine's missed tasks climb, or null (none chosen, or the routine is gone). */
+export async function routineLadderId(routineId: number): Promise<number | null> {
+  return (await routines().findOneBy({ id: routineId }))?.ladderId ?? null
 }

@@ -3,9 +3,11 @@ import { db } from '../../db/data-source'
 import { TaskEntity, type TaskRow } from './task.entity'
 
 /**
- * Reads of task rows that other modules (roster, the status clock) need, so they never query
- * the entity themselves; the rows come back as `TaskRow`, which task-writes.service exports.
+ * Reads of task rows that other modules (roster, escalation, reports, the status clock) need, so
+ * they never query the entity themselves (record 13b).
  */
+export type { TaskRow }
+
 const tasks = () => db().getRepository(TaskEntity)
 
 /** Tasks a routine's assignee rule may (re)assign between two facility dates: not assigned by hand, not finished or held. */
@@ -40,10 +42,31 @@ export const flaggedSince = (since: Date): Promise<TaskRow[]> =>
   tasks().find({ where: { flag: In(['watch', 'critical']), completedAt: MoreThan(since) }, order: { completedAt: 'DESC' } })
 
 /** The rechecks raised after these tasks. */
-export const rechecksOf = (taskIds: number[]): Promise<TaskRow[]> => (taskIds.length ? tasks().find({ where: { recheckOfTaskId: In(taskIds) } }) : Promise.resolve([]))
+export const rechecksOf = (taskIds: readonly number[]): Promise<TaskRow[]> =>
+  taskIds.length ? tasks().find({ where: { recheckOfTaskId: In([...taskIds]) } }) : Promise.resolve([])
 
 /** These tasks' rows; ids that no longer exist are left out. */
-export const taskRowsByIds = (ids: number[]): Promise<TaskRow[]> => (ids.length ? tasks().findBy({ id: In(ids) }) : Promise.resolve([]))
+export const taskRowsByIds = (ids: readonly number[]): Promise<TaskRow[]> => (ids.length ? tasks().findBy({ id: In([...ids]) }) : Promise.resolve([]))
 
 /** The welfare-critical tasks among these. */
 export const welfareCriticalAmong = (ids: number[]): Promise<TaskRow[]> => (ids.length ? tasks().findBy({ id: In(ids), priority: 'welfare_critical' }) : Promise.resolve([]))
+
+export const findTaskRow = (id: number): Promise<TaskRow | null> => tasks().findOneBy({ id })
+
+/** The tasks of facility days from–to that were flagged or missed (what a response report is about). */
+export const flaggedOrMissedBetween = (from: string, to: string): Promise<TaskRow[]> =>
+  tasks()
+    .createQueryBuilder('t')
+    .where('t.localDate BETWEEN :from AND :to', { from, to })
+    .andWhere('(t.flag IS NOT NULL OR t.status = :missed)', { missed: 'missed' })
+    .getMany()
+
+/** Welfare and quarantine checks of facility days from–to, of these tanks (all when none named), by due time. */
+export function welfareChecksBetween(from: string, to: string, tankIds: number[]): Promise<TaskRow[]> {
+  const qb = tasks().createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).andWhere('t.category IN (:...cats)', { cats: ['welfare', 'quarantine'] })
+  if (tankIds.length) qb.andWhere('t.tankId IN (:...tankIds)', { tankIds })
+  return qb.orderBy('t.dueAt', 'ASC').getMany()
+}
+
+/** A tank's latest tasks, newest due first. */
+export const latestTasksOfTank = (tankId: number, take: number): Promise<TaskRow[]> => tasks().find({ where: { tankId }, order: { dueAt: 'DESC' }, take })
