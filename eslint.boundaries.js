@@ -4,7 +4,9 @@ import { createNodeResolver, importX } from 'eslint-plugin-import-x'
 
 const folders = (dir) => {
   try {
-    return readdirSync(dir, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name)
+    return readdirSync(dir, { withFileTypes: true })
+      .filter((d) => d.isDirectory())
+      .map((d) => d.name)
   } catch {
     return []
   }
@@ -25,7 +27,10 @@ const ENTITY_FILES = /\.entit(y|ies)\.ts$/
 /** A module reaches another module through its service API, never its entities (`*.entity.ts`, `*.entities.ts`). */
 function moduleZones(root) {
   const modules = folders(join(root, 'server/modules'))
-  const entitiesOf = (name) => readdirSync(join(root, 'server/modules', name)).filter((f) => ENTITY_FILES.test(f)).map((f) => `server/modules/${name}/${f}`)
+  const entitiesOf = (name) =>
+    readdirSync(join(root, 'server/modules', name))
+      .filter((f) => ENTITY_FILES.test(f))
+      .map((f) => `server/modules/${name}/${f}`)
   return modules.flatMap((name) =>
     modules
       .filter((other) => other !== name)
@@ -54,7 +59,11 @@ export function boundaryConfig({ root, allowedEntityImports = {} }) {
     ...moduleZones(root),
     { target: 'shared', from: ['src', 'server'], message: 'shared/ is imported by both sides and imports neither.' },
     { target: 'src', from: 'server', message: 'The client never imports the server.' },
-    { target: ['src/api', 'src/lib', 'src/components'], from: ['src/features', 'src/app'], message: 'Shared client layers sit below the features and the app.' },
+    {
+      target: ['src/api', 'src/lib', 'src/components'],
+      from: ['src/features', 'src/app'],
+      message: 'Shared client layers sit below the features and the app.',
+    },
   ]
   const restrict = (list) => ['error', { basePath: root, zones: list }]
   // The rule knows no per-file exception: an allowed importer gets the same zones minus its allowed entity files.

@@ -31,7 +31,11 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: [{ group: ['react', 'express', 'typeorm', '**/src/**', '**/server/**', '#server/*'], message: 'shared/ stays free of client, server and ORM code.' }] },
+        {
+          patterns: [
+            { group: ['react', 'express', 'typeorm', '**/src/**', '**/server/**', '#server/*'], message: 'shared/ stays free of client, server and ORM code.' },
+          ],
+        },
       ],
     },
   },
@@ -42,7 +46,10 @@ export default tseslint.config(
     rules: {
       'no-restricted-syntax': [
         'error',
-        { selector: "CallExpression[callee.object.name='z'][callee.property.name='string']", message: 'Declare strings with text() from shared/schemas/text.ts: it refuses malformed Unicode with a 400.' },
+        {
+          selector: "CallExpression[callee.object.name='z'][callee.property.name='string']",
+          message: 'Declare strings with text() from shared/schemas/text.ts: it refuses malformed Unicode with a 400.',
+        },
       ],
     },
   },

@@ -27,22 +27,37 @@ export function generator(seed: number) {
 function fakeValue(key: string, r: ReturnType<typeof generator>, salinity: number): number {
   const round = (v: number, d: number) => Math.round(v * 10 ** d) / 10 ** d
   switch (key) {
-    case 'temp_c': return round(r.around(28.6, 0.9), 1)
-    case 'do_mgL': return round(r.next() < 0.03 ? r.around(4.4, 0.6) : r.around(6.9, 0.9), 1)
+    case 'temp_c':
+      return round(r.around(28.6, 0.9), 1)
+    case 'do_mgL':
+      return round(r.next() < 0.03 ? r.around(4.4, 0.6) : r.around(6.9, 0.9), 1)
     // About one check in twenty finds a dead fish: the round's deaths go on the stock register too.
-    case 'mortalities': return r.next() < 0.85 ? 0 : r.next() < 0.3 ? 1 + Math.floor(r.next() * 2) : 0
-    case 'behaviour_score': return r.next() < 0.9 ? 0 : 1
-    case 'feed_g': return round(r.around(120, 40), 0)
-    case 'uneaten_feed_g': return round(r.around(3, 2) + 2, 1)
-    case 'salinity': return round(r.around(salinity, 0.8), 1)
-    case 'tan_mgL': return round(Math.max(0.05, r.around(0.35, 0.3)), 2)
-    case 'no2_mgL': return round(Math.max(0.02, r.around(0.18, 0.15)), 2)
-    case 'ph': return round(r.around(7.6, 0.2), 2)
-    case 'no3_mgL': return round(r.around(45, 15), 0)
-    case 'alkalinity_mgL': return round(r.around(150, 30), 0)
-    case 'co2_mgL': return round(r.around(10, 4), 1)
-    case 'cylinder_bar': return round(r.around(150, 40), 0)
-    default: return 0
+    case 'mortalities':
+      return r.next() < 0.85 ? 0 : r.next() < 0.3 ? 1 + Math.floor(r.next() * 2) : 0
+    case 'behaviour_score':
+      return r.next() < 0.9 ? 0 : 1
+    case 'feed_g':
+      return round(r.around(120, 40), 0)
+    case 'uneaten_feed_g':
+      return round(r.around(3, 2) + 2, 1)
+    case 'salinity':
+      return round(r.around(salinity, 0.8), 1)
+    case 'tan_mgL':
+      return round(Math.max(0.05, r.around(0.35, 0.3)), 2)
+    case 'no2_mgL':
+      return round(Math.max(0.02, r.around(0.18, 0.15)), 2)
+    case 'ph':
+      return round(r.around(7.6, 0.2), 2)
+    case 'no3_mgL':
+      return round(r.around(45, 15), 0)
+    case 'alkalinity_mgL':
+      return round(r.around(150, 30), 0)
+    case 'co2_mgL':
+      return round(r.around(10, 4), 1)
+    case 'cylinder_bar':
+      return round(r.around(150, 40), 0)
+    default:
+      return 0
   }
 }
 
@@ -58,7 +73,9 @@ export async function seedHistory(days: number, zone: string): Promise<number> {
   const [cat, parameters, limits] = await Promise.all([loadCatalogue(), db().getRepository(ParameterEntity).find(), db().getRepository(LimitEntity).find()])
   const units = new Map(parameters.map((p) => [p.key, p.unit]))
   const fallbackDoer = (await db().query("SELECT id FROM people WHERE role = 'technician' ORDER BY id LIMIT 1"))[0]?.id as number
-  const tasks = await db().getRepository(TaskEntity).find({ where: { dueAt: LessThan(cutoff), status: In(['planned', 'open', 'overdue']) } })
+  const tasks = await db()
+    .getRepository(TaskEntity)
+    .find({ where: { dueAt: LessThan(cutoff), status: In(['planned', 'open', 'overdue']) } })
   const past = tasks.filter((t) => t.dueAt >= start.toJSDate())
   const completions: Array<Partial<CompletionRow>> = []
   const readings: Array<Record<string, unknown>> = []
@@ -71,7 +88,18 @@ export async function seedHistory(days: number, zone: string): Promise<number> {
     const person = task.assigneeId ?? fallbackDoer
     if (roll < 0.04) {
       const id = randomUUID()
-      completions.push({ id, taskId: task.id, personId: person, outcome: 'skipped', skipReason: 'equipment_fault', note: 'Handheld meter flat; read at the next check', doneAt: task.dueAt, lateMinutes: null, enteredById: null, response: null })
+      completions.push({
+        id,
+        taskId: task.id,
+        personId: person,
+        outcome: 'skipped',
+        skipReason: 'equipment_fault',
+        note: 'Handheld meter flat; read at the next check',
+        doneAt: task.dueAt,
+        lateMinutes: null,
+        enteredById: null,
+        response: null,
+      })
       await db().getRepository(TaskEntity).update(task.id, { status: 'skipped', completedAt: task.dueAt, completedById: person })
       continue
     }
@@ -85,16 +113,52 @@ export async function seedHistory(days: number, zone: string): Promise<number> {
     const derived = deriveReadings(values, salinity).values
     const bands: Band[] = []
     const id = randomUUID()
-    for (const [key, value, isDerived] of [...Object.entries(values).map(([k, v]) => [k, v, false] as const), ...Object.entries(derived).map(([k, v]) => [k, v, true] as const)]) {
+    for (const [key, value, isDerived] of [
+      ...Object.entries(values).map(([k, v]) => [k, v, false] as const),
+      ...Object.entries(derived).map(([k, v]) => [k, v, true] as const),
+    ]) {
       const band = bandFor(value, pickLimit(limits, key, where))
       bands.push(band)
-      readings.push({ completionId: id, taskId: task.id, tankId: tank?.id ?? null, systemId, parameterKey: key, value, unit: units.get(key) ?? '', band, derived: isDerived, takenAt: doneAt, personId: person, supersededAt: null, amendmentId: null })
+      readings.push({
+        completionId: id,
+        taskId: task.id,
+        tankId: tank?.id ?? null,
+        systemId,
+        parameterKey: key,
+        value,
+        unit: units.get(key) ?? '',
+        band,
+        derived: isDerived,
+        takenAt: doneAt,
+        personId: person,
+        supersededAt: null,
+        amendmentId: null,
+      })
     }
     const flag = worstBand(bands)
-    completions.push({ id, taskId: task.id, personId: person, outcome: 'done', skipReason: null, note: null, doneAt, lateMinutes: late, enteredById: null, response: null })
-    await db().getRepository(TaskEntity).update(task.id, { status: 'done', completedAt: doneAt, completedById: person, lateMinutes: late, flag: flag === 'ok' ? null : flag, assigneeId: person })
+    completions.push({
+      id,
+      taskId: task.id,
+      personId: person,
+      outcome: 'done',
+      skipReason: null,
+      note: null,
+      doneAt,
+      lateMinutes: late,
+      enteredById: null,
+      response: null,
+    })
+    await db()
+      .getRepository(TaskEntity)
+      .update(task.id, { status: 'done', completedAt: doneAt, completedById: person, lateMinutes: late, flag: flag === 'ok' ? null : flag, assigneeId: person })
   }
-  for (let i = 0; i < completions.length; i += 500) await db().getRepository(CompletionEntity).insert(completions.slice(i, i + 500) as never)
-  for (let i = 0; i < readings.length; i += 1000) await db().getRepository(ReadingEntity).insert(readings.slice(i, i + 1000) as never)
+  for (let i = 0; i < completions.length; i += 500)
+    await db()
+      .getRepository(CompletionEntity)
+      .insert(completions.slice(i, i + 500) as never)
+  for (let i = 0; i < readings.length; i += 1000)
+    await db()
+      .getRepository(ReadingEntity)
+      .insert(readings.slice(i, i + 1000) as never)
   return completions.length
 }

@@ -12,4 +12,9 @@ export const DEMO_SHIFT_PATTERNS: Pattern[] = [
   { email: 'ana.lutui@brackenwater.example', weekdays: ['SA', 'SU'], start: '07:00', end: '15:00', kind: 'weekend' },
 ]
 
-export const DEMO_ON_CALL = ['tomas.ferreira@brackenwater.example', 'priya.nandakumar@brackenwater.example', 'josh.kettering@brackenwater.example', 'maren.holloway@brackenwater.example']
+export const DEMO_ON_CALL = [
+  'tomas.ferreira@brackenwater.example',
+  'priya.nandakumar@brackenwater.example',
+  'josh.kettering@brackenwater.example',
+  'maren.holloway@brackenwater.example',
+]

@@ -16,7 +16,24 @@ interface Ids {
   manager: number
 }
 
-const blank = { fromTankId: null, toTankId: null, meanWeightG: null, origin: null, permitRef: null, healthCertificateRef: null, transportWater: null, destination: null, reason: null, cause: null, causeText: null, necropsy: false, correctsId: null, completionId: null, sourceKey: null, note: null }
+const blank = {
+  fromTankId: null,
+  toTankId: null,
+  meanWeightG: null,
+  origin: null,
+  permitRef: null,
+  healthCertificateRef: null,
+  transportWater: null,
+  destination: null,
+  reason: null,
+  cause: null,
+  causeText: null,
+  necropsy: false,
+  correctsId: null,
+  completionId: null,
+  sourceKey: null,
+  note: null,
+}
 
 /** The fish of the batch holding most in a tank, as the round's mortality field picks it. */
 function largestHolder(onHand: Map<string, number>, tankId: number) {
@@ -37,11 +54,16 @@ export async function seedStock(zone: string, ids: Ids): Promise<number> {
     return today.minus({ days: m.daysAgo }).set({ hour, minute }).toJSDate()
   }
   const tank = (code: string | undefined) => (code ? ids.tanks.get(code)! : null)
-  const planned: Array<{ at: Date; story?: StoryMovement; round?: { completionId: string; tankId: number; dead: number; personId: number } }> = DEMO_STOCK_STORY.map((story) => ({ at: when(story), story }))
+  const planned: Array<{ at: Date; story?: StoryMovement; round?: { completionId: string; tankId: number; dead: number; personId: number } }> =
+    DEMO_STOCK_STORY.map((story) => ({ at: when(story), story }))
   const roundDeaths: Array<{ completionId: string; tankId: number; value: number; takenAt: Date; personId: number }> = await db().query(
     "SELECT completionId, tankId, value, takenAt, personId FROM readings WHERE parameterKey = 'mortalities' AND value > 0 AND tankId IS NOT NULL AND supersededAt IS NULL",
   )
-  for (const r of roundDeaths) planned.push({ at: new Date(r.takenAt), round: { completionId: r.completionId, tankId: Number(r.tankId), dead: Number(r.value), personId: Number(r.personId) } })
+  for (const r of roundDeaths)
+    planned.push({
+      at: new Date(r.takenAt),
+      round: { completionId: r.completionId, tankId: Number(r.tankId), dead: Number(r.value), personId: Number(r.personId) },
+    })
   planned.sort((a, b) => a.at.getTime() - b.at.getTime())
 
   const onHand = new Map<string, number>()
@@ -52,28 +74,62 @@ export async function seedStock(zone: string, ids: Ids): Promise<number> {
       // A death on the round in a tank the register shows empty stays with the readings only, as in the app.
       const holder = largestHolder(onHand, p.round.tankId)
       if (!holder || holder.count < p.round.dead) continue
-      row = { ...blank, batchId: holder.batchId, kind: 'mortality', occurredAt: p.at, fromTankId: p.round.tankId, count: p.round.dead, cause: UNKNOWN_CAUSE, completionId: p.round.completionId, sourceKey: `completion:${p.round.completionId}`, personId: p.round.personId }
+      row = {
+        ...blank,
+        batchId: holder.batchId,
+        kind: 'mortality',
+        occurredAt: p.at,
+        fromTankId: p.round.tankId,
+        count: p.round.dead,
+        cause: UNKNOWN_CAUSE,
+        completionId: p.round.completionId,
+        sourceKey: `completion:${p.round.completionId}`,
+        personId: p.round.personId,
+      }
     } else {
       const s = p.story!
       const batchId = ids.batches.get(s.batch)!
       const count = s.count === 'rest' ? (onHand.get(balanceKey(batchId, tank(s.from)!)) ?? 0) : s.count
       const personId = s.kind === 'mortality' ? ids.technician : s.kind === 'dispatch' ? ids.manager : ids.supervisor
       row = {
-        ...blank, batchId, kind: s.kind, occurredAt: p.at, fromTankId: tank(s.from), toTankId: tank(s.to), count, meanWeightG: s.meanWeightG ?? null, origin: s.origin ?? null,
-        permitRef: s.permitRef ?? null, healthCertificateRef: s.healthCertificateRef ?? null, transportWater: s.transportWater ?? null, destination: s.destination ?? null,
-        reason: s.reason ?? null, cause: s.cause ?? null, necropsy: s.necropsy ?? false, note: s.note ?? null, personId,
+        ...blank,
+        batchId,
+        kind: s.kind,
+        occurredAt: p.at,
+        fromTankId: tank(s.from),
+        toTankId: tank(s.to),
+        count,
+        meanWeightG: s.meanWeightG ?? null,
+        origin: s.origin ?? null,
+        permitRef: s.permitRef ?? null,
+        healthCertificateRef: s.healthCertificateRef ?? null,
+        transportWater: s.transportWater ?? null,
+        destination: s.destination ?? null,
+        reason: s.reason ?? null,
+        cause: s.cause ?? null,
+        necropsy: s.necropsy ?? false,
+        note: s.note ?? null,
+        personId,
       }
       if (count === 0) continue
     }
     const short = applyMovement(onHand, row as LedgerEntry)
-    if (short) throw new Error(`Demo stock story does not balance: ${row.kind} of ${row.count} on ${row.occurredAt.toISOString()} finds ${short.onHand} in tank ${short.tankId}`)
+    if (short)
+      throw new Error(
+        `Demo stock story does not balance: ${row.kind} of ${row.count} on ${row.occurredAt.toISOString()} finds ${short.onHand} in tank ${short.tankId}`,
+      )
     rows.push(row)
   }
-  for (let i = 0; i < rows.length; i += 500) await db().getRepository(MovementEntity).insert(rows.slice(i, i + 500))
+  for (let i = 0; i < rows.length; i += 500)
+    await db()
+      .getRepository(MovementEntity)
+      .insert(rows.slice(i, i + 500))
 
   for (const [, batchId] of ids.batches) {
     const held = [...onHand.entries()].filter(([k, n]) => k.startsWith(`${batchId}:`) && n > 0)
-    await db().getRepository(BatchEntity).update(batchId, { count: held.reduce((s, [, n]) => s + n, 0), tankIds: held.map(([k]) => Number(k.split(':')[1])) })
+    await db()
+      .getRepository(BatchEntity)
+      .update(batchId, { count: held.reduce((s, [, n]) => s + n, 0), tankIds: held.map(([k]) => Number(k.split(':')[1])) })
   }
   return rows.length
 }

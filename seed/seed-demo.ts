@@ -41,30 +41,42 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
 
   const areas = idsByCode(await db().getRepository(AreaEntity).save(DEMO_AREAS))
   const systems = idsByCode(
-    await db().getRepository(SystemEntity).save(DEMO_SYSTEMS.map(({ area, ...s }) => ({ ...s, areaId: areas.get(area)! }))),
+    await db()
+      .getRepository(SystemEntity)
+      .save(DEMO_SYSTEMS.map(({ area, ...s }) => ({ ...s, areaId: areas.get(area)! }))),
   )
   const tanks = idsByCode(
-    await db().getRepository(TankEntity).save(DEMO_TANKS.map(({ area, system, ...t }) => ({ ...t, areaId: areas.get(area)!, systemId: systems.get(system)! }))),
+    await db()
+      .getRepository(TankEntity)
+      .save(DEMO_TANKS.map(({ area, system, ...t }) => ({ ...t, areaId: areas.get(area)!, systemId: systems.get(system)! }))),
   )
   const equipment = idsByCode(
-    await db().getRepository(EquipmentEntity).save(DEMO_EQUIPMENT.map(({ area, ...e }) => ({ ...e, areaId: areas.get(area)! }))),
+    await db()
+      .getRepository(EquipmentEntity)
+      .save(DEMO_EQUIPMENT.map(({ area, ...e }) => ({ ...e, areaId: areas.get(area)! }))),
   )
   const batches = idsByCode(
-    await db().getRepository(BatchEntity).save(
-      DEMO_BATCHES.map(({ daysAgo, tanks: codes, ...batch }) => ({
-        ...batch,
-        arrivalDate: today.minus({ days: daysAgo }).toISODate()!,
-        tankIds: codes.map((c) => tanks.get(c)!),
-      })),
-    ),
+    await db()
+      .getRepository(BatchEntity)
+      .save(
+        DEMO_BATCHES.map(({ daysAgo, tanks: codes, ...batch }) => ({
+          ...batch,
+          arrivalDate: today.minus({ days: daysAgo }).toISODate()!,
+          tankIds: codes.map((c) => tanks.get(c)!),
+        })),
+      ),
   )
 
-  await db().getRepository(ParameterEntity).save(DEMO_PARAMETERS.map(({ bands: _b, ...p }) => ({ ...p, derived: p.derived ?? false })))
-  await db().getRepository(LimitEntity).save([
-    ...DEMO_PARAMETERS.filter((p) => p.bands).map((p) => ({ parameterKey: p.key, scope: 'facility' as const, scopeId: null, ...p.bands! })),
-    ...DEMO_SYSTEM_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'system' as const, scopeId: systems.get(l.system)!, ...l.bands })),
-    ...DEMO_BATCH_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'batch' as const, scopeId: batches.get(l.batch)!, ...l.bands })),
-  ])
+  await db()
+    .getRepository(ParameterEntity)
+    .save(DEMO_PARAMETERS.map(({ bands: _b, ...p }) => ({ ...p, derived: p.derived ?? false })))
+  await db()
+    .getRepository(LimitEntity)
+    .save([
+      ...DEMO_PARAMETERS.filter((p) => p.bands).map((p) => ({ parameterKey: p.key, scope: 'facility' as const, scopeId: null, ...p.bands! })),
+      ...DEMO_SYSTEM_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'system' as const, scopeId: systems.get(l.system)!, ...l.bands })),
+      ...DEMO_BATCH_LIMITS.map((l) => ({ parameterKey: l.key, scope: 'batch' as const, scopeId: batches.get(l.batch)!, ...l.bands })),
+    ])
 
   const rosterFrom = today.minus({ weeks: 2 }).startOf('week')
   for (const { email, ...pattern } of DEMO_SHIFT_PATTERNS) {
@@ -75,45 +87,53 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   // The station's ladders: a standard one for routine work, a fast one for welfare-critical
   // checks and critical readings; the welfare officer hears of anything still open after an hour.
   const ruth = people.get('ruth.amsel@brackenwater.example')!
-  const standard = await createLadder({ name: 'Standard', steps: [
-    { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
-    { afterMinutes: 30, notify: [{ kind: 'on_call' }] },
-    { afterMinutes: 120, notify: [{ kind: 'managers' }] },
-  ] })
-  const fast = await createLadder({ name: 'Fast (welfare-critical)', steps: [
-    { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
-    { afterMinutes: 15, notify: [{ kind: 'on_call' }, { kind: 'on_shift' }] },
-    { afterMinutes: 45, notify: [{ kind: 'managers' }] },
-    { afterMinutes: 60, notify: [{ kind: 'person', personId: ruth }] },
-  ] })
+  const standard = await createLadder({
+    name: 'Standard',
+    steps: [
+      { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+      { afterMinutes: 30, notify: [{ kind: 'on_call' }] },
+      { afterMinutes: 120, notify: [{ kind: 'managers' }] },
+    ],
+  })
+  const fast = await createLadder({
+    name: 'Fast (welfare-critical)',
+    steps: [
+      { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+      { afterMinutes: 15, notify: [{ kind: 'on_call' }, { kind: 'on_shift' }] },
+      { afterMinutes: 45, notify: [{ kind: 'managers' }] },
+      { afterMinutes: 60, notify: [{ kind: 'person', personId: ruth }] },
+    ],
+  })
   await updateFacility({ defaultLadderId: standard.id, fastLadderId: fast.id })
 
   const lookup: Record<string, Map<string, number>> = { tank: tanks, system: systems, equipment, area: areas, area_tanks: areas, batch: batches }
   const anchor = today.minus({ weeks: 8 }).toISODate()
-  await db().getRepository(RoutineEntity).save(
-    DEMO_ROUTINES.map((r) => ({
-      name: r.name,
-      category: r.category,
-      instructions: r.instructions,
-      targetKind: r.targetKind,
-      targetIds: r.targets.map((code) => lookup[r.targetKind].get(code)!),
-      onlyInUse: r.onlyInUse ?? true,
-      rrule: r.rrule,
-      dtstart: `${anchor}T${r.time}:00`,
-      durationMinutes: r.durationMinutes,
-      windowBeforeMinutes: 30,
-      graceMinutes: r.graceMinutes,
-      priority: r.welfareCritical ? ('welfare_critical' as const) : ('routine' as const),
-      assigneeRule: (r.assignee.kind === 'named' ? { kind: 'person', personId: people.get(r.assignee.email)! } : r.assignee) as AssigneeRule,
-      requiredReadings: r.readings,
-      activeFrom: null,
-      activeTo: null,
-      paused: false,
-      skipDates: [],
-      ladderId: null,
-      version: 1,
-    })),
-  )
+  await db()
+    .getRepository(RoutineEntity)
+    .save(
+      DEMO_ROUTINES.map((r) => ({
+        name: r.name,
+        category: r.category,
+        instructions: r.instructions,
+        targetKind: r.targetKind,
+        targetIds: r.targets.map((code) => lookup[r.targetKind].get(code)!),
+        onlyInUse: r.onlyInUse ?? true,
+        rrule: r.rrule,
+        dtstart: `${anchor}T${r.time}:00`,
+        durationMinutes: r.durationMinutes,
+        windowBeforeMinutes: 30,
+        graceMinutes: r.graceMinutes,
+        priority: r.welfareCritical ? ('welfare_critical' as const) : ('routine' as const),
+        assigneeRule: (r.assignee.kind === 'named' ? { kind: 'person', personId: people.get(r.assignee.email)! } : r.assignee) as AssigneeRule,
+        requiredReadings: r.readings,
+        activeFrom: null,
+        activeTo: null,
+        paused: false,
+        skipDates: [],
+        ladderId: null,
+        version: 1,
+      })),
+    )
   const playbooks = []
   for (const p of DEMO_PLAYBOOKS) playbooks.push(await createPlaybook(PlaybookInputSchema.parse(p)))
   for (const c of DEMO_CYLINDERS) await createCylinder(CylinderInputSchema.parse(c))
@@ -123,16 +143,38 @@ export async function seedDemo(demoPassword: string, log: (line: string) => void
   const { created } = await materialise({ from: today.minus({ days: 14 }).toJSDate(), horizonDays: 14 + 42 })
   const history = await seedHistory(14, facility.timeZone)
   const person = (email: string) => ({ id: people.get(email)!, name: DEMO_PEOPLE.find((p) => p.email === email)!.name })
-  const [supervisor, technician, boss, vet] = ['tomas.ferreira', 'priya.nandakumar', 'maren.holloway', 'ruth.amsel'].map((n) => person(`${n}@brackenwater.example`))
+  const [supervisor, technician, boss, vet] = ['tomas.ferreira', 'priya.nandakumar', 'maren.holloway', 'ruth.amsel'].map((n) =>
+    person(`${n}@brackenwater.example`),
+  )
   const movements = await seedStock(facility.timeZone, { tanks, batches, supervisor: supervisor.id, technician: technician.id, manager: boss.id })
   await seedIncidents(facility.timeZone, { tanks, batches, supervisor, manager: boss, welfareOfficer: vet })
   // Coming up: an arrival into quarantine in three days, and a nursery grading (with its fasting window) in five.
   const spareBins = ['QUA-B03', 'QUA-B04'].map((c) => tanks.get(c)!)
   await tanksCatalogue.update(spareBins[0], { inUse: true })
   await tanksCatalogue.update(spareBins[1], { inUse: true })
-  await startEvent(EventInputSchema.parse({ playbookId: playbooks[0].id, title: 'Arrival of juveniles from Tallowmere', localStart: `${today.plus({ days: 3 }).toISODate()}T09:30`, tankIds: spareBins, notes: 'Veterinarian on site that morning.' }), manager)
-  await startEvent(EventInputSchema.parse({ playbookId: playbooks[1].id, title: 'Nursery grading', localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`, tankIds: NURSERY_CODES.map((c) => tanks.get(c)!), notes: '' }), manager)
+  await startEvent(
+    EventInputSchema.parse({
+      playbookId: playbooks[0].id,
+      title: 'Arrival of juveniles from Tallowmere',
+      localStart: `${today.plus({ days: 3 }).toISODate()}T09:30`,
+      tankIds: spareBins,
+      notes: 'Veterinarian on site that morning.',
+    }),
+    manager,
+  )
+  await startEvent(
+    EventInputSchema.parse({
+      playbookId: playbooks[1].id,
+      title: 'Nursery grading',
+      localStart: `${today.plus({ days: 5 }).toISODate()}T08:00`,
+      tankIds: NURSERY_CODES.map((c) => tanks.get(c)!),
+      notes: '',
+    }),
+    manager,
+  )
   await recordCylinderReading(1, { pressure: 168, flowLPerMin: 6 })
 
-  log(`Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks, ${history} past completions, ${movements} stock movements and 2 incidents (today is ${today.toISODate()}).`)
+  log(
+    `Seeded ${DEMO_PEOPLE.length} people, ${DEMO_TANKS.length} tanks, ${DEMO_ROUTINES.length} routines, ${created} tasks, ${history} past completions, ${movements} stock movements and 2 incidents (today is ${today.toISODate()}).`,
+  )
 }

@@ -35,11 +35,24 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
     throw err
   })
   // Local text mode: the provider SDK talks to a stand-in on loopback, started before the app so its URL is known.
-  const fakeTexts = stored.sms.mode === 'local' && !stored.sms.apiBaseUrl ? await startFakeTextProvider({ accountSid: stored.sms.accountSid, authToken: stored.sms.authToken, publicUrl: stored.publicUrl, port: stored.sms.localPort, autoStatus: true }) : null
+  const fakeTexts =
+    stored.sms.mode === 'local' && !stored.sms.apiBaseUrl
+      ? await startFakeTextProvider({
+          accountSid: stored.sms.accountSid,
+          authToken: stored.sms.authToken,
+          publicUrl: stored.publicUrl,
+          port: stored.sms.localPort,
+          autoStatus: true,
+        })
+      : null
   if (fakeTexts) logger.info(`Local text provider on ${fakeTexts.url} (texts are kept for the Outbox page)`)
   // Local push mode: a stand-in push service on loopback, for devices made from the Outbox page.
   const localPush = await startLocalPushIfFree(stored)
-  const config = { ...stored, sms: fakeTexts ? { ...stored.sms, apiBaseUrl: fakeTexts.url } : stored.sms, push: { ...stored.push, localUrl: localPush?.url ?? null } }
+  const config = {
+    ...stored,
+    sms: fakeTexts ? { ...stored.sms, apiBaseUrl: fakeTexts.url } : stored.sms,
+    push: { ...stored.push, localUrl: localPush?.url ?? null },
+  }
   const sessionStore = createSessionStore(config)
   const { app, sessionMiddleware, passport } = createApp({ config, sessionStore, clientDir: opts.clientDir })
   const server = createServer(app)
@@ -52,7 +65,8 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   const transport = createTransport(mailConfig)
   const publisher = startPublisher({ intervalMs: config.publishIntervalMs })
   const channels = { text: createTextSender(config), push: createPushSender(config) }
-  const scheduler = opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
+  const scheduler =
+    opts.scheduler === false ? null : startScheduler(dataSource, { mail: { config: mailConfig, transport, channels }, intervalMs: opts.schedulerIntervalMs })
   const { port } = server.address() as AddressInfo
   return {
     url: `http://${config.host}:${port}`,

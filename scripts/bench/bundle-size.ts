@@ -68,16 +68,45 @@ export function measureBundle(outDir: string, buildMs: number, floorBytes: numbe
     .sort((a, b) => b.bytes - a.bytes)
   const first = sum(round)
   return [
-    { measurement: '5 Round route first-load JS (gzip)', result: `${kb(first)} (goal ≤ ${kb(GOAL_BYTES)}: ${first <= GOAL_BYTES ? 'met' : 'NOT met'})`, detail: `${round.size} chunks: entry + static imports ${kb(sum(initial))} (${initial.size}), round route + its imports ${kb(first - sum(initial))}; build ${seconds(buildMs)}` },
-    { measurement: '5 first-load floor: the libraries alone', result: kb(floorBytes), detail: 'React, React Router (data mode), TanStack Query and zod checking one answer, nothing of Roundtide (scripts/bench/stack-floor)' },
-    { measurement: '5 Round first load / floor', result: `${(first / floorBytes).toFixed(2)}×`, detail: `Roundtide's own code and the Round's imports add ${kb(first - floorBytes)} to the floor` },
+    {
+      measurement: '5 Round route first-load JS (gzip)',
+      result: `${kb(first)} (goal ≤ ${kb(GOAL_BYTES)}: ${first <= GOAL_BYTES ? 'met' : 'NOT met'})`,
+      detail: `${round.size} chunks: entry + static imports ${kb(sum(initial))} (${initial.size}), round route + its imports ${kb(first - sum(initial))}; build ${seconds(buildMs)}`,
+    },
+    {
+      measurement: '5 first-load floor: the libraries alone',
+      result: kb(floorBytes),
+      detail: 'React, React Router (data mode), TanStack Query and zod checking one answer, nothing of Roundtide (scripts/bench/stack-floor)',
+    },
+    {
+      measurement: '5 Round first load / floor',
+      result: `${(first / floorBytes).toFixed(2)}×`,
+      detail: `Roundtide's own code and the Round's imports add ${kb(first - floorBytes)} to the floor`,
+    },
     ...lazy.map((c) => ({ measurement: `5 lazy chunk ${c.name}`, result: kb(c.bytes), detail: 'gzip, the chunk alone' })),
   ]
 }
 
 /** The floor beside measurement 5: the shared libraries alone (scripts/bench/stack-floor), gzip. */
 export async function measureStackFloor(outDir: string): Promise<number> {
-  await runCommand('npx', ['vite', 'build', 'scripts/bench/stack-floor', '--config', 'scripts/bench/stack-floor/vite.config.ts', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], { timeoutMs: 180_000 })
+  await runCommand(
+    'npx',
+    [
+      'vite',
+      'build',
+      'scripts/bench/stack-floor',
+      '--config',
+      'scripts/bench/stack-floor/vite.config.ts',
+      '--outDir',
+      outDir,
+      '--emptyOutDir',
+      '--logLevel',
+      'warn',
+    ],
+    { timeoutMs: 180_000 },
+  )
   const assets = path.join(outDir, 'assets')
-  return readdirSync(assets).filter((f) => f.endsWith('.js')).reduce((total, f) => total + gzipSync(readFileSync(path.join(assets, f))).length, 0)
+  return readdirSync(assets)
+    .filter((f) => f.endsWith('.js'))
+    .reduce((total, f) => total + gzipSync(readFileSync(path.join(assets, f))).length, 0)
 }

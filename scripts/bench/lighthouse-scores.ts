@@ -11,15 +11,27 @@ interface LighthouseReport {
 const PERFORMANCE_GOAL = 95
 
 /** Measurement 6: Lighthouse (default mobile settings) on a signed-in page; no performance score is a failure. */
-export async function measureLighthouse(url: string, page: { name: string; path: string; slug: string }, cookie: string, workDir: string, client: string): Promise<Row> {
+export async function measureLighthouse(
+  url: string,
+  page: { name: string; path: string; slug: string },
+  cookie: string,
+  workDir: string,
+  client: string,
+): Promise<Row> {
   const headers = path.join(workDir, `lighthouse-headers-${page.slug}.json`)
   const report = path.join(workDir, `lighthouse-${page.slug}.json`)
   writeFileSync(headers, JSON.stringify({ Cookie: cookie }))
   const start = performance.now()
   log(`lighthouse: ${page.name}`)
   const args = [
-    'lighthouse', `${url}${page.path}`, '--output=json', `--output-path=${report}`, '--quiet', '--only-categories=performance,accessibility',
-    `--extra-headers=${headers}`, '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking',
+    'lighthouse',
+    `${url}${page.path}`,
+    '--output=json',
+    `--output-path=${report}`,
+    '--quiet',
+    '--only-categories=performance,accessibility',
+    `--extra-headers=${headers}`,
+    '--chrome-flags=--headless=new --no-sandbox --disable-gpu --disable-background-networking',
   ]
   const env = { ...process.env, CHROME_PATH: process.env.CHROME_PATH ?? '/usr/bin/chromium' }
   // On a busy machine Lighthouse sometimes loses its trace (NO_NAVSTART) and asks to be run again: once more.
@@ -36,7 +48,9 @@ export async function measureLighthouse(url: string, page: { name: string; path:
   const performanceScore = lh.categories.performance?.score
   if (performanceScore == null) {
     const lcp = lh.audits['largest-contentful-paint']?.numericValue
-    throw new Error(`Lighthouse returned NO performance score for ${page.name} twice (LCP ${lcp === undefined ? 'missing' : ms(lcp)}): the page was not measured`)
+    throw new Error(
+      `Lighthouse returned NO performance score for ${page.name} twice (LCP ${lcp === undefined ? 'missing' : ms(lcp)}): the page was not measured`,
+    )
   }
   const score = (key: string) => {
     const s = lh.categories[key]?.score

@@ -30,18 +30,33 @@ function counted(page: Page) {
 /** True once a fresh reading field has the focus (Done advanced to the next task by itself). */
 const freshFieldFocused = (page: Page, timeout: number) =>
   page
-    .waitForFunction(() => {
-      const el = document.activeElement as HTMLInputElement | null
-      return !!el && el.inputMode === 'decimal' && el.value === ''
-    }, null, { timeout })
-    .then(() => true, () => false)
+    .waitForFunction(
+      () => {
+        const el = document.activeElement as HTMLInputElement | null
+        return !!el && el.inputMode === 'decimal' && el.value === ''
+      },
+      null,
+      { timeout },
+    )
+    .then(
+      () => true,
+      () => false,
+    )
 
 /** Measurement 7: a technician's 24-tank round with DO and temperature, on a phone-sized page. */
 export async function measureRoundJourney(url: string, cookie: string, taskCount: number): Promise<Row> {
   const browser: Browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   })
   try {
     const context = await browser.newContext({ viewport: PHONE, baseURL: url, serviceWorkers: 'block', hasTouch: true, isMobile: true })

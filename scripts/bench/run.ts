@@ -20,7 +20,13 @@ import { arrangeMorningRound, buildSyntheticFacility, type BenchFacility } from 
 
 const started = performance.now()
 const cpus = os.cpus()
-const rows: Row[] = [{ measurement: '0 machine', result: `${cpus.length} cores`, detail: `${cpus[0]?.model ?? 'unknown cpu'}, ${Math.round(os.totalmem() / 2 ** 30)} GB, node ${process.version}; load average at start ${os.loadavg()[0].toFixed(2)}` }]
+const rows: Row[] = [
+  {
+    measurement: '0 machine',
+    result: `${cpus.length} cores`,
+    detail: `${cpus[0]?.model ?? 'unknown cpu'}, ${Math.round(os.totalmem() / 2 ** 30)} GB, node ${process.version}; load average at start ${os.loadavg()[0].toFixed(2)}`,
+  },
+]
 const workDir = mkdtempSync(path.join(os.tmpdir(), 'roundtide-bench-'))
 const outDir = path.join(workDir, 'client')
 
@@ -51,7 +57,9 @@ function need<T>(value: T | undefined | null, what: string): T {
 }
 
 // ROUNDTIDE_BENCH_ONLY="2,6" runs only those measurements (setup and materialising always run), for quick checks.
-const only = process.env.ROUNDTIDE_BENCH_ONLY?.split(',').map((x) => x.trim()).filter(Boolean)
+const only = process.env.ROUNDTIDE_BENCH_ONLY?.split(',')
+  .map((x) => x.trim())
+  .filter(Boolean)
 const wanted = (label: string) => !only || label.startsWith('setup') || label.startsWith('1 ') || only.some((n) => label.startsWith(`${n} `))
 
 async function step(label: string, fn: () => Promise<Row | Row[]> | Row | Row[]) {
@@ -68,7 +76,8 @@ async function step(label: string, fn: () => Promise<Row | Row[]> | Row | Row[])
   log(`${label} took ${seconds(performance.now() - t)}`)
 }
 
-const tasksOn = async (date: string) => Number(((await need(ds, 'the database').query('SELECT COUNT(*) AS n FROM tasks WHERE localDate = ?', [date])) as Array<{ n: number | string }>)[0].n)
+const tasksOn = async (date: string) =>
+  Number(((await need(ds, 'the database').query('SELECT COUNT(*) AS n FROM tasks WHERE localDate = ?', [date])) as Array<{ n: number | string }>)[0].n)
 
 let facility: BenchFacility | undefined
 let roundTaskIds: number[] = []
@@ -104,16 +113,30 @@ try {
   await step('3 completions', () => measureCompletions(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(2), day(5), facility!.supervisor.id))
   await step('4 socket fan-out', () => measureSocketFanout(url(), need(cookies.supervisor, 'a signed-in supervisor'), day(3)))
   const served = () => (clientDir ? 'fresh build' : 'dist/ (the fresh build failed)')
-  await step('6 lighthouse Round', () => measureLighthouse(url(), { name: 'Round page', path: '/round', slug: 'round' }, need(cookies.technician, 'a signed-in technician'), workDir, served()))
-  await step('6 lighthouse board', () =>
-    measureLighthouse(url(), { name: `board (${day(1)}, full day)`, path: `/board?date=${day(1)}`, slug: 'board' }, need(cookies.supervisor, 'a signed-in supervisor'), workDir, served()),
+  await step('6 lighthouse Round', () =>
+    measureLighthouse(url(), { name: 'Round page', path: '/round', slug: 'round' }, need(cookies.technician, 'a signed-in technician'), workDir, served()),
   )
-  await step('7 morning round', () => measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')))
+  await step('6 lighthouse board', () =>
+    measureLighthouse(
+      url(),
+      { name: `board (${day(1)}, full day)`, path: `/board?date=${day(1)}`, slug: 'board' },
+      need(cookies.supervisor, 'a signed-in supervisor'),
+      workDir,
+      served(),
+    ),
+  )
+  await step('7 morning round', () =>
+    measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')),
+  )
 } finally {
   await cleanUp()
 }
 
-rows.push({ measurement: '8 total bench time', result: seconds(performance.now() - started), detail: `setup, all measurements and clean-up; load average at end ${os.loadavg()[0].toFixed(2)}` })
+rows.push({
+  measurement: '8 total bench time',
+  result: seconds(performance.now() - started),
+  detail: `setup, all measurements and clean-up; load average at end ${os.loadavg()[0].toFixed(2)}`,
+})
 const order = (r: Row) => (r.measurement.startsWith('setup') ? 0.5 : Number(/^\d+/.exec(r.measurement)?.[0] ?? 99))
 const table = rows.filter((r) => !r.measurement.startsWith('setup') || r.result === 'failed').sort((a, b) => order(a) - order(b))
 console.log(formatTable(table))

@@ -55,7 +55,11 @@ export async function startBenchServer(clientDir: string | null): Promise<BenchS
 
 /** Signs in over HTTP and returns the session cookie ("roundtide.sid=…"). */
 export async function signInCookie(url: string, email: string): Promise<string> {
-  const res = await fetch(`${url}/api/session`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password: BENCH_PASSWORD }) })
+  const res = await fetch(`${url}/api/session`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password: BENCH_PASSWORD }),
+  })
   if (!res.ok) throw new Error(`sign-in as ${email} answered ${res.status}`)
   const cookie = res.headers.getSetCookie().find((c) => c.startsWith('roundtide.sid='))
   if (!cookie) throw new Error('sign-in set no roundtide.sid cookie')

@@ -41,7 +41,11 @@ export async function measureSocketFanout(url: string, cookie: string, date: str
       const arrivals: number[] = []
       watch = { id, arrivals, done }
       const start = performance.now()
-      const res = await fetch(`${url}/api/tasks/${id}/completion`, { method: 'POST', headers: { cookie, 'content-type': 'application/json' }, body: completionBody(n) })
+      const res = await fetch(`${url}/api/tasks/${id}/completion`, {
+        method: 'POST',
+        headers: { cookie, 'content-type': 'application/json' },
+        body: completionBody(n),
+      })
       await res.text()
       const responded = performance.now()
       if (!res.ok) throw new Error(`completion answered ${res.status}`)

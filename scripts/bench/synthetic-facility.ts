@@ -41,11 +41,22 @@ async function makePeople(): Promise<BenchPerson[]> {
   const passwordHash = await hashPassword(BENCH_PASSWORD)
   const tag = randomUUID().slice(0, 6)
   const rows = roles.map((role, i) => ({
-    email: `bench-${i + 1}-${tag}@roundtide.example`, name: `Bench ${role} ${i + 1}`, title: null, phone: null, role,
-    passwordHash, active: true, onCallEligible: role !== 'observer', sessionVersion: 0, quietStart: null, quietEnd: null,
+    email: `bench-${i + 1}-${tag}@roundtide.example`,
+    name: `Bench ${role} ${i + 1}`,
+    title: null,
+    phone: null,
+    role,
+    passwordHash,
+    active: true,
+    onCallEligible: role !== 'observer',
+    sessionVersion: 0,
+    quietStart: null,
+    quietEnd: null,
   }))
   await db().getRepository(PersonEntity).insert(rows)
-  const saved = await db().getRepository(PersonEntity).find({ order: { id: 'ASC' } })
+  const saved = await db()
+    .getRepository(PersonEntity)
+    .find({ order: { id: 'ASC' } })
   return saved.map((p) => ({ id: p.id, email: p.email, role: p.role }))
 }
 
@@ -57,10 +68,30 @@ function routineInputs(areaIds: number[], owners: number[]): RoutineInput[] {
   const pick = (start: number, n: number) => Array.from({ length: n }, (_, k) => areaIds[(start + k) % areaIds.length])
   return Array.from({ length: 60 }, (_, i) => {
     const group = Math.floor(i / 20)
-    const common = { targetKind: 'area_tanks' as const, dtstart: '2026-01-05T07:00:00', assigneeRule: { kind: 'person' as const, personId: owners[i % owners.length] } }
-    if (group === 0) return { ...common, name: `Feed ${i + 1}`, category: 'feeding', targetIds: pick(i, 1), rrule: 'FREQ=DAILY;BYHOUR=7,11,15,19;BYMINUTE=0', durationMinutes: 2 }
+    const common = {
+      targetKind: 'area_tanks' as const,
+      dtstart: '2026-01-05T07:00:00',
+      assigneeRule: { kind: 'person' as const, personId: owners[i % owners.length] },
+    }
+    if (group === 0)
+      return {
+        ...common,
+        name: `Feed ${i + 1}`,
+        category: 'feeding',
+        targetIds: pick(i, 1),
+        rrule: 'FREQ=DAILY;BYHOUR=7,11,15,19;BYMINUTE=0',
+        durationMinutes: 2,
+      }
     if (group === 1) {
-      return { ...common, name: `Water check ${i + 1}`, category: 'welfare', targetIds: pick(i, 2), rrule: 'FREQ=DAILY;BYHOUR=8,14;BYMINUTE=30', requiredReadings: ['do_mgL', 'temp_c'], priority: 'welfare_critical' }
+      return {
+        ...common,
+        name: `Water check ${i + 1}`,
+        category: 'welfare',
+        targetIds: pick(i, 2),
+        rrule: 'FREQ=DAILY;BYHOUR=8,14;BYMINUTE=30',
+        requiredReadings: ['do_mgL', 'temp_c'],
+        priority: 'welfare_critical',
+      }
     }
     return { ...common, name: `Hygiene ${i + 1}`, category: 'hygiene', targetIds: pick(i, 4), rrule: 'FREQ=DAILY;BYHOUR=10;BYMINUTE=15', durationMinutes: 4 }
   })
@@ -81,7 +112,17 @@ export async function buildSyntheticFacility(): Promise<BenchFacility> {
   for (const [a, area] of madeAreas.entries()) {
     for (let t = 1; t <= TANKS_PER_AREA; t++) {
       const code = `B${a + 1}-${String(t).padStart(3, '0')}`
-      madeTanks.push(await tanks.create({ code, name: `Tank ${code}`, areaId: area.id, systemId: madeSystems[a % SYSTEM_COUNT].id, volumeL: 1200, kind: 'tank', inUse: true }))
+      madeTanks.push(
+        await tanks.create({
+          code,
+          name: `Tank ${code}`,
+          areaId: area.id,
+          systemId: madeSystems[a % SYSTEM_COUNT].id,
+          volumeL: 1200,
+          kind: 'tank',
+          inUse: true,
+        }),
+      )
     }
   }
   log(`facility: ${madeAreas.length} areas, ${madeSystems.length} systems, ${madeTanks.length} tanks`)
@@ -90,7 +131,10 @@ export async function buildSyntheticFacility(): Promise<BenchFacility> {
   const roundTechnician = technicians[0]
   const owners = technicians.slice(1).map((p) => p.id)
   const repo = db().getRepository(RoutineEntity)
-  const inputs = routineInputs(madeAreas.map((a) => a.id), owners).map((r) => ({ ...RoutineInputSchema.parse(r), version: 1 }))
+  const inputs = routineInputs(
+    madeAreas.map((a) => a.id),
+    owners,
+  ).map((r) => ({ ...RoutineInputSchema.parse(r), version: 1 }))
   await repo.save(inputs.map((r) => repo.create(r)))
   log(`people: ${people.length}; routines: ${inputs.length}`)
   return { zone: facility.timeZone, tanks: madeTanks, people, supervisor: people.find((p) => p.role === 'supervisor')!, roundTechnician }
@@ -106,10 +150,29 @@ export async function arrangeMorningRound(f: BenchFacility): Promise<number[]> {
     const due = base.plus({ seconds: i * 20 })
     const local = due.toFormat("yyyy-MM-dd'T'HH:mm:ss")
     return repo.create({
-      routineId: null, eventId: null, title: 'Morning water check', category: 'welfare', instructions: 'Read DO and temperature at the outlet.', priority: 'welfare_critical',
-      targetKind: 'tank', targetId: tank.id, tankId: tank.id, areaId: tank.areaId, localDate: due.toISODate()!, localStart: local, occurrenceStart: local,
-      dueAt: due.toJSDate(), windowStartAt: due.minus({ minutes: 30 }).toJSDate(), graceUntil: due.plus({ minutes: 60 }).toJSDate(),
-      durationMinutes: 3, status: 'open', assigneeId: f.roundTechnician.id, assignedManually: true, edited: false, requiredReadings: ['do_mgL', 'temp_c'], version: 1,
+      routineId: null,
+      eventId: null,
+      title: 'Morning water check',
+      category: 'welfare',
+      instructions: 'Read DO and temperature at the outlet.',
+      priority: 'welfare_critical',
+      targetKind: 'tank',
+      targetId: tank.id,
+      tankId: tank.id,
+      areaId: tank.areaId,
+      localDate: due.toISODate()!,
+      localStart: local,
+      occurrenceStart: local,
+      dueAt: due.toJSDate(),
+      windowStartAt: due.minus({ minutes: 30 }).toJSDate(),
+      graceUntil: due.plus({ minutes: 60 }).toJSDate(),
+      durationMinutes: 3,
+      status: 'open',
+      assigneeId: f.roundTechnician.id,
+      assignedManually: true,
+      edited: false,
+      requiredReadings: ['do_mgL', 'temp_c'],
+      version: 1,
     })
   })
   return (await repo.save(rows)).map((r) => r.id)

@@ -1,5 +1,13 @@
 import { AlertEntity, CompletionEntity, PhotoEntity, ReadingEntity } from '../modules/completions/completion.entities'
-import { DigestEntity, LadderEntity, NotificationEntity, OutboxEntity, PushOutboxEntity, TextOutboxEntity, TextQuotaEntity } from '../modules/escalation/escalation.entities'
+import {
+  DigestEntity,
+  LadderEntity,
+  NotificationEntity,
+  OutboxEntity,
+  PushOutboxEntity,
+  TextOutboxEntity,
+  TextQuotaEntity,
+} from '../modules/escalation/escalation.entities'
 import { PushSubscriptionEntity } from '../modules/escalation/push-subscription.entity'
 import { AuditEntity } from '../modules/audit/audit.entity'
 import { AmendmentEntity } from '../modules/completions/amendment.entity'
@@ -17,9 +25,40 @@ import { ChangeOutboxEntity } from '../realtime/change-outbox.entity'
 
 /** Every table the app maps; a migration must match these. */
 export const entities = [
-  PersonEntity, FacilityEntity, AreaEntity, SystemEntity, TankEntity, EquipmentEntity, BatchEntity,
-  ParameterEntity, LimitEntity, RoutineEntity, TaskEntity, CompletionEntity, ReadingEntity, AlertEntity, PhotoEntity,
-  ShiftEntity, OnCallEntity, HandoverNoteEntity, LadderEntity, NotificationEntity, OutboxEntity, DigestEntity, TextOutboxEntity, TextQuotaEntity, PushSubscriptionEntity, PushOutboxEntity,
-  PlaybookEntity, EventEntity, BatchRecordEntity, CylinderEntity, AuditEntity, AmendmentEntity,
-  MovementEntity, StockSettingsEntity, IncidentEntity, ChangeOutboxEntity,
+  PersonEntity,
+  FacilityEntity,
+  AreaEntity,
+  SystemEntity,
+  TankEntity,
+  EquipmentEntity,
+  BatchEntity,
+  ParameterEntity,
+  LimitEntity,
+  RoutineEntity,
+  TaskEntity,
+  CompletionEntity,
+  ReadingEntity,
+  AlertEntity,
+  PhotoEntity,
+  ShiftEntity,
+  OnCallEntity,
+  HandoverNoteEntity,
+  LadderEntity,
+  NotificationEntity,
+  OutboxEntity,
+  DigestEntity,
+  TextOutboxEntity,
+  TextQuotaEntity,
+  PushSubscriptionEntity,
+  PushOutboxEntity,
+  PlaybookEntity,
+  EventEntity,
+  BatchRecordEntity,
+  CylinderEntity,
+  AuditEntity,
+  AmendmentEntity,
+  MovementEntity,
+  StockSettingsEntity,
+  IncidentEntity,
+  ChangeOutboxEntity,
 ]

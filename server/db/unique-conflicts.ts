@@ -25,5 +25,10 @@ export function duplicateKeyConflict(err: unknown): AppError | null {
   const columns = columnsOfKey(keyName)
   const single = columns.length === 1 ? columns[0] : undefined
   const words = single ? (COLUMN_WORDS[single] ?? 'value') : 'combination'
-  return new AppError(409, 'conflict', `That ${words} is already in use. Choose another and try again.`, single ? { fieldErrors: { [single]: ['Already in use'] } } : {})
+  return new AppError(
+    409,
+    'conflict',
+    `That ${words} is already in use. Choose another and try again.`,
+    single ? { fieldErrors: { [single]: ['Already in use'] } } : {},
+  )
 }

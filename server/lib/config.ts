@@ -26,7 +26,11 @@ const EnvSchema = z.object({
   ROUNDTIDE_SMTP_USER: text().optional(),
   ROUNDTIDE_SMTP_PASSWORD: text().optional(),
   ROUNDTIDE_MAIL_FROM: text().default('Roundtide <roundtide@localhost>'),
-  ROUNDTIDE_ACK_TTL_HOURS: z.coerce.number().min(1).max(24 * 14).default(72),
+  ROUNDTIDE_ACK_TTL_HOURS: z.coerce
+    .number()
+    .min(1)
+    .max(24 * 14)
+    .default(72),
   /** Text messages: `local` (default) runs a stand-in provider on loopback; `twilio` sends for real; `off` sends none. */
   ROUNDTIDE_SMS_MODE: z.enum(['local', 'twilio', 'off']).default('local'),
   /** The provider's API base URL; unset means the SDK's own. Local mode points it at the stand-in. */
@@ -40,7 +44,9 @@ const EnvSchema = z.object({
   ROUNDTIDE_PUSH_MODE: z.enum(['local', 'on', 'off']).default('local'),
   /** The local push service's port: fixed, because the devices made there keep it in their endpoint. */
   ROUNDTIDE_PUSH_LOCAL_PORT: z.coerce.number().int().min(0).max(65535).default(2527),
-  ROUNDTIDE_PUSH_SUBJECT: text().regex(/^(mailto:|https:\/\/)/, 'Use a mailto: address or an https: URL').default('mailto:roundtide@example.org'),
+  ROUNDTIDE_PUSH_SUBJECT: text()
+    .regex(/^(mailto:|https:\/\/)/, 'Use a mailto: address or an https: URL')
+    .default('mailto:roundtide@example.org'),
   /** Set to share live events between several app processes (socket.io's Redis adapter). */
   ROUNDTIDE_REDIS_URL: text().url().optional(),
   /** How often the background scheduler ticks (status clock, escalations, mail); 30 s unless set. */
@@ -74,7 +80,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env) {
     /** Signs acknowledge links in mail; a key of its own, so a cookie key never signs an acknowledgement. */
     ackSecret: e.ROUNDTIDE_ACK_SECRET ?? '',
     cookieSecure: e.ROUNDTIDE_COOKIE_SECURE === 'true',
-    allowedOrigins: e.ROUNDTIDE_ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
+    allowedOrigins: e.ROUNDTIDE_ALLOWED_ORIGINS.split(',')
+      .map((o) => o.trim())
+      .filter(Boolean),
     signInLimitPerAddress: e.ROUNDTIDE_SIGNIN_LIMIT_PER_ADDRESS,
     signInLimitPerAccount: e.ROUNDTIDE_SIGNIN_LIMIT_PER_ACCOUNT,
     uploadDir: e.ROUNDTIDE_UPLOAD_DIR,

@@ -6,12 +6,7 @@ export class AppError extends Error {
   readonly fieldErrors?: Record<string, string[]>
   readonly details?: Record<string, unknown>
 
-  constructor(
-    status: number,
-    code: ApiErrorCode,
-    message: string,
-    extra: { fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> } = {},
-  ) {
+  constructor(status: number, code: ApiErrorCode, message: string, extra: { fieldErrors?: Record<string, string[]>; details?: Record<string, unknown> } = {}) {
     super(message)
     this.status = status
     this.code = code
@@ -20,10 +15,8 @@ export class AppError extends Error {
   }
 }
 
-export const validationError = (message: string, fieldErrors: Record<string, string[]>) =>
-  new AppError(400, 'validation_failed', message, { fieldErrors })
+export const validationError = (message: string, fieldErrors: Record<string, string[]>) => new AppError(400, 'validation_failed', message, { fieldErrors })
 export const unauthenticated = (message = 'Please sign in first.') => new AppError(401, 'unauthenticated', message)
 export const forbidden = (message: string) => new AppError(403, 'forbidden', message)
 export const notFound = (what: string) => new AppError(404, 'not_found', `${what} was not found.`)
-export const conflict = (message: string, details?: Record<string, unknown>) =>
-  new AppError(409, 'conflict', message, { details })
+export const conflict = (message: string, details?: Record<string, unknown>) => new AppError(409, 'conflict', message, { details })

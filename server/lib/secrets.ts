@@ -52,7 +52,11 @@ export async function withStoredSecrets(config: AppConfig, dataSource: DataSourc
       continue
     }
     const reason = weakSecretReason(given[name])
-    if (reason) refuseOrWarn(config, `${VARIABLES[name]} ${reason}. Set at least ${MIN_SECRET_LENGTH} random characters, or unset it and Roundtide generates and keeps one.`)
+    if (reason)
+      refuseOrWarn(
+        config,
+        `${VARIABLES[name]} ${reason}. Set at least ${MIN_SECRET_LENGTH} random characters, or unset it and Roundtide generates and keeps one.`,
+      )
   }
   if (resolved.session === resolved.ack) refuseOrWarn(config, 'ROUNDTIDE_SESSION_SECRET and ROUNDTIDE_ACK_SECRET must differ.')
   if (config.db.password === DEFAULT_DB_PASSWORD && !LOOPBACK.has(config.db.host)) {
@@ -64,6 +68,8 @@ export async function withStoredSecrets(config: AppConfig, dataSource: DataSourc
   // The local stand-in signs its callbacks with a token of its own, kept so every process agrees.
   const smsToken = config.sms.authToken || (config.sms.mode === 'local' ? await storedSecret(dataSource, 'sms_local') : '')
   // The push key pair (VAPID, RFC 8292) is generated once and kept: every browser subscribed with its public half.
-  const vapid = config.push.enabled ? (JSON.parse(await storedSecret(dataSource, 'vapid', () => JSON.stringify(webpush.generateVAPIDKeys()))) as { publicKey: string; privateKey: string }) : null
+  const vapid = config.push.enabled
+    ? (JSON.parse(await storedSecret(dataSource, 'vapid', () => JSON.stringify(webpush.generateVAPIDKeys()))) as { publicKey: string; privateKey: string })
+    : null
   return { ...config, sessionSecret: resolved.session, ackSecret: resolved.ack, sms: { ...config.sms, authToken: smsToken }, push: { ...config.push, vapid } }
 }

@@ -18,13 +18,15 @@ export async function startLocalSmtp(port: number, host = '127.0.0.1') {
       simpleParser(stream)
         .then(async (mail) => {
           const to = session.envelope.rcptTo.map((r) => r.address).join(', ')
-          await db().getRepository(OutboxEntity).insert({
-            to,
-            subject: mail.subject ?? '(no subject)',
-            text: mail.text ?? '',
-            html: typeof mail.html === 'string' ? mail.html : '',
-            receivedAt: new Date(),
-          })
+          await db()
+            .getRepository(OutboxEntity)
+            .insert({
+              to,
+              subject: mail.subject ?? '(no subject)',
+              text: mail.text ?? '',
+              html: typeof mail.html === 'string' ? mail.html : '',
+              receivedAt: new Date(),
+            })
           callback()
         })
         .catch((err: Error) => {

@@ -85,7 +85,9 @@ export function decryptPushBody(body: Buffer, device: DeviceKeys): Buffer {
  * VAPID header for the application server key the device subscribed with, and each body is
  * decrypted to prove it, then kept. An unknown or removed device answers 410 Gone.
  */
-export async function startFakePushService(opts: { port?: number; host?: string; /** Keep each message (or refusal) in `push_outbox` for the Outbox page (local mode). */ keep?: boolean } = {}) {
+export async function startFakePushService(
+  opts: { port?: number; host?: string; /** Keep each message (or refusal) in `push_outbox` for the Outbox page (local mode). */ keep?: boolean } = {},
+) {
   const app = express()
   // The body is read as it came: express's body parsers would try to undo the aes128gcm content coding.
   app.use((req, res, next) => {
@@ -106,7 +108,12 @@ export async function startFakePushService(opts: { port?: number; host?: string;
 
   /** Keeps what happened for the Outbox page; a failure to keep it never changes the answer to the sender. */
   const keep = (row: Omit<PushOutboxRow, 'id' | 'receivedAt'>) =>
-    opts.keep ? db().getRepository(PushOutboxEntity).insert({ ...row, receivedAt: new Date() }).catch((err: unknown) => logger.warn({ err }, 'local push service could not keep a message')) : undefined
+    opts.keep
+      ? db()
+          .getRepository(PushOutboxEntity)
+          .insert({ ...row, receivedAt: new Date() })
+          .catch((err: unknown) => logger.warn({ err }, 'local push service could not keep a message'))
+      : undefined
 
   app.post('/push/:id', async (req, res) => {
     const endpoint = `${url}/push/${req.params.id}`
@@ -142,7 +149,8 @@ export async function startFakePushService(opts: { port?: number; host?: string;
     } catch {
       key = undefined
     }
-    if (typeof key !== 'string' || !/^[\w-]{80,100}$/.test(key)) return void res.status(400).send('applicationServerKey (base64url P-256 public key) is required')
+    if (typeof key !== 'string' || !/^[\w-]{80,100}$/.test(key))
+      return void res.status(400).send('applicationServerKey (base64url P-256 public key) is required')
     res.status(201).json(subscribe(key))
   })
 
@@ -170,10 +178,11 @@ export async function startFakePushService(opts: { port?: number; host?: string;
       devices.delete(endpoint.split('/').pop()!)
     },
     receivedAt: (endpoint: string) => received.filter((r) => r.endpoint === endpoint),
-    close: () => new Promise<void>((resolve) => {
-      server.closeAllConnections()
-      server.close(() => resolve())
-    }),
+    close: () =>
+      new Promise<void>((resolve) => {
+        server.closeAllConnections()
+        server.close(() => resolve())
+      }),
   }
 }
 

@@ -34,7 +34,12 @@ export function createPushSender(config: AppConfig): PushSender | null {
     publicKey: config.push.vapid.publicKey,
     async send(target, payload) {
       const request = webpush.generateRequestDetails(target, JSON.stringify(payload), { vapidDetails, TTL: 3600, urgency: 'high' })
-      const res = await fetch(request.endpoint, { method: request.method, headers: request.headers as Record<string, string>, body: new Uint8Array(request.body), signal: AbortSignal.timeout(10_000) })
+      const res = await fetch(request.endpoint, {
+        method: request.method,
+        headers: request.headers as Record<string, string>,
+        body: new Uint8Array(request.body),
+        signal: AbortSignal.timeout(10_000),
+      })
       if (res.status === 404 || res.status === 410) return { status: 'gone', code: res.status }
       if (!res.ok) throw new PushRefusedError(res.status, await res.text())
       return { status: 'accepted', messageId: res.headers.get('location') }

@@ -110,7 +110,8 @@ async function send(rows: ChangeRow[]) {
     broadcast(LIVE_EVENTS.tasksChanged, { reasons } satisfies TasksChangedEvent)
   } else if (taskIds.length) {
     const tasks = await getTasks(taskIds)
-    for (let i = 0; i < tasks.length; i += TASKS_PER_EVENT) broadcast(LIVE_EVENTS.tasksUpdated, { tasks: tasks.slice(i, i + TASKS_PER_EVENT) } satisfies TasksUpdatedEvent)
+    for (let i = 0; i < tasks.length; i += TASKS_PER_EVENT)
+      broadcast(LIVE_EVENTS.tasksUpdated, { tasks: tasks.slice(i, i + TASKS_PER_EVENT) } satisfies TasksUpdatedEvent)
   }
   if (kinds.length) broadcast(LIVE_EVENTS.dataChanged, { kinds } satisfies DataChangedEvent)
 }

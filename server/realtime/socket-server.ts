@@ -54,7 +54,11 @@ function originAllowed(req: IncomingMessage, auth: SocketAuth) {
   const origin = req.headers.origin
   // Like the API: tools without a browser send no Origin and carry no ambient cookies.
   if (origin === undefined) return true
-  const forwarded = auth.behindProxy ? String(req.headers['x-forwarded-proto'] ?? '').split(',')[0].trim() : ''
+  const forwarded = auth.behindProxy
+    ? String(req.headers['x-forwarded-proto'] ?? '')
+        .split(',')[0]
+        .trim()
+    : ''
   const protocol = forwarded || ('encrypted' in req.socket && req.socket.encrypted ? 'https' : 'http')
   return isAllowedOrigin(origin, `${protocol}://${req.headers.host}`, auth.allowedOrigins)
 }

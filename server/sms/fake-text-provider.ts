@@ -20,7 +20,11 @@ export interface FakeTextProviderOptions {
   deliver?: WebhookDelivery
 }
 
-export type WebhookDelivery = (url: string, params: Record<string, string>, authToken: string) => Promise<{ status: number; contentType: string | null; text: string }>
+export type WebhookDelivery = (
+  url: string,
+  params: Record<string, string>,
+  authToken: string,
+) => Promise<{ status: number; contentType: string | null; text: string }>
 
 const overHttp: WebhookDelivery = async (url, params, authToken) => {
   const res = await postSignedWebhook(url, params, authToken)
@@ -56,23 +60,42 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
   app.post('/2010-04-01/Accounts/:account/Messages.json', async (req, res) => {
     if (holding) {
       // Keeps the request open, as a provider that has received it but not yet answered.
-      await db().getRepository(TextOutboxEntity).insert(outboundRow(req.body as Record<string, string>, sid('SM')))
+      await db()
+        .getRepository(TextOutboxEntity)
+        .insert(outboundRow(req.body as Record<string, string>, sid('SM')))
       pending.push(() => res.destroy())
       return
     }
     const { To: to, From: from, Body: body, StatusCallback: statusCallback } = req.body as Record<string, string>
     if (req.params.account !== opts.accountSid) return void res.status(404).json(providerError(404, 20404, 'The requested resource was not found'))
     if (!to || !from || !body) return void res.status(400).json(providerError(400, 21604, "A 'To', 'From' and 'Body' are required."))
-    if (to.startsWith(UNREACHABLE_NUMBER_PREFIX)) return void res.status(400).json(providerError(400, 21211, `The 'To' number ${to} is not a valid phone number.`))
+    if (to.startsWith(UNREACHABLE_NUMBER_PREFIX))
+      return void res.status(400).json(providerError(400, 21211, `The 'To' number ${to} is not a valid phone number.`))
     const messageSid = sid('SM')
     const row = outboundRow(req.body as Record<string, string>, messageSid)
     await db().getRepository(TextOutboxEntity).insert(row)
     const now = new Date().toUTCString()
     res.status(201).json({
-      account_sid: opts.accountSid, api_version: '2010-04-01', body, date_created: now, date_sent: null, date_updated: now, direction: 'outbound-api',
-      error_code: null, error_message: null, from, messaging_service_sid: null, num_media: '0', num_segments: String(Math.ceil(body.length / 153) || 1),
-      price: null, price_unit: 'USD', sid: messageSid, status: 'queued', subresource_uris: { media: `/2010-04-01/Accounts/${opts.accountSid}/Messages/${messageSid}/Media.json` },
-      to, uri: `/2010-04-01/Accounts/${opts.accountSid}/Messages/${messageSid}.json`,
+      account_sid: opts.accountSid,
+      api_version: '2010-04-01',
+      body,
+      date_created: now,
+      date_sent: null,
+      date_updated: now,
+      direction: 'outbound-api',
+      error_code: null,
+      error_message: null,
+      from,
+      messaging_service_sid: null,
+      num_media: '0',
+      num_segments: String(Math.ceil(body.length / 153) || 1),
+      price: null,
+      price_unit: 'USD',
+      sid: messageSid,
+      status: 'queued',
+      subresource_uris: { media: `/2010-04-01/Accounts/${opts.accountSid}/Messages/${messageSid}/Media.json` },
+      to,
+      uri: `/2010-04-01/Accounts/${opts.accountSid}/Messages/${messageSid}.json`,
     })
     if (opts.autoStatus && statusCallback) void reportStatuses(messageSid, statusCallback, ['sent', 'delivered'])
   })
@@ -82,11 +105,23 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
     const { from, body } = req.body as { from?: string; body?: string }
     if (!from || !body) return void res.status(400).json(providerError(400, 21604, 'from and body are required'))
     const result = await deliverInbound(from, body)
-    res.status(result.status).type(result.contentType ?? 'text/plain').send(result.text)
+    res
+      .status(result.status)
+      .type(result.contentType ?? 'text/plain')
+      .send(result.text)
   })
 
   function outboundRow(form: Record<string, string>, messageSid: string) {
-    return { sid: messageSid, direction: 'outbound' as const, to: form.To ?? '', from: form.From ?? '', body: form.Body ?? '', status: 'queued', statusCallback: form.StatusCallback ?? null, receivedAt: new Date() }
+    return {
+      sid: messageSid,
+      direction: 'outbound' as const,
+      to: form.To ?? '',
+      from: form.From ?? '',
+      body: form.Body ?? '',
+      status: 'queued',
+      statusCallback: form.StatusCallback ?? null,
+      receivedAt: new Date(),
+    }
   }
 
   async function reportStatuses(messageSid: string, url: string, statuses: string[]) {
@@ -94,17 +129,47 @@ export async function startFakeTextProvider(opts: FakeTextProviderOptions) {
       const row = await db().getRepository(TextOutboxEntity).findOneBy({ sid: messageSid })
       if (!row) return
       await db().getRepository(TextOutboxEntity).update({ sid: messageSid }, { status })
-      const params = { AccountSid: opts.accountSid, ApiVersion: '2010-04-01', From: row.from, MessageSid: messageSid, MessageStatus: status, SmsSid: messageSid, SmsStatus: status, To: row.to }
-      await deliver(url, params, opts.authToken).catch((err: unknown) => logger.warn({ err, messageSid }, 'local text provider could not post a status callback'))
+      const params = {
+        AccountSid: opts.accountSid,
+        ApiVersion: '2010-04-01',
+        From: row.from,
+        MessageSid: messageSid,
+        MessageStatus: status,
+        SmsSid: messageSid,
+        SmsStatus: status,
+        To: row.to,
+      }
+      await deliver(url, params, opts.authToken).catch((err: unknown) =>
+        logger.warn({ err, messageSid }, 'local text provider could not post a status callback'),
+      )
     }
   }
 
   /** A text from `from` to our number, posted to the app's inbound webhook like the provider does. */
   async function deliverInbound(from: string, body: string) {
     const messageSid = sid('SM')
-    const to = (await db().getRepository(TextOutboxEntity).findOne({ where: { to: from, direction: 'outbound' }, order: { id: 'DESC' } }))?.from ?? ''
-    await db().getRepository(TextOutboxEntity).insert({ sid: messageSid, direction: 'inbound', to, from, body, status: 'received', statusCallback: null, receivedAt: new Date() })
-    const params = { AccountSid: opts.accountSid, ApiVersion: '2010-04-01', Body: body, From: from, MessageSid: messageSid, NumMedia: '0', NumSegments: '1', SmsMessageSid: messageSid, SmsSid: messageSid, SmsStatus: 'received', To: to }
+    const to =
+      (
+        await db()
+          .getRepository(TextOutboxEntity)
+          .findOne({ where: { to: from, direction: 'outbound' }, order: { id: 'DESC' } })
+      )?.from ?? ''
+    await db()
+      .getRepository(TextOutboxEntity)
+      .insert({ sid: messageSid, direction: 'inbound', to, from, body, status: 'received', statusCallback: null, receivedAt: new Date() })
+    const params = {
+      AccountSid: opts.accountSid,
+      ApiVersion: '2010-04-01',
+      Body: body,
+      From: from,
+      MessageSid: messageSid,
+      NumMedia: '0',
+      NumSegments: '1',
+      SmsMessageSid: messageSid,
+      SmsSid: messageSid,
+      SmsStatus: 'received',
+      To: to,
+    }
     return deliver(`${opts.publicUrl}/hooks/sms/inbound`, params, opts.authToken)
   }
 

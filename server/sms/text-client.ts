@@ -32,7 +32,11 @@ export interface TextSender {
 /** A sender over the official SDK, or null when texts are off. */
 export function createTextSender(config: AppConfig): TextSender | null {
   if (config.sms.mode === 'off') return null
-  const client = twilio(config.sms.accountSid, config.sms.authToken, config.sms.apiBaseUrl ? { httpClient: new RedirectingRequestClient(config.sms.apiBaseUrl) } : {})
+  const client = twilio(
+    config.sms.accountSid,
+    config.sms.authToken,
+    config.sms.apiBaseUrl ? { httpClient: new RedirectingRequestClient(config.sms.apiBaseUrl) } : {},
+  )
   const statusCallback = `${config.publicUrl}/hooks/sms/status`
   return {
     from: config.sms.from,

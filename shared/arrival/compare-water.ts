@@ -23,10 +23,14 @@ export function compareWater(box: WaterSample, receiving: WaterSample, tempLimit
   const pHDifference = Math.round((box.pH - receiving.pH) * 100) / 100
   const warnings: string[] = []
   if (Math.abs(tempDifferenceC) > tempLimitC) {
-    warnings.push(`Temperature differs by ${Math.abs(tempDifferenceC)} °C (limit ${tempLimitC} °C): temper gradually, mixing receiving water into the box in steps, before releasing the fish.`)
+    warnings.push(
+      `Temperature differs by ${Math.abs(tempDifferenceC)} °C (limit ${tempLimitC} °C): temper gradually, mixing receiving water into the box in steps, before releasing the fish.`,
+    )
   }
   if (Math.abs(pHDifference) > PH_DIFFERENCE_LIMIT) {
-    warnings.push(`pH differs by ${Math.abs(pHDifference)} (limit ${PH_DIFFERENCE_LIMIT}): adjust slowly; a rise in pH turns more of the transport water's ammonia toxic, so exchange water promptly.`)
+    warnings.push(
+      `pH differs by ${Math.abs(pHDifference)} (limit ${PH_DIFFERENCE_LIMIT}): adjust slowly; a rise in pH turns more of the transport water's ammonia toxic, so exchange water promptly.`,
+    )
   }
   if (box.doMgL !== undefined && box.doMgL < 5) warnings.push(`Transport water DO is low (${box.doMgL} mg/L): aerate or oxygenate the box now.`)
   return { tempDifferenceC, pHDifference, warnings }

@@ -6,12 +6,7 @@
  * 1 mg/L = 1 g/m³, so active ingredient (g) = concentration (mg/L) × volume (L) / 1000.
  * g/L and mg/mL are the same strength (1 g/L = 1000 mg / 1000 mL).
  */
-export {
-  BATH_CAUTIONS,
-  PERMANGANATE_CAUTIONS,
-  PUBLISHED_PERMANGANATE_BATHS,
-  demandBasedPermanganateMgPerL,
-} from './published-baths'
+export { BATH_CAUTIONS, PERMANGANATE_CAUTIONS, PUBLISHED_PERMANGANATE_BATHS, demandBasedPermanganateMgPerL } from './published-baths'
 export type { DemandBasedConcentration, PublishedBath } from './published-baths'
 
 /** Exact by definition: 1 US gallon = 231 cubic inches = 3.785411784 L. */

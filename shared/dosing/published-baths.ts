@@ -70,9 +70,7 @@ export const PUBLISHED_PERMANGANATE_BATHS: readonly PublishedBath[] = [
     mgPerL: null,
     upToMgPerL: 10,
     duration: '1 h, static or flow-through',
-    details:
-      '2.5 × the 15-minute permanganate demand of the water, added in 2–4 mg/L increments; ' +
-      'withdrawal period 7 days.',
+    details: '2.5 × the 15-minute permanganate demand of the water, added in 2–4 mg/L increments; ' + 'withdrawal period 7 days.',
     source: INAD_9246_SOURCE,
   },
 ]
@@ -91,9 +89,7 @@ export function demandBasedPermanganateMgPerL(demand15MinMgPerL: number): Demand
     throw new RangeError(`The measured 15-minute demand must be above 0 mg/L, got ${demand15MinMgPerL}`)
   }
   const uncapped = DEMAND_MULTIPLIER * demand15MinMgPerL
-  return uncapped > DEMAND_REGIME_CEILING_MG_PER_L
-    ? { mgPerL: DEMAND_REGIME_CEILING_MG_PER_L, capped: true }
-    : { mgPerL: uncapped, capped: false }
+  return uncapped > DEMAND_REGIME_CEILING_MG_PER_L ? { mgPerL: DEMAND_REGIME_CEILING_MG_PER_L, capped: true } : { mgPerL: uncapped, capped: false }
 }
 
 /** Cautions that apply to any bath treatment; show them with every calculated amount. */

@@ -62,11 +62,7 @@ export function dailyRationG(biomass: number, ratePercentPerDay: number): number
  * Splits a daily amount into `feeds` portions on a scale with `scaleDecimals` places. Works in whole
  * scale steps (integers), so the portions add back exactly to the rounded daily total.
  */
-export function splitDailyRation(
-  dailyG: number,
-  feeds: number,
-  scaleDecimals = DEFAULT_SCALE_DECIMALS,
-): { dailyG: number; perFeedG: number[] } {
+export function splitDailyRation(dailyG: number, feeds: number, scaleDecimals = DEFAULT_SCALE_DECIMALS): { dailyG: number; perFeedG: number[] } {
   if (!Number.isFinite(dailyG) || dailyG < 0) throw new RangeError(`Daily ration must be 0 g or more, got ${dailyG}`)
   requireWholeNumber(feeds, 'Number of feeds', 1)
   requireWholeNumber(scaleDecimals, 'Scale decimals', 0)
@@ -75,9 +71,7 @@ export function splitDailyRation(
   const baseSteps = Math.floor(totalSteps / feeds)
   const feedsWithExtraStep = totalSteps - baseSteps * feeds
   // Dividing a whole number of steps by a power of ten gives the nearest double to the printed grams.
-  const perFeedG = Array.from({ length: feeds }, (_, index) =>
-    index < feedsWithExtraStep ? (baseSteps + 1) / stepsPerGram : baseSteps / stepsPerGram,
-  )
+  const perFeedG = Array.from({ length: feeds }, (_, index) => (index < feedsWithExtraStep ? (baseSteps + 1) / stepsPerGram : baseSteps / stepsPerGram))
   return { dailyG: totalSteps / stepsPerGram, perFeedG }
 }
 

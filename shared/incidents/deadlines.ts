@@ -41,7 +41,15 @@ export function deadlineStatuses(incident: DeadlineFields, now: Date | string): 
   return INCIDENT_DEADLINES.map((key) => {
     const doneAt = done[key]
     const dueMs = new Date(due[key]).getTime()
-    const state: DeadlineState = doneAt ? (new Date(doneAt).getTime() <= dueMs ? 'met' : 'late') : incident.status === 'dismissed' ? 'not_needed' : nowMs > dueMs ? 'overdue' : 'due'
+    const state: DeadlineState = doneAt
+      ? new Date(doneAt).getTime() <= dueMs
+        ? 'met'
+        : 'late'
+      : incident.status === 'dismissed'
+        ? 'not_needed'
+        : nowMs > dueMs
+          ? 'overdue'
+          : 'due'
     return { key, label: DEADLINE_LABELS[key], dueAt: due[key], doneAt, state }
   })
 }

@@ -13,7 +13,11 @@ export interface StepOccurrence {
  * plus the minutes offset; repeated daily when `repeatDays` > 1. Wall-clock times hold
  * across DST changes; a time that does not exist moves forward.
  */
-export function stepOccurrences(step: Pick<PlaybookStep, 'dayOffset' | 'time' | 'minutesOffset' | 'repeatDays'>, eventLocal: string, zone: string): StepOccurrence[] {
+export function stepOccurrences(
+  step: Pick<PlaybookStep, 'dayOffset' | 'time' | 'minutesOffset' | 'repeatDays'>,
+  eventLocal: string,
+  zone: string,
+): StepOccurrence[] {
   const start = DateTime.fromISO(eventLocal, { zone })
   if (!start.isValid) throw new Error(`Invalid event start "${eventLocal}"`)
   const out: StepOccurrence[] = []
@@ -21,7 +25,10 @@ export function stepOccurrences(step: Pick<PlaybookStep, 'dayOffset' | 'time' | 
     let at: DateTime
     if (step.time) {
       const [hour, minute] = step.time.split(':').map(Number)
-      at = start.startOf('day').plus({ days: step.dayOffset + day }).set({ hour, minute, second: 0, millisecond: 0 })
+      at = start
+        .startOf('day')
+        .plus({ days: step.dayOffset + day })
+        .set({ hour, minute, second: 0, millisecond: 0 })
     } else {
       at = start.plus({ days: step.dayOffset + day }).plus({ minutes: step.minutesOffset })
     }

@@ -28,7 +28,11 @@ export interface TypedReadings {
  * judgement the server makes on completion and amendment: each field a number, then the set
  * judged against each reading's physical range and limits. Empty fields are for the form to word.
  */
-export function judgeTypedReadings(raw: Record<string, string>, specs: ReadonlyArray<ReadingRule & { key: string }>, salinitySetpoint: number | null = null): TypedReadings {
+export function judgeTypedReadings(
+  raw: Record<string, string>,
+  specs: ReadonlyArray<ReadingRule & { key: string }>,
+  salinitySetpoint: number | null = null,
+): TypedReadings {
   const values: Record<string, number> = {}
   const empty: string[] = []
   const errors: Record<string, string> = {}

@@ -35,7 +35,13 @@ export function coverageWarnings(input: CoverageInput): CoverageWarning[] {
           const [a0, a1] = span(own[i])
           const [b0, b1] = span(own[j])
           if (a0 < b1 && b0 < a1) {
-            warnings.push({ kind: 'double_booked', date, message: `${own[i].personName} is rostered twice at once on ${date} (${own[i].start}–${own[i].end} and ${own[j].start}–${own[j].end})`, personId, taskId: null })
+            warnings.push({
+              kind: 'double_booked',
+              date,
+              message: `${own[i].personName} is rostered twice at once on ${date} (${own[i].start}–${own[i].end} and ${own[j].start}–${own[j].end})`,
+              personId,
+              taskId: null,
+            })
           }
         }
       }
@@ -45,18 +51,28 @@ export function coverageWarnings(input: CoverageInput): CoverageWarning[] {
       const at = minutes(task.time)
       const covered = shifts.some((s) => s.personId === task.assigneeId && span(s)[0] <= at && at < span(s)[1])
       if (!covered) {
-        warnings.push({ kind: 'welfare_task_off_shift', date, message: `${task.title} at ${task.time} is assigned to ${task.assigneeName ?? 'someone'}, who is not on shift then`, personId: task.assigneeId, taskId: task.id })
+        warnings.push({
+          kind: 'welfare_task_off_shift',
+          date,
+          message: `${task.title} at ${task.time} is assigned to ${task.assigneeName ?? 'someone'}, who is not on shift then`,
+          personId: task.assigneeId,
+          taskId: task.id,
+        })
       }
     }
     const [dayStart, dayEnd] = input.dayRange(date)
     const gaps = uncovered(dayStart, dayEnd, input.duties)
-    if (gaps > 0) warnings.push({ kind: 'no_one_on_call', date, message: `Nobody is on call for ${formatMinutes(gaps)} on ${date}`, personId: null, taskId: null })
+    if (gaps > 0)
+      warnings.push({ kind: 'no_one_on_call', date, message: `Nobody is on call for ${formatMinutes(gaps)} on ${date}`, personId: null, taskId: null })
   }
   return warnings
 }
 
 function uncovered(start: number, end: number, duties: CoverageInput['duties']): number {
-  const parts = duties.filter((d) => d.startsAt < end && d.endsAt > start).map((d) => [Math.max(d.startsAt, start), Math.min(d.endsAt, end)] as const).sort((a, b) => a[0] - b[0])
+  const parts = duties
+    .filter((d) => d.startsAt < end && d.endsAt > start)
+    .map((d) => [Math.max(d.startsAt, start), Math.min(d.endsAt, end)] as const)
+    .sort((a, b) => a[0] - b[0])
   let cursor = start
   let gap = 0
   for (const [s, e] of parts) {

@@ -58,8 +58,14 @@ function weekdayList(days: readonly Weekday[]): string {
 function timesOfDayParts(times: readonly string[] | undefined, daysPerPeriod: number): string[] {
   if (!times) return []
   const wanted = sortedUnique(times, (a, b) => a.localeCompare(b))
-  const hours = sortedUnique(wanted.map((time) => Number(time.slice(0, 2))), (a, b) => a - b)
-  const minutes = sortedUnique(wanted.map((time) => Number(time.slice(3))), (a, b) => a - b)
+  const hours = sortedUnique(
+    wanted.map((time) => Number(time.slice(0, 2))),
+    (a, b) => a - b,
+  )
+  const minutes = sortedUnique(
+    wanted.map((time) => Number(time.slice(3))),
+    (a, b) => a - b,
+  )
   const parts = [`BYHOUR=${hours.join(',')}`, `BYMINUTE=${minutes.join(',')}`]
   const grid = hours.flatMap((hour) => minutes.map((minute) => `${String(hour).padStart(2, '0')}:${String(minute).padStart(2, '0')}`))
   if (grid.length === wanted.length) return parts

@@ -27,7 +27,11 @@ const LIST_OF_NAMES = new RegExp(`(?:${NAME}(?:, | and ))+${NAME}`, 'g')
 const LAST_WITHOUT_DAY = /\bon the last(?= for | until |$)/
 
 function numbersOf(text: string | undefined): number[] {
-  return (text ?? '').split(',').filter(Boolean).map(Number).sort((a, b) => a - b)
+  return (text ?? '')
+    .split(',')
+    .filter(Boolean)
+    .map(Number)
+    .sort((a, b) => a - b)
 }
 
 function joinWithAnd(items: string[]): string {
@@ -95,9 +99,7 @@ export function describeRule(rrule: string): string {
   if (!isDescribable(rule)) return rule.value
   try {
     const dayText = new RRule({ ...rule.options, byhour: null, byminute: null, bysetpos: null }).toText()
-    const readable = dayText
-      .replace(LIST_OF_NAMES, (list) => joinWithAnd(list.split(/, | and /)))
-      .replace(LAST_WITHOUT_DAY, 'on the last day')
+    const readable = dayText.replace(LIST_OF_NAMES, (list) => joinWithAnd(list.split(/, | and /))).replace(LAST_WITHOUT_DAY, 'on the last day')
     // times of day read best before the "for 3 times" / "until ..." ending
     const ending = / (?:for \d+ times?|until .+)$/.exec(readable)?.[0] ?? ''
     const times = rule.parts.has('BYHOUR') ? ` at ${joinWithAnd(timesOfDay(rule) ?? [])}` : ''

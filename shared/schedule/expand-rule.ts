@@ -115,8 +115,19 @@ function startNearWindow(rule: ParsedRule, dtstartMs: number, windowStartMs: num
   const steps = Math.floor(monthsApart / months) - 1
   if (steps <= 0) return unchanged
   const hasDayPart = DAY_PARTS.some((part) => rule.parts.has(part))
-  const defaults = hasDayPart ? {} : freq === 'YEARLY' ? { bymonth: rule.options.bymonth ?? [start.getUTCMonth() + 1], bymonthday: [start.getUTCDate()] } : { bymonthday: [start.getUTCDate()] }
-  const firstOfMonth = Date.UTC(start.getUTCFullYear(), start.getUTCMonth() + steps * months, 1, start.getUTCHours(), start.getUTCMinutes(), start.getUTCSeconds())
+  const defaults = hasDayPart
+    ? {}
+    : freq === 'YEARLY'
+      ? { bymonth: rule.options.bymonth ?? [start.getUTCMonth() + 1], bymonthday: [start.getUTCDate()] }
+      : { bymonthday: [start.getUTCDate()] }
+  const firstOfMonth = Date.UTC(
+    start.getUTCFullYear(),
+    start.getUTCMonth() + steps * months,
+    1,
+    start.getUTCHours(),
+    start.getUTCMinutes(),
+    start.getUTCSeconds(),
+  )
   // Day 1 of the month: DTSTART's own day may not exist there (31st, 29 February).
   return { dtstartMs: firstOfMonth, defaults }
 }

@@ -109,7 +109,11 @@ function checkDatesExist(parts: Map<string, string>): void {
   if (parts.get('FREQ') === 'MONTHLY' && weekdays.length > 0 && weekdays.every(pastFifth)) {
     fail(`BYDAY=${parts.get('BYDAY')} asks for a weekday past the 5th in a month, so the rule has no dates`)
   }
-  const monthDays = parts.get('BYMONTHDAY')?.split(',').map((day) => Math.abs(Number(day))) ?? []
+  const monthDays =
+    parts
+      .get('BYMONTHDAY')
+      ?.split(',')
+      .map((day) => Math.abs(Number(day))) ?? []
   const months = parts.get('BYMONTH')?.split(',').map(Number) ?? []
   if (monthDays.length === 0 || months.length === 0) return
   const longest = Math.max(...months.map((month) => LONGEST_MONTH_DAYS[month - 1]))
@@ -128,7 +132,10 @@ function parseUntil(text: string | undefined): RuleUntil | null {
 
 /** Parses and checks one RRULE value (with or without the `RRULE:` prefix). Throws a readable Error. */
 export function parseRule(rrule: string): ParsedRule {
-  const text = rrule.trim().replace(/^RRULE:/i, '').toUpperCase()
+  const text = rrule
+    .trim()
+    .replace(/^RRULE:/i, '')
+    .toUpperCase()
   if (/[\r\n]/.test(text)) fail('expected a single RRULE value, without DTSTART or other lines')
   const parts = splitParts(text)
   if (parts.size === 0) fail('the rule is empty')

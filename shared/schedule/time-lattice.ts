@@ -16,7 +16,11 @@ const DAY_FILTERS = ['BYMONTH', 'BYWEEKNO', 'BYYEARDAY', 'BYMONTHDAY', 'BYDAY']
  * steps of the carry; after a day filtered out by a day part, or with INTERVAL above 60, that
  * carry can be 24 hours or 40 minutes and loop for ever too, so those combinations are refused.
  */
-export function unreachableTimeProblem(freq: string | undefined, parts: ReadonlyMap<string, string>, start: Pick<WallTime, 'hour' | 'minute' | 'second'>): string | null {
+export function unreachableTimeProblem(
+  freq: string | undefined,
+  parts: ReadonlyMap<string, string>,
+  start: Pick<WallTime, 'hour' | 'minute' | 'second'>,
+): string | null {
   if (!['HOURLY', 'MINUTELY', 'SECONDLY'].includes(freq ?? '')) return null
   const interval = Number(parts.get('INTERVAL') ?? 1)
   const numbers = (name: string) => parts.get(name)?.split(',').map(Number)

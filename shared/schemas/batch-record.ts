@@ -32,7 +32,11 @@ export const BathRecordSchema = z.object({
   volumeL: z.number().positive().max(1_000_000),
   purityPct: z.number().positive().max(100),
   gramsWeighed: z.number().positive().max(1_000_000),
-  minutes: z.number().int().positive().max(24 * 60),
+  minutes: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 60),
   observations: text().trim().max(2000).default(''),
 })
 export const NoteRecordSchema = z.object({ kind: z.enum(['note', 'review']), text: text().trim().min(1).max(4000) })

@@ -59,8 +59,22 @@ export type BoardWire = z.infer<typeof BoardWireSchema>
 /** A card as the board draws it; a full task (from a live event or a move) is one too. */
 export type BoardCard = Pick<
   Task,
-  | 'id' | 'title' | 'category' | 'priority' | 'durationMinutes' | 'targetLabel' | 'tankId' | 'areaId' | 'localDate' | 'localTime'
-  | 'status' | 'assigneeId' | 'assigneeName' | 'flag' | 'heldReason' | 'version'
+  | 'id'
+  | 'title'
+  | 'category'
+  | 'priority'
+  | 'durationMinutes'
+  | 'targetLabel'
+  | 'tankId'
+  | 'areaId'
+  | 'localDate'
+  | 'localTime'
+  | 'status'
+  | 'assigneeId'
+  | 'assigneeName'
+  | 'flag'
+  | 'heldReason'
+  | 'version'
 >
 
 export interface Board {

@@ -33,5 +33,8 @@ export const calendarDate = () =>
 /** A wall-clock date and time without a zone, `YYYY-MM-DDTHH:mm[:ss]`, on a real day and a real time. */
 export const wallDateTime = ({ seconds }: { seconds: 'required' | 'optional' }) =>
   text()
-    .regex(seconds === 'required' ? /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}$/ : /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/, seconds === 'required' ? 'Use YYYY-MM-DDTHH:mm:ss' : 'Use YYYY-MM-DDTHH:mm')
+    .regex(
+      seconds === 'required' ? /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}$/ : /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/,
+      seconds === 'required' ? 'Use YYYY-MM-DDTHH:mm:ss' : 'Use YYYY-MM-DDTHH:mm',
+    )
     .refine(realDateTime, 'There is no such date or time')

@@ -32,7 +32,8 @@ export const CompletionInputSchema = z
   })
   .superRefine((c, ctx) => {
     if (c.outcome === 'skipped' && !c.skipReason) ctx.addIssue({ code: 'custom', path: ['skipReason'], message: 'Choose why it could not be done' })
-    if (c.outcome === 'skipped' && c.skipReason === 'other' && !c.note) ctx.addIssue({ code: 'custom', path: ['note'], message: 'Say why it could not be done' })
+    if (c.outcome === 'skipped' && c.skipReason === 'other' && !c.note)
+      ctx.addIssue({ code: 'custom', path: ['note'], message: 'Say why it could not be done' })
   })
 export type CompletionInput = z.input<typeof CompletionInputSchema>
 /** What the server's completion takes, once the route has parsed the body. */

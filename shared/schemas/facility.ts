@@ -2,7 +2,11 @@ import { z } from 'zod'
 import { text } from './text'
 import { calendarDate } from './calendar'
 
-const code = text().trim().min(1, 'Required').max(40).regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
+const code = text()
+  .trim()
+  .min(1, 'Required')
+  .max(40)
+  .regex(/^[A-Za-z0-9._-]+$/, 'Use letters, digits, dot, dash or underscore')
 const name = text().trim().min(1, 'Required').max(120)
 const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 const isoDate = calendarDate()

@@ -18,7 +18,11 @@ export const ChannelSchema = z.enum(CHANNELS)
 export type Channel = z.infer<typeof ChannelSchema>
 
 export const LadderStepSchema = z.object({
-  afterMinutes: z.number().int().min(0).max(7 * 24 * 60),
+  afterMinutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(7 * 24 * 60),
   notify: z.array(RecipientSchema).min(1, 'Notify someone'),
   /** Unset (ladders saved before channels existed) reads as e-mail only. */
   channels: z.array(ChannelSchema).min(1, 'Choose at least one channel').optional(),

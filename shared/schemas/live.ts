@@ -6,7 +6,21 @@ import { text } from './text'
  * What the server's change outbox records and the live feed names: one task (`task`), many tasks
  * at once (`tasks`: clients refetch their task views), or another kind of record.
  */
-export const CHANGE_KINDS = ['task', 'tasks', 'routine', 'amendment', 'catalogue', 'facility', 'incident', 'event', 'roster', 'oxygen', 'stock', 'parameter', 'playbook'] as const
+export const CHANGE_KINDS = [
+  'task',
+  'tasks',
+  'routine',
+  'amendment',
+  'catalogue',
+  'facility',
+  'incident',
+  'event',
+  'roster',
+  'oxygen',
+  'stock',
+  'parameter',
+  'playbook',
+] as const
 export type ChangeKind = (typeof CHANGE_KINDS)[number]
 
 /** The socket events of the live feed, all sent to the whole facility. */

@@ -14,7 +14,8 @@ export const CylinderInputSchema = z
   })
   .superRefine((c, ctx) => {
     if (c.method === 'metric' && !c.waterCapacityL) ctx.addIssue({ code: 'custom', path: ['waterCapacityL'], message: 'Give the water capacity in litres' })
-    if (c.method === 'psi-factor' && !c.factorLPerPsi) ctx.addIssue({ code: 'custom', path: ['factorLPerPsi'], message: 'Give the cylinder factor (L per psi)' })
+    if (c.method === 'psi-factor' && !c.factorLPerPsi)
+      ctx.addIssue({ code: 'custom', path: ['factorLPerPsi'], message: 'Give the cylinder factor (L per psi)' })
   })
 export type CylinderInput = z.input<typeof CylinderInputSchema>
 export type ParsedCylinderInput = z.output<typeof CylinderInputSchema>

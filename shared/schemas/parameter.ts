@@ -37,8 +37,11 @@ export type Limit = z.infer<typeof LimitSchema>
 
 export const LimitInputSchema = LimitSchema.omit({ id: true }).superRefine((l, ctx) => {
   if (l.scope !== 'facility' && l.scopeId == null) ctx.addIssue({ code: 'custom', path: ['scopeId'], message: `Choose the ${l.scope}` })
-  if (l.okMin != null && l.okMax != null && l.okMin > l.okMax) ctx.addIssue({ code: 'custom', path: ['okMax'], message: 'The upper ok limit is below the lower one' })
-  if (l.criticalMin != null && l.okMin != null && l.criticalMin > l.okMin) ctx.addIssue({ code: 'custom', path: ['criticalMin'], message: 'The critical low limit must be at or below the ok range' })
-  if (l.criticalMax != null && l.okMax != null && l.criticalMax < l.okMax) ctx.addIssue({ code: 'custom', path: ['criticalMax'], message: 'The critical high limit must be at or above the ok range' })
+  if (l.okMin != null && l.okMax != null && l.okMin > l.okMax)
+    ctx.addIssue({ code: 'custom', path: ['okMax'], message: 'The upper ok limit is below the lower one' })
+  if (l.criticalMin != null && l.okMin != null && l.criticalMin > l.okMin)
+    ctx.addIssue({ code: 'custom', path: ['criticalMin'], message: 'The critical low limit must be at or below the ok range' })
+  if (l.criticalMax != null && l.okMax != null && l.criticalMax < l.okMax)
+    ctx.addIssue({ code: 'custom', path: ['criticalMax'], message: 'The critical high limit must be at or above the ok range' })
 })
 export type LimitInput = z.infer<typeof LimitInputSchema>

@@ -63,7 +63,6 @@ export type UpdatePersonInput = z.infer<typeof UpdatePersonInputSchema>
 export const ResetPasswordInputSchema = z.object({ password })
 export type ResetPasswordInput = z.infer<typeof ResetPasswordInputSchema>
 
-
 /** My own settings: the address I sign in with (escalation mail goes there too) and my quiet hours. */
 // My preferences (address, channels, quiet hours) are in ./preferences.ts.
 

@@ -23,17 +23,30 @@ export const PlaybookStepSchema = z
     instructions: text().trim().max(4000).default(''),
     dayOffset: z.number().int().min(-30).max(365).default(0),
     time: hhmm.nullable().default(null),
-    minutesOffset: z.number().int().min(-7 * 1440).max(7 * 1440).default(0),
+    minutesOffset: z
+      .number()
+      .int()
+      .min(-7 * 1440)
+      .max(7 * 1440)
+      .default(0),
     repeatDays: z.number().int().min(1).max(365).default(1),
     perTank: z.boolean().default(true),
     durationMinutes: z.number().int().min(1).max(1440).default(10),
-    graceMinutes: z.number().int().min(0).max(7 * 1440).default(60),
+    graceMinutes: z
+      .number()
+      .int()
+      .min(0)
+      .max(7 * 1440)
+      .default(60),
     priority: PrioritySchema.default('routine'),
     assigneeRule: AssigneeRuleSchema.default({ kind: 'none' }),
     requiredReadings: z.array(text().min(1)).max(30).default([]),
     ladderId: z.number().int().nullable().default(null),
   })
-  .refine((s) => s.time === null || s.minutesOffset === 0, { path: ['minutesOffset'], message: 'Give either a time of day or minutes from the start, not both' })
+  .refine((s) => s.time === null || s.minutesOffset === 0, {
+    path: ['minutesOffset'],
+    message: 'Give either a time of day or minutes from the start, not both',
+  })
 export type PlaybookStep = z.output<typeof PlaybookStepSchema>
 
 export const PlaybookInputSchema = z.object({

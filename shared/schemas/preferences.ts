@@ -4,7 +4,9 @@ import { text } from './text'
 
 const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 /** E.164: a plus, the country code and the number, digits only (what text providers take). */
-export const PhoneSchema = text().trim().regex(/^\+[1-9]\d{6,14}$/, 'Use the international form, e.g. +447700900123')
+export const PhoneSchema = text()
+  .trim()
+  .regex(/^\+[1-9]\d{6,14}$/, 'Use the international form, e.g. +447700900123')
 
 /** How escalations reach me: my addresses, the channels I accept and my quiet hours. */
 export const PreferencesSchema = z.object({
@@ -38,7 +40,10 @@ export type PreferencesInput = z.infer<typeof PreferencesInputSchema>
 const base64url = text().regex(/^[A-Za-z0-9_-]+=*$/, 'Not base64url')
 /** A browser's push subscription as `PushSubscription.toJSON()` gives it (RFC 8030 endpoint, RFC 8291 keys). */
 export const PushSubscriptionInputSchema = z.object({
-  endpoint: text().url().max(1000).refine((u) => /^https?:\/\//.test(u), 'The endpoint must be an http(s) URL'),
+  endpoint: text()
+    .url()
+    .max(1000)
+    .refine((u) => /^https?:\/\//.test(u), 'The endpoint must be an http(s) URL'),
   keys: z.object({ p256dh: base64url.max(200), auth: base64url.max(100) }),
 })
 export type PushSubscriptionInput = z.infer<typeof PushSubscriptionInputSchema>

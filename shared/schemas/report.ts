@@ -13,10 +13,18 @@ export const REPORT_PERIODS = ['day', 'week'] as const
 export type ReportPeriod = (typeof REPORT_PERIODS)[number]
 
 /** The compliance report's question: the range, grouped by category, area or person, per day or week. */
-export const ComplianceQuerySchema = ReportRangeSchema.and(z.object({ by: z.enum(COMPLIANCE_GROUPINGS).default('category'), period: z.enum(REPORT_PERIODS).default('day') }))
+export const ComplianceQuerySchema = ReportRangeSchema.and(
+  z.object({ by: z.enum(COMPLIANCE_GROUPINGS).default('category'), period: z.enum(REPORT_PERIODS).default('day') }),
+)
 
 /** The welfare report's question: the range and, optionally, tank ids separated by commas. */
-export const WelfareQuerySchema = ReportRangeSchema.and(z.object({ tankIds: text().regex(/^\d+(,\d+)*$/, 'Tank ids separated by commas').optional() }))
+export const WelfareQuerySchema = ReportRangeSchema.and(
+  z.object({
+    tankIds: text()
+      .regex(/^\d+(,\d+)*$/, 'Tank ids separated by commas')
+      .optional(),
+  }),
+)
 
 /** The audit trail's question: the range and, optionally, one kind of record. */
 export const AuditQuerySchema = ReportRangeSchema.and(z.object({ entity: text().max(20).optional() }))

@@ -60,8 +60,11 @@ export const OnCallInputSchema = z
   .refine((d) => d.toDate > d.fromDate, { path: ['toDate'], message: 'Duty must end after it starts' })
 export type OnCallInput = z.infer<typeof OnCallInputSchema>
 
-export const RotationInputSchema = z
-  .object({ personIds: z.array(z.number().int().positive()).min(1, 'Choose who shares the duty'), from: isoDate, weeks: z.number().int().min(1).max(52) })
+export const RotationInputSchema = z.object({
+  personIds: z.array(z.number().int().positive()).min(1, 'Choose who shares the duty'),
+  from: isoDate,
+  weeks: z.number().int().min(1).max(52),
+})
 export type RotationInput = z.infer<typeof RotationInputSchema>
 
 export const RotationResultSchema = z.object({

@@ -4,17 +4,41 @@ import { calendarDate, wallDateTime } from './calendar'
 import { RoleSchema } from './person'
 
 export const ROUTINE_CATEGORIES = [
-  'welfare', 'feeding', 'water_quality', 'life_support', 'quarantine', 'maintenance', 'hygiene',
-  'calibration', 'alarms', 'stores', 'stock', 'veterinary', 'records', 'research', 'on_call',
+  'welfare',
+  'feeding',
+  'water_quality',
+  'life_support',
+  'quarantine',
+  'maintenance',
+  'hygiene',
+  'calibration',
+  'alarms',
+  'stores',
+  'stock',
+  'veterinary',
+  'records',
+  'research',
+  'on_call',
 ] as const
 export const CategorySchema = z.enum(ROUTINE_CATEGORIES)
 export type Category = z.infer<typeof CategorySchema>
 
 export const CATEGORY_LABELS: Record<Category, string> = {
-  welfare: 'Welfare check', feeding: 'Feeding', water_quality: 'Water quality', life_support: 'Life support',
-  quarantine: 'Quarantine', maintenance: 'Maintenance', hygiene: 'Hygiene', calibration: 'Calibration',
-  alarms: 'Alarm test', stores: 'Stores', stock: 'Stock', veterinary: 'Veterinary', records: 'Records',
-  research: 'Research', on_call: 'On call',
+  welfare: 'Welfare check',
+  feeding: 'Feeding',
+  water_quality: 'Water quality',
+  life_support: 'Life support',
+  quarantine: 'Quarantine',
+  maintenance: 'Maintenance',
+  hygiene: 'Hygiene',
+  calibration: 'Calibration',
+  alarms: 'Alarm test',
+  stores: 'Stores',
+  stock: 'Stock',
+  veterinary: 'Veterinary',
+  records: 'Records',
+  research: 'Research',
+  on_call: 'On call',
 }
 
 /** What a routine or task is about; `area_tanks` means every tank in the named areas. */
@@ -73,9 +97,24 @@ export const RoutineInputSchema = z
     onlyInUse: z.boolean().default(true),
     rrule: text().trim().min(1, 'Required').max(500),
     dtstart: localDateTime,
-    durationMinutes: z.number().int().min(1, 'At least 1 minute').max(24 * 60).default(5),
-    windowBeforeMinutes: z.number().int().min(0).max(24 * 60).default(30),
-    graceMinutes: z.number().int().min(0).max(7 * 24 * 60).default(60),
+    durationMinutes: z
+      .number()
+      .int()
+      .min(1, 'At least 1 minute')
+      .max(24 * 60)
+      .default(5),
+    windowBeforeMinutes: z
+      .number()
+      .int()
+      .min(0)
+      .max(24 * 60)
+      .default(30),
+    graceMinutes: z
+      .number()
+      .int()
+      .min(0)
+      .max(7 * 24 * 60)
+      .default(60),
     priority: PrioritySchema.default('routine'),
     assigneeRule: AssigneeRuleSchema.default({ kind: 'none' }),
     requiredReadings: z.array(text().min(1)).max(30).default([]),

@@ -50,39 +50,49 @@ export const TransportWaterSchema = z.object({
   doMgL: z.number().min(0).max(60).nullable().default(null),
 })
 
-export const MovementInputSchema = z.discriminatedUnion('kind', [
-  base.extend({
-    kind: z.literal('arrival'), toTankId: id, count,
-    meanWeightG: z.number().positive().max(100_000).optional(),
-    origin: text(200).min(1, 'Say where the fish came from'),
-    permitRef: text(120).optional(),
-    healthCertificateRef: text(120).optional(),
-    transportWater: TransportWaterSchema.optional(),
-  }),
-  base.extend({ kind: z.literal('transfer'), ...fromTank, toTankId: id, count, meanWeightG: z.number().positive().max(100_000).optional() }),
-  base.extend({ kind: z.literal('grading'), ...fromTank, toTankId: id, count, meanWeightG: z.number().positive().max(100_000).optional() }),
-  base.extend({
-    kind: z.literal('mortality'), ...fromTank, count,
-    cause: text(80).min(1).default(UNKNOWN_CAUSE),
-    causeText: text(500).optional(),
-    necropsy: z.boolean().default(false),
-  }),
-  base.extend({ kind: z.literal('cull'), ...fromTank, count, reason: text(500).min(1, 'Say why the fish were culled') }),
-  base.extend({ kind: z.literal('sampling'), ...fromTank, count, reason: text(500).min(1, 'Say what the fish were sampled for') }),
-  base.extend({ kind: z.literal('dispatch'), ...fromTank, count, destination: text(200).min(1, 'Say where the fish went') }),
-  base.extend({
-    kind: z.literal('correction'),
-    tankId: id,
-    /** Fish to add (positive) or take off (negative) the register's count. */
-    delta: z.number({ error: 'Enter a number' }).int('Whole fish only').refine((n) => n !== 0, 'A correction changes the count').refine((n) => Math.abs(n) <= 10_000_000, 'Too large'),
-    reason: text(500).min(5, 'Say why the count is corrected'),
-    correctsId: id.optional(),
-  }),
-]).superRefine((m, ctx) => {
-  if ((m.kind === 'transfer' || m.kind === 'grading') && m.fromTankId === m.toTankId) {
-    ctx.addIssue({ code: 'custom', path: ['toTankId'], message: 'Choose a different tank to move the fish to' })
-  }
-})
+export const MovementInputSchema = z
+  .discriminatedUnion('kind', [
+    base.extend({
+      kind: z.literal('arrival'),
+      toTankId: id,
+      count,
+      meanWeightG: z.number().positive().max(100_000).optional(),
+      origin: text(200).min(1, 'Say where the fish came from'),
+      permitRef: text(120).optional(),
+      healthCertificateRef: text(120).optional(),
+      transportWater: TransportWaterSchema.optional(),
+    }),
+    base.extend({ kind: z.literal('transfer'), ...fromTank, toTankId: id, count, meanWeightG: z.number().positive().max(100_000).optional() }),
+    base.extend({ kind: z.literal('grading'), ...fromTank, toTankId: id, count, meanWeightG: z.number().positive().max(100_000).optional() }),
+    base.extend({
+      kind: z.literal('mortality'),
+      ...fromTank,
+      count,
+      cause: text(80).min(1).default(UNKNOWN_CAUSE),
+      causeText: text(500).optional(),
+      necropsy: z.boolean().default(false),
+    }),
+    base.extend({ kind: z.literal('cull'), ...fromTank, count, reason: text(500).min(1, 'Say why the fish were culled') }),
+    base.extend({ kind: z.literal('sampling'), ...fromTank, count, reason: text(500).min(1, 'Say what the fish were sampled for') }),
+    base.extend({ kind: z.literal('dispatch'), ...fromTank, count, destination: text(200).min(1, 'Say where the fish went') }),
+    base.extend({
+      kind: z.literal('correction'),
+      tankId: id,
+      /** Fish to add (positive) or take off (negative) the register's count. */
+      delta: z
+        .number({ error: 'Enter a number' })
+        .int('Whole fish only')
+        .refine((n) => n !== 0, 'A correction changes the count')
+        .refine((n) => Math.abs(n) <= 10_000_000, 'Too large'),
+      reason: text(500).min(5, 'Say why the count is corrected'),
+      correctsId: id.optional(),
+    }),
+  ])
+  .superRefine((m, ctx) => {
+    if ((m.kind === 'transfer' || m.kind === 'grading') && m.fromTankId === m.toTankId) {
+      ctx.addIssue({ code: 'custom', path: ['toTankId'], message: 'Choose a different tank to move the fish to' })
+    }
+  })
 export type MovementInput = z.input<typeof MovementInputSchema>
 export type ParsedMovementInput = z.output<typeof MovementInputSchema>
 
@@ -156,9 +166,21 @@ export const StockSettingsSchema = z.object({
   mortalityCauses: z.array(textField().trim().min(1).max(80)).max(40),
   /** Deaths in 7 days, as % of the batch, above which a flag is raised and an incident proposed. */
   mortalityWeekPct: z.number().positive().max(100),
-  notifyWelfareOfficerHours: z.number().int().positive().max(24 * 30),
-  notifyCommitteeHours: z.number().int().positive().max(24 * 60),
-  fullReportHours: z.number().int().positive().max(24 * 90),
+  notifyWelfareOfficerHours: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 30),
+  notifyCommitteeHours: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 60),
+  fullReportHours: z
+    .number()
+    .int()
+    .positive()
+    .max(24 * 90),
 })
 export type StockSettings = z.infer<typeof StockSettingsSchema>
 export const UpdateStockSettingsInputSchema = StockSettingsSchema.partial()

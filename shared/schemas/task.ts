@@ -77,8 +77,18 @@ export const CreateTaskInputSchema = z.object({
   targetKind: TargetKindSchema.exclude(['area_tanks']),
   targetId: z.number().int().positive().nullable().default(null),
   localStart: wallDateTime({ seconds: 'optional' }),
-  durationMinutes: z.number().int().min(1).max(24 * 60).default(10),
-  graceMinutes: z.number().int().min(0).max(7 * 24 * 60).default(60),
+  durationMinutes: z
+    .number()
+    .int()
+    .min(1)
+    .max(24 * 60)
+    .default(10),
+  graceMinutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(7 * 24 * 60)
+    .default(60),
   assigneeId: z.number().int().positive().nullable().default(null),
   requiredReadings: z.array(text().min(1)).max(30).default([]),
 })
@@ -96,7 +106,10 @@ export type MoveTaskInput = z.infer<typeof MoveTaskInputSchema>
 
 export const BulkMoveInputSchema = z
   .object({
-    tasks: z.array(z.object({ id: z.number().int().positive(), version: z.number().int() })).min(1).max(200),
+    tasks: z
+      .array(z.object({ id: z.number().int().positive(), version: z.number().int() }))
+      .min(1)
+      .max(200),
     assigneeId: z.number().int().positive().nullable().optional(),
     date: isoDate.optional(),
   })

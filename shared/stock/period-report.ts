@@ -26,7 +26,19 @@ export interface BatchPeriodFigures extends PeriodCounts {
   moved: number
 }
 
-const empty = (batchId: number): BatchPeriodFigures => ({ batchId, opening: 0, arrived: 0, moved: 0, died: 0, diedByCause: {}, culled: 0, used: 0, dispatched: 0, corrected: 0, closing: 0 })
+const empty = (batchId: number): BatchPeriodFigures => ({
+  batchId,
+  opening: 0,
+  arrived: 0,
+  moved: 0,
+  died: 0,
+  diedByCause: {},
+  culled: 0,
+  used: 0,
+  dispatched: 0,
+  corrected: 0,
+  closing: 0,
+})
 
 /**
  * A batch's numbers for [from, to): what it held at the start, what came, moved, died (by
@@ -82,7 +94,22 @@ export function tankPeriodFigures(entries: DatedEntry[], from: string, to: strin
   const out = new Map<string, TankPeriodFigures>()
   const row = (batchId: number, tankId: number) => {
     const key = `${batchId}:${tankId}`
-    if (!out.has(key)) out.set(key, { batchId, tankId, opening: 0, arrived: 0, movedIn: 0, movedOut: 0, died: 0, diedByCause: {}, culled: 0, used: 0, dispatched: 0, corrected: 0, closing: 0 })
+    if (!out.has(key))
+      out.set(key, {
+        batchId,
+        tankId,
+        opening: 0,
+        arrived: 0,
+        movedIn: 0,
+        movedOut: 0,
+        died: 0,
+        diedByCause: {},
+        culled: 0,
+        used: 0,
+        dispatched: 0,
+        corrected: 0,
+        closing: 0,
+      })
     return out.get(key)!
   }
   for (const e of entries) {

@@ -45,12 +45,7 @@ export const DISSOLVED_OXYGEN_UNIT = 'mg/L'
 
 /** Benson & Krause (1984): ln C0 for fresh water at 1 atm, mg/L; T in kelvin. */
 function freshwaterSolubilityAtOneAtmosphere(kelvin: number): number {
-  const lnC0 =
-    -139.34411 +
-    1.575701e5 / kelvin -
-    6.642308e7 / kelvin ** 2 +
-    1.2438e10 / kelvin ** 3 -
-    8.621949e11 / kelvin ** 4
+  const lnC0 = -139.34411 + 1.575701e5 / kelvin - 6.642308e7 / kelvin ** 2 + 1.2438e10 / kelvin ** 3 - 8.621949e11 / kelvin ** 4
   return Math.exp(lnC0)
 }
 
@@ -77,20 +72,11 @@ export function oxygenSolubilityMgL(tempC: number, salinity: number, pressureKpa
   requireWithinRange(salinity, OXYGEN_SALINITY_RANGE_G_PER_KG)
   requireWithinRange(pressureKpa, BAROMETRIC_PRESSURE_RANGE_KPA)
   const kelvin = tempC + KELVIN_OFFSET
-  return (
-    freshwaterSolubilityAtOneAtmosphere(kelvin) *
-    salinityFactor(kelvin, salinity) *
-    pressureFactor(tempC, pressureKpa / STANDARD_PRESSURE_KPA)
-  )
+  return freshwaterSolubilityAtOneAtmosphere(kelvin) * salinityFactor(kelvin, salinity) * pressureFactor(tempC, pressureKpa / STANDARD_PRESSURE_KPA)
 }
 
 /** Measured dissolved oxygen as a percentage of the solubility under the same conditions (100 % = saturated). */
-export function oxygenPercentSaturation(
-  doMgL: number,
-  tempC: number,
-  salinity: number,
-  pressureKpa = STANDARD_PRESSURE_KPA,
-): number {
+export function oxygenPercentSaturation(doMgL: number, tempC: number, salinity: number, pressureKpa = STANDARD_PRESSURE_KPA): number {
   requireConcentration(doMgL, 'Dissolved oxygen', DISSOLVED_OXYGEN_UNIT)
   return (100 * doMgL) / oxygenSolubilityMgL(tempC, salinity, pressureKpa)
 }

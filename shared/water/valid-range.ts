@@ -23,9 +23,7 @@ export function describeRange(range: ValidRange): string {
 /** Returns the value when it lies in the closed range; otherwise throws an Error naming the input and the range. */
 export function requireWithinRange(value: number, range: ValidRange): number {
   if (!Number.isFinite(value)) {
-    throw new Error(
-      `${range.quantity} must be a number (got ${value}); ${describeRange(range)} is the range of ${range.basis}`,
-    )
+    throw new Error(`${range.quantity} must be a number (got ${value}); ${describeRange(range)} is the range of ${range.basis}`)
   }
   if (value < range.min || value > range.max) {
     const reading = withUnit(value, range.unit)

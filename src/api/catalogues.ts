@@ -1,8 +1,16 @@
 import { queryOptions } from '@tanstack/react-query'
 import { z } from 'zod'
 import {
-  AreaInputSchema, AreaSchema, BatchInputSchema, BatchSchema, EquipmentInputSchema, EquipmentSchema,
-  SystemInputSchema, SystemSchema, TankInputSchema, TankSchema,
+  AreaInputSchema,
+  AreaSchema,
+  BatchInputSchema,
+  BatchSchema,
+  EquipmentInputSchema,
+  EquipmentSchema,
+  SystemInputSchema,
+  SystemSchema,
+  TankInputSchema,
+  TankSchema,
 } from '#shared/schemas/facility'
 import { apiFetch } from '../lib/api-client'
 

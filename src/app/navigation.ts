@@ -1,6 +1,20 @@
 import {
-  BarChart3, Bell, BookOpen, CalendarDays, ClipboardCheck, Cylinder, Fish, LayoutGrid, Repeat, Users, CalendarClock, Mail, Settings,
-  Printer, Siren, type LucideIcon,
+  BarChart3,
+  Bell,
+  BookOpen,
+  CalendarDays,
+  ClipboardCheck,
+  Cylinder,
+  Fish,
+  LayoutGrid,
+  Repeat,
+  Users,
+  CalendarClock,
+  Mail,
+  Settings,
+  Printer,
+  Siren,
+  type LucideIcon,
 } from 'lucide-react'
 import type { Role } from '#shared/schemas/person'
 

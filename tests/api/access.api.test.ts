@@ -22,8 +22,16 @@ const MATRIX: Array<{ name: string; call: Call; allowed: Role[] }> = [
   { name: 'GET /api/me', call: { method: 'get', path: () => '/api/me' }, allowed: [...ROLES] },
   { name: 'GET /api/people', call: { method: 'get', path: () => '/api/people' }, allowed: ['manager'] },
   { name: 'POST /api/people', call: { method: 'post', path: () => '/api/people', body: () => buildPersonInput() }, allowed: ['manager'] },
-  { name: 'PATCH /api/people/:id', call: { method: 'patch', path: () => `/api/people/${someoneId}`, body: () => ({ title: 'Night cover' }) }, allowed: ['manager'] },
-  { name: 'POST /api/people/:id/password', call: { method: 'post', path: () => `/api/people/${someoneId}/password`, body: () => ({ password: 'another-good-one' }) }, allowed: ['manager'] },
+  {
+    name: 'PATCH /api/people/:id',
+    call: { method: 'patch', path: () => `/api/people/${someoneId}`, body: () => ({ title: 'Night cover' }) },
+    allowed: ['manager'],
+  },
+  {
+    name: 'POST /api/people/:id/password',
+    call: { method: 'post', path: () => `/api/people/${someoneId}/password`, body: () => ({ password: 'another-good-one' }) },
+    allowed: ['manager'],
+  },
 ]
 
 describe('role matrix', () => {
@@ -47,7 +55,9 @@ describe('role matrix', () => {
     }
     test(`${row.name} without signing in answers 401`, async () => {
       const { method, path, body } = row.call
-      await requestByMethod(request(t.app), method, path()).send(body?.() ?? {}).expect(401)
+      await requestByMethod(request(t.app), method, path())
+        .send(body?.() ?? {})
+        .expect(401)
     })
   }
 })

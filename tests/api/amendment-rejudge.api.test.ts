@@ -20,9 +20,16 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const taskRow = (id: number) => db().getRepository(TaskEntity).findOneByOrFail({ id })
-const criticalAlerts = (taskId: number) => db().getRepository(AlertEntity).find({ where: { taskId, kind: 'critical_reading' } })
-const rechecks = (taskId: number) => db().getRepository(TaskEntity).find({ where: { recheckOfTaskId: taskId } })
-const amend = (completionId: string, do_mgL: number, reason: string) => supervisor.post(`/api/completions/${completionId}/amendments`).send({ reason, readings: { do_mgL } })
+const criticalAlerts = (taskId: number) =>
+  db()
+    .getRepository(AlertEntity)
+    .find({ where: { taskId, kind: 'critical_reading' } })
+const rechecks = (taskId: number) =>
+  db()
+    .getRepository(TaskEntity)
+    .find({ where: { recheckOfTaskId: taskId } })
+const amend = (completionId: string, do_mgL: number, reason: string) =>
+  supervisor.post(`/api/completions/${completionId}/amendments`).send({ reason, readings: { do_mgL } })
 
 /** A tank whose loop has its own DO limits, so the story does not hang on the facility's defaults: ok 5–10.5 mg/L, critical below 4. */
 async function tankWithDoLimits(): Promise<Tank> {
@@ -101,7 +108,9 @@ describe('a supervisor corrects a reading on a finished check, and the record is
 
   test('when the alert cannot be written, the correction is not kept either: one commit holds the amendment, the new flag and its follow-ups', async () => {
     const { task, completionId } = await completedCheck(6.8)
-    await failingInsert('alerts', `NEW.taskId = ${task.id}`, () => amend(completionId, 3.1, 'The meter was read on the wrong probe; the tank read 3.1').expect(500))
+    await failingInsert('alerts', `NEW.taskId = ${task.id}`, () =>
+      amend(completionId, 3.1, 'The meter was read on the wrong probe; the tank read 3.1').expect(500),
+    )
     expect((await taskRow(task.id)).flag).toBeNull()
     expect(await db().getRepository(AmendmentEntity).countBy({ completionId })).toBe(0)
     expect(await rechecks(task.id)).toHaveLength(0)

@@ -31,7 +31,8 @@ beforeAll(async () => {
 afterAll(() => t?.close())
 
 const NUMBERS = ['opening', 'arrived', 'movedIn', 'movedOut', 'died', 'culled', 'used', 'dispatched', 'corrected', 'closing'] as const
-const stock = async (from: string, to: string, extra = '') => StockReportRowSchema.array().parse((await manager.get(`/api/reports/stock?from=${from}&to=${to}${extra}`).expect(200)).body)
+const stock = async (from: string, to: string, extra = '') =>
+  StockReportRowSchema.array().parse((await manager.get(`/api/reports/stock?from=${from}&to=${to}${extra}`).expect(200)).body)
 
 describe('the animal record for a committee, on the demo year', () => {
   test('when a manager asks for the year, then every batch balances: opening + in − out = closing, moves between tanks cancel, and the end is what the register holds', async () => {
@@ -43,8 +44,15 @@ describe('the animal record for a committee, on the demo year', () => {
       expect(b.opening + b.arrived - b.died - b.culled - b.used - b.dispatched + b.corrected).toBe(b.closing)
       expect(b.movedIn).toBe(b.movedOut)
       const tanks = rows.filter((r) => r.batchId === b.batchId && r.tankId !== null)
-      for (const key of NUMBERS) expect(tanks.reduce((s, r) => s + r[key], 0), `${b.batchCode} ${key}`).toBe(b[key])
-      for (const line of tanks) expect(line.opening + line.arrived + line.movedIn - line.movedOut - line.died - line.culled - line.used - line.dispatched + line.corrected).toBe(line.closing)
+      for (const key of NUMBERS)
+        expect(
+          tanks.reduce((s, r) => s + r[key], 0),
+          `${b.batchCode} ${key}`,
+        ).toBe(b[key])
+      for (const line of tanks)
+        expect(line.opening + line.arrived + line.movedIn - line.movedOut - line.died - line.culled - line.used - line.dispatched + line.corrected).toBe(
+          line.closing,
+        )
       // The register's own count for the batch, read another way.
       const now = (await manager.get(`/api/batches/${b.batchId}/stock`).expect(200)).body as BatchStock
       expect(b.closing).toBe(now.count)
@@ -101,7 +109,11 @@ describe('the animal record for a committee, on the demo year', () => {
     expect(trial.committeeDoneAt > trial.committeeDueAt).toBe(true)
     const csv = await manager.get(`/api/reports/incidents?from=${yearAgo}&to=${today.toISODate()}&format=csv`).expect(200)
     // Dates stay text; numbers become numbers again.
-    const parsed = Papa.parse<Record<string, unknown>>(csv.text, { header: true, dynamicTyping: (field) => field === 'id' || field === 'dead', skipEmptyLines: true })
+    const parsed = Papa.parse<Record<string, unknown>>(csv.text, {
+      header: true,
+      dynamicTyping: (field) => field === 'id' || field === 'dead',
+      skipEmptyLines: true,
+    })
     expect(parsed.data.map((r) => IncidentReportRowSchema.parse(r))).toEqual(rows satisfies IncidentReportRow[])
   })
 

@@ -55,8 +55,42 @@ describe('the day as the board receives it', () => {
     for (const m of made) {
       const { body: task } = await supervisor.get(`/api/tasks/${m.id}`).expect(200)
       const card = board.tasks.find((c) => c.id === m.id)!
-      const { id, title, category, priority, durationMinutes, targetLabel, tankId, areaId, localDate, localTime, status, assigneeId, assigneeName, flag, heldReason, version } = task
-      expect(card).toEqual({ id, title, category, priority, durationMinutes, targetLabel, tankId, areaId, localDate, localTime, status, assigneeId, assigneeName, flag, heldReason, version })
+      const {
+        id,
+        title,
+        category,
+        priority,
+        durationMinutes,
+        targetLabel,
+        tankId,
+        areaId,
+        localDate,
+        localTime,
+        status,
+        assigneeId,
+        assigneeName,
+        flag,
+        heldReason,
+        version,
+      } = task
+      expect(card).toEqual({
+        id,
+        title,
+        category,
+        priority,
+        durationMinutes,
+        targetLabel,
+        tankId,
+        areaId,
+        localDate,
+        localTime,
+        status,
+        assigneeId,
+        assigneeName,
+        flag,
+        heldReason,
+        version,
+      })
     }
     expect(board.people.find((p) => p.personId === tech.id)).toMatchObject({ name: tech.name, taskCount: 1, plannedMinutes: 3 })
   })
@@ -81,7 +115,10 @@ describe('assigning on the board', () => {
     const date = inDays(2)
     const task = await makeTankTask(tanks[0], { localDate: date })
     const tech = await technicianOnShift(date)
-    await supervisor.patch(`/api/tasks/${task.id}`).send({ assigneeId: tech.id, version: task.version + 3 }).expect(409)
+    await supervisor
+      .patch(`/api/tasks/${task.id}`)
+      .send({ assigneeId: tech.id, version: task.version + 3 })
+      .expect(409)
     expect((await taskRow(task.id)).assigneeId).toBeNull()
   })
 
@@ -118,12 +155,19 @@ describe('moving to another day', () => {
   test('a weekly routine task moves to the next day, keeps its time, and is not recreated on its old day', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const routine = await createRoutine(routineData({ rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
-    const [first] = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
+    const [first] = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
     const target = DateTime.fromISO(first.localDate).plus({ days: 1 }).toISODate()!
     const { body } = await supervisor.patch(`/api/tasks/${first.id}`).send({ date: target, version: first.version }).expect(200)
     expect(body).toMatchObject({ localDate: target, localTime: '10:15' })
-    await updateRoutine(routine.id, { ...routineData({ name: routine.name, rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id], instructions: 'edited' }), version: routine.version })
-    const all = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id } })
+    await updateRoutine(routine.id, {
+      ...routineData({ name: routine.name, rrule: 'FREQ=WEEKLY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id], instructions: 'edited' }),
+      version: routine.version,
+    })
+    const all = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId: routine.id } })
     expect(all.filter((x) => x.localDate === first.localDate)).toHaveLength(0)
     expect(all.filter((x) => x.localDate === target)).toHaveLength(1)
   })
@@ -131,8 +175,13 @@ describe('moving to another day', () => {
   test('a daily routine task cannot move onto the next occurrence, and the refusal says why', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const routine = await createRoutine(routineData({ rrule: 'FREQ=DAILY', dtstart: `${inDays(2)}T10:15:00`, targetIds: [tanks[0].id] }))
-    const [first] = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
-    const res = await supervisor.patch(`/api/tasks/${first.id}`).send({ date: DateTime.fromISO(first.localDate).plus({ days: 1 }).toISODate(), version: first.version }).expect(409)
+    const [first] = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId: routine.id }, order: { dueAt: 'ASC' } })
+    const res = await supervisor
+      .patch(`/api/tasks/${first.id}`)
+      .send({ date: DateTime.fromISO(first.localDate).plus({ days: 1 }).toISODate(), version: first.version })
+      .expect(409)
     expect(res.body.error.message).toMatch(/already has this task on/)
     await supervisor.patch(`/api/tasks/${first.id}`).send({ date: '2020-01-01', version: first.version }).expect(409)
   })
@@ -143,14 +192,36 @@ describe('assignee rules', () => {
     const { tanks } = await makeAreaWithTanks(2)
     const date = inDays(5)
     const tech = await technicianOnShift(date)
-    const routine = await createRoutine(routineData({ rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
+    const routine = await createRoutine(
+      routineData({
+        rrule: 'FREQ=DAILY',
+        dtstart: `${inDays(1)}T07:30:00`,
+        targetIds: tanks.map((x) => x.id),
+        assigneeRule: { kind: 'role_on_shift', role: 'technician' },
+      }),
+    )
     await applyAssigneeRules(date, date)
-    const onDay = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id, localDate: date } })
+    const onDay = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId: routine.id, localDate: date } })
     // Other tests roster technicians too; ours must be among the assignees and nobody off shift.
     expect(onDay.every((x) => x.assigneeId !== null)).toBe(true)
     const other = await technicianOnShift(date)
-    await supervisor.patch(`/api/tasks/${onDay[0].id}`).send({ assigneeId: other.id, version: (await taskRow(onDay[0].id)).version }).expect(200)
-    await updateRoutine(routine.id, { ...routineData({ name: routine.name, rrule: 'FREQ=DAILY', dtstart: `${inDays(1)}T07:30:00`, targetIds: tanks.map((x) => x.id), assigneeRule: { kind: 'role_on_shift', role: 'technician' }, instructions: 'changed' }), version: routine.version })
+    await supervisor
+      .patch(`/api/tasks/${onDay[0].id}`)
+      .send({ assigneeId: other.id, version: (await taskRow(onDay[0].id)).version })
+      .expect(200)
+    await updateRoutine(routine.id, {
+      ...routineData({
+        name: routine.name,
+        rrule: 'FREQ=DAILY',
+        dtstart: `${inDays(1)}T07:30:00`,
+        targetIds: tanks.map((x) => x.id),
+        assigneeRule: { kind: 'role_on_shift', role: 'technician' },
+        instructions: 'changed',
+      }),
+      version: routine.version,
+    })
     await applyAssigneeRules(date, date)
     expect((await taskRow(onDay[0].id)).assigneeId).toBe(other.id)
     expect(tech.id).toBeGreaterThan(0)
@@ -160,7 +231,9 @@ describe('assignee rules', () => {
     const { tanks } = await makeAreaWithTanks(1)
     const person = await t.createPersonWithRole('supervisor')
     const routine = await createRoutine(routineData({ targetIds: [tanks[0].id], assigneeRule: { kind: 'person', personId: person.id } }))
-    const rows = await db().getRepository(TaskEntity).find({ where: { routineId: routine.id } })
+    const rows = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId: routine.id } })
     expect(rows.length).toBeGreaterThan(0)
     expect(rows.every((x) => x.assigneeId === person.id)).toBe(true)
   })
@@ -171,23 +244,51 @@ describe('roster API', () => {
     const a = await t.createPersonWithRole('technician', { onCallEligible: true })
     const b = await t.createPersonWithRole('technician', { onCallEligible: true })
     const monday = DateTime.now().setZone(zone).plus({ weeks: 20 }).startOf('week').toISODate()!
-    const pattern = await supervisor.post('/api/shifts/pattern').send({ personId: a.id, weekdays: ['MO', 'WE'], start: '07:00', end: '15:00', kind: 'day', from: monday, to: DateTime.fromISO(monday).plus({ days: 13 }).toISODate() }).expect(201)
+    const pattern = await supervisor
+      .post('/api/shifts/pattern')
+      .send({
+        personId: a.id,
+        weekdays: ['MO', 'WE'],
+        start: '07:00',
+        end: '15:00',
+        kind: 'day',
+        from: monday,
+        to: DateTime.fromISO(monday).plus({ days: 13 }).toISODate(),
+      })
+      .expect(201)
     expect(pattern.body).toEqual({ created: 4, skipped: 0 })
-    const rotation = await supervisor.post('/api/on-call-duties/rotation').send({ personIds: [a.id, b.id], from: monday, weeks: 4 }).expect(201)
+    const rotation = await supervisor
+      .post('/api/on-call-duties/rotation')
+      .send({ personIds: [a.id, b.id], from: monday, weeks: 4 })
+      .expect(201)
     expect(rotation.body.weekendCounts.map((c: { weekends: number }) => c.weekends)).toEqual([2, 2])
     const { body: days } = await supervisor.get(`/api/calendar?from=${monday}&to=${DateTime.fromISO(monday).plus({ days: 6 }).toISODate()}`).expect(200)
     expect(days).toHaveLength(7)
     expect(days[0].onShift).toContain(a.name)
     expect(days[3].onCall.length).toBeGreaterThan(0)
-    await supervisor.post('/api/on-call-duties/rotation').send({ personIds: [a.id], from: DateTime.fromISO(monday).plus({ days: 1 }).toISODate(), weeks: 1 }).expect(400)
+    await supervisor
+      .post('/api/on-call-duties/rotation')
+      .send({ personIds: [a.id], from: DateTime.fromISO(monday).plus({ days: 1 }).toISODate(), weeks: 1 })
+      .expect(400)
   })
 
   test('the on-call summary names who holds duty now, and a handover note is kept', async () => {
     const holder = await t.createPersonWithRole('technician', { onCallEligible: true, phone: '+61 7 5550 0199' })
     const today = DateTime.now().setZone(zone)
-    await supervisor.post('/api/on-call-duties').send({ personId: holder.id, fromDate: today.minus({ days: 1 }).toISODate(), toDate: today.plus({ days: 1 }).toISODate() }).expect(201)
+    await supervisor
+      .post('/api/on-call-duties')
+      .send({ personId: holder.id, fromDate: today.minus({ days: 1 }).toISODate(), toDate: today.plus({ days: 1 }).toISODate() })
+      .expect(201)
     // Other tests leave duties too; the one that started last holds the phone, so start ours now.
-    await db().getRepository(OnCallEntity).save({ personId: holder.id, fromDate: today.toISODate()!, toDate: today.plus({ days: 1 }).toISODate()!, startsAt: new Date(Date.now() - 1000), endsAt: new Date(Date.now() + 3_600_000) })
+    await db()
+      .getRepository(OnCallEntity)
+      .save({
+        personId: holder.id,
+        fromDate: today.toISODate()!,
+        toDate: today.plus({ days: 1 }).toISODate()!,
+        startsAt: new Date(Date.now() - 1000),
+        endsAt: new Date(Date.now() + 3_600_000),
+      })
     const { agent } = await t.signedInAgent('technician')
     await agent.post('/api/on-call/notes').send({ text: 'Bin B02 gasping at 16:00, aeration raised.' }).expect(201)
     const { body } = await agent.get('/api/on-call').expect(200)

@@ -33,7 +33,10 @@ describe('demo facility', () => {
     // The demo's stock register holds what its batches say they hold.
     const batches: Array<{ id: number; count: number }> = await ds.query('SELECT id, count FROM batches')
     for (const b of batches) {
-      const [{ held }] = await ds.query("SELECT COALESCE(SUM(CASE WHEN kind IN ('arrival', 'correction') THEN count WHEN kind IN ('transfer', 'grading') THEN 0 ELSE -count END), 0) AS held FROM stock_movements WHERE batchId = ?", [b.id])
+      const [{ held }] = await ds.query(
+        "SELECT COALESCE(SUM(CASE WHEN kind IN ('arrival', 'correction') THEN count WHEN kind IN ('transfer', 'grading') THEN 0 ELSE -count END), 0) AS held FROM stock_movements WHERE batchId = ?",
+        [b.id],
+      )
       expect(Number(held)).toBe(b.count)
     }
   }, 120_000)

@@ -36,9 +36,25 @@ async function missedTask(missedAt: Date) {
   const assignee = await t.createPersonWithRole('technician')
   const onCall = await t.createPersonWithRole('technician', { onCallEligible: true })
   // The on-call duty covers only this alert's window, so the on-call step reaches exactly them.
-  await db().getRepository(OnCallEntity).save({ personId: onCall.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(missedAt.getTime() - 60 * MIN), endsAt: new Date(missedAt.getTime() + 600 * MIN) })
+  await db()
+    .getRepository(OnCallEntity)
+    .save({
+      personId: onCall.id,
+      fromDate: '2000-01-01',
+      toDate: '2000-01-02',
+      startsAt: new Date(missedAt.getTime() - 60 * MIN),
+      endsAt: new Date(missedAt.getTime() + 600 * MIN),
+    })
   const due = new Date(missedAt.getTime() - 60 * MIN)
-  const task = await makeTankTask(tanks[0], { title: `Morning tank check ${uniqueCode('m')}`, assigneeId: assignee.id, dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2031-01-01T07:30:00' })
+  const task = await makeTankTask(tanks[0], {
+    title: `Morning tank check ${uniqueCode('m')}`,
+    assigneeId: assignee.id,
+    dueAt: due,
+    windowStartAt: new Date(due.getTime() - 30 * MIN),
+    graceUntil: missedAt,
+    status: 'overdue',
+    localStart: '2031-01-01T07:30:00',
+  })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
   const alert = await db().getRepository(AlertEntity).findOneByOrFail({ taskId: task.id, kind: 'missed_task' })
   return { task, assignee, onCall, alert }
@@ -56,7 +72,13 @@ describe('missed-task escalation by e-mail', () => {
   test('the first step mails the assignee with what, where and how late; without an answer the next step mails the on-call person 20 minutes later', async () => {
     const missedAt = new Date(Date.now() + 5000 * MIN)
     const { assignee, onCall, task, alert } = await missedTask(missedAt)
-    const ladder = await createLadder({ name: 'Assignee then on call', steps: [{ afterMinutes: 0, notify: [{ kind: 'assignee' }] }, { afterMinutes: 20, notify: [{ kind: 'on_call' }] }] })
+    const ladder = await createLadder({
+      name: 'Assignee then on call',
+      steps: [
+        { afterMinutes: 0, notify: [{ kind: 'assignee' }] },
+        { afterMinutes: 20, notify: [{ kind: 'on_call' }] },
+      ],
+    })
     await db().getRepository(AlertEntity).update(alert.id, { ladderId: ladder.id })
     await tick(new Date(missedAt.getTime() + 2000))
     const first = await mailsAbout(task, assignee.email)
@@ -98,7 +120,9 @@ describe('missed-task escalation by e-mail', () => {
     const missedAt = new Date(Date.now() + 13000 * MIN)
     const { alert } = await missedTask(missedAt)
     await tick(new Date(missedAt.getTime() + 1000))
-    const [row] = await db().getRepository(NotificationEntity).find({ where: { alertId: alert.id } })
+    const [row] = await db()
+      .getRepository(NotificationEntity)
+      .find({ where: { alertId: alert.id } })
     const token = signAckToken(t.config.ackSecret, row.id, new Date(Date.now() - 1000))
     const res = await request(t.app).post(`/ack/${token}`).type('form').send({}).expect(400)
     expect(res.text).toContain('expired')
@@ -146,7 +170,9 @@ describe('missed-task escalation by e-mail', () => {
     const missedAt = new Date(Date.now() + 21000 * MIN)
     const { task, alert } = await missedTask(missedAt)
     await tick(new Date(missedAt.getTime() + 1000))
-    await db().getRepository((await import('#server/modules/tasks/task.entity')).TaskEntity).update(task.id, { status: 'done', completedAt: new Date() })
+    await db()
+      .getRepository((await import('#server/modules/tasks/task.entity')).TaskEntity)
+      .update(task.id, { status: 'done', completedAt: new Date() })
     await tick(new Date(missedAt.getTime() + 90 * MIN))
     expect((await db().getRepository(AlertEntity).findOneByOrFail({ id: alert.id })).closedAt).not.toBeNull()
     expect(await db().getRepository(NotificationEntity).countBy({ alertId: alert.id, step: 2 })).toBe(0)

@@ -26,19 +26,28 @@ describe('facility catalogues', () => {
 
   test('when a technician tries to add a tank, then it is refused with 403 but they can still read tanks', async () => {
     const { area } = await makeAreaWithTanks(0)
-    await technician.post('/api/tanks').send({ code: uniqueCode('T'), name: 'X', areaId: area.id, systemId: null, volumeL: 100, kind: 'tank', inUse: true }).expect(403)
+    await technician
+      .post('/api/tanks')
+      .send({ code: uniqueCode('T'), name: 'X', areaId: area.id, systemId: null, volumeL: 100, kind: 'tank', inUse: true })
+      .expect(403)
     await technician.get('/api/tanks').expect(200)
   })
 
   test('when a tank code is taken, then it answers 409', async () => {
     const { area, tanks } = await makeAreaWithTanks(1)
-    const res = await manager.post('/api/tanks').send({ code: tanks[0].code, name: 'Again', areaId: area.id, systemId: null, volumeL: 100, kind: 'tank', inUse: true }).expect(409)
+    const res = await manager
+      .post('/api/tanks')
+      .send({ code: tanks[0].code, name: 'Again', areaId: area.id, systemId: null, volumeL: 100, kind: 'tank', inUse: true })
+      .expect(409)
     expect(res.body.error.message).toContain(tanks[0].code)
   })
 
   test('when the volume is negative, then it answers 400 naming volumeL', async () => {
     const { area } = await makeAreaWithTanks(0)
-    const res = await manager.post('/api/tanks').send({ code: uniqueCode('T'), name: 'Bad', areaId: area.id, systemId: null, volumeL: -5, kind: 'tank', inUse: true }).expect(400)
+    const res = await manager
+      .post('/api/tanks')
+      .send({ code: uniqueCode('T'), name: 'Bad', areaId: area.id, systemId: null, volumeL: -5, kind: 'tank', inUse: true })
+      .expect(400)
     expect(res.body.error.fieldErrors).toHaveProperty('volumeL')
   })
 
@@ -51,7 +60,10 @@ describe('facility catalogues', () => {
 
 describe('references between catalogues', () => {
   test('a tank in an area that does not exist is refused; an area that still holds tanks cannot be deleted', async () => {
-    const res = await manager.post('/api/tanks').send({ code: uniqueCode('T'), name: 'Orphan', areaId: 987654, systemId: null, volumeL: 100, kind: 'tank', inUse: true }).expect(400)
+    const res = await manager
+      .post('/api/tanks')
+      .send({ code: uniqueCode('T'), name: 'Orphan', areaId: 987654, systemId: null, volumeL: 100, kind: 'tank', inUse: true })
+      .expect(400)
     expect(res.body.error.fieldErrors).toHaveProperty('areaId')
     const { area } = await makeAreaWithTanks(1)
     const refused = await manager.delete(`/api/areas/${area.id}`).expect(409)
@@ -78,7 +90,11 @@ describe('POST /api/tanks/import', () => {
   test('when one line is malformed, then nothing from the file is imported and the error names the line', async () => {
     const { area } = await makeAreaWithTanks(0)
     const good = uniqueCode('CSV')
-    const file = csv([`${good},Fine,${area.code},,500,tank,yes`, `${uniqueCode('CSV')},Broken,${area.code},,-3,tank,maybe`, `${uniqueCode('CSV')},Lost,NO-SUCH-AREA,,100,tank,yes`])
+    const file = csv([
+      `${good},Fine,${area.code},,500,tank,yes`,
+      `${uniqueCode('CSV')},Broken,${area.code},,-3,tank,maybe`,
+      `${uniqueCode('CSV')},Lost,NO-SUCH-AREA,,100,tank,yes`,
+    ])
     const res = await manager.post('/api/tanks/import').attach('file', file, 'tanks.csv').expect(400)
     const lines = res.body.error.fieldErrors.file as string[]
     expect(lines.some((l) => l.startsWith('Line 3:') && l.includes('in_use'))).toBe(true)

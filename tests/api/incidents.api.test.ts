@@ -25,7 +25,15 @@ async function missWelfareCriticalCheck(missedAt: Date) {
   const { tanks } = await makeAreaWithTanks(1)
   const assignee = await t.createPersonWithRole('technician')
   const due = new Date(missedAt.getTime() - 60 * MIN)
-  const task = await makeTankTask(tanks[0], { title: `Morning tank check ${uniqueCode('i')}`, assigneeId: assignee.id, dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2032-01-01T07:30:00' })
+  const task = await makeTankTask(tanks[0], {
+    title: `Morning tank check ${uniqueCode('i')}`,
+    assigneeId: assignee.id,
+    dueAt: due,
+    windowStartAt: new Date(due.getTime() - 30 * MIN),
+    graceUntil: missedAt,
+    status: 'overdue',
+    localStart: '2032-01-01T07:30:00',
+  })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
   return { task, tank: tanks[0] }
 }
@@ -105,7 +113,10 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9300 * MIN))
     const supervisor = await signInAs('supervisor')
     const [incident] = await incidentsOf(task.id, supervisor)
-    const alertsOf = async (kind: string) => db().getRepository(AlertEntity).findBy({ taskId: task.id, kind: kind as never })
+    const alertsOf = async (kind: string) =>
+      db()
+        .getRepository(AlertEntity)
+        .findBy({ taskId: task.id, kind: kind as never })
     const welfareLate = new Date(new Date(incident.welfareDueAt).getTime() + MIN)
     // Other files' incidents may be due at the same ticks, so only this incident's alerts are counted.
     await escalateOverdueIncidents(welfareLate)
@@ -116,7 +127,10 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     expect(await alertsOf('incident_overdue')).toHaveLength(0)
 
     await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Tank was not checked all morning' }).expect(200)
-    const told = await supervisor.patch(`/api/incidents/${incident.id}`).send({ welfareNotifiedAt: new Date(welfareLate.getTime() + 5 * MIN).toISOString() }).expect(200)
+    const told = await supervisor
+      .patch(`/api/incidents/${incident.id}`)
+      .send({ welfareNotifiedAt: new Date(welfareLate.getTime() + 5 * MIN).toISOString() })
+      .expect(200)
     expect(told.body.welfareNotifiedAt).not.toBeNull()
     expect((await alertsOf('incident_welfare_overdue'))[0].closedAt).not.toBeNull()
 
@@ -128,7 +142,12 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     const unfinished = await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', status: 'closed' }).expect(400)
     expect(unfinished.body.error.fieldErrors).toHaveProperty(['correctiveActions'])
     expect(((await supervisor.get(`/api/incidents/${incident.id}`)).body as Incident).status).toBe('open')
-    const closed = (await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Shift swap not recorded', correctiveActions: 'Swaps go through the roster page', status: 'closed' }).expect(200)).body as Incident
+    const closed = (
+      await supervisor
+        .patch(`/api/incidents/${incident.id}`)
+        .send({ rootCause: 'Shift swap not recorded', correctiveActions: 'Swaps go through the roster page', status: 'closed' })
+        .expect(200)
+    ).body as Incident
     expect(closed.reportEscalatedAt).toBe(reportLate.toISOString())
     expect((await alertsOf('incident_report_overdue'))[0].closedAt).not.toBeNull()
   })

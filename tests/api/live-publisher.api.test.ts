@@ -23,7 +23,8 @@ async function watcher(): Promise<Socket> {
   return socket
 }
 
-const changedKinds = (socket: Socket, kind: DataChangedEvent['kinds'][number]) => nextEvent<DataChangedEvent>(socket, LIVE_EVENTS.dataChanged, (e) => e.kinds.includes(kind))
+const changedKinds = (socket: Socket, kind: DataChangedEvent['kinds'][number]) =>
+  nextEvent<DataChangedEvent>(socket, LIVE_EVENTS.dataChanged, (e) => e.kinds.includes(kind))
 
 describe('every kind of change reaches the live feed through the one publisher', () => {
   test('when a supervisor adds a one-off task, then screens receive it', async () => {
@@ -34,7 +35,19 @@ describe('every kind of change reaches the live feed through the one publisher',
     const arrived = nextTask(socket, (t) => t.title === title)
     const { body } = await agent
       .post('/api/tasks')
-      .send({ title, category: 'maintenance', instructions: '', priority: 'routine', targetKind: 'tank', targetId: tanks[0].id, localStart: '2026-12-20T09:00:00', graceMinutes: 60, durationMinutes: 10, assigneeId: null, requiredReadings: [] })
+      .send({
+        title,
+        category: 'maintenance',
+        instructions: '',
+        priority: 'routine',
+        targetKind: 'tank',
+        targetId: tanks[0].id,
+        localStart: '2026-12-20T09:00:00',
+        graceMinutes: 60,
+        durationMinutes: 10,
+        assigneeId: null,
+        requiredReadings: [],
+      })
       .expect(201)
     expect(await arrived).toMatchObject({ id: body.id, title })
   })
@@ -45,7 +58,10 @@ describe('every kind of change reaches the live feed through the one publisher',
     const { agent } = await live.signIn('supervisor')
     const routines = changedKinds(socket, 'routine')
     const tasks = nextEvent<TasksChangedEvent>(socket, LIVE_EVENTS.tasksChanged, (e) => e.reasons.includes('planned'))
-    await agent.post('/api/routines').send(routineInput({ targetIds: tanks.map((t) => t.id) })).expect(201)
+    await agent
+      .post('/api/routines')
+      .send(routineInput({ targetIds: tanks.map((t) => t.id) }))
+      .expect(201)
     await Promise.all([routines, tasks])
   })
 
@@ -54,14 +70,20 @@ describe('every kind of change reaches the live feed through the one publisher',
     const socket = await watcher()
     const { agent } = await live.signIn('manager')
     const catalogue = changedKinds(socket, 'catalogue')
-    await agent.patch(`/api/areas/${area.id}`).send({ name: `Hall ${uniqueCode('A')}` }).expect(200)
+    await agent
+      .patch(`/api/areas/${area.id}`)
+      .send({ name: `Hall ${uniqueCode('A')}` })
+      .expect(200)
     await catalogue
 
     const task = await makeTankTask(tanks[0])
     const done = completion({ do_mgL: 6.8, temp_c: 28.2 })
     await agent.post(`/api/tasks/${task.id}/completion`).send(done).expect(200)
     const amendment = changedKinds(socket, 'amendment')
-    await agent.post(`/api/completions/${done.completionId}/amendments`).send({ reason: 'Misread the meter', readings: { temp_c: 28.4 } }).expect(201)
+    await agent
+      .post(`/api/completions/${done.completionId}/amendments`)
+      .send({ reason: 'Misread the meter', readings: { temp_c: 28.4 } })
+      .expect(201)
     await amendment
   })
 
@@ -70,8 +92,14 @@ describe('every kind of change reaches the live feed through the one publisher',
     const task = await makeTankTask(tanks[0])
     const socket = await watcher()
     const { agent } = await live.signIn('technician')
-    const leaked = nextTask(socket, (t) => t.id === task.id, 1500).then(() => true, () => false)
-    await agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 6.8 })).expect(400)
+    const leaked = nextTask(socket, (t) => t.id === task.id, 1500).then(
+      () => true,
+      () => false,
+    )
+    await agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 6.8 }))
+      .expect(400)
     expect(await leaked).toBe(false)
   })
 
@@ -85,13 +113,41 @@ describe('every kind of change reaches the live feed through the one publisher',
       const local = dueAt.toISOString().slice(0, 19)
       const tank = tanks[i % tanks.length]
       return {
-        routineId: null, eventId: null, title, category: 'welfare', instructions: '', priority: 'routine', targetKind: 'tank', targetId: tank.id, tankId: tank.id, areaId: tank.areaId,
-        localDate: local.slice(0, 10), localStart: local, occurrenceStart: local, dueAt, windowStartAt: new Date(dueAt.getTime() - 1_800_000), graceUntil,
-        durationMinutes: 3, status: 'open', assigneeId: null, assignedManually: false, edited: false, requiredReadings: [], version: 1,
+        routineId: null,
+        eventId: null,
+        title,
+        category: 'welfare',
+        instructions: '',
+        priority: 'routine',
+        targetKind: 'tank',
+        targetId: tank.id,
+        tankId: tank.id,
+        areaId: tank.areaId,
+        localDate: local.slice(0, 10),
+        localStart: local,
+        occurrenceStart: local,
+        dueAt,
+        windowStartAt: new Date(dueAt.getTime() - 1_800_000),
+        graceUntil,
+        durationMinutes: 3,
+        status: 'open',
+        assigneeId: null,
+        assignedManually: false,
+        edited: false,
+        requiredReadings: [],
+        version: 1,
       }
     })
-    await db().getRepository(TaskEntity).insert(rows as TaskRow[])
-    const ids = new Set((await db().getRepository(TaskEntity).find({ select: { id: true }, where: { title } })).map((t) => t.id))
+    await db()
+      .getRepository(TaskEntity)
+      .insert(rows as TaskRow[])
+    const ids = new Set(
+      (
+        await db()
+          .getRepository(TaskEntity)
+          .find({ select: { id: true }, where: { title } })
+      ).map((t) => t.id),
+    )
     const socket = await watcher()
     const batches: number[] = []
     const seen = new Set<number>()

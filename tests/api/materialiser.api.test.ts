@@ -16,7 +16,10 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-const tasksOf = (routineId: number) => db().getRepository(TaskEntity).find({ where: { routineId }, order: { dueAt: 'ASC' } })
+const tasksOf = (routineId: number) =>
+  db()
+    .getRepository(TaskEntity)
+    .find({ where: { routineId }, order: { dueAt: 'ASC' } })
 
 describe('materialiser', () => {
   test('a routine naming a person who has left makes unassigned tasks; one for whoever is on shift gives them to the rostered technician', async () => {
@@ -29,7 +32,14 @@ describe('materialiser', () => {
     const rostered = await t.createPersonWithRole('technician')
     const farDay = new Date(Date.now() + 500 * 86_400_000).toISOString().slice(0, 10)
     await createShift({ personId: rostered.id, date: farDay, start: '00:00', end: '23:59', kind: 'day' })
-    const onShift = await createRoutine(routineData({ targetIds: [made[0].id], dtstart: `${farDay}T10:00:00`, rrule: 'FREQ=DAILY;COUNT=1', assigneeRule: { kind: 'role_on_shift', role: 'technician' } }))
+    const onShift = await createRoutine(
+      routineData({
+        targetIds: [made[0].id],
+        dtstart: `${farDay}T10:00:00`,
+        rrule: 'FREQ=DAILY;COUNT=1',
+        assigneeRule: { kind: 'role_on_shift', role: 'technician' },
+      }),
+    )
     await materialise({ routineIds: [onShift.id], from: new Date(Date.parse(farDay) - 86_400_000), horizonDays: 3 })
     const [task] = await tasksOf(onShift.id)
     expect(task.localDate).toBe(farDay)
@@ -55,7 +65,10 @@ describe('materialiser', () => {
     await db().getRepository(TaskEntity).update(first.id, { assigneeId: person.id, assignedManually: true })
     await db().getRepository(TaskEntity).update(second.id, { status: 'done', completedAt: new Date(), completedById: person.id })
 
-    await updateRoutine(routine.id, { ...routineData({ name: routine.name, targetIds: [made[0].id], dtstart: '2026-01-05T09:00:00' }), version: routine.version })
+    await updateRoutine(routine.id, {
+      ...routineData({ name: routine.name, targetIds: [made[0].id], dtstart: '2026-01-05T09:00:00' }),
+      version: routine.version,
+    })
 
     const after = await tasksOf(routine.id)
     const ids = after.map((x) => x.id)
@@ -69,7 +82,9 @@ describe('materialiser', () => {
   test('when a routine is edited with a stale version, then it answers conflict and nothing changes', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
     const routine = await createRoutine(routineData({ targetIds: [made[0].id] }))
-    await expect(updateRoutine(routine.id, { ...routineData({ targetIds: [made[0].id] }), version: routine.version + 5 })).rejects.toMatchObject({ status: 409 })
+    await expect(updateRoutine(routine.id, { ...routineData({ targetIds: [made[0].id] }), version: routine.version + 5 })).rejects.toMatchObject({
+      status: 409,
+    })
   })
 
   test('when a routine is paused, then its future untouched tasks go and none come back on the next run', async () => {
@@ -94,7 +109,13 @@ describe('materialiser', () => {
 
   test('when a routine has an invalid rule or an unknown reading, then it is refused naming the field', async () => {
     const { tanks: made } = await makeAreaWithTanks(1)
-    await expect(createRoutine(routineData({ targetIds: [made[0].id], rrule: 'FREQ=SOMETIMES' }))).rejects.toMatchObject({ status: 400, fieldErrors: { rrule: expect.any(Array) } })
-    await expect(createRoutine(routineData({ targetIds: [made[0].id], requiredReadings: ['unicorns'] }))).rejects.toMatchObject({ status: 400, fieldErrors: { requiredReadings: expect.any(Array) } })
+    await expect(createRoutine(routineData({ targetIds: [made[0].id], rrule: 'FREQ=SOMETIMES' }))).rejects.toMatchObject({
+      status: 400,
+      fieldErrors: { rrule: expect.any(Array) },
+    })
+    await expect(createRoutine(routineData({ targetIds: [made[0].id], requiredReadings: ['unicorns'] }))).rejects.toMatchObject({
+      status: 400,
+      fieldErrors: { requiredReadings: expect.any(Array) },
+    })
   })
 })

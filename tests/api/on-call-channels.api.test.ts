@@ -46,7 +46,15 @@ const MIN = 60_000
 async function onCallPerson(at: Date, channels: Channel[], phone = uniquePhone()) {
   const person = await t.createPersonWithRole('technician', { onCallEligible: true })
   await db().getRepository(PersonEntity).update(person.id, { phone, channels })
-  await db().getRepository(OnCallEntity).save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(at.getTime() - 60 * MIN), endsAt: new Date(at.getTime() + 600 * MIN) })
+  await db()
+    .getRepository(OnCallEntity)
+    .save({
+      personId: person.id,
+      fromDate: '2000-01-01',
+      toDate: '2000-01-02',
+      startsAt: new Date(at.getTime() - 60 * MIN),
+      endsAt: new Date(at.getTime() + 600 * MIN),
+    })
   return { ...person, phone }
 }
 
@@ -57,11 +65,25 @@ async function missedWelfareTasks(missedAt: Date, steps: LadderStep[], count = 1
   const due = new Date(missedAt.getTime() - 60 * MIN)
   const tasks = []
   for (let i = 0; i < count; i++) {
-    tasks.push(await makeTankTask(tanks[0], { title: `Oxygen check ${uniqueCode('o')}`, priority: 'welfare_critical', dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue', localStart: '2031-01-01T07:30:00' }))
+    tasks.push(
+      await makeTankTask(tanks[0], {
+        title: `Oxygen check ${uniqueCode('o')}`,
+        priority: 'welfare_critical',
+        dueAt: due,
+        windowStartAt: new Date(due.getTime() - 30 * MIN),
+        graceUntil: missedAt,
+        status: 'overdue',
+        localStart: '2031-01-01T07:30:00',
+      }),
+    )
   }
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
-  const alerts = await db().getRepository(AlertEntity).findBy({ taskId: In(tasks.map((x) => x.id)), kind: 'missed_task' })
-  await db().getRepository(AlertEntity).update({ id: In(alerts.map((a) => a.id)) }, { ladderId: ladder.id })
+  const alerts = await db()
+    .getRepository(AlertEntity)
+    .findBy({ taskId: In(tasks.map((x) => x.id)), kind: 'missed_task' })
+  await db()
+    .getRepository(AlertEntity)
+    .update({ id: In(alerts.map((a) => a.id)) }, { ladderId: ladder.id })
   return { tasks, alerts }
 }
 
@@ -74,7 +96,10 @@ const signIn = async (email: string) => {
   await agent.post('/api/session').send({ email, password: TEST_PASSWORD }).expect(200)
   return agent
 }
-const rowsOf = (alertId: number) => db().getRepository(NotificationEntity).find({ where: { alertId }, order: { id: 'ASC' } })
+const rowsOf = (alertId: number) =>
+  db()
+    .getRepository(NotificationEntity)
+    .find({ where: { alertId }, order: { id: 'ASC' } })
 
 describe('on-call channels: e-mail, text and push', () => {
   test('a missed welfare-critical task reaches the person on call at that moment by every channel they enabled, even where the step names only e-mail', async () => {
@@ -82,12 +107,23 @@ describe('on-call channels: e-mail, text and push', () => {
     const onCall = await onCallPerson(missedAt, ['email', 'sms'])
     // Someone whose duty starts only after the alert is not the one reached.
     const later = await t.createPersonWithRole('technician', { onCallEligible: true })
-    await db().getRepository(OnCallEntity).save({ personId: later.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(missedAt.getTime() + 60 * MIN), endsAt: new Date(missedAt.getTime() + 120 * MIN) })
+    await db()
+      .getRepository(OnCallEntity)
+      .save({
+        personId: later.id,
+        fromDate: '2000-01-01',
+        toDate: '2000-01-02',
+        startsAt: new Date(missedAt.getTime() + 60 * MIN),
+        endsAt: new Date(missedAt.getTime() + 120 * MIN),
+      })
     const { tasks, alerts } = await missedWelfareTasks(missedAt, [{ afterMinutes: 0, notify: [{ kind: 'on_call' }], channels: ['email'] }])
     await tick(new Date(missedAt.getTime() + 2000))
 
     const rows = await rowsOf(alerts[0].id)
-    expect(rows.map((r) => [r.personId, r.channel, r.status])).toEqual([[onCall.id, 'email', 'sent'], [onCall.id, 'sms', 'sent']])
+    expect(rows.map((r) => [r.personId, r.channel, r.status])).toEqual([
+      [onCall.id, 'email', 'sent'],
+      [onCall.id, 'sms', 'sent'],
+    ])
     const [mailed] = (await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))
     expect(mailed.subject).toMatch(/^MISSED: Oxygen check/)
     const [text] = await textsTo(onCall.phone)
@@ -111,7 +147,11 @@ describe('on-call channels: e-mail, text and push', () => {
     await tick(new Date(missedAt.getTime() + 2000))
 
     const rows = await rowsOf(alerts[0].id)
-    expect(rows.map((r) => [r.channel, r.status])).toEqual([['email', 'sent'], ['sms', 'sent'], ['push', 'sent']])
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([
+      ['email', 'sent'],
+      ['sms', 'sent'],
+      ['push', 'sent'],
+    ])
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))).toHaveLength(1)
     expect(await textsTo(onCall.phone)).toHaveLength(1)
     // The fake push service checked the VAPID signature and decrypted the body with the phone's private key.
@@ -140,7 +180,10 @@ describe('on-call channels: e-mail, text and push', () => {
     await deliverPending(texts.config, mail.transport, new Date(missedAt.getTime() + 3000), { push: createPushSender(texts.config) })
 
     const rows = await rowsOf(alerts[0].id)
-    expect(rows.map((r) => [r.channel, r.status])).toEqual([['push', 'undelivered'], ['email', 'sent']])
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([
+      ['push', 'undelivered'],
+      ['email', 'sent'],
+    ])
     expect(rows[0].lastError).toContain('stopped accepting push alerts')
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))).toHaveLength(1)
     expect(await db().getRepository(PushSubscriptionEntity).findBy({ personId: onCall.id })).toHaveLength(0)
@@ -196,7 +239,14 @@ describe('on-call channels: e-mail, text and push', () => {
     const { tasks, alerts } = await missedWelfareTasks(missedAt, [{ afterMinutes: 0, notify: [{ kind: 'on_call' }], channels: ['sms'] }])
     await tick(new Date(missedAt.getTime() + 2000))
     const [sms] = await rowsOf(alerts[0].id)
-    const params = { AccountSid: texts.config.sms.accountSid, MessageSid: sms.providerId!, MessageStatus: 'undelivered', ErrorCode: '30003', To: onCall.phone, From: texts.config.sms.from }
+    const params = {
+      AccountSid: texts.config.sms.accountSid,
+      MessageSid: sms.providerId!,
+      MessageStatus: 'undelivered',
+      ErrorCode: '30003',
+      To: onCall.phone,
+      From: texts.config.sms.from,
+    }
 
     await postWebhook(t.app, t.config, '/hooks/sms/status', params, 'not-the-auth-token').expect(403)
     await request(t.app).post('/hooks/sms/status').type('form').send(params).expect(403)
@@ -219,7 +269,10 @@ describe('on-call channels: e-mail, text and push', () => {
     await deliverPending(texts.config, mail.transport, new Date(missedAt.getTime() + 3000), { text: texts.sender })
 
     const rows = await rowsOf(alerts[0].id)
-    expect(rows.map((r) => [r.channel, r.status])).toEqual([['sms', 'undelivered'], ['email', 'sent']])
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([
+      ['sms', 'undelivered'],
+      ['email', 'sent'],
+    ])
     expect(rows[0].lastError).toContain('not a valid phone number')
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(tasks[0].title))).toHaveLength(1)
     const { agent } = await t.signedInAgent('technician')
@@ -242,7 +295,9 @@ describe('on-call channels: e-mail, text and push', () => {
     expect(single.length).toBe(6)
     expect(summaries).toHaveLength(1)
     expect(summaries[0].body).toContain('44 more were not texted')
-    const rows = await db().getRepository(NotificationEntity).findBy({ alertId: In(alerts.map((a) => a.id)) })
+    const rows = await db()
+      .getRepository(NotificationEntity)
+      .findBy({ alertId: In(alerts.map((a) => a.id)) })
     expect(rows.filter((r) => r.status === 'sent')).toHaveLength(6)
     const held = rows.filter((r) => r.status === 'suppressed')
     expect(held).toHaveLength(44)

@@ -18,14 +18,20 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-const outboxFor = (taskIds: number[]) => db().getRepository(ChangeOutboxEntity).findBy({ kind: 'task', entityId: In(taskIds.map(String)) })
+const outboxFor = (taskIds: number[]) =>
+  db()
+    .getRepository(ChangeOutboxEntity)
+    .findBy({ kind: 'task', entityId: In(taskIds.map(String)) })
 
 describe('a request is one commit', () => {
   test('when a flagged completion commits, then its recheck, alert, stored answer and outbox rows are there with it', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const { agent } = await t.signedInAgent('technician')
-    const res = await agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 3.1, temp_c: 28 })).expect(200)
+    const res = await agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 3.1, temp_c: 28 }))
+      .expect(200)
     const stored = await db().getRepository(CompletionEntity).findOneByOrFail({ taskId: task.id })
     expect(stored.response).toMatchObject({ recheckTaskId: res.body.recheckTaskId, task: { id: task.id, status: 'done' } })
     expect(await db().getRepository(AlertEntity).countBy({ taskId: task.id, kind: 'critical_reading' })).toBe(1)
@@ -61,7 +67,11 @@ describe('a request is one commit', () => {
       agent.patch(`/api/tasks/${task.id}`).send({ version: task.version, date: task.localDate, assigneeId: null }).expect(500),
     )
     expect(await db().getRepository(TaskEntity).findOneByOrFail({ id: task.id })).toMatchObject({ version: task.version })
-    expect(await db().getRepository(AuditEntity).countBy({ entity: 'assignment', entityId: String(task.id) })).toBe(0)
+    expect(
+      await db()
+        .getRepository(AuditEntity)
+        .countBy({ entity: 'assignment', entityId: String(task.id) }),
+    ).toBe(0)
     expect(await outboxFor([task.id])).toHaveLength(0)
   })
 })
@@ -70,7 +80,12 @@ describe('a scheduler step is one commit', () => {
   test('when the missed-task alert cannot be written, then the task stays overdue and no change is queued, and the next tick does it all', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const graceUntil = new Date(Date.now() - 60_000)
-    const task = await makeTankTask(tanks[0], { status: 'overdue', dueAt: new Date(graceUntil.getTime() - 3_600_000), windowStartAt: new Date(graceUntil.getTime() - 5_400_000), graceUntil })
+    const task = await makeTankTask(tanks[0], {
+      status: 'overdue',
+      dueAt: new Date(graceUntil.getTime() - 3_600_000),
+      windowStartAt: new Date(graceUntil.getTime() - 5_400_000),
+      graceUntil,
+    })
     await failingInsert('alerts', `NEW.taskId = ${task.id}`, async () => {
       await expect(advanceTaskStatuses(db(), new Date())).rejects.toThrow(/refused by the test/)
     })

@@ -24,13 +24,19 @@ describe('/api/people', () => {
     const { agent } = await t.signedInAgent('manager')
     const input = buildPersonInput()
     await agent.post('/api/people').send(input).expect(201)
-    const res = await agent.post('/api/people').send({ ...input, name: 'Someone else' }).expect(409)
+    const res = await agent
+      .post('/api/people')
+      .send({ ...input, name: 'Someone else' })
+      .expect(409)
     expect(res.body.error.message).toContain(input.email)
   })
 
   test('when the password is too short, then it answers 400 naming the password field', async () => {
     const { agent } = await t.signedInAgent('manager')
-    const res = await agent.post('/api/people').send(buildPersonInput({ password: 'short' })).expect(400)
+    const res = await agent
+      .post('/api/people')
+      .send(buildPersonInput({ password: 'short' }))
+      .expect(400)
     expect(res.body.error.fieldErrors).toHaveProperty('password')
   })
 

@@ -39,11 +39,27 @@ const MIN = 60_000
 
 /** A welfare-critical task missed at `missedAt`; the person on call then gets it by push only. */
 async function missedWhileOnCall(personId: number, missedAt: Date) {
-  await db().getRepository(PersonEntity).update(personId, { channels: ['push'] })
-  await db().getRepository(OnCallEntity).save({ personId, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(missedAt.getTime() - 60 * MIN), endsAt: new Date(missedAt.getTime() + 120 * MIN) })
+  await db()
+    .getRepository(PersonEntity)
+    .update(personId, { channels: ['push'] })
+  await db()
+    .getRepository(OnCallEntity)
+    .save({
+      personId,
+      fromDate: '2000-01-01',
+      toDate: '2000-01-02',
+      startsAt: new Date(missedAt.getTime() - 60 * MIN),
+      endsAt: new Date(missedAt.getTime() + 120 * MIN),
+    })
   const { tanks } = await makeAreaWithTanks(1)
   const title = `Hatchery tray flow ${randomUUID().slice(0, 4)}`
-  const task = await makeTankTask(tanks[0], { title, priority: 'welfare_critical', status: 'overdue', dueAt: new Date(missedAt.getTime() - 60 * MIN), graceUntil: missedAt })
+  const task = await makeTankTask(tanks[0], {
+    title,
+    priority: 'welfare_critical',
+    status: 'overdue',
+    dueAt: new Date(missedAt.getTime() - 60 * MIN),
+    graceUntil: missedAt,
+  })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
   await runEscalations(new Date(missedAt.getTime() + 1000))
   await deliverPending(mail.config, mail.transport, new Date(missedAt.getTime() + 2000), { push: createPushSender(t.config) })
@@ -64,7 +80,14 @@ describe('the push outbox in local push mode', () => {
 
     const first = await missedWhileOnCall(manager.id, new Date(Date.now() + 60_000 * MIN))
     const [listed] = (await agent.get('/api/outbox/pushes').expect(200)).body
-    expect(listed).toMatchObject({ personName: 'Isolde Farrant', endpoint: device.endpoint, status: 'received', title: expect.stringMatching(new RegExp(`^MISSED: ${first.task.title}`)), urgency: 'high', note: null })
+    expect(listed).toMatchObject({
+      personName: 'Isolde Farrant',
+      endpoint: device.endpoint,
+      status: 'received',
+      title: expect.stringMatching(new RegExp(`^MISSED: ${first.task.title}`)),
+      urgency: 'high',
+      note: null,
+    })
     expect(listed.body).toMatch(/^This task was not done/)
     expect(Date.parse(listed.receivedAt)).not.toBeNaN()
     expect((await db().getRepository(NotificationEntity).findOneByOrFail({ alertId: first.alert.id, channel: 'push' })).status).toBe('sent')

@@ -33,7 +33,10 @@ describe('POST /api/session', () => {
   test('when one account fails too often, then further tries get 429 with a clear message', async () => {
     const person = await t.createPersonWithRole('technician')
     for (let i = 0; i < 3; i++) {
-      await request(t.app).post('/api/session').send({ email: person.email, password: `wrong-${i}-password` }).expect(401)
+      await request(t.app)
+        .post('/api/session')
+        .send({ email: person.email, password: `wrong-${i}-password` })
+        .expect(401)
     }
     const res = await request(t.app).post('/api/session').send({ email: person.email, password: TEST_PASSWORD }).expect(429)
     expect(res.body.error.code).toBe('rate_limited')
@@ -95,9 +98,12 @@ describe('a session in use', () => {
     const person = await t.createPersonWithRole('technician')
     const agent = request.agent(t.app)
     await agent.post('/api/session').send({ email: person.email, password: TEST_PASSWORD }).expect(200)
-    const [{ sid }] = (await t.dataSource.query("SELECT session_id AS sid FROM sessions WHERE data LIKE ? ORDER BY expires DESC LIMIT 1", [`%"id":${person.id},%`])) as Array<{ sid: string }>
+    const [{ sid }] = (await t.dataSource.query('SELECT session_id AS sid FROM sessions WHERE data LIKE ? ORDER BY expires DESC LIMIT 1', [
+      `%"id":${person.id},%`,
+    ])) as Array<{ sid: string }>
     const soon = Math.floor(Date.now() / 1000) + 100
-    const expiry = async () => Number(((await t.dataSource.query('SELECT expires FROM sessions WHERE session_id = ?', [sid])) as Array<{ expires: number }>)[0].expires)
+    const expiry = async () =>
+      Number(((await t.dataSource.query('SELECT expires FROM sessions WHERE session_id = ?', [sid])) as Array<{ expires: number }>)[0].expires)
 
     await t.dataSource.query('UPDATE sessions SET expires = ? WHERE session_id = ?', [soon, sid])
     await agent.get('/api/me').expect(200)

@@ -23,7 +23,10 @@ describe('socket.io live updates', () => {
     await connected(socket)
 
     const updated = nextTask(socket, (t) => t.id === task.id)
-    await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 6.8, temp_c: 28.2 })).expect(200)
+    await tech.agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 6.8, temp_c: 28.2 }))
+      .expect(200)
     expect(await updated).toMatchObject({ id: task.id, status: 'done', completedById: tech.person.id, flag: null })
   })
 
@@ -36,13 +39,19 @@ describe('socket.io live updates', () => {
     await connected(socket)
 
     const created = nextTask(socket, (t) => t.recheckOfTaskId === task.id)
-    const res = await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 3.2, temp_c: 28 })).expect(200)
+    const res = await tech.agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 3.2, temp_c: 28 }))
+      .expect(200)
     expect(await created).toMatchObject({ id: res.body.recheckTaskId, status: 'open', assigneeId: tech.person.id })
   })
 
   test('when a socket has no session cookie (or a forged one), then it gets connect_error and no connection', async () => {
     for (const opts of [{}, { extraHeaders: { cookie: 'roundtide.sid=s%3Aforged.nope' } }]) {
-      const error = await connected(connect(opts)).then(() => null, (e: Error & { description?: unknown }) => e)
+      const error = await connected(connect(opts)).then(
+        () => null,
+        (e: Error & { description?: unknown }) => e,
+      )
       expect(error?.description).toBe(403) // the handshake itself is refused, before any event can flow
     }
     const ws = connect({ transports: ['websocket'] })

@@ -22,7 +22,12 @@ describe('status clock', () => {
   test('a task moves planned → open → overdue → missed as its window, due time and grace pass', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const due = new Date(Date.now() + minutes(600))
-    const task = await makeTankTask(tanks[0], { status: 'planned', dueAt: due, windowStartAt: new Date(due.getTime() - minutes(30)), graceUntil: new Date(due.getTime() + minutes(60)) })
+    const task = await makeTankTask(tanks[0], {
+      status: 'planned',
+      dueAt: due,
+      windowStartAt: new Date(due.getTime() - minutes(30)),
+      graceUntil: new Date(due.getTime() + minutes(60)),
+    })
     await advanceTaskStatuses(db(), new Date(due.getTime() - minutes(31)))
     expect(await statusOf(task.id)).toBe('planned')
     await advanceTaskStatuses(db(), new Date(due.getTime() - minutes(29)))
@@ -37,7 +42,12 @@ describe('status clock', () => {
   test('after downtime, a task whose grace passed goes straight to missed once, with one alert, however often the clock catches up', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const due = new Date(Date.now() + minutes(900))
-    const task = await makeTankTask(tanks[0], { status: 'planned', dueAt: due, windowStartAt: new Date(due.getTime() - minutes(30)), graceUntil: new Date(due.getTime() + minutes(60)) })
+    const task = await makeTankTask(tanks[0], {
+      status: 'planned',
+      dueAt: due,
+      windowStartAt: new Date(due.getTime() - minutes(30)),
+      graceUntil: new Date(due.getTime() + minutes(60)),
+    })
     const later = new Date(due.getTime() + minutes(300))
     const first = await advanceTaskStatuses(db(), later)
     const second = await advanceTaskStatuses(db(), later)

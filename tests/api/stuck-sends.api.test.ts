@@ -33,7 +33,10 @@ afterAll(async () => {
 })
 
 const MIN = 60_000
-const rowsOf = (alertId: number) => db().getRepository(NotificationEntity).find({ where: { alertId }, order: { id: 'ASC' } })
+const rowsOf = (alertId: number) =>
+  db()
+    .getRepository(NotificationEntity)
+    .find({ where: { alertId }, order: { id: 'ASC' } })
 // Only texts about this task: each tick also runs the incident deadlines of earlier tests, which reach whoever is on call then.
 const textsAbout = async (phone: string, title: string) => (await textsTo(phone)).filter((m) => m.body.includes(title))
 
@@ -42,7 +45,15 @@ async function onCallTexter(at: Date, channels: Channel[] = ['sms']) {
   const person = await t.createPersonWithRole('technician', { onCallEligible: true })
   const phone = uniquePhone()
   await db().getRepository(PersonEntity).update(person.id, { phone, channels })
-  await db().getRepository(OnCallEntity).save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(at.getTime() - 60 * MIN), endsAt: new Date(at.getTime() + 600 * MIN) })
+  await db()
+    .getRepository(OnCallEntity)
+    .save({
+      personId: person.id,
+      fromDate: '2000-01-01',
+      toDate: '2000-01-02',
+      startsAt: new Date(at.getTime() - 60 * MIN),
+      endsAt: new Date(at.getTime() + 600 * MIN),
+    })
   return { ...person, phone }
 }
 
@@ -52,7 +63,14 @@ async function textClaimedByADeadProcess(missedAt: Date) {
   const steps: LadderStep[] = [{ afterMinutes: 0, notify: [{ kind: 'on_call' }], channels: ['sms'] }]
   const ladder = await createLadder({ name: uniqueCode('ladder'), steps })
   const due = new Date(missedAt.getTime() - 60 * MIN)
-  const task = await makeTankTask(tanks[0], { title: `Smolt DO check ${randomUUID().slice(0, 4)}`, priority: 'welfare_critical', dueAt: due, windowStartAt: new Date(due.getTime() - 30 * MIN), graceUntil: missedAt, status: 'overdue' })
+  const task = await makeTankTask(tanks[0], {
+    title: `Smolt DO check ${randomUUID().slice(0, 4)}`,
+    priority: 'welfare_critical',
+    dueAt: due,
+    windowStartAt: new Date(due.getTime() - 30 * MIN),
+    graceUntil: missedAt,
+    status: 'overdue',
+  })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
   const alert = await db().getRepository(AlertEntity).findOneByOrFail({ taskId: task.id, kind: 'missed_task' })
   await db().getRepository(AlertEntity).update(alert.id, { ladderId: ladder.id })
@@ -66,7 +84,12 @@ async function textClaimedByADeadProcess(missedAt: Date) {
 
 /** One tick of the real scheduler at the given moment, with mail and texts set up. */
 async function tickAt(at: Date) {
-  const scheduler = startScheduler(db(), { now: () => at, intervalMs: 3_600_000, lockName: `stuck-${randomUUID()}`, mail: { config: texts.config, transport: mail.transport, channels: { text: texts.sender } } })
+  const scheduler = startScheduler(db(), {
+    now: () => at,
+    intervalMs: 3_600_000,
+    lockName: `stuck-${randomUUID()}`,
+    mail: { config: texts.config, transport: mail.transport, channels: { text: texts.sender } },
+  })
   await scheduler.tick()
   await scheduler.stop()
 }
@@ -83,14 +106,20 @@ describe('a message whose sender stopped between claiming and hearing back', () 
 
     await tickAt(new Date(claimedAt.getTime() + STUCK_SENDING_AFTER_MS + MIN))
     const rows = await rowsOf(alert.id)
-    expect(rows.map((r) => [r.channel, r.status])).toEqual([['sms', 'unknown'], ['email', 'sent']])
+    expect(rows.map((r) => [r.channel, r.status])).toEqual([
+      ['sms', 'unknown'],
+      ['email', 'sent'],
+    ])
     expect(rows[0].lastError).toMatch(/^Unknown: the app stopped while sending/)
     expect(await textsAbout(onCall.phone, task.title)).toHaveLength(0)
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(task.title))).toHaveLength(1)
 
     // Later ticks neither resend the text nor mail again.
     await tickAt(new Date(claimedAt.getTime() + STUCK_SENDING_AFTER_MS + 10 * MIN))
-    expect((await rowsOf(alert.id)).map((r) => [r.channel, r.status, r.attempts])).toEqual([['sms', 'unknown', 0], ['email', 'sent', 1]])
+    expect((await rowsOf(alert.id)).map((r) => [r.channel, r.status, r.attempts])).toEqual([
+      ['sms', 'unknown', 0],
+      ['email', 'sent', 1],
+    ])
     expect(await textsAbout(onCall.phone, task.title)).toHaveLength(0)
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(task.title))).toHaveLength(1)
 
@@ -109,7 +138,10 @@ describe('a message whose sender stopped between claiming and hearing back', () 
     await acknowledgeAlert(alert.id, onCall.id, new Date(claimedAt.getTime() + MIN))
 
     await tickAt(new Date(claimedAt.getTime() + STUCK_SENDING_AFTER_MS + MIN))
-    expect((await rowsOf(alert.id)).map((r) => [r.channel, r.status])).toEqual([['sms', 'unknown'], ['email', 'superseded']])
+    expect((await rowsOf(alert.id)).map((r) => [r.channel, r.status])).toEqual([
+      ['sms', 'unknown'],
+      ['email', 'superseded'],
+    ])
     expect(await textsAbout(onCall.phone, task.title)).toHaveLength(0)
     expect((await messagesTo(onCall.email)).filter((m) => m.subject.includes(task.title))).toHaveLength(0)
   })

@@ -36,8 +36,14 @@ describe('routines and tasks API', () => {
   })
 
   test('when a technician or observer tries to create a routine, then it is refused', async () => {
-    await technician.post('/api/routines').send(routineInput({ targetKind: 'facility' })).expect(403)
-    await observer.post('/api/routines').send(routineInput({ targetKind: 'facility' })).expect(403)
+    await technician
+      .post('/api/routines')
+      .send(routineInput({ targetKind: 'facility' }))
+      .expect(403)
+    await observer
+      .post('/api/routines')
+      .send(routineInput({ targetKind: 'facility' }))
+      .expect(403)
   })
 
   test('when the task list has no date, or a range that is backwards or too long, then it answers 400', async () => {

@@ -26,16 +26,60 @@ beforeAll(async () => {
   const manager = await s.createPerson('manager')
   managerEmail = manager.email
   const task = await makeTankTask(tanks[0], { localDate: today, assigneeId: manager.id, title: `Check ${SCRIPT}` })
-  const batch = await batches.create({ code: 'B-A11Y', species: 'Barramundi', origin: SCRIPT, arrivalDate: today, count: 100, meanWeightG: 5, tankIds: [tanks[0].id], status: 'active', feedRatePct: 2 })
+  const batch = await batches.create({
+    code: 'B-A11Y',
+    species: 'Barramundi',
+    origin: SCRIPT,
+    arrivalDate: today,
+    count: 100,
+    meanWeightG: 5,
+    tankIds: [tanks[0].id],
+    status: 'active',
+    feedRatePct: 2,
+  })
   const routine = await createRoutine(routineData({ name: `Routine ${SCRIPT}`, targetIds: [tanks[0].id], instructions: SCRIPT }))
   await addHandoverNote(toPerson(await getPersonRow(manager.id)), { text: `Watch bin 2 ${SCRIPT}` })
-  await recordMovement(toPerson(await getPersonRow(manager.id)), MovementInputSchema.parse({ kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT }))
-  await proposeIncident({ source: 'missed_task', sourceKey: `a11y:${task.id}`, taskId: task.id, title: `Missed ${SCRIPT}`, whatHappened: SCRIPT, startedAt: new Date(), tankIds: [tanks[0].id] }, new Date())
+  await recordMovement(
+    toPerson(await getPersonRow(manager.id)),
+    MovementInputSchema.parse({ kind: 'arrival', batchId: batch.id, toTankId: tanks[0].id, count: 100, origin: SCRIPT }),
+  )
+  await proposeIncident(
+    {
+      source: 'missed_task',
+      sourceKey: `a11y:${task.id}`,
+      taskId: task.id,
+      title: `Missed ${SCRIPT}`,
+      whatHappened: SCRIPT,
+      startedAt: new Date(),
+      tankIds: [tanks[0].id],
+    },
+    new Date(),
+  )
   pages = [
-    '/round', `/board?date=${today}`, '/calendar', '/on-call', '/tanks', `/tanks/${tanks[0].id}`, '/routines', `/routines/${routine.id}`,
-    '/routines/new', '/playbooks', '/oxygen', '/calculators', '/roster', '/reports', '/audit', `/round-sheet?date=${today}&areaId=${area.id}`,
-    `/labels?areaId=${area.id}`, '/people', '/outbox', '/settings', `/tasks/${task.id}`, `/batches/${batch.id}`,
-    '/incidents', `/incidents/${(await listIncidents())[0].id}`,
+    '/round',
+    `/board?date=${today}`,
+    '/calendar',
+    '/on-call',
+    '/tanks',
+    `/tanks/${tanks[0].id}`,
+    '/routines',
+    `/routines/${routine.id}`,
+    '/routines/new',
+    '/playbooks',
+    '/oxygen',
+    '/calculators',
+    '/roster',
+    '/reports',
+    '/audit',
+    `/round-sheet?date=${today}&areaId=${area.id}`,
+    `/labels?areaId=${area.id}`,
+    '/people',
+    '/outbox',
+    '/settings',
+    `/tasks/${task.id}`,
+    `/batches/${batch.id}`,
+    '/incidents',
+    `/incidents/${(await listIncidents())[0].id}`,
   ]
 }, 120_000)
 afterAll(() => s?.close())
@@ -53,7 +97,9 @@ describe.each([
     })
     await page.goto('/sign-in')
     const signIn = await new AxeBuilder({ page }).analyze()
-    const problems: string[] = signIn.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `/sign-in: ${v.id} (${v.nodes.length})`)
+    const problems: string[] = signIn.violations
+      .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+      .map((v) => `/sign-in: ${v.id} (${v.nodes.length})`)
     await s.signIn(page, managerEmail)
     for (const path of pages) {
       await page.goto(path)
@@ -62,7 +108,12 @@ describe.each([
       await page.waitForTimeout(400)
       const result = await new AxeBuilder({ page }).analyze()
       for (const v of result.violations.filter((x) => x.impact === 'serious' || x.impact === 'critical')) {
-        problems.push(`${path}: ${v.id} — ${v.help} (${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(' | ')})`)
+        problems.push(
+          `${path}: ${v.id} — ${v.help} (${v.nodes
+            .map((n) => n.target.join(' '))
+            .slice(0, 3)
+            .join(' | ')})`,
+        )
       }
       expect(await page.evaluate(() => (window as unknown as { __stored?: number }).__stored), `stored markup ran on ${path}`).toBeUndefined()
     }

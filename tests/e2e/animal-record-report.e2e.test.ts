@@ -47,7 +47,10 @@ describe('the animal record for the ethics committee', () => {
     await summary.getByText(`= ${onHand.toLocaleString('en-GB')} on hand`).waitFor()
     await summary.getByText(/Balances: the register holds/).waitFor()
     // Every tank line adds up to the batch line.
-    const tankLines = await table.locator('tbody tr').filter({ hasNotText: 'all tanks' }).evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')))
+    const tankLines = await table
+      .locator('tbody tr')
+      .filter({ hasNotText: 'all tanks' })
+      .evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent ?? '')))
     expect(tankLines.length).toBeGreaterThan(12)
     expect(tankLines.reduce((sum, line) => sum + count(line[11]), 0)).toBe(onHand)
 
@@ -56,12 +59,20 @@ describe('the animal record for the ethics committee', () => {
     await deadlines.getByRole('row').filter({ hasText: 'TRL-A07' }).getByText('Missed, done late').first().waitFor()
     await screenshot(page, 'animal-record-desktop')
     const axe = await new AxeBuilder({ page }).analyze()
-    expect(axe.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(' | ')}`)).toEqual([])
+    expect(
+      axe.violations
+        .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+        .map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(' | ')}`),
+    ).toEqual([])
 
     const link = page.getByRole('link', { name: 'Download CSV: numbers per batch' })
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()])
     expect(download.suggestedFilename()).toBe(`stock-${from}-${to}.csv`)
-    const parsed = Papa.parse<Record<string, unknown>>(await readFile((await download.path())!, 'utf8'), { header: true, dynamicTyping: true, skipEmptyLines: true })
+    const parsed = Papa.parse<Record<string, unknown>>(await readFile((await download.path())!, 'utf8'), {
+      header: true,
+      dynamicTyping: true,
+      skipEmptyLines: true,
+    })
     expect(parsed.errors).toEqual([])
     const json = await (await page.request.get(`/api/reports/stock?${new URL(page.url()).searchParams}`)).json()
     expect(parsed.data.map((r) => ({ ...r, diedByCause: r.diedByCause ?? '' }))).toEqual(json)

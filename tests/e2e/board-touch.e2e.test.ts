@@ -38,7 +38,14 @@ describe('the board on a tablet', () => {
     const monday = DateTime.now().setZone(zone).plus({ days: 330 }).startOf('week')
     const date = monday.toISODate()!
     const due = monday.set({ hour: 9, minute: 0 })
-    const task = await makeTankTask(tanks[0], { title: 'Touch-drag check', dueAt: due.toJSDate(), localDate: date, localStart: `${date}T09:00:00`, occurrenceStart: `${date}T09:00:00`, status: 'planned' })
+    const task = await makeTankTask(tanks[0], {
+      title: 'Touch-drag check',
+      dueAt: due.toJSDate(),
+      localDate: date,
+      localStart: `${date}T09:00:00`,
+      occurrenceStart: `${date}T09:00:00`,
+      status: 'planned',
+    })
     const tech = await s.createPerson('technician', { name: 'Lena Reef' })
     await createShift({ personId: tech.id, date, start: '07:00', end: '15:30', kind: 'day' })
     const supervisor = await s.createPerson('supervisor')

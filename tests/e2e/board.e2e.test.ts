@@ -26,7 +26,14 @@ afterAll(() => s?.close())
 /** A task on a facility day at a local time, unassigned unless told. */
 function taskAt(tank: Tank, date: string, time: string, extra: Parameters<typeof makeTankTask>[1] = {}) {
   const due = DateTime.fromISO(`${date}T${time}`, { zone })
-  return makeTankTask(tank, { dueAt: due.toJSDate(), localDate: date, localStart: `${date}T${time}:00`, occurrenceStart: `${date}T${time}:00`, status: 'planned', ...extra })
+  return makeTankTask(tank, {
+    dueAt: due.toJSDate(),
+    localDate: date,
+    localStart: `${date}T${time}:00`,
+    occurrenceStart: `${date}T${time}:00`,
+    status: 'planned',
+    ...extra,
+  })
 }
 
 /** A Monday far ahead, so other journeys' tasks never share the board; Tuesday is in the same week. */
@@ -46,7 +53,13 @@ async function arrange() {
     taskAt(tanks[0], monday, '11:00', { title: `Water test A ${tag}`, category: 'water_quality', priority: 'routine' }),
     taskAt(tanks[1], monday, '11:15', { title: `Water test B ${tag}`, category: 'water_quality', priority: 'routine' }),
     // Neighbours that show the card's other facts: a held feed, and a finished check with a watch flag.
-    taskAt(tanks[2], monday, '12:00', { title: `Fasted feed ${tag}`, category: 'feeding', status: 'held', heldReason: 'Fasting before dispatch', assigneeId: offShift.id }),
+    taskAt(tanks[2], monday, '12:00', {
+      title: `Fasted feed ${tag}`,
+      category: 'feeding',
+      status: 'held',
+      heldReason: 'Fasting before dispatch',
+      assigneeId: offShift.id,
+    }),
     taskAt(tanks[3], monday, '06:30', { title: `Dawn check ${tag}`, status: 'done', flag: 'watch', assigneeId: tech.id }),
   ])
   return { tag, monday, tuesday, area, tech, offShift, tasks: { mouse, keyboard, dayMove, refused, bulkA, bulkB } }
@@ -233,14 +246,35 @@ async function longDay() {
     const tank = tanks[i % tanks.length]
     const local = due.toFormat("yyyy-MM-dd'T'HH:mm:ss")
     return {
-      routineId: null, eventId: null, title: `Feed ${String(i + 1).padStart(3, '0')}`, category: 'feeding' as const, instructions: '', priority: 'routine' as const,
-      targetKind: 'tank' as const, targetId: tank.id, tankId: tank.id, areaId: area.id, localDate: date, localStart: local, occurrenceStart: local,
-      dueAt: due.toJSDate(), windowStartAt: due.minus({ minutes: 30 }).toJSDate(), graceUntil: due.plus({ hours: 1 }).toJSDate(),
-      durationMinutes: 2, status: 'planned' as const, assigneeId: tech.id, assignedManually: true, edited: false, requiredReadings: [], version: 1,
+      routineId: null,
+      eventId: null,
+      title: `Feed ${String(i + 1).padStart(3, '0')}`,
+      category: 'feeding' as const,
+      instructions: '',
+      priority: 'routine' as const,
+      targetKind: 'tank' as const,
+      targetId: tank.id,
+      tankId: tank.id,
+      areaId: area.id,
+      localDate: date,
+      localStart: local,
+      occurrenceStart: local,
+      dueAt: due.toJSDate(),
+      windowStartAt: due.minus({ minutes: 30 }).toJSDate(),
+      graceUntil: due.plus({ hours: 1 }).toJSDate(),
+      durationMinutes: 2,
+      status: 'planned' as const,
+      assigneeId: tech.id,
+      assignedManually: true,
+      edited: false,
+      requiredReadings: [],
+      version: 1,
     }
   })
   await db().getRepository(TaskEntity).insert(rows)
-  const saved = await db().getRepository(TaskEntity).find({ where: { localDate: date, assigneeId: tech.id }, order: { dueAt: 'ASC' } })
+  const saved = await db()
+    .getRepository(TaskEntity)
+    .find({ where: { localDate: date, assigneeId: tech.id }, order: { dueAt: 'ASC' } })
   return { date, area, tech, tasks: saved }
 }
 

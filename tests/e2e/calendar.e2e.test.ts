@@ -65,7 +65,9 @@ describe('the calendar', () => {
     await busy.getByText(tech.name).waitFor()
     await busy.getByText(onCall.name).waitFor()
     // Duty runs past the handover into the next morning.
-    await cell(page, DateTime.fromISO(day).plus({ days: 1 }).toISODate()!).getByText(onCall.name).waitFor()
+    await cell(page, DateTime.fromISO(day).plus({ days: 1 }).toISODate()!)
+      .getByText(onCall.name)
+      .waitFor()
     await screenshot(page, 'calendar-month-desktop')
 
     // Only the visible range was asked for: whole weeks from Monday around this month.

@@ -21,13 +21,28 @@ afterAll(() => s?.close())
 function feedAt(tank: Tank, at: DateTime, title: string) {
   const local = at.toFormat("yyyy-MM-dd'T'HH:mm:ss")
   return makeTankTask(tank, {
-    title, category: 'feeding', priority: 'routine', requiredReadings: ['feed_g'], status: 'planned',
-    dueAt: at.toJSDate(), localDate: at.toISODate()!, localStart: local, occurrenceStart: local,
+    title,
+    category: 'feeding',
+    priority: 'routine',
+    requiredReadings: ['feed_g'],
+    status: 'planned',
+    dueAt: at.toJSDate(),
+    localDate: at.toISODate()!,
+    localStart: local,
+    occurrenceStart: local,
   })
 }
 
 const wallTime = (at: DateTime) =>
-  new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone: zone }).format(at.toJSDate())
+  new Intl.DateTimeFormat('en-GB', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+    timeZone: zone,
+  }).format(at.toJSDate())
 
 async function arrange() {
   const tag = randomUUID().slice(0, 5).toUpperCase()
@@ -41,15 +56,19 @@ async function arrange() {
     after: await feedAt(tanks[0], start.set({ hour: 16 }), `Evening feed ${tag}`), // after the start
     otherTank: await feedAt(tanks[1], start.set({ hour: 8 }), `Early feed ${tag} (other tank)`),
   }
-  const playbook = await createPlaybook(PlaybookInputSchema.parse({
-    name: `Grading ${tag}`, kind: 'grading', fastingHours: 24,
-    description: 'Feed withheld before handling; checks before and after.',
-    steps: [
-      { title: 'Pre-handling check', category: 'welfare', minutesOffset: -60, perTank: true, durationMinutes: 3, requiredReadings: ['do_mgL', 'temp_c'] },
-      { title: 'Grade and count', category: 'stock', minutesOffset: 0, perTank: true, durationMinutes: 40 },
-      { title: 'Post-handling check', category: 'welfare', dayOffset: 1, time: '08:00', perTank: true, priority: 'welfare_critical' },
-    ],
-  }))
+  const playbook = await createPlaybook(
+    PlaybookInputSchema.parse({
+      name: `Grading ${tag}`,
+      kind: 'grading',
+      fastingHours: 24,
+      description: 'Feed withheld before handling; checks before and after.',
+      steps: [
+        { title: 'Pre-handling check', category: 'welfare', minutesOffset: -60, perTank: true, durationMinutes: 3, requiredReadings: ['do_mgL', 'temp_c'] },
+        { title: 'Grade and count', category: 'stock', minutesOffset: 0, perTank: true, durationMinutes: 40 },
+        { title: 'Post-handling check', category: 'welfare', dayOffset: 1, time: '08:00', perTank: true, priority: 'welfare_critical' },
+      ],
+    }),
+  )
   return { tag, tank: tanks[0], start, feeds, playbook }
 }
 
@@ -86,7 +105,10 @@ describe('Events', () => {
     const heldRow = page.getByRole('listitem').filter({ hasText: feeds.sameDay.title }).filter({ hasNotText: 'other tank' })
     await heldRow.getByText('Held', { exact: true }).waitFor()
     await heldRow.getByText(`Fasting before ${title}`).waitFor()
-    await page.getByRole('listitem').filter({ hasText: `Grade and count · ${title}` }).waitFor()
+    await page
+      .getByRole('listitem')
+      .filter({ hasText: `Grade and count · ${title}` })
+      .waitFor()
     await screenshot(page, 'event-page-desktop')
 
     // The board for the event's day shows the held feed with its reason; the later feed and the other tank are untouched.

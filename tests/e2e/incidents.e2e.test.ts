@@ -22,8 +22,15 @@ afterAll(() => s?.close())
 async function missCheck(tank: Tank, title: string, missedAt: Date, assigneeId: number) {
   const due = DateTime.fromJSDate(new Date(missedAt.getTime() - HOUR)).setZone(zone)
   await makeTankTask(tank, {
-    title, assigneeId, status: 'overdue', dueAt: due.toJSDate(), windowStartAt: new Date(due.toMillis() - 30 * MIN), graceUntil: missedAt,
-    localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), occurrenceStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+    title,
+    assigneeId,
+    status: 'overdue',
+    dueAt: due.toJSDate(),
+    windowStartAt: new Date(due.toMillis() - 30 * MIN),
+    graceUntil: missedAt,
+    localDate: due.toISODate()!,
+    localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+    occurrenceStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
   })
   await advanceTaskStatuses(db(), new Date(missedAt.getTime() + 1000))
 }
@@ -93,14 +100,21 @@ describe('incidents proposed by Roundtide', () => {
     await seen.getByRole('link').click()
     await phone.page.waitForURL(`**${incidentUrl}`)
     const deadlines = phone.page.getByRole('region', { name: 'Deadlines' })
-    expect(await deadlines.textContent()).toMatch(/Tell the welfare officer: Met on .*Report to the ethics committee: 2 d 23 h left.*Full report: 6 d 23 h left/)
+    expect(await deadlines.textContent()).toMatch(
+      /Tell the welfare officer: Met on .*Report to the ethics committee: 2 d 23 h left.*Full report: 6 d 23 h left/,
+    )
     // An observer reads and adds notes; confirming is not theirs.
     expect(await phone.page.getByRole('form', { name: 'Decide on this proposal' }).count()).toBe(0)
     expect(await phone.page.getByRole('button', { name: 'Fill in the record' }).count()).toBe(0)
-    await phone.page.getByRole('textbox', { name: 'Note', exact: true }).fill('Spoke to the technician; aerator breaker tripped overnight. Keep the tank on hourly checks today.')
+    await phone.page
+      .getByRole('textbox', { name: 'Note', exact: true })
+      .fill('Spoke to the technician; aerator breaker tripped overnight. Keep the tank on hourly checks today.')
     await phone.page.getByRole('button', { name: 'Add note' }).click()
     await phone.page.getByRole('list', { name: 'Timeline' }).getByText('Note by Ana Reyes').waitFor()
-    await phone.page.getByRole('list', { name: 'Timeline' }).getByText(/Keep the tank on hourly checks today/).waitFor()
+    await phone.page
+      .getByRole('list', { name: 'Timeline' })
+      .getByText(/Keep the tank on hourly checks today/)
+      .waitFor()
     await screenshot(phone.page, 'incidents-phone-record')
     await phone.context.close()
   }, 120_000)

@@ -32,7 +32,13 @@ describe('the outbox in local mail mode', () => {
     const { tanks } = await makeAreaWithTanks(1)
     const title = `Nursery DO check ${randomUUID().slice(0, 4)}`
     const now = Date.now()
-    const task = await makeTankTask(tanks[0], { title, assigneeId: manager.id, status: 'overdue', dueAt: new Date(now - 61 * MIN), graceUntil: new Date(now - MIN) })
+    const task = await makeTankTask(tanks[0], {
+      title,
+      assigneeId: manager.id,
+      status: 'overdue',
+      dueAt: new Date(now - 61 * MIN),
+      graceUntil: new Date(now - MIN),
+    })
     // The test server's scheduler ticks only every 30 s; run its three steps now.
     await advanceTaskStatuses(db(), new Date())
     await runEscalations(new Date())
@@ -89,8 +95,12 @@ describe('push notifications in the Outbox (local push mode)', () => {
     expect(s.config.push.localUrl).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/)
     const manager = await s.createPerson('manager', { name: 'Maren Tollis', onCallEligible: true })
     const now = Date.now()
-    await db().getRepository(PersonEntity).update(manager.id, { channels: ['push'] })
-    await db().getRepository(OnCallEntity).save({ personId: manager.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
+    await db()
+      .getRepository(PersonEntity)
+      .update(manager.id, { channels: ['push'] })
+    await db()
+      .getRepository(OnCallEntity)
+      .save({ personId: manager.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
 
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, manager.email)
@@ -123,7 +133,13 @@ describe('push notifications in the Outbox (local push mode)', () => {
     const manager = await s.createPerson('manager')
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, manager.email)
-    await page.route('**/api/outbox/pushes', (route) => route.fulfill({ status: 500, contentType: 'application/json', body: JSON.stringify({ error: { code: 'internal', message: 'The server could not answer.' } }) }))
+    await page.route('**/api/outbox/pushes', (route) =>
+      route.fulfill({
+        status: 500,
+        contentType: 'application/json',
+        body: JSON.stringify({ error: { code: 'internal', message: 'The server could not answer.' } }),
+      }),
+    )
     await page.goto('/outbox')
     await page.getByText('Could not load the push notifications').waitFor()
     await page.getByRole('button', { name: 'Try again' }).waitFor()

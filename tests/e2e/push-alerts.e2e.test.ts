@@ -39,14 +39,24 @@ interface WorkerScope {
 }
 
 const shownNotifications = (worker: Worker) =>
-  worker.evaluate(async () => (await (globalThis as unknown as WorkerScope).registration.getNotifications()).map((n) => ({ title: n.title, tag: n.tag, actions: (n as Notification & { actions: Array<{ title: string }> }).actions.map((a) => a.title) })))
+  worker.evaluate(async () =>
+    (await (globalThis as unknown as WorkerScope).registration.getNotifications()).map((n) => ({
+      title: n.title,
+      tag: n.tag,
+      actions: (n as Notification & { actions: Array<{ title: string }> }).actions.map((a) => a.title),
+    })),
+  )
 
 describe('push alerts on the installed app', () => {
   test('the person on call registers this phone, the service worker shows the encrypted alert with Acknowledge and Open, and acknowledging records who answered', async () => {
     const person = await s.createPerson('technician', { name: 'Wren Halloway', onCallEligible: true })
     const now = Date.now()
-    await db().getRepository(PersonEntity).update(person.id, { channels: ['push'] })
-    await db().getRepository(OnCallEntity).save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
+    await db()
+      .getRepository(PersonEntity)
+      .update(person.id, { channels: ['push'] })
+    await db()
+      .getRepository(OnCallEntity)
+      .save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
 
     // Service workers are allowed here (other journeys block them) and notifications are permitted, as after "Allow".
     const context = await s.browser.newContext({ viewport: PHONE, baseURL: s.url, serviceWorkers: 'allow' })
@@ -61,12 +71,22 @@ describe('push alerts on the installed app', () => {
     // (ECDH P-256 keys + auth secret) is made at the stand-in push service and registered as the page would.
     const publicKey = await page.evaluate(async () => (await (await fetch('/api/push/public-key')).json()).publicKey as string)
     const device = pushService.subscribe(publicKey)
-    const registered = await page.evaluate(async (body) => (await fetch('/api/me/push-subscriptions', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).status, device)
+    const registered = await page.evaluate(
+      async (body) =>
+        (await fetch('/api/me/push-subscriptions', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) })).status,
+      device,
+    )
     expect(registered).toBe(204)
 
     const { tanks } = await makeAreaWithTanks(1)
     const title = `Broodstock DO check ${randomUUID().slice(0, 4)}`
-    const task = await makeTankTask(tanks[0], { title, priority: 'welfare_critical', status: 'overdue', dueAt: new Date(now - 61 * MIN), graceUntil: new Date(now - MIN) })
+    const task = await makeTankTask(tanks[0], {
+      title,
+      priority: 'welfare_critical',
+      status: 'overdue',
+      dueAt: new Date(now - 61 * MIN),
+      graceUntil: new Date(now - MIN),
+    })
     await advanceTaskStatuses(db(), new Date())
     await runEscalations(new Date())
     await deliverPending(mail.config, mail.transport, new Date(), { push: createPushSender(s.config) })
@@ -77,10 +97,18 @@ describe('push alerts on the installed app', () => {
 
     // The decrypted message reaches the page's service worker as a push event, as Chromium would deliver it.
     const cdp = await context.newCDPSession(page)
-    const registrationId = new Promise<string>((resolve) => cdp.on('ServiceWorker.workerRegistrationUpdated', ({ registrations }) => registrations[0] && resolve(registrations[0].registrationId)))
+    const registrationId = new Promise<string>((resolve) =>
+      cdp.on('ServiceWorker.workerRegistrationUpdated', ({ registrations }) => registrations[0] && resolve(registrations[0].registrationId)),
+    )
     await cdp.send('ServiceWorker.enable')
-    await cdp.send('ServiceWorker.deliverPushMessage', { origin: new URL(s.url).origin, registrationId: await registrationId, data: JSON.stringify(received.payload) })
-    await expect.poll(() => shownNotifications(worker)).toEqual([{ title: expect.stringContaining(`MISSED: ${title}`), tag: expect.stringMatching(/^alert-\d+$/), actions: ['Acknowledge', 'Open'] }])
+    await cdp.send('ServiceWorker.deliverPushMessage', {
+      origin: new URL(s.url).origin,
+      registrationId: await registrationId,
+      data: JSON.stringify(received.payload),
+    })
+    await expect
+      .poll(() => shownNotifications(worker))
+      .toEqual([{ title: expect.stringContaining(`MISSED: ${title}`), tag: expect.stringMatching(/^alert-\d+$/), actions: ['Acknowledge', 'Open'] }])
 
     // The Acknowledge action: the worker posts the single-use token and says on the phone what happened.
     const outcome = await worker.evaluate(async () => {

@@ -22,7 +22,9 @@ afterAll(async () => {
 /** A person who accepts push alerts, signed in on the settings page of a browser whose service worker controls the page. */
 async function settingsPageOf(name: string) {
   const person = await s.createPerson('technician', { name })
-  await db().getRepository(PersonEntity).update(person.id, { channels: ['push'] })
+  await db()
+    .getRepository(PersonEntity)
+    .update(person.id, { channels: ['push'] })
   const browser = await launchPushProfile(gcm, { baseURL: s.url, viewport: PHONE })
   const page = await browser.context.newPage()
   await s.signIn(page, person.email)

@@ -18,7 +18,10 @@ beforeAll(async () => {
   zone = (await ensureFacilityAndParameters()).timeZone
   const repo = db().getRepository(ParameterEntity)
   for (const p of DEMO_PARAMETERS.filter((d) => d.key === 'do_mgL' || d.key === 'temp_c')) {
-    if (!(await repo.findOneBy({ key: p.key }))) await repo.save(repo.create({ key: p.key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: false }))
+    if (!(await repo.findOneBy({ key: p.key })))
+      await repo.save(
+        repo.create({ key: p.key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: false }),
+      )
   }
 })
 afterAll(() => s?.close())
@@ -34,21 +37,32 @@ async function arrange() {
   const day = (ago: number, hour = 9) => DateTime.now().setZone(zone).minus({ days: ago }).set({ hour, minute: 0, second: 0, millisecond: 0 })
   const task = (tank: (typeof tanks)[number], ago: number, extra: Parameters<typeof makeTankTask>[1] = {}) => {
     const due = day(ago)
-    return makeTankTask(tank, { title: `Welfare check ${tag}`, dueAt: due.toJSDate(), localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), ...extra })
+    return makeTankTask(tank, {
+      title: `Welfare check ${tag}`,
+      dueAt: due.toJSDate(),
+      localDate: due.toISODate()!,
+      localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      ...extra,
+    })
   }
   const doneAt = (ago: number, minutes: number) => day(ago).plus({ minutes }).toUTC().toISO()!
   const ok = { do_mgL: 6.5, temp_c: 28 }
   await completeTask((await task(tanks[0], 5)).id, supervisor, parsedCompletion(ok, { doneAt: doneAt(5, -5), performedById: tech.id }))
   await completeTask((await task(tanks[1], 5)).id, supervisor, parsedCompletion(ok, { doneAt: doneAt(5, 25), performedById: tech.id }))
   await task(tanks[0], 4, { status: 'missed' })
-  await completeTask((await task(tanks[1], 4)).id, supervisor, parsedCompletion({}, { outcome: 'skipped', skipReason: 'no_access', doneAt: doneAt(4, 10), performedById: tech.id }))
+  await completeTask(
+    (await task(tanks[1], 4)).id,
+    supervisor,
+    parsedCompletion({}, { outcome: 'skipped', skipReason: 'no_access', doneAt: doneAt(4, 10), performedById: tech.id }),
+  )
   await task(tanks[0], 3, { status: 'held', heldReason: 'Fasting before dispatch' })
   const critical = await task(tanks[1], 3, { title: `Oxygen check ${tag}` })
   await completeTask(critical.id, supervisor, parsedCompletion({ do_mgL: 3.1, temp_c: 28 }, { doneAt: doneAt(3, -4), performedById: tech.id }))
   return { tag, area, tanks, critical, from: day(5).toISODate()!, to: day(3).toISODate()! }
 }
 
-const cellTexts = (rows: import('playwright-core').Locator) => rows.evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent?.trim() ?? '')))
+const cellTexts = (rows: import('playwright-core').Locator) =>
+  rows.evaluateAll((trs) => trs.map((tr) => [...tr.querySelectorAll('td')].map((td) => td.textContent?.trim() ?? '')))
 
 describe('reports', () => {
   test('a manager reads compliance for a range, and the CSV download parses back to the same rows', async () => {
@@ -88,7 +102,11 @@ describe('reports', () => {
     expect(await link.getAttribute('href')).toBe(`/api/reports/compliance?from=${from}&to=${to}&by=area&period=day&format=csv`)
     const [download] = await Promise.all([page.waitForEvent('download'), link.click()])
     expect(download.suggestedFilename()).toBe(`compliance-area-${from}-${to}.csv`)
-    const parsed = Papa.parse<Record<string, unknown>>(await readFile((await download.path())!, 'utf8'), { header: true, dynamicTyping: true, skipEmptyLines: true })
+    const parsed = Papa.parse<Record<string, unknown>>(await readFile((await download.path())!, 'utf8'), {
+      header: true,
+      dynamicTyping: true,
+      skipEmptyLines: true,
+    })
     expect(parsed.errors).toEqual([])
     expect(parsed.data.map((r) => ({ ...r, onTimeRate: r.onTimeRate === '' ? null : r.onTimeRate }))).toEqual(json)
     const shown = await cellTexts(table.locator('tbody tr'))
@@ -99,7 +117,10 @@ describe('reports', () => {
     await page.emulateMedia({ media: 'screen' })
 
     await page.getByRole('link', { name: 'Response times' }).click()
-    const flagged = page.getByRole('table', { name: 'Responses' }).getByRole('row').filter({ hasText: `Oxygen check ${tag}` })
+    const flagged = page
+      .getByRole('table', { name: 'Responses' })
+      .getByRole('row')
+      .filter({ hasText: `Oxygen check ${tag}` })
     await flagged.getByText('Critical', { exact: true }).waitFor()
     await flagged.getByText('Critical reading').waitFor()
     await screenshot(page, 'reports-responses-desktop')
@@ -111,7 +132,11 @@ describe('reports', () => {
     await page.waitForURL((url) => url.searchParams.get('tankIds') === String(tanks[1].id))
     const welfare = page.getByRole('table', { name: 'Welfare checks' }).locator('tbody tr')
     await expect.poll(() => welfare.count()).toBe(3)
-    await page.getByRole('row').filter({ hasText: `Oxygen check ${tag}` }).getByText(/do_mgL=3\.1 mg\/L \(critical\)/).waitFor()
+    await page
+      .getByRole('row')
+      .filter({ hasText: `Oxygen check ${tag}` })
+      .getByText(/do_mgL=3\.1 mg\/L \(critical\)/)
+      .waitFor()
     expect(await page.getByRole('link', { name: 'Download CSV: welfare checks' }).getAttribute('href')).toContain(`tankIds=${tanks[1].id}&format=csv`)
     await screenshot(page, 'reports-welfare-desktop')
 

@@ -26,8 +26,12 @@ describe('deaths counted on the round reach the stock register', () => {
     await recordMovement(supervisor, parsedArrival(batch.id, tank, 400))
     const due = DateTime.now().plus({ minutes: 10 }).setZone(zone)
     await makeTankTask(tank, {
-      title: 'Morning tank check', assigneeId: tech.id, requiredReadings: ['mortalities', 'do_mgL', 'temp_c'],
-      dueAt: due.toJSDate(), localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      title: 'Morning tank check',
+      assigneeId: tech.id,
+      requiredReadings: ['mortalities', 'do_mgL', 'temp_c'],
+      dueAt: due.toJSDate(),
+      localDate: due.toISODate()!,
+      localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
     })
 
     const { page, context } = await s.newPage(PHONE)

@@ -16,7 +16,10 @@ beforeAll(async () => {
   zone = (await ensureFacilityAndParameters()).timeZone
   const repo = db().getRepository(ParameterEntity)
   for (const p of DEMO_PARAMETERS.filter((d) => d.key === 'do_mgL' || d.key === 'temp_c')) {
-    if (!(await repo.findOneBy({ key: p.key }))) await repo.save(repo.create({ key: p.key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: false }))
+    if (!(await repo.findOneBy({ key: p.key })))
+      await repo.save(
+        repo.create({ key: p.key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: false }),
+      )
   }
 })
 afterAll(() => s?.close())
@@ -53,7 +56,10 @@ describe('the round sheet', () => {
     await page.goto(`/round-sheet?date=${date}&personId=${tech.id}`)
     const sheet = page.getByRole('article', { name: 'Round sheet' })
     await sheet.getByRole('heading', { name: `Round sheet · ${tech.name}` }).waitFor()
-    expect(await sheet.getByRole('heading', { level: 3 }).allTextContents()).toEqual([`1. ${nursery.area.name}`, `2. ${quarantine.area.name} Quarantine: walk it last`])
+    expect(await sheet.getByRole('heading', { level: 3 }).allTextContents()).toEqual([
+      `1. ${nursery.area.name}`,
+      `2. ${quarantine.area.name} Quarantine: walk it last`,
+    ])
     const order = await sheet.getByRole('listitem').evaluateAll((items) => items.map((li) => li.textContent ?? ''))
     expect(order.map((text) => text.slice(0, 5))).toEqual(['07:00', '07:10', '06:00'])
     expect(order[0]).toContain(nursery.tanks[0].code)
@@ -101,13 +107,24 @@ describe('the round sheet', () => {
     await third.getByLabel('Dissolved oxygen (mg/L)').fill('7.2')
     await third.getByLabel('Temperature (°C)').fill('28')
     await third.getByLabel('Time on paper').fill('06:10')
-    await completeTask(tasks.q1.id, supervisor, parsedCompletion({ do_mgL: 7, temp_c: 28 }, { doneAt: DateTime.fromISO(`${date}T06:20`, { zone }).toUTC().toISO() }))
+    await completeTask(
+      tasks.q1.id,
+      supervisor,
+      parsedCompletion({ do_mgL: 7, temp_c: 28 }, { doneAt: DateTime.fromISO(`${date}T06:20`, { zone }).toUTC().toISO() }),
+    )
     await third.getByRole('button', { name: 'Save this task' }).click()
-    await third.getByRole('alert').getByText(/Not saved: already done in Roundtide by .* at 06:20\./).waitFor()
+    await third
+      .getByRole('alert')
+      .getByText(/Not saved: already done in Roundtide by .* at 06:20\./)
+      .waitFor()
     await screenshot(page, 'round-sheet-type-in-desktop')
 
     const record = await (await page.request.get(`/api/tasks/${tasks.n1.id}/completion`)).json()
-    expect(record.completion).toMatchObject({ personId: tech.id, enteredById: supervisor.id, doneAt: DateTime.fromISO(`${date}T07:04`, { zone }).toUTC().toISO() })
+    expect(record.completion).toMatchObject({
+      personId: tech.id,
+      enteredById: supervisor.id,
+      doneAt: DateTime.fromISO(`${date}T07:04`, { zone }).toUTC().toISO(),
+    })
     expect(record.readings.find((r: { parameterKey: string }) => r.parameterKey === 'do_mgL')).toMatchObject({ value: 3.6, band: 'critical' })
     await context.close()
 

@@ -56,7 +56,11 @@ describe('the round on a phone', () => {
     // The demo's facility limits, pinned on this system: another test file may have made the parameters without them.
     await setSystemLimit(system.id, 'do_mgL', { okMin: 5, okMax: 10.5, criticalMin: 4, criticalMax: null })
     await setSystemLimit(system.id, 'temp_c', { okMin: 26.5, okMax: 31, criticalMin: 24, criticalMax: 33 })
-    const [t1, t2, t3] = await Promise.all(tanks.map((tank, i) => taskDueIn(tank, 10 + i * 5, { title: `Water check ${i + 1}`, assigneeId: tech.id, instructions: 'Read DO and temperature at the outlet.' })))
+    const [t1, t2, t3] = await Promise.all(
+      tanks.map((tank, i) =>
+        taskDueIn(tank, 10 + i * 5, { title: `Water check ${i + 1}`, assigneeId: tech.id, instructions: 'Read DO and temperature at the outlet.' }),
+      ),
+    )
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, tech.email)
     await page.waitForURL('**/round')
@@ -141,7 +145,10 @@ describe('the round on a phone', () => {
     await mePage.page.getByText('Photo added').waitFor()
     expect(await db().getRepository(PhotoEntity).countBy({ taskId: mine.id })).toBe(1)
     const agent = await signInAs(supervisor.email)
-    await agent.post(`/api/tasks/${mine.id}/completion`).send(completion({ temp_c: 28.1 })).expect(200)
+    await agent
+      .post(`/api/tasks/${mine.id}/completion`)
+      .send(completion({ temp_c: 28.1 }))
+      .expect(200)
     await expect.poll(() => row(mePage.page, 'Feed check').textContent()).toContain('Done')
     await mePage.page.getByText('Done by Marla Supervisor').waitFor()
     await other.context.close()
@@ -162,7 +169,10 @@ describe('the round on a phone', () => {
     await page.getByText('1 waiting to send').waitFor()
 
     const agent = await signInAs(supervisor.email)
-    await agent.post(`/api/tasks/${task.id}/completion`).send(completion({ temp_c: 28.0 })).expect(200)
+    await agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ temp_c: 28.0 }))
+      .expect(200)
     await context.setOffline(false)
     await page.getByText('1 not sent').waitFor({ timeout: 15_000 })
     await openTask(page, 'Evening temperature')

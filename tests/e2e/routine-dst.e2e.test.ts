@@ -10,7 +10,14 @@ import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/f
 let s: BrowserSession
 beforeAll(async () => {
   s = await startBrowserSession()
-  await createFacilityIfMissing({ name: 'Spree Hatchery (invented)', timeZone: 'Europe/Berlin', handoverTime: '08:00', quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 12 })
+  await createFacilityIfMissing({
+    name: 'Spree Hatchery (invented)',
+    timeZone: 'Europe/Berlin',
+    handoverTime: '08:00',
+    quarantineDays: 30,
+    arrivalTempDiffLimitC: 2,
+    minOxygenHours: 12,
+  })
   await ensureFacilityAndParameters()
 })
 afterAll(() => s?.close())
@@ -43,9 +50,16 @@ describe('a routine across a daylight-saving change', () => {
 
     // The horizon today does not reach March 2027, so materialise that week explicitly.
     await materialise({ routineIds: [routineId], from: new Date('2027-03-26T00:00:00Z'), horizonDays: 4 })
-    const tasks = await db().getRepository(TaskEntity).find({ where: { routineId }, order: { dueAt: 'ASC' } })
+    const tasks = await db()
+      .getRepository(TaskEntity)
+      .find({ where: { routineId }, order: { dueAt: 'ASC' } })
     expect(tasks.map((t) => t.localStart)).toEqual(['2027-03-26T07:30:00', '2027-03-27T07:30:00', '2027-03-28T07:30:00', '2027-03-29T07:30:00'])
     // Computed by hand: CET is UTC+1 until 28 March 02:00, then CEST is UTC+2.
-    expect(tasks.map((t) => t.dueAt.toISOString())).toEqual(['2027-03-26T06:30:00.000Z', '2027-03-27T06:30:00.000Z', '2027-03-28T05:30:00.000Z', '2027-03-29T05:30:00.000Z'])
+    expect(tasks.map((t) => t.dueAt.toISOString())).toEqual([
+      '2027-03-26T06:30:00.000Z',
+      '2027-03-27T06:30:00.000Z',
+      '2027-03-28T05:30:00.000Z',
+      '2027-03-29T05:30:00.000Z',
+    ])
   })
 })

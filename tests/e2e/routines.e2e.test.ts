@@ -28,8 +28,12 @@ afterAll(() => s?.close())
 /** The shared test DB may already hold a facility in another zone; its zone is read back, not assumed. */
 async function facilityAndTag() {
   const facility = await createFacilityIfMissing({
-    name: 'Routine test station', timeZone: 'Australia/Brisbane', handoverTime: '07:00',
-    quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 24,
+    name: 'Routine test station',
+    timeZone: 'Australia/Brisbane',
+    handoverTime: '07:00',
+    quarantineDays: 30,
+    arrivalTempDiffLimitC: 2,
+    minOxygenHours: 24,
   })
   return { facility, tag: randomUUID().slice(0, 6).toUpperCase(), today: DateTime.now().setZone(facility.timeZone).toISODate()! }
 }
@@ -41,7 +45,9 @@ async function arrange() {
   const tankCodes = [1, 2, 3].map((n) => `RT${tag}-T${n}`)
   const tankIds: number[] = []
   for (const code of tankCodes) {
-    tankIds.push((await tanks.create({ code, name: `Trial tank ${code.slice(-1)}`, areaId: area.id, systemId: null, volumeL: 400, kind: 'tank', inUse: true })).id)
+    tankIds.push(
+      (await tanks.create({ code, name: `Trial tank ${code.slice(-1)}`, areaId: area.id, systemId: null, volumeL: 400, kind: 'tank', inUse: true })).id,
+    )
   }
   const repo = db().getRepository(ParameterEntity)
   for (const reading of READINGS) {
@@ -49,11 +55,28 @@ async function arrange() {
   }
   const parameters = await repo.findBy(READINGS.map(({ key }) => ({ key })))
   // Neighbours for the list: one welfare-critical, one paused.
-  await createRoutine(RoutineInputSchema.parse({
-    name: `Morning tank check ${tag}`, category: 'welfare', targetKind: 'area_tanks', targetIds: [area.id],
-    rrule: 'FREQ=DAILY', dtstart: `${today}T07:30:00`, priority: 'welfare_critical', requiredReadings: ['do_mgL'],
-  }))
-  await createRoutine(RoutineInputSchema.parse({ name: `Stores count ${tag}`, category: 'stores', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T11:00:00`, paused: true }))
+  await createRoutine(
+    RoutineInputSchema.parse({
+      name: `Morning tank check ${tag}`,
+      category: 'welfare',
+      targetKind: 'area_tanks',
+      targetIds: [area.id],
+      rrule: 'FREQ=DAILY',
+      dtstart: `${today}T07:30:00`,
+      priority: 'welfare_critical',
+      requiredReadings: ['do_mgL'],
+    }),
+  )
+  await createRoutine(
+    RoutineInputSchema.parse({
+      name: `Stores count ${tag}`,
+      category: 'stores',
+      targetKind: 'facility',
+      rrule: 'FREQ=WEEKLY;BYDAY=FR',
+      dtstart: `${today}T11:00:00`,
+      paused: true,
+    }),
+  )
   return { timeZone: facility.timeZone, tag, tankCodes, tankIds, parameters }
 }
 
@@ -160,7 +183,13 @@ describe('Routines', () => {
 
   test('when someone else saved first, a supervisor is told and can reload their version', async () => {
     const { tag, today } = await facilityAndTag()
-    const input = { name: `Alarm call-out test ${tag}`, category: 'alarms', targetKind: 'facility', rrule: 'FREQ=WEEKLY;BYDAY=FR', dtstart: `${today}T14:00:00` } as const
+    const input = {
+      name: `Alarm call-out test ${tag}`,
+      category: 'alarms',
+      targetKind: 'facility',
+      rrule: 'FREQ=WEEKLY;BYDAY=FR',
+      dtstart: `${today}T14:00:00`,
+    } as const
     const routine = await createRoutine(RoutineInputSchema.parse(input))
     const supervisor = await s.createPerson('supervisor')
     const { page, context } = await s.newPage(DESKTOP)

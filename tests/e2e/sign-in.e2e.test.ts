@@ -31,7 +31,22 @@ describe('signing in and out', () => {
     const { page, context } = await s.newPage(DESKTOP)
     await s.signIn(page, manager.email)
     const nav = page.getByRole('navigation', { name: 'Main' }).filter({ visible: true })
-    for (const name of ['Round', 'Board', 'Calendar', 'On call', 'Tanks', 'Routines', 'Playbooks', 'Oxygen', 'Roster', 'Reports', 'Round sheet', 'People', 'Outbox', 'Settings']) {
+    for (const name of [
+      'Round',
+      'Board',
+      'Calendar',
+      'On call',
+      'Tanks',
+      'Routines',
+      'Playbooks',
+      'Oxygen',
+      'Roster',
+      'Reports',
+      'Round sheet',
+      'People',
+      'Outbox',
+      'Settings',
+    ]) {
       await nav.getByRole('link', { name, exact: true }).waitFor()
     }
     await screenshot(page, 'manager-desktop-home')

@@ -45,7 +45,10 @@ describe('the stock register on the tank page', () => {
     await form.getByLabel('What was the cause?').fill('Caught in the outlet screen')
     await form.getByLabel('Note (optional)').fill('Found during the evening check')
     await form.getByRole('button', { name: 'Record movement' }).click()
-    await form.getByRole('alert').getByText(/Nothing was saved: the register shows 300 fish of this batch in/).waitFor()
+    await form
+      .getByRole('alert')
+      .getByText(/Nothing was saved: the register shows 300 fish of this batch in/)
+      .waitFor()
     await form.getByText('Only 300 on the register here').waitFor()
     expect(await form.getByLabel('Number of fish').inputValue()).toBe('350')
     expect(await form.getByLabel('What was the cause?').inputValue()).toBe('Caught in the outlet screen')

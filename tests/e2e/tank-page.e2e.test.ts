@@ -19,7 +19,18 @@ beforeAll(async () => {
   // Another test file may have made a few parameters by hand before the demo catalogue went in.
   const repo = db().getRepository(ParameterEntity)
   for (const p of DEMO_PARAMETERS.filter((d) => KEYS.includes(d.key))) {
-    if (!(await repo.findOneBy({ key: p.key }))) await repo.save(repo.create({ key: p.key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: p.derived ?? false }))
+    if (!(await repo.findOneBy({ key: p.key })))
+      await repo.save(
+        repo.create({
+          key: p.key,
+          name: p.name,
+          unit: p.unit,
+          decimals: p.decimals,
+          physicalMin: p.physicalMin,
+          physicalMax: p.physicalMax,
+          derived: p.derived ?? false,
+        }),
+      )
   }
 })
 afterAll(() => s?.close())
@@ -31,17 +42,31 @@ async function arrange() {
   const { area, system, tanks } = await makeAreaWithTanks(1, { roundOrder: 5 })
   const tank = tanks[0]
   const batch = await batches.create({
-    code: uniqueCode('B'), species: 'Barramundi (Lates calcarifer)', origin: 'Northside hatchery', arrivalDate: DateTime.now().setZone(zone).minus({ days: 40 }).toISODate()!,
-    count: 180, meanWeightG: 12.5, tankIds: [tank.id], status: 'active', feedRatePct: 3,
+    code: uniqueCode('B'),
+    species: 'Barramundi (Lates calcarifer)',
+    origin: 'Northside hatchery',
+    arrivalDate: DateTime.now().setZone(zone).minus({ days: 40 }).toISODate()!,
+    count: 180,
+    meanWeightG: 12.5,
+    tankIds: [tank.id],
+    status: 'active',
+    feedRatePct: 3,
   })
   // The demo's limits, pinned on this system so the test does not lean on the facility's.
   for (const p of DEMO_PARAMETERS.filter((d) => KEYS.includes(d.key) && d.bands)) await setSystemLimit(system.id, p.key, p.bands!)
   const doByDay = [6.8, 7.1, 6.5, 3.2, 6.9, 7.4, 4.6, 7, 6.6, 7.2]
   for (const [i, dissolved] of doByDay.entries()) {
-    const due = DateTime.now().setZone(zone).minus({ days: i + 1 }).set({ hour: 8, minute: 0, second: 0, millisecond: 0 })
+    const due = DateTime.now()
+      .setZone(zone)
+      .minus({ days: i + 1 })
+      .set({ hour: 8, minute: 0, second: 0, millisecond: 0 })
     const task = await makeTankTask(tank, {
-      title: 'Morning tank check', dueAt: due.toJSDate(), localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
-      requiredReadings: ['do_mgL', 'temp_c', 'mortalities'], assigneeId: tech.id,
+      title: 'Morning tank check',
+      dueAt: due.toJSDate(),
+      localDate: due.toISODate()!,
+      localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      requiredReadings: ['do_mgL', 'temp_c', 'mortalities'],
+      assigneeId: tech.id,
     })
     const readings = { do_mgL: dissolved, temp_c: 28 + (i % 3) * 0.4, mortalities: i % 4 === 0 ? 2 : 0 }
     await completeTask(task.id, supervisor, parsedCompletion(readings, { doneAt: due.plus({ minutes: 6 }).toUTC().toISO(), performedById: tech.id }))
@@ -49,10 +74,20 @@ async function arrange() {
   for (const i of [1, 4, 7]) {
     const due = DateTime.now().setZone(zone).minus({ days: i }).set({ hour: 9, minute: 30, second: 0, millisecond: 0 })
     const task = await makeTankTask(tank, {
-      title: 'Loop chemistry', targetKind: 'system', targetId: system.id, tankId: null, dueAt: due.toJSDate(), localDate: due.toISODate()!,
-      localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), requiredReadings: ['ph', 'temp_c'],
+      title: 'Loop chemistry',
+      targetKind: 'system',
+      targetId: system.id,
+      tankId: null,
+      dueAt: due.toJSDate(),
+      localDate: due.toISODate()!,
+      localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+      requiredReadings: ['ph', 'temp_c'],
     })
-    await completeTask(task.id, supervisor, parsedCompletion({ ph: 7.4 + i * 0.05, temp_c: 28.2 }, { doneAt: due.plus({ minutes: 3 }).toUTC().toISO(), performedById: tech.id }))
+    await completeTask(
+      task.id,
+      supervisor,
+      parsedCompletion({ ph: 7.4 + i * 0.05, temp_c: 28.2 }, { doneAt: due.plus({ minutes: 3 }).toUTC().toISO(), performedById: tech.id }),
+    )
   }
   return { area, system, tank, batch }
 }
@@ -77,7 +112,10 @@ describe('the tank page', () => {
     expect(await oxygenChart.locator('.reading-dot-critical').count()).toBe(1)
     expect(await oxygenChart.locator('.reading-dot-watch').count()).toBe(1)
     const flagged = oxygen.getByRole('list', { name: 'Flagged Dissolved oxygen readings' }).getByRole('listitem')
-    expect((await flagged.allTextContents()).map((t) => t.trim())).toEqual([expect.stringMatching(/^Critical3\.2 mg\/LThis tank · /), expect.stringMatching(/^Watch4\.6 mg\/LThis tank · /)])
+    expect((await flagged.allTextContents()).map((t) => t.trim())).toEqual([
+      expect.stringMatching(/^Critical3\.2 mg\/LThis tank · /),
+      expect.stringMatching(/^Watch4\.6 mg\/LThis tank · /),
+    ])
     await oxygen.getByText('Critical band: below 4 mg/L').waitFor()
 
     // The system's chemistry sits beside the tank's on the temperature chart, and pH is the system's own.
@@ -89,12 +127,17 @@ describe('the tank page', () => {
     // Worked-out values wait to be chosen.
     expect(await page.getByRole('region', { name: /^DO saturation/ }).count()).toBe(0)
     await page.getByRole('button', { name: 'DO saturation' }).click()
-    await page.getByRole('region', { name: /^DO saturation/ }).locator('.band-area-ok').waitFor()
+    await page
+      .getByRole('region', { name: /^DO saturation/ })
+      .locator('.band-area-ok')
+      .waitFor()
     expect(new URL(page.url()).searchParams.get('show')).toContain('do_pct')
 
     const deaths = page.getByRole('region', { name: 'Mortalities per day' })
     await deaths.getByText('6 removed in 10 days counted; losses on 3 days.').waitFor()
-    expect(await deaths.getByRole('list', { name: 'Days with losses' }).getByRole('listitem').allTextContents()).toEqual(Array(3).fill(expect.stringMatching(/: 2$/)))
+    expect(await deaths.getByRole('list', { name: 'Days with losses' }).getByRole('listitem').allTextContents()).toEqual(
+      Array(3).fill(expect.stringMatching(/: 2$/)),
+    )
     expect(await page.getByRole('list', { name: 'Recent tasks' }).getByRole('link').count()).toBe(10)
     await page.getByRole('list', { name: 'Recent tasks' }).getByText('Flag: Critical').waitFor()
     await page.getByRole('link', { name: batch.code }).waitFor()

@@ -12,7 +12,14 @@ let s: BrowserSession
 let dir: string
 beforeAll(async () => {
   s = await startBrowserSession()
-  await createFacilityIfMissing({ name: 'Test hatchery', timeZone: 'Europe/Oslo', handoverTime: '08:00', quarantineDays: 30, arrivalTempDiffLimitC: 2, minOxygenHours: 12 })
+  await createFacilityIfMissing({
+    name: 'Test hatchery',
+    timeZone: 'Europe/Oslo',
+    handoverTime: '08:00',
+    quarantineDays: 30,
+    arrivalTempDiffLimitC: 2,
+    minOxygenHours: 12,
+  })
   dir = await mkdtemp(path.join(os.tmpdir(), 'roundtide-tanks-'))
 })
 afterAll(async () => {
@@ -73,10 +80,9 @@ describe('Tanks page', () => {
     await page.getByRole('cell', { name: tank1, exact: true }).waitFor()
 
     const fileInput = page.getByLabel('CSV file', { exact: true })
-    await fileInput.setInputFiles(await csv('bad.csv', [
-      `${tank2},Grow tank 2,${nursery.code},,1200,tank,yes`,
-      `${tank3},Quarantine bin 3,NOPE-${stamp},,120,bin,no`,
-    ]))
+    await fileInput.setInputFiles(
+      await csv('bad.csv', [`${tank2},Grow tank 2,${nursery.code},,1200,tank,yes`, `${tank3},Quarantine bin 3,NOPE-${stamp},,120,bin,no`]),
+    )
     await page.getByRole('button', { name: 'Import tanks' }).click()
     await page.getByText(`Line 3: area "NOPE-${stamp}" does not exist`).waitFor()
     await page.getByText('Nothing was imported').waitFor()
@@ -84,11 +90,13 @@ describe('Tanks page', () => {
     expect((await tanks.list()).map((t) => t.code)).not.toContain(tank2)
     await screenshot(page, 'tanks-import-error-desktop')
 
-    await fileInput.setInputFiles(await csv('good.csv', [
-      `${tank1},Nursery tank 1,${nursery.code},,800,tank,yes`,
-      `${tank2},Grow tank 2,${nursery.code},,1200,tank,yes`,
-      `${tank3},Quarantine bin 3,${quarantine.code},,120,bin,no`,
-    ]))
+    await fileInput.setInputFiles(
+      await csv('good.csv', [
+        `${tank1},Nursery tank 1,${nursery.code},,800,tank,yes`,
+        `${tank2},Grow tank 2,${nursery.code},,1200,tank,yes`,
+        `${tank3},Quarantine bin 3,${quarantine.code},,120,bin,no`,
+      ]),
+    )
     await page.getByRole('button', { name: 'Import tanks' }).click()
     await page.getByText('2 created, 0 updated, 1 unchanged').waitFor()
     await page.getByRole('cell', { name: tank3, exact: true }).waitFor()
@@ -96,12 +104,18 @@ describe('Tanks page', () => {
     await page.getByLabel('Find tanks').fill(stamp)
     await page.getByLabel('State').selectOption({ label: 'Empty only' })
     await expect.poll(() => page.getByRole('row').count()).toBe(2)
-    await page.getByRole('row', { name: new RegExp(tank3) }).getByText('Empty').waitFor()
+    await page
+      .getByRole('row', { name: new RegExp(tank3) })
+      .getByText('Empty')
+      .waitFor()
     await page.getByLabel('State').selectOption({ label: 'In use and empty' })
     await screenshot(page, 'tanks-table-desktop')
 
     await page.getByRole('button', { name: `Delete tank ${tank2}` }).click()
-    await page.getByRole('group', { name: `Delete tank ${tank2}` }).getByRole('button', { name: 'Delete' }).click()
+    await page
+      .getByRole('group', { name: `Delete tank ${tank2}` })
+      .getByRole('button', { name: 'Delete' })
+      .click()
     await expect.poll(() => page.getByRole('cell', { name: tank2, exact: true }).count()).toBe(0)
 
     await page.getByRole('navigation', { name: 'Tanks sections' }).getByRole('link', { name: 'Overview' }).click()

@@ -14,9 +14,31 @@ afterAll(() => s?.close())
 
 // 25 juveniles off an invented intake, weighed to 0.1 g.
 const WEIGHTS = [
-  '3.4', '2.9', '3.8', '3.1', '4.2', '2.7', '3.5', '3.3', '3.9', '2.8',
-  '3.6', '3.0', '4.4', '3.2', '3.7', '2.6', '3.5', '4.0', '3.1', '3.3',
-  '2.9', '3.8', '3.4', '4.1', '3.6',
+  '3.4',
+  '2.9',
+  '3.8',
+  '3.1',
+  '4.2',
+  '2.7',
+  '3.5',
+  '3.3',
+  '3.9',
+  '2.8',
+  '3.6',
+  '3.0',
+  '4.4',
+  '3.2',
+  '3.7',
+  '2.6',
+  '3.5',
+  '4.0',
+  '3.1',
+  '3.3',
+  '2.9',
+  '3.8',
+  '3.4',
+  '4.1',
+  '3.6',
 ]
 
 /** The textbook two-pass formulas, written out here so the test does not lean on the app's own code. */
@@ -32,8 +54,15 @@ function twoPass(values: number[]) {
 async function makeBatch() {
   const { tanks } = await makeAreaWithTanks(1, { quarantine: true })
   return batches.create({
-    code: uniqueCode('BW'), species: 'Barramundi (Lates calcarifer)', origin: 'Invented hatchery', arrivalDate: '2026-11-20',
-    count: 1200, meanWeightG: 2.5, tankIds: [tanks[0].id], status: 'quarantine', feedRatePct: 4,
+    code: uniqueCode('BW'),
+    species: 'Barramundi (Lates calcarifer)',
+    origin: 'Invented hatchery',
+    arrivalDate: '2026-11-20',
+    count: 1200,
+    meanWeightG: 2.5,
+    tankIds: [tanks[0].id],
+    status: 'quarantine',
+    feedRatePct: 4,
   })
 }
 
@@ -73,9 +102,15 @@ describe('Sample weighing', () => {
     expect(await stat('mean').textContent()).toBe(expected.mean.toFixed(2))
     expect(await stat('sd').textContent()).toBe(expected.sd.toFixed(2))
     expect(await stat('range').textContent()).toBe('2.6–4.4')
-    await page.getByTestId('sample-size').getByText(/Sample size needed for ±10 % at 95 %: \d+ fish/).waitFor()
+    await page
+      .getByTestId('sample-size')
+      .getByText(/Sample size needed for ±10 % at 95 %: \d+ fish/)
+      .waitFor()
     await page.getByText('±5 %').click()
-    await page.getByTestId('sample-size').getByText(/±5 % at 95 %/).waitFor()
+    await page
+      .getByTestId('sample-size')
+      .getByText(/±5 % at 95 %/)
+      .waitFor()
     await screenshot(page, 'weighing-phone-25-fish')
 
     await page.getByRole('button', { name: 'Save weighing (25 fish)' }).click()
@@ -101,7 +136,13 @@ describe('Sample weighing', () => {
     await s.signIn(page, tech.email)
     await page.goto(`/batches/${batch.id}?form=box`)
     const box = page.getByRole('form', { name: 'Transport box check' })
-    for (const [label, value] of [['Temperature (°C)', '24.5'], ['pH', '7.2'], ['DO (mg/L)', '4.2'], ['Receiving temperature (°C)', '28'], ['Receiving pH', '7.9']]) {
+    for (const [label, value] of [
+      ['Temperature (°C)', '24.5'],
+      ['pH', '7.2'],
+      ['DO (mg/L)', '4.2'],
+      ['Receiving temperature (°C)', '28'],
+      ['Receiving pH', '7.9'],
+    ]) {
       await box.getByLabel(label, { exact: true }).fill(value)
     }
     await box.getByText(`Temperature differs by 3.5 °C (limit ${tempLimitC} °C)`, { exact: false }).waitFor()
@@ -115,7 +156,12 @@ describe('Sample weighing', () => {
 
     await page.getByRole('button', { name: 'Transport water' }).click()
     const water = page.getByRole('form', { name: 'Transport-water test' })
-    for (const [label, value] of [['Temperature (°C)', '28'], ['pH', '8.0'], ['TAN (mg/L N)', '1.2']]) await water.getByLabel(label, { exact: true }).fill(value)
+    for (const [label, value] of [
+      ['Temperature (°C)', '28'],
+      ['pH', '8.0'],
+      ['TAN (mg/L N)', '1.2'],
+    ])
+      await water.getByLabel(label, { exact: true }).fill(value)
     // Emerson et al. (1975), written out here: pKa = 0.09018 + 2729.92 / T(K); NH3 share = 1 / (1 + 10^(pKa − pH)).
     const pKa = 0.09018 + 2729.92 / (28 + 273.15)
     const nh3 = 1.2 / (1 + 10 ** (pKa - 8))

@@ -77,7 +77,10 @@ describe('app restart', () => {
       expect(tally.mails, `${name}: one message per notification row`).toBe(tally.rows)
       for (const [to, r] of Object.entries(tally.byRecipient)) {
         expect(new Set(r.steps).size, `${name} → ${to}: one row per step`).toBe(r.steps.length)
-        expect(r.statuses.every((s) => s === 'sent'), `${name} → ${to}: every row sent`).toBe(true)
+        expect(
+          r.statuses.every((s) => s === 'sent'),
+          `${name} → ${to}: every row sent`,
+        ).toBe(true)
         expect(r.messages, `${name} → ${to}: exactly one message per step`).toBe(r.steps.length)
       }
     }

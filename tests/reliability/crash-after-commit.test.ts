@@ -61,7 +61,11 @@ describe('a crash after the commit', () => {
     const cookie = await signIn(first.url, DEMO.priya)
 
     const completionId = randomUUID()
-    const answer = await call(first.url, `/api/tasks/${task.id}/completion`, { method: 'POST', cookie, body: { completionId, readings: { do_mgL: 3.1, temp_c: 28 } } })
+    const answer = await call(first.url, `/api/tasks/${task.id}/completion`, {
+      method: 'POST',
+      cookie,
+      body: { completionId, readings: { do_mgL: 3.1, temp_c: 28 } },
+    })
     expect(answer.status, 'no answer: the process died before responding').toBe(0)
     await waitFor('the first process to be gone', async () => !first.alive(), 10_000, 50)
 
@@ -73,7 +77,12 @@ describe('a crash after the commit', () => {
     expect(await ds.getRepository(AuditEntity).countBy({ entity: 'completion', entityId: completionId })).toBe(1)
     expect((await ds.getRepository(CompletionEntity).findOneByOrFail({ id: completionId })).response).toMatchObject({ recheckTaskId: recheck.id })
     const pending = await outboxRows([task.id, recheck.id])
-    expect(pending.map((r) => [Number(r.entityId), r.publishedAt])).toEqual(expect.arrayContaining([[task.id, null], [recheck.id, null]]))
+    expect(pending.map((r) => [Number(r.entityId), r.publishedAt])).toEqual(
+      expect.arrayContaining([
+        [task.id, null],
+        [recheck.id, null],
+      ]),
+    )
 
     // The restarted process sends what the killed one committed but never published, once.
     const second = await startApp('app (after the crash)', { smtpPort, env: { ROUNDTIDE_PUBLISH_INTERVAL_MS: String(PUBLISH_MS) } })
@@ -109,7 +118,11 @@ describe('a crash after the commit', () => {
     await sleep(1000) // its publisher is past its first pass: the completion's commit is published at once
 
     const completionId = randomUUID()
-    const answer = await call(first.url, `/api/tasks/${task.id}/completion`, { method: 'POST', cookie, body: { completionId, readings: { do_mgL: 6.8, temp_c: 28.2 } } })
+    const answer = await call(first.url, `/api/tasks/${task.id}/completion`, {
+      method: 'POST',
+      cookie,
+      body: { completionId, readings: { do_mgL: 6.8, temp_c: 28.2 } },
+    })
     // The publisher claims right after the commit, off the response path, so the process may die
     // before or after its answer leaves: either way the completion is stored (a phone would retry).
     expect([0, 200]).toContain(answer.status)

@@ -2,7 +2,23 @@ import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { In, type DataSource } from 'typeorm'
 import { CompletionEntity } from '#server/modules/completions/completion.entities'
-import { DB_DOWN_MESSAGE, DEMO, call, ensureDatabase, freePort, killDatabase, openDb, percentile, signIn, sleep, startApp, summary, waitFor, type AppProcess, type Reply } from './support/harness'
+import {
+  DB_DOWN_MESSAGE,
+  DEMO,
+  call,
+  ensureDatabase,
+  freePort,
+  killDatabase,
+  openDb,
+  percentile,
+  signIn,
+  sleep,
+  startApp,
+  summary,
+  waitFor,
+  type AppProcess,
+  type Reply,
+} from './support/harness'
 import { OK_READINGS, dayWithShifts, facilityToday, freshTanks, makeTaskPool, overdueTask, personIds, tag, taskStatus } from './support/fixtures'
 
 let ds: DataSource
@@ -58,7 +74,12 @@ describe('database outage', () => {
           const taskId = pool[next++ % pool.length]
           const completionId = randomUUID()
           const cookie = n % 2 ? cookies.supervisor : cookies.priya
-          await request('completion', `/api/tasks/${taskId}/completion`, { method: 'POST', cookie, body: { completionId, readings: OK_READINGS } }, { completionId, taskId })
+          await request(
+            'completion',
+            `/api/tasks/${taskId}/completion`,
+            { method: 'POST', cookie, body: { completionId, readings: OK_READINGS } },
+            { completionId, taskId },
+          )
         } else if (roll < 7) {
           next++
           await request('board', `/api/tasks/board?date=${today}`, { cookie: cookies.observer })
@@ -72,7 +93,12 @@ describe('database outage', () => {
     const load = Array.from({ length: WORKERS }, (_, n) => worker(n))
     await sleep(3000)
     // Enough acknowledged completions before the kill to check afterwards (a busy machine is slower).
-    await waitFor('completions acknowledged before the kill', async () => samples.filter((s) => s.kind === 'completion' && s.status === 200).length >= 20, 20_000, 100)
+    await waitFor(
+      'completions acknowledged before the kill',
+      async () => samples.filter((s) => s.kind === 'completion' && s.status === 200).length >= 20,
+      20_000,
+      100,
+    )
     const { killedAt } = await killDatabase()
     await sleep(2000)
     // A load balancer's health check sees the outage at once (and is not left hanging either).
@@ -100,7 +126,10 @@ describe('database outage', () => {
     // Not hung, not crashed, never a 500: every answer is a 2xx, an expected 4xx, or a 503 that says what is wrong.
     expect(app.alive(), app.output()).toBe(true)
     const noAnswer = samples.filter((s) => s.status === 0)
-    expect(noAnswer.map((s) => `${s.kind} ${s.error} after ${Math.round(s.ms)} ms, at ${s.startedAt - killedAt} ms from the kill`), app.output()).toEqual([])
+    expect(
+      noAnswer.map((s) => `${s.kind} ${s.error} after ${Math.round(s.ms)} ms, at ${s.startedAt - killedAt} ms from the kill`),
+      app.output(),
+    ).toEqual([])
     const fiveHundreds = samples.filter((s) => s.status >= 500 && s.status !== 503)
     expect(fiveHundreds.map((s) => `${s.kind} ${s.status} ${JSON.stringify(s.body)}`)).toEqual([])
     const unavailable = samples.filter((s) => s.status === 503)
@@ -140,14 +169,20 @@ describe('database outage', () => {
     const queue = [...retried]
     const retryOne = async () => {
       for (let s = queue.shift(); s; s = queue.shift()) {
-        const again = await call(app!.url, `/api/tasks/${s.taskId}/completion`, { method: 'POST', cookie: cookies.supervisor, body: { completionId: s.completionId, readings: OK_READINGS } })
+        const again = await call(app!.url, `/api/tasks/${s.taskId}/completion`, {
+          method: 'POST',
+          cookie: cookies.supervisor,
+          body: { completionId: s.completionId, readings: OK_READINGS },
+        })
         retryStatuses[again.status] = (retryStatuses[again.status] ?? 0) + 1
         expect([200, 409], JSON.stringify(again.body)).toContain(again.status)
         if (again.status === 200) expect(again.body?.task?.id, `replayed answer for ${s.completionId}`).toBe(s.taskId)
       }
     }
     await Promise.all(Array.from({ length: 6 }, retryOne))
-    const perTask = (await ds.query(`SELECT taskId, COUNT(*) AS n FROM completions WHERE taskId IN (${pool.join(',')}) GROUP BY taskId HAVING n > 1`)) as unknown[]
+    const perTask = (await ds.query(
+      `SELECT taskId, COUNT(*) AS n FROM completions WHERE taskId IN (${pool.join(',')}) GROUP BY taskId HAVING n > 1`,
+    )) as unknown[]
     expect(perTask).toEqual([])
 
     // The background scheduler comes back too: it holds its lock again and marks a task missed.
@@ -162,7 +197,21 @@ describe('database outage', () => {
     // so give it a few ticks' time: what is proved here is that the scheduler acts again at all.
     await waitFor('the scheduler to mark a task missed after the outage', async () => (await taskStatus(missed.id)) === 'missed', 30_000)
 
-    const latencies = (list: Sample[]) => ({ n: list.length, p50: percentile(list.map((s) => s.ms), 50), p99: percentile(list.map((s) => s.ms), 99), max: percentile(list.map((s) => s.ms), 100) })
+    const latencies = (list: Sample[]) => ({
+      n: list.length,
+      p50: percentile(
+        list.map((s) => s.ms),
+        50,
+      ),
+      p99: percentile(
+        list.map((s) => s.ms),
+        99,
+      ),
+      max: percentile(
+        list.map((s) => s.ms),
+        100,
+      ),
+    })
     summary('database-outage', {
       'requests (all)': samples.length,
       'status counts': samples.reduce<Record<number, number>>((acc, s) => ((acc[s.status] = (acc[s.status] ?? 0) + 1), acc), {}),

@@ -173,7 +173,14 @@ describe('mixed load', () => {
       const rows = await ds.getRepository(CompletionEntity).find({ select: { id: true, taskId: true }, where: { id: In(ids) } })
       stored += rows.length
       for (const row of rows) expect(row.taskId).toBe(acked.get(row.id)!.taskId)
-      const readings = (await ds.getRepository(ReadingEntity).createQueryBuilder('r').select('r.completionId', 'id').addSelect('COUNT(*)', 'n').where({ completionId: In(ids) }).groupBy('r.completionId').getRawMany()) as Array<{ id: string; n: string }>
+      const readings = (await ds
+        .getRepository(ReadingEntity)
+        .createQueryBuilder('r')
+        .select('r.completionId', 'id')
+        .addSelect('COUNT(*)', 'n')
+        .where({ completionId: In(ids) })
+        .groupBy('r.completionId')
+        .getRawMany()) as Array<{ id: string; n: string }>
       for (const r of readings) expect(Number(r.n), `readings of ${r.id}`).toBe(acked.get(r.id)!.readings)
       expect(readings.length).toBe(ids.length)
     }

@@ -33,9 +33,27 @@ describe('a text claimed but not finished', () => {
   test('the app killed between claiming a text and hearing back from the provider sends no second copy after a restart', async () => {
     const env = { ROUNDTIDE_SMS_MODE: 'twilio', ROUNDTIDE_SMS_API_URL: provider.url, TWILIO_ACCOUNT_SID: account.sid, TWILIO_AUTH_TOKEN: account.token }
     const phone = `+1555${String(Math.floor(Math.random() * 1e7)).padStart(7, '0')}`
-    const person = await db().getRepository(PersonEntity).save({ email: `oncall-${tag()}@brackenwater.example`, name: 'Wren Oakes', role: 'technician', passwordHash: 'x', onCallEligible: true, phone, channels: ['sms'] })
+    const person = await db()
+      .getRepository(PersonEntity)
+      .save({
+        email: `oncall-${tag()}@brackenwater.example`,
+        name: 'Wren Oakes',
+        role: 'technician',
+        passwordHash: 'x',
+        onCallEligible: true,
+        phone,
+        channels: ['sms'],
+      })
     // On call from a minute ago: the latest duty, so this person holds it now and gets every channel they enabled (texts only).
-    await db().getRepository(OnCallEntity).save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(Date.now() - 60_000), endsAt: new Date(Date.now() + 3_600_000) })
+    await db()
+      .getRepository(OnCallEntity)
+      .save({
+        personId: person.id,
+        fromDate: '2000-01-01',
+        toDate: '2000-01-02',
+        startsAt: new Date(Date.now() - 60_000),
+        endsAt: new Date(Date.now() + 3_600_000),
+      })
     const [tank] = await freshTanks(1)
     const task = await overdueTask(tank, `Text claim ${tag()}`, person.id, new Date(Date.now() - 1000))
 

@@ -89,7 +89,11 @@ describe('more than one machine', () => {
     const task = await makeTankTask(tanks[0], { title: `Two processes live ${run}`, assigneeId: null, status: 'open', priority: 'routine' })
     const arrivals = onB.map((s) => nextTask(s, task.id))
     const sentAt = performance.now()
-    const done = await call(a.url, `/api/tasks/${task.id}/completion`, { method: 'POST', cookie: tech, body: { completionId: randomUUID(), readings: OK_READINGS } })
+    const done = await call(a.url, `/api/tasks/${task.id}/completion`, {
+      method: 'POST',
+      cookie: tech,
+      body: { completionId: randomUUID(), readings: OK_READINGS },
+    })
     expect(done.status).toBe(200)
     const received = await Promise.all(arrivals)
     const crossMs = Math.round(performance.now() - sentAt)

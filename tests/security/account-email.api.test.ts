@@ -44,7 +44,11 @@ describe('changing the address one signs in with', () => {
     const probe = await agent.patch('/api/me/preferences').send({ email: taken }).expect(400)
     expect(JSON.stringify(probe.body)).not.toMatch(/in use/)
     const res = await agent.patch('/api/me/preferences').send({ email: taken, currentPassword: TEST_PASSWORD }).expect(409)
-    expect(res.body.error).toMatchObject({ code: 'conflict', message: 'That e-mail address is already in use. Choose another and try again.', fieldErrors: { email: ['Already in use'] } })
+    expect(res.body.error).toMatchObject({
+      code: 'conflict',
+      message: 'That e-mail address is already in use. Choose another and try again.',
+      fieldErrors: { email: ['Already in use'] },
+    })
     expect(await savedEmail(agent)).toBe(person.email)
   })
 
@@ -57,7 +61,8 @@ describe('changing the address one signs in with', () => {
   test('wrong current passwords are limited like sign-ins, so an open session cannot be used to guess the password', async () => {
     const { agent, person } = await t.signedInAgent('technician')
     const statuses: number[] = []
-    for (let i = 0; i < 6; i++) statuses.push((await agent.patch('/api/me/preferences').send({ email: freshAddress(), currentPassword: `guess-number-${i}` })).status)
+    for (let i = 0; i < 6; i++)
+      statuses.push((await agent.patch('/api/me/preferences').send({ email: freshAddress(), currentPassword: `guess-number-${i}` })).status)
     expect(statuses.slice(0, 4)).toEqual([400, 400, 400, 400])
     expect(statuses.slice(4)).toEqual([429, 429])
     // Even the right password waits out the window now.

@@ -14,7 +14,9 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
-const apiReads = Object.keys(ROUTE_ACCESS).filter((k) => k.startsWith('GET /api/')).map((k) => k.slice(4))
+const apiReads = Object.keys(ROUTE_ACCESS)
+  .filter((k) => k.startsWith('GET /api/'))
+  .map((k) => k.slice(4))
 
 describe('personal data is never kept by a browser or proxy cache', () => {
   test.each(apiReads)('GET %s answers with Cache-Control: no-store', async (pattern) => {

@@ -52,7 +52,10 @@ describe('fuzzing the live feed handshake', () => {
   test('the same odd queries with a signed-in cookie from a foreign page never reach the feed either', async () => {
     const { cookie } = await live.signIn('supervisor')
     await fc.assert(
-      fc.asyncProperty(handshakeQuery, async (query) => (await rawSocketConnect(live.url, query, { cookie, origin: 'http://attacker.invalid' })) !== 'namespace'),
+      fc.asyncProperty(
+        handshakeQuery,
+        async (query) => (await rawSocketConnect(live.url, query, { cookie, origin: 'http://attacker.invalid' })) !== 'namespace',
+      ),
       { numRuns: Math.ceil(RUNS / 3) },
     )
   })

@@ -25,15 +25,24 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 describe('fuzzing rules that never match or match too densely', () => {
-  test('every generated rule is answered (no expansion runs for ever), and a rule the check accepts really is plannable', { timeout: BATCH_DEADLINE_MS + 10_000 }, async () => {
-    const rules = fc.sample(odditiesRule, RUNS)
-    // Judged where the server judges it: the routine's start in the facility's own zone.
-    checked = await checkRulesInChild(rules, BATCH_DEADLINE_MS, { dtstart: routineInput({ rrule: 'FREQ=DAILY', targetIds: [tankId] }).dtstart, tzid: (await getFacility()).timeZone })
-    const slowest = checked.reduce((a, b) => (b.ms > a.ms ? b : a))
-    console.log(`rule fuzz: ${checked.filter((c) => c.problem).length} of ${checked.length} refused; slowest check ${slowest.ms.toFixed(0)} ms (${slowest.rrule})`)
-    expect(checked.filter((c) => c.problem !== null && c.problem.length < 20)).toEqual([])
-    expect(checked.filter((c) => c.plannable === false)).toEqual([])
-  })
+  test(
+    'every generated rule is answered (no expansion runs for ever), and a rule the check accepts really is plannable',
+    { timeout: BATCH_DEADLINE_MS + 10_000 },
+    async () => {
+      const rules = fc.sample(odditiesRule, RUNS)
+      // Judged where the server judges it: the routine's start in the facility's own zone.
+      checked = await checkRulesInChild(rules, BATCH_DEADLINE_MS, {
+        dtstart: routineInput({ rrule: 'FREQ=DAILY', targetIds: [tankId] }).dtstart,
+        tzid: (await getFacility()).timeZone,
+      })
+      const slowest = checked.reduce((a, b) => (b.ms > a.ms ? b : a))
+      console.log(
+        `rule fuzz: ${checked.filter((c) => c.problem).length} of ${checked.length} refused; slowest check ${slowest.ms.toFixed(0)} ms (${slowest.rrule})`,
+      )
+      expect(checked.filter((c) => c.problem !== null && c.problem.length < 20)).toEqual([])
+      expect(checked.filter((c) => c.plannable === false)).toEqual([])
+    },
+  )
 
   test('a routine with a generated rule is saved (201) or refused with a 400 on the rule, never 500', async () => {
     expect(checked.length).toBeGreaterThan(0)

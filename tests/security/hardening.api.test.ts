@@ -47,7 +47,11 @@ describe('brute force', () => {
     let last = 0
     for (let i = 0; i < 8; i++) {
       const person = await t.createPersonWithRole('technician')
-      last = (await request(app).post('/api/session').send({ email: person.email, password: `wrong-${i}-pass` })).status
+      last = (
+        await request(app)
+          .post('/api/session')
+          .send({ email: person.email, password: `wrong-${i}-pass` })
+      ).status
     }
     expect(last).toBe(429)
   })
@@ -59,7 +63,7 @@ describe('filters cannot inject SQL', () => {
     '/api/tasks?date=2026-06-01&areaId=1 OR 1=1',
     "/api/tasks?date=2026-06-01'; DROP TABLE tasks; --",
     '/api/tasks?date=2026-06-01&status=done%27%20UNION%20SELECT%20passwordHash%20FROM%20people--',
-    "/api/reports/welfare?from=2026-06-01&to=2026-06-02&tankIds=1) OR (1=1",
+    '/api/reports/welfare?from=2026-06-01&to=2026-06-02&tankIds=1) OR (1=1',
     "/api/audit?from=2026-06-01&to=2026-06-02&entity=x' OR 'a'='a",
   ])('%s is refused or treated as plain data', async (path) => {
     const { agent } = await t.signedInAgent('manager')

@@ -13,19 +13,31 @@ beforeAll(async () => {
 afterAll(() => live?.stop())
 
 describe('the live feed needs a signed-in person', () => {
-  test.each(['sid=', 'sid=%20', 'sid=0', 'sid[]=', 'sid=undefined', ''])('a hand-written polling handshake with "%s" and no session never reaches the feed', async (query) => {
-    expect(await rawPollingConnect(live.url, query)).toBe('refused')
-  })
+  test.each(['sid=', 'sid=%20', 'sid=0', 'sid[]=', 'sid=undefined', ''])(
+    'a hand-written polling handshake with "%s" and no session never reaches the feed',
+    async (query) => {
+      expect(await rawPollingConnect(live.url, query)).toBe('refused')
+    },
+  )
 
   test('an anonymous polling client with an empty sid receives no changed task when a task is completed', async () => {
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const tech = await live.signIn('technician')
     const anonymous = live.connect({ query: { sid: '' }, transports: ['polling'] })
-    const error = await connected(anonymous).then(() => null, (e: Error) => e)
+    const error = await connected(anonymous).then(
+      () => null,
+      (e: Error) => e,
+    )
     expect(error).toBeInstanceOf(Error)
-    const leaked = nextTask(anonymous, (t) => t.id === task.id, 1500).then(() => true, () => false)
-    await tech.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 6.9, temp_c: 28 })).expect(200)
+    const leaked = nextTask(anonymous, (t) => t.id === task.id, 1500).then(
+      () => true,
+      () => false,
+    )
+    await tech.agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 6.9, temp_c: 28 }))
+      .expect(200)
     expect(await leaked).toBe(false)
   })
 
@@ -38,7 +50,10 @@ describe('the live feed needs a signed-in person', () => {
   test('a signed-in cookie sent from a page on another site is refused at the handshake', async () => {
     const { cookie } = await live.signIn('supervisor')
     const foreign = live.connect({ extraHeaders: { cookie, origin: 'http://attacker.invalid' } })
-    const error = await connected(foreign).then(() => null, (e: Error & { description?: unknown }) => e)
+    const error = await connected(foreign).then(
+      () => null,
+      (e: Error & { description?: unknown }) => e,
+    )
     expect(error?.description).toBe(403)
     expect(await rawPollingConnect(live.url, '', { cookie, origin: 'http://attacker.invalid' })).toBe('refused')
     // The same cookie from the app's own page connects.
@@ -66,7 +81,10 @@ describe('an open socket ends with the session', () => {
   test('deactivating a person disconnects every socket they hold', async () => {
     const manager = await live.signIn('manager')
     const tech = await live.signIn('technician')
-    const sockets = [live.connect({ extraHeaders: { cookie: tech.cookie } }), live.connect({ extraHeaders: { cookie: tech.cookie }, transports: ['websocket'] })]
+    const sockets = [
+      live.connect({ extraHeaders: { cookie: tech.cookie } }),
+      live.connect({ extraHeaders: { cookie: tech.cookie }, transports: ['websocket'] }),
+    ]
     await Promise.all(sockets.map(connected))
     const gone = Promise.all(sockets.map((s) => disconnected(s)))
     await manager.agent.patch(`/api/people/${tech.person.id}`).send({ active: false }).expect(200)

@@ -136,4 +136,8 @@ function catalogue(name: string, editors: Role[]): Record<string, Role[]> {
 
 /** A concrete path for a route pattern: ids that do not exist (an allowed caller gets 404 or 400, never 401/403). */
 export const concretePath = (pattern: string) =>
-  pattern.replace(':completionId', '00000000-0000-4000-8000-000000000000').replace(':photoId', '00000000-0000-4000-8000-000000000000').replace(':token', 'not-a-token').replace(/:id/g, '987654')
+  pattern
+    .replace(':completionId', '00000000-0000-4000-8000-000000000000')
+    .replace(':photoId', '00000000-0000-4000-8000-000000000000')
+    .replace(':token', 'not-a-token')
+    .replace(/:id/g, '987654')

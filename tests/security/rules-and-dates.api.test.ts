@@ -32,7 +32,10 @@ const NEVER_MATCHING = [
 
 describe('a rule with no dates is refused quickly, and the server keeps answering meanwhile', () => {
   test.each(NEVER_MATCHING)('%s answers 400 with a reason on the rule field', async (rrule) => {
-    const res = await supervisor.post('/api/routines').send(routineInput({ rrule, targetIds: tankIds })).expect(400)
+    const res = await supervisor
+      .post('/api/routines')
+      .send(routineInput({ rrule, targetIds: tankIds }))
+      .expect(400)
     expect(res.body.error.fieldErrors.rrule[0]).toMatch(/gives no date in the \d+ (years|days|hours) after its start/)
     expect(await db().getRepository(RoutineEntity).countBy({ rrule })).toBe(0)
   })
@@ -42,18 +45,27 @@ describe('a rule with no dates is refused quickly, and the server keeps answerin
     ['FREQ=HOURLY;INTERVAL=2;BYHOUR=8,10', /never reaches its BYHOUR/],
     ['FREQ=SECONDLY;BYMINUTE=53;BYMONTHDAY=30', /cannot plan FREQ=SECONDLY with BYHOUR or BYMINUTE/],
   ])('%s, which rrule would step through for ever inside one call, is refused before it is expanded', async (rrule, reason) => {
-    const res = await supervisor.post('/api/routines').send(routineInput({ rrule, targetIds: tankIds })).expect(400)
+    const res = await supervisor
+      .post('/api/routines')
+      .send(routineInput({ rrule, targetIds: tankIds }))
+      .expect(400)
     expect(res.body.error.fieldErrors.rrule[0]).toMatch(reason)
   })
 
   test('a rule repeating every minute is refused: it would make tens of thousands of tasks', async () => {
-    const res = await supervisor.post('/api/routines').send(routineInput({ rrule: 'FREQ=MINUTELY', targetIds: tankIds })).expect(400)
+    const res = await supervisor
+      .post('/api/routines')
+      .send(routineInput({ rrule: 'FREQ=MINUTELY', targetIds: tankIds }))
+      .expect(400)
     expect(res.body.error.fieldErrors.rrule[0]).toMatch(/repeats too often/)
   })
 
   test('while the never-matching rules are checked, /api/health still answers promptly', async () => {
     // Warm the route and the rule code first, so the figure is the rule work and not first-call compilation.
-    await supervisor.post('/api/routines').send(routineInput({ rrule: NEVER_MATCHING[0], targetIds: tankIds })).expect(400)
+    await supervisor
+      .post('/api/routines')
+      .send(routineInput({ rrule: NEVER_MATCHING[0], targetIds: tankIds }))
+      .expect(400)
     const delay = monitorEventLoopDelay({ resolution: 5 })
     delay.enable()
     const health: number[] = []
@@ -66,14 +78,19 @@ describe('a rule with no dates is refused quickly, and the server keeps answerin
       }
     })()
     for (const rrule of NEVER_MATCHING) {
-      await supervisor.post('/api/routines').send(routineInput({ rrule, targetIds: tankIds })).expect(400)
+      await supervisor
+        .post('/api/routines')
+        .send(routineInput({ rrule, targetIds: tankIds }))
+        .expect(400)
     }
     checking = false
     await probe
     delay.disable()
     const slowestHealthMs = Math.max(...health)
     const longestBlockMs = delay.max / 1e6
-    console.log(`rule checks: ${health.length} health answers, slowest ${slowestHealthMs.toFixed(1)} ms; longest event-loop block ${longestBlockMs.toFixed(1)} ms`)
+    console.log(
+      `rule checks: ${health.length} health answers, slowest ${slowestHealthMs.toFixed(1)} ms; longest event-loop block ${longestBlockMs.toFixed(1)} ms`,
+    )
     expect(health.length).toBeGreaterThan(0)
     // About 25 ms of rule work per check on an idle core (RULE_LIMITS.maxSteps); the bound is ten
     // times that, for a loaded shared machine. An unbounded walk to the year 9999 takes seconds.
@@ -99,16 +116,44 @@ describe('impossible calendar dates', () => {
   test('a shift on 30 February is refused with 400, and a leap day is accepted', async () => {
     const person = await t.createPersonWithRole('technician')
     const shift = { personId: person.id, start: '07:00', end: '15:00', kind: 'day' }
-    const res = await supervisor.post('/api/shifts').send({ ...shift, date: '2026-02-30' }).expect(400)
+    const res = await supervisor
+      .post('/api/shifts')
+      .send({ ...shift, date: '2026-02-30' })
+      .expect(400)
     expect(res.body.error.fieldErrors.date).toEqual(['There is no such date'])
-    await supervisor.post('/api/shifts').send({ ...shift, date: '2028-02-29' }).expect(201)
+    await supervisor
+      .post('/api/shifts')
+      .send({ ...shift, date: '2028-02-29' })
+      .expect(201)
   })
 
   test('a routine stored with an impossible date before the check is skipped and flagged; the routines after it are still planned', async () => {
     const repo = db().getRepository(RoutineEntity)
-    const { body: good } = await supervisor.post('/api/routines').send(routineInput({ targetIds: tankIds, rrule: 'FREQ=DAILY', dtstart: '2026-01-05T07:30:00' })).expect(201)
+    const { body: good } = await supervisor
+      .post('/api/routines')
+      .send(routineInput({ targetIds: tankIds, rrule: 'FREQ=DAILY', dtstart: '2026-01-05T07:30:00' }))
+      .expect(201)
     // As it could have been saved by the earlier schema, which checked only the shape.
-    const bad = await repo.save(repo.create({ ...routineInput({ targetIds: tankIds }), instructions: '', onlyInUse: true, durationMinutes: 5, windowBeforeMinutes: 30, graceMinutes: 60, priority: 'routine', assigneeRule: { kind: 'none' }, activeFrom: '2026-02-30', activeTo: null, paused: false, skipDates: [], ladderId: null, planningError: null, requiredReadings: [], version: 1 }))
+    const bad = await repo.save(
+      repo.create({
+        ...routineInput({ targetIds: tankIds }),
+        instructions: '',
+        onlyInUse: true,
+        durationMinutes: 5,
+        windowBeforeMinutes: 30,
+        graceMinutes: 60,
+        priority: 'routine',
+        assigneeRule: { kind: 'none' },
+        activeFrom: '2026-02-30',
+        activeTo: null,
+        paused: false,
+        skipDates: [],
+        ladderId: null,
+        planningError: null,
+        requiredReadings: [],
+        version: 1,
+      }),
+    )
     await db().getRepository(TaskEntity).delete({ routineId: good.id })
 
     const result = await materialise({ routineIds: [bad.id, good.id] })

@@ -32,7 +32,10 @@ describe('every string field in the shared schemas, fuzzed', () => {
 
   test('no string field takes malformed Unicode (a lone UTF-16 surrogate)', () => {
     const letThrough = leaves.filter((leaf) => {
-      const outcome = fc.check(fc.property(malformedText, (value) => !accepts(leaf, value)), { numRuns: 20 })
+      const outcome = fc.check(
+        fc.property(malformedText, (value) => !accepts(leaf, value)),
+        { numRuns: 20 },
+      )
       return outcome.failed
     })
     expect(letThrough.map((l) => l.where)).toEqual([])
@@ -54,10 +57,16 @@ describe('every string field in the shared schemas, fuzzed', () => {
     for (const shape of shapes) {
       const fields = leaves.filter((l) => takesOnly(l, `2026-03-31${shape}`))
       fc.assert(
-        fc.property(fc.oneof(impossibleDate.map((d) => `${d}${shape}`), impossibleWallTime(shape)), (value) => {
-          const letThrough = fields.filter((leaf) => accepts(leaf, value)).map((l) => l.where)
-          expect(letThrough, value).toEqual([])
-        }),
+        fc.property(
+          fc.oneof(
+            impossibleDate.map((d) => `${d}${shape}`),
+            impossibleWallTime(shape),
+          ),
+          (value) => {
+            const letThrough = fields.filter((leaf) => accepts(leaf, value)).map((l) => l.where)
+            expect(letThrough, value).toEqual([])
+          },
+        ),
         { numRuns: RUNS },
       )
     }

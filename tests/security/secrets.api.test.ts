@@ -27,7 +27,16 @@ async function mailedAlert() {
   const task = await makeTankTask(tanks[0], { dueAt: new Date(Date.now() - 2 * HOUR) })
   const person = await t.createPersonWithRole('technician')
   const alert = await db().getRepository(AlertEntity).save({ taskId: task.id, kind: 'missed_task', detail: 'Missed', ladderId: null, startedAt: new Date() })
-  const row = await db().getRepository(NotificationEntity).save({ alertId: alert.id, step: 1, personId: person.id, email: person.email, subject: 'Missed task', nextAttemptAt: new Date(), status: 'sent', sentAt: new Date() })
+  const row = await db().getRepository(NotificationEntity).save({
+    alertId: alert.id,
+    step: 1,
+    personId: person.id,
+    email: person.email,
+    subject: 'Missed task',
+    nextAttemptAt: new Date(),
+    status: 'sent',
+    sentAt: new Date(),
+  })
   return { alert, row, person }
 }
 
@@ -50,7 +59,11 @@ describe('acknowledge links cannot be forged', () => {
     await request(t.app).post(`/ack/${underCookieKey}`).type('form').send({}).expect(400)
     expect(await acknowledged(alert.id)).toBeNull()
     // The real key still works, so the refusal above is about the key, not the link.
-    await request(t.app).post(`/ack/${signAckToken(t.config.ackSecret, row.id, new Date(Date.now() + HOUR))}`).type('form').send({}).expect(200)
+    await request(t.app)
+      .post(`/ack/${signAckToken(t.config.ackSecret, row.id, new Date(Date.now() + HOUR))}`)
+      .type('form')
+      .send({})
+      .expect(200)
     expect(await acknowledged(alert.id)).not.toBeNull()
   })
 
@@ -58,7 +71,11 @@ describe('acknowledge links cannot be forged', () => {
     const { alert, row, person } = await mailedAlert()
     const manager = (await t.signedInAgent('manager')).agent
     await manager.patch(`/api/people/${person.id}`).send({ active: false }).expect(200)
-    const res = await request(t.app).post(`/ack/${signAckToken(t.config.ackSecret, row.id, new Date(Date.now() + HOUR))}`).type('form').send({}).expect(403)
+    const res = await request(t.app)
+      .post(`/ack/${signAckToken(t.config.ackSecret, row.id, new Date(Date.now() + HOUR))}`)
+      .type('form')
+      .send({})
+      .expect(403)
     expect(res.text).toContain('no longer active')
     expect(await acknowledged(alert.id)).toBeNull()
     expect((await db().getRepository(NotificationEntity).findOneByOrFail({ id: row.id })).ackUsedAt).toBeNull()
@@ -66,7 +83,10 @@ describe('acknowledge links cannot be forged', () => {
 })
 
 describe('secrets are generated, kept and checked', () => {
-  const production = (env: Record<string, string> = {}) => ({ ...testConfig(), ...loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: t.config.db.database, NODE_ENV: 'production', ...env }) })
+  const production = (env: Record<string, string> = {}) => ({
+    ...testConfig(),
+    ...loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: t.config.db.database, NODE_ENV: 'production', ...env }),
+  })
 
   test('without any secret set, production starts with strong secrets generated once and kept in the database', async () => {
     const first = await withStoredSecrets(production({ ROUNDTIDE_SESSION_SECRET: '', ROUNDTIDE_ACK_SECRET: '' }), t.dataSource)

@@ -11,7 +11,8 @@ beforeAll(async () => {
 afterAll(() => t.close())
 
 const png = Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), Buffer.alloc(64)])
-const attach = (agent: TestAgent, taskId: number) => agent.post(`/api/tasks/${taskId}/photos`).attach('photo', png, { filename: 'tank.png', contentType: 'image/png' })
+const attach = (agent: TestAgent, taskId: number) =>
+  agent.post(`/api/tasks/${taskId}/photos`).attach('photo', png, { filename: 'tank.png', contentType: 'image/png' })
 type TestAgent = Awaited<ReturnType<TestApp['signedInAgent']>>['agent']
 
 async function photoCount(agent: TestAgent, taskId: number) {
@@ -36,7 +37,10 @@ describe('a photo joins a task’s record on the same terms as completing it', (
     const { tanks } = await makeAreaWithTanks(1)
     const task = await makeTankTask(tanks[0])
     const doer = await t.signedInAgent('technician')
-    await doer.agent.post(`/api/tasks/${task.id}/completion`).send(completion({ do_mgL: 7.1, temp_c: 27 })).expect(200)
+    await doer.agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ do_mgL: 7.1, temp_c: 27 }))
+      .expect(200)
     // The task was unassigned: a bystander could have taken it while open, but not now it is closed.
     const bystander = await t.signedInAgent('technician')
     await attach(bystander.agent, task.id).expect(403)

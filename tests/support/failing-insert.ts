@@ -7,7 +7,9 @@ import { db } from '#server/db/data-source'
  */
 export async function failingInsert<T>(table: string, when: string, work: () => Promise<T>): Promise<T> {
   const name = `fail_${table}_${randomUUID().slice(0, 8)}`
-  await db().query(`CREATE TRIGGER ${name} BEFORE INSERT ON ${table} FOR EACH ROW BEGIN IF ${when} THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'refused by the test'; END IF; END`)
+  await db().query(
+    `CREATE TRIGGER ${name} BEFORE INSERT ON ${table} FOR EACH ROW BEGIN IF ${when} THEN SIGNAL SQLSTATE '45000' SET MESSAGE_TEXT = 'refused by the test'; END IF; END`,
+  )
   try {
     return await work()
   } finally {

@@ -17,9 +17,14 @@ export const impossibleDate = fc.oneof(
   fc
     .record({ year: fc.integer({ min: 1990, max: 2100 }), month: fc.integer({ min: 1, max: 12 }) })
     .chain(({ year, month }) => fc.integer({ min: daysIn(year, month) + 1, max: 39 }).map((day) => `${year}-${pad(month)}-${pad(day)}`)),
-  fc.record({ year: fc.integer({ min: 1990, max: 2100 }), month: fc.constantFrom(0, 13, 14, 19, 99), day: fc.integer({ min: 1, max: 28 }) }).map((d) => `${d.year}-${pad(d.month)}-${pad(d.day)}`),
+  fc
+    .record({ year: fc.integer({ min: 1990, max: 2100 }), month: fc.constantFrom(0, 13, 14, 19, 99), day: fc.integer({ min: 1, max: 28 }) })
+    .map((d) => `${d.year}-${pad(d.month)}-${pad(d.day)}`),
   fc.record({ year: fc.integer({ min: 1990, max: 2100 }), month: fc.integer({ min: 1, max: 12 }) }).map((d) => `${d.year}-${pad(d.month)}-00`),
-  fc.integer({ min: 1990, max: 2100 }).filter((y) => !isLeap(y)).map((y) => `${y}-02-29`),
+  fc
+    .integer({ min: 1990, max: 2100 })
+    .filter((y) => !isLeap(y))
+    .map((y) => `${y}-02-29`),
   fc.constantFrom('2026-02-30', '2026-13-01', '2026-04-31', '2027-02-29', '2026-00-10', '2026-06-31', '2026-09-31', '2026-11-31'),
 )
 

@@ -74,7 +74,16 @@ export async function launchPushProfile(gcm: GcmStandIn, opts: { baseURL: string
   const context: BrowserContext = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic', ...gcm.chromiumArgs()],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+      ...gcm.chromiumArgs(),
+    ],
     serviceWorkers: 'allow',
     ...opts,
   })

@@ -20,4 +20,9 @@ export async function startMailCatcher(config: AppConfig) {
   }
 }
 
-export const messagesTo = async (email: string) => (await db().getRepository(OutboxEntity).find({ order: { id: 'ASC' } })).filter((m) => m.to.includes(email))
+export const messagesTo = async (email: string) =>
+  (
+    await db()
+      .getRepository(OutboxEntity)
+      .find({ order: { id: 'ASC' } })
+  ).filter((m) => m.to.includes(email))

@@ -7,8 +7,14 @@ export type RuleCheck = { rrule: string; ms: number; problem: string | null; pla
  * Checks rules in a child process with a deadline. Resolves with every answer, or rejects naming
  * the rule the child was still on when the deadline passed (a rule whose expansion never ends).
  */
-export function checkRulesInChild(rules: string[], deadlineMs: number, where: { dtstart: string; tzid: string } = { dtstart: '2026-01-05T07:30:00', tzid: 'Europe/Oslo' }): Promise<RuleCheck[]> {
-  const child = spawn(process.execPath, ['--import', 'tsx', path.resolve(import.meta.dirname, 'rule-check-child.ts'), where.dtstart, where.tzid], { stdio: ['pipe', 'pipe', 'inherit'] })
+export function checkRulesInChild(
+  rules: string[],
+  deadlineMs: number,
+  where: { dtstart: string; tzid: string } = { dtstart: '2026-01-05T07:30:00', tzid: 'Europe/Oslo' },
+): Promise<RuleCheck[]> {
+  const child = spawn(process.execPath, ['--import', 'tsx', path.resolve(import.meta.dirname, 'rule-check-child.ts'), where.dtstart, where.tzid], {
+    stdio: ['pipe', 'pipe', 'inherit'],
+  })
   const answers: RuleCheck[] = []
   let current = ''
   let buffered = ''

@@ -62,7 +62,9 @@ export async function sharedSchemas(): Promise<Array<[string, z.ZodType]>> {
   // The project's own shared/schemas, from the project root (tests/support is two levels down).
   const dir = path.join(path.resolve(import.meta.dirname, '..', '..'), 'shared', 'schemas')
   const found: Array<[string, z.ZodType]> = []
-  for (const file of readdirSync(dir).filter((f) => f.endsWith('.ts')).sort()) {
+  for (const file of readdirSync(dir)
+    .filter((f) => f.endsWith('.ts'))
+    .sort()) {
     const mod = (await import(path.join(dir, file))) as Record<string, unknown>
     for (const [name, value] of Object.entries(mod)) {
       if (value && typeof value === 'object' && '_zod' in value) found.push([name, value as z.ZodType])

@@ -10,7 +10,15 @@ import { createPerson } from '#server/modules/people/people.service'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
 
 export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
-  return { ...loadConfig({ ...process.env, ROUNDTIDE_DB_NAME: process.env.ROUNDTIDE_DB_NAME ?? 'roundtide_test', ROUNDTIDE_SMTP_PORT: '0', ROUNDTIDE_PUSH_LOCAL_PORT: '0' }), ...overrides }
+  return {
+    ...loadConfig({
+      ...process.env,
+      ROUNDTIDE_DB_NAME: process.env.ROUNDTIDE_DB_NAME ?? 'roundtide_test',
+      ROUNDTIDE_SMTP_PORT: '0',
+      ROUNDTIDE_PUSH_LOCAL_PORT: '0',
+    }),
+    ...overrides,
+  }
 }
 
 /**

@@ -31,7 +31,10 @@ export async function startTextCatcher(app: Express, config: AppConfig) {
   return { fake, config: textConfig, sender: createTextSender(textConfig)!, close: fake.close }
 }
 
-export const textsTo = async (phone: string) => (await db().getRepository(TextOutboxEntity).find({ where: { to: phone, direction: 'outbound' }, order: { id: 'ASC' } }))
+export const textsTo = async (phone: string) =>
+  await db()
+    .getRepository(TextOutboxEntity)
+    .find({ where: { to: phone, direction: 'outbound' }, order: { id: 'ASC' } })
 
 /** A phone number of the fictional +1 555 range, unique to one test. */
 export const uniquePhone = () => `+1555${String(Math.floor(Math.random() * 1e7)).padStart(7, '0')}`

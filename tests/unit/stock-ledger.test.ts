@@ -18,7 +18,10 @@ const movement = fc.record({
 function toEntry(m: { kind: LedgerEntry['kind']; from: number; to: number; count: number; sign: boolean }, i: number): DatedEntry {
   const moves = m.kind === 'transfer' || m.kind === 'grading'
   return {
-    id: i + 1, batchId: 7, kind: m.kind, count: m.kind === 'correction' && m.sign ? -m.count : m.count,
+    id: i + 1,
+    batchId: 7,
+    kind: m.kind,
+    count: m.kind === 'correction' && m.sign ? -m.count : m.count,
     fromTankId: m.kind === 'arrival' || m.kind === 'correction' ? null : m.from,
     toTankId: m.kind === 'arrival' || m.kind === 'correction' ? m.to : moves ? (m.to === m.from ? (m.from % 3) + 1 : m.to) : null,
     cause: m.kind === 'mortality' ? 'unknown' : null,
@@ -62,7 +65,12 @@ describe('the stock register arithmetic', () => {
   })
 
   test('a period report splits what happened before the period into the opening count, and a corrected death changes the deaths', () => {
-    const e = (id: number, day: string, rest: Omit<DatedEntry, 'id' | 'occurredAt' | 'batchId'>): DatedEntry => ({ id, batchId: 1, occurredAt: `${day}T08:00:00.000Z`, ...rest })
+    const e = (id: number, day: string, rest: Omit<DatedEntry, 'id' | 'occurredAt' | 'batchId'>): DatedEntry => ({
+      id,
+      batchId: 1,
+      occurredAt: `${day}T08:00:00.000Z`,
+      ...rest,
+    })
     const entries = [
       e(1, '2026-01-05', { kind: 'arrival', fromTankId: null, toTankId: 1, count: 500 }),
       e(2, '2026-02-01', { kind: 'mortality', fromTankId: 1, toTankId: null, count: 3, cause: 'Water quality' }),
@@ -73,7 +81,19 @@ describe('the stock register arithmetic', () => {
       e(7, '2026-03-01', { kind: 'dispatch', fromTankId: 2, toTankId: null, count: 50 }),
     ]
     expect(periodFigures(entries, '2026-02-01T00:00:00.000Z', '2026-03-01T00:00:00.000Z')).toEqual([
-      { batchId: 1, opening: 500, arrived: 0, moved: 200, died: 5, diedByCause: { 'Water quality': 5 }, culled: 0, used: 10, dispatched: 0, corrected: 4, closing: 489 },
+      {
+        batchId: 1,
+        opening: 500,
+        arrived: 0,
+        moved: 200,
+        died: 5,
+        diedByCause: { 'Water quality': 5 },
+        culled: 0,
+        used: 10,
+        dispatched: 0,
+        corrected: 4,
+        closing: 489,
+      },
     ])
   })
 })
@@ -86,7 +106,7 @@ describe('stocking density', () => {
     const volumeL = 1000 * 3.785411784
     const fish = 1000 * lbPerGal
     const density = stockingDensityKgM3(biomassKg(fish, 453.59237), volumeL)!
-    const byHand = (lbPerGal * 0.45359237) / 3.785411784 * 1000
+    const byHand = ((lbPerGal * 0.45359237) / 3.785411784) * 1000
     expect(byHand).toBeCloseTo(479.3, 1)
     expect(density).toBeCloseTo(byHand, 6)
   })
@@ -102,7 +122,7 @@ describe('stocking density', () => {
     expect(row.source).toMatch(/^Piper et al\. \(1982\)/)
     // 600 fish of 2.5 lb in a 300-gallon tank: 1,500 lb in 300 gal is 5.0 lb/gal.
     const density = stockingDensityKgM3(biomassKg(600, 2.5 * 453.59237), 300 * 3.785411784)!
-    const byHand = (row.expected_lb_per_gal * 0.45359237) / 3.785411784 * 1000
+    const byHand = ((row.expected_lb_per_gal * 0.45359237) / 3.785411784) * 1000
     expect(byHand).toBeCloseTo(599.1, 1)
     expect(density).toBeCloseTo(byHand, 6)
   })

@@ -11,7 +11,13 @@ const queryClient = new QueryClient()
 
 function Page() {
   const { data } = useSuspenseQuery({ queryKey: ['tasks'], queryFn: async () => z.array(TaskSchema).parse(await (await fetch('/api/tasks/round')).json()) })
-  return <ul>{data.map((t) => <li key={t.id}>{t.title}</li>)}</ul>
+  return (
+    <ul>
+      {data.map((t) => (
+        <li key={t.id}>{t.title}</li>
+      ))}
+    </ul>
+  )
 }
 
 const router = createBrowserRouter([{ path: '/', Component: Page, loader: () => queryClient.prefetchQuery({ queryKey: ['tasks'] }) }])

@@ -18,4 +18,24 @@ import { Completions1796171878307 } from './1796171878307-Completions'
 import { FacilityRoutinesTasks1796171523572 } from './1796171523572-FacilityRoutinesTasks'
 import { Foundation1796171166803 } from './1796171166803-Foundation'
 
-export const migrations: Array<new () => object> = [Foundation1796171166803, FacilityRoutinesTasks1796171523572, Completions1796171878307, Photos1796171952138, RosterAndMoves1796172129297, Escalation1796172492783, PlaybooksOxygen1796173176412, AuditAmendments1796173566142, StockRegister1796419091184, AppSecrets1796420370601, RoutinePlanningError1796421762016, Incidents1796425000000, IncidentDeadlines1796431400000, OnCallChannels1796465534514, PushSubscriptions1796470100000, ChangeOutbox1796530013000, CylinderReplaceTask1796530013001, StuckSends1796541200044, PushOutbox1796541200045]
+export const migrations: Array<new () => object> = [
+  Foundation1796171166803,
+  FacilityRoutinesTasks1796171523572,
+  Completions1796171878307,
+  Photos1796171952138,
+  RosterAndMoves1796172129297,
+  Escalation1796172492783,
+  PlaybooksOxygen1796173176412,
+  AuditAmendments1796173566142,
+  StockRegister1796419091184,
+  AppSecrets1796420370601,
+  RoutinePlanningError1796421762016,
+  Incidents1796425000000,
+  IncidentDeadlines1796431400000,
+  OnCallChannels1796465534514,
+  PushSubscriptions1796470100000,
+  ChangeOutbox1796530013000,
+  CylinderReplaceTask1796530013001,
+  StuckSends1796541200044,
+  PushOutbox1796541200045,
+]

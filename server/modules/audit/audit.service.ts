@@ -8,8 +8,17 @@ const SECRET_FIELDS = new Set(['passwordHash', 'sessionVersion'])
 
 /** What an audited change tells the live feed; null where the caller records it itself (tasks, amendments) or nobody shows it live. */
 const LIVE_KIND: Record<AuditedEntity, ChangeKind | null> = {
-  routine: 'routine', playbook: 'playbook', limit: 'parameter', ladder: null, shift: 'roster', on_call: 'roster',
-  assignment: null, person: null, completion: null, event: 'event', facility: 'facility',
+  routine: 'routine',
+  playbook: 'playbook',
+  limit: 'parameter',
+  ladder: null,
+  shift: 'roster',
+  on_call: 'roster',
+  assignment: null,
+  person: null,
+  completion: null,
+  event: 'event',
+  facility: 'facility',
 }
 
 function clean(value: unknown): unknown {
@@ -23,9 +32,17 @@ function clean(value: unknown): unknown {
  * and the outbox row that tells the live feed, both in the caller's transaction.
  */
 export async function audit(entity: AuditedEntity, entityId: number | string, action: AuditRow['action'], before: unknown, after: unknown) {
-  await db().getRepository(AuditEntity).insert({
-    at: new Date(), personId: currentPersonId(), entity, entityId: String(entityId), action, before: clean(before) as never, after: clean(after) as never,
-  })
+  await db()
+    .getRepository(AuditEntity)
+    .insert({
+      at: new Date(),
+      personId: currentPersonId(),
+      entity,
+      entityId: String(entityId),
+      action,
+      before: clean(before) as never,
+      after: clean(after) as never,
+    })
   const kind = LIVE_KIND[entity]
   if (kind) await recordChange(kind, [entityId])
 }

@@ -44,9 +44,11 @@ export function authRouter(config: AppConfig) {
 
   function authenticate(req: Request) {
     return new Promise<Express.User | false>((resolve, reject) => {
-      passport.authenticate('local', { session: false }, (err: unknown, user: Express.User | false) =>
-        err ? reject(err) : resolve(user),
-      )(req, req.res!, () => undefined)
+      passport.authenticate('local', { session: false }, (err: unknown, user: Express.User | false) => (err ? reject(err) : resolve(user)))(
+        req,
+        req.res!,
+        () => undefined,
+      )
     })
   }
 

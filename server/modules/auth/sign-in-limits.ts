@@ -26,7 +26,10 @@ export function signInLimiters(config: AppConfig) {
     rateLimit({
       ...common,
       limit: config.signInLimitPerAccount,
-      keyGenerator: (req) => `account:${String(req.body?.email ?? '').trim().toLowerCase()}`,
+      keyGenerator: (req) =>
+        `account:${String(req.body?.email ?? '')
+          .trim()
+          .toLowerCase()}`,
     }),
   ]
 }

@@ -10,7 +10,8 @@ const alerts = () => db().getRepository(AlertEntity)
 export const findAlert = (id: number): Promise<AlertRow | null> => alerts().findOneBy({ id })
 
 /** Alerts still climbing their ladder: started by `now`, neither acknowledged nor closed. */
-export const openAlertsStartedBy = (now: Date): Promise<AlertRow[]> => alerts().find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull(), startedAt: LessThanOrEqual(now) } })
+export const openAlertsStartedBy = (now: Date): Promise<AlertRow[]> =>
+  alerts().find({ where: { closedAt: IsNull(), acknowledgedAt: IsNull(), startedAt: LessThanOrEqual(now) } })
 
 /** A task's alerts, oldest first. */
 export const alertsOfTask = (taskId: number): Promise<AlertRow[]> => alerts().find({ where: { taskId }, order: { startedAt: 'ASC' } })

@@ -17,11 +17,15 @@ export async function reflagAfterAmendment(task: TaskRow, completion: Completion
   await reflagTask(task.id, flag)
   const reflagged = { ...task, flag }
   if (flag === 'critical') {
-    await startCriticalAlert(task, judged.readings.filter((r) => r.band === 'critical'))
+    await startCriticalAlert(
+      task,
+      judged.readings.filter((r) => r.band === 'critical'),
+    )
     await proposeIncidentsAfterCompletion(reflagged, 'critical', judged.readings, null, completion.id, now)
   }
   if (task.flag === 'critical') await closeCriticalAlert(task.id, now)
   // As on completion: a flag asks for a recheck by whoever did the check, except for a paper sheet typed in later.
-  if (flag && completion.outcome === 'done' && completion.enteredById === null && !(await recheckOf(task.id))) await createRecheck(reflagged, completion.personId)
+  if (flag && completion.outcome === 'done' && completion.enteredById === null && !(await recheckOf(task.id)))
+    await createRecheck(reflagged, completion.personId)
   return flag
 }

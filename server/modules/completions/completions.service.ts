@@ -52,17 +52,41 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
   const result = await db().transaction(async (manager) => {
-    const closing = { outcome: data.outcome, flag: flag === 'ok' ? null : flag, lateMinutes, completedAt: doneAt, completedById: performer.id, assigneeId: task.assigneeId ?? performer.id }
+    const closing = {
+      outcome: data.outcome,
+      flag: flag === 'ok' ? null : flag,
+      lateMinutes,
+      completedAt: doneAt,
+      completedById: performer.id,
+      assigneeId: task.assigneeId ?? performer.id,
+    }
     if (!(await closeTask(task, closing))) return null
     await manager.getRepository(CompletionEntity).insert({
-      id: data.completionId, taskId: task.id, personId: performer.id, enteredById: performer.id === person.id ? null : person.id, outcome: data.outcome,
-      skipReason: data.skipReason ?? null, note: data.note ?? null, doneAt, lateMinutes, response: null as never,
+      id: data.completionId,
+      taskId: task.id,
+      personId: performer.id,
+      enteredById: performer.id === person.id ? null : person.id,
+      outcome: data.outcome,
+      skipReason: data.skipReason ?? null,
+      note: data.note ?? null,
+      doneAt,
+      lateMinutes,
+      response: null as never,
     })
     if (judged.readings.length) {
       await manager.getRepository(ReadingEntity).insert(
         judged.readings.map((r) => ({
-          completionId: data.completionId, taskId: task.id, tankId: context.tankId, systemId: context.systemId,
-          parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: doneAt, personId: performer.id,
+          completionId: data.completionId,
+          taskId: task.id,
+          tankId: context.tankId,
+          systemId: context.systemId,
+          parameterKey: r.parameterKey,
+          value: r.value,
+          unit: r.unit,
+          band: r.band,
+          derived: r.derived,
+          takenAt: doneAt,
+          personId: performer.id,
         })),
       )
     }
@@ -73,7 +97,11 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
     const updated = await getTaskRow(taskId)
     // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
     const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
-    if (flag === 'critical') await startCriticalAlert(updated, judged.readings.filter((r) => r.band === 'critical'))
+    if (flag === 'critical')
+      await startCriticalAlert(
+        updated,
+        judged.readings.filter((r) => r.band === 'critical'),
+      )
     await proposeIncidentsAfterCompletion(updated, flag, judged.readings, mortality?.plan, data.completionId, new Date())
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: judged.readings, recheckTaskId, notes: judged.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
@@ -91,7 +119,9 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
 async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
   const [task, readings, recheck] = await Promise.all([
     getTaskRow(row.taskId),
-    db().getRepository(ReadingEntity).find({ where: { completionId: row.id, amendmentId: IsNull() }, order: { id: 'ASC' } }),
+    db()
+      .getRepository(ReadingEntity)
+      .find({ where: { completionId: row.id, amendmentId: IsNull() }, order: { id: 'ASC' } }),
     recheckOf(row.taskId),
   ])
   return {

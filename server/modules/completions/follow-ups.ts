@@ -56,7 +56,10 @@ export async function raiseCriticalAlert(taskId: number, text: string) {
   const alerts = db().getRepository(AlertEntity)
   const now = new Date()
   await alerts.createQueryBuilder().insert().values({ taskId, kind: 'critical_reading', detail, ladderId: null, startedAt: now }).orIgnore().execute()
-  await alerts.update({ taskId, kind: 'critical_reading', closedAt: Not(IsNull()) }, { detail, startedAt: now, closedAt: null, acknowledgedAt: null, acknowledgedById: null })
+  await alerts.update(
+    { taskId, kind: 'critical_reading', closedAt: Not(IsNull()) },
+    { detail, startedAt: now, closedAt: null, acknowledgedAt: null, acknowledgedById: null },
+  )
   logger.warn({ taskId, detail }, 'critical reading: escalation started')
 }
 
@@ -69,7 +72,13 @@ export type IncidentAlertKind = 'incident_overdue' | 'incident_welfare_overdue' 
 
 /** An incident past one of its deadlines climbs the ladder of the task it came from, once per deadline. */
 export async function startIncidentAlert(taskId: number, detail: string, at: Date, kind: IncidentAlertKind = 'incident_overdue') {
-  await db().getRepository(AlertEntity).createQueryBuilder().insert().values({ taskId, kind, detail: detail.slice(0, 500), ladderId: null, startedAt: at }).orIgnore().execute()
+  await db()
+    .getRepository(AlertEntity)
+    .createQueryBuilder()
+    .insert()
+    .values({ taskId, kind, detail: detail.slice(0, 500), ladderId: null, startedAt: at })
+    .orIgnore()
+    .execute()
   logger.warn({ taskId, kind, detail }, 'incident overdue: escalation started')
 }
 

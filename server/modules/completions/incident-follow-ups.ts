@@ -11,15 +11,38 @@ import { getTaskRow } from '../tasks/tasks.service'
  */
 type CompletedTask = { id: number; title: string; tankId: number | null; recheckOfTaskId: number | null }
 
-export async function proposeIncidentsAfterCompletion(task: CompletedTask, flag: Band, readings: Reading[], mortality: RoundMortalityPlan | null | undefined, completionId: string, now: Date) {
+export async function proposeIncidentsAfterCompletion(
+  task: CompletedTask,
+  flag: Band,
+  readings: Reading[],
+  mortality: RoundMortalityPlan | null | undefined,
+  completionId: string,
+  now: Date,
+) {
   if (flag === 'critical' && task.recheckOfTaskId) {
     const first = await getTaskRow(task.recheckOfTaskId).catch(() => null)
     if (first?.flag === 'critical') {
-      const critical = readings.filter((r) => r.band === 'critical').map((r) => `${r.parameterKey} ${r.value} ${r.unit}`).join(', ')
+      const critical = readings
+        .filter((r) => r.band === 'critical')
+        .map((r) => `${r.parameterKey} ${r.value} ${r.unit}`)
+        .join(', ')
       await proposeForCriticalRecheck(task, first.completedAt, critical, now)
     }
   }
   if (mortality?.crossedThreshold) {
-    await proposeForMortalityThreshold({ taskId: task.id, completionId, tankId: mortality.tankId, tankCode: mortality.tankCode, batchId: mortality.batchId, dead: mortality.count, weekDead: mortality.weekDead, weekPct: mortality.weekPct, thresholdPct: mortality.thresholdPct }, now)
+    await proposeForMortalityThreshold(
+      {
+        taskId: task.id,
+        completionId,
+        tankId: mortality.tankId,
+        tankCode: mortality.tankCode,
+        batchId: mortality.batchId,
+        dead: mortality.count,
+        weekDead: mortality.weekDead,
+        weekPct: mortality.weekPct,
+        thresholdPct: mortality.thresholdPct,
+      },
+      now,
+    )
   }
 }

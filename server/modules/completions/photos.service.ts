@@ -37,4 +37,7 @@ export async function photoFile(uploadDir: string, id: string) {
   return { path: path.resolve(uploadDir, row.fileName), mimeType: row.mimeType }
 }
 
-export const listPhotos = (taskId: number) => db().getRepository(PhotoEntity).find({ where: { taskId }, order: { createdAt: 'ASC' } })
+export const listPhotos = (taskId: number) =>
+  db()
+    .getRepository(PhotoEntity)
+    .find({ where: { taskId }, order: { createdAt: 'ASC' } })

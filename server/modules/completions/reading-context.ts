@@ -19,7 +19,11 @@ export async function readingContextFor(task: Pick<TaskRow, 'tankId' | 'targetKi
   const systemId = task.targetKind === 'system' ? task.targetId : (tank?.systemId ?? null)
   const system = systemId ? await systems.get(systemId).catch(() => null) : null
   const batchIds = (await batches.list())
-    .filter((b) => (b.status === 'active' || b.status === 'quarantine') && ((tank && b.tankIds.includes(tank.id)) || (task.targetKind === 'batch' && b.id === task.targetId)))
+    .filter(
+      (b) =>
+        (b.status === 'active' || b.status === 'quarantine') &&
+        ((tank && b.tankIds.includes(tank.id)) || (task.targetKind === 'batch' && b.id === task.targetId)),
+    )
     .map((b) => b.id)
   const [parameters, limits] = await Promise.all([listParameters(), listLimits()])
   const byKey = new Map(parameters.map((p) => [p.key, p]))
@@ -28,7 +32,17 @@ export async function readingContextFor(task: Pick<TaskRow, 'tankId' | 'targetKi
     const p = byKey.get(key)
     if (!p) return undefined
     const l = pickLimit(limits, key, where)
-    return { name: p.name, unit: p.unit, physicalMin: p.physicalMin, physicalMax: p.physicalMax, derived: p.derived, okMin: l?.okMin ?? null, okMax: l?.okMax ?? null, criticalMin: l?.criticalMin ?? null, criticalMax: l?.criticalMax ?? null }
+    return {
+      name: p.name,
+      unit: p.unit,
+      physicalMin: p.physicalMin,
+      physicalMax: p.physicalMax,
+      derived: p.derived,
+      okMin: l?.okMin ?? null,
+      okMax: l?.okMax ?? null,
+      criticalMin: l?.criticalMin ?? null,
+      criticalMax: l?.criticalMax ?? null,
+    }
   }
   return { tankId: tank?.id ?? null, systemId, batchIds, salinitySetpoint: system?.salinitySetpoint ?? null, ruleFor }
 }

@@ -8,7 +8,8 @@ export type { ReadingRow }
 const readings = () => db().getRepository(ReadingEntity)
 
 /** Every reading recorded on these tasks, corrected ones included (`supersededAt` tells them apart). */
-export const readingsOfTasks = async (taskIds: readonly number[]): Promise<ReadingRow[]> => (taskIds.length ? readings().find({ where: { taskId: In([...taskIds]) } }) : [])
+export const readingsOfTasks = async (taskIds: readonly number[]): Promise<ReadingRow[]> =>
+  taskIds.length ? readings().find({ where: { taskId: In([...taskIds]) } }) : []
 
 /** The current (not superseded) readings taken at a tank or a system between two instants, oldest first. */
 export const currentReadingsAt = (place: 'tankId' | 'systemId', id: number, from: Date, to: Date): Promise<ReadingRow[]> =>

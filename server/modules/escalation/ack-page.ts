@@ -13,7 +13,10 @@ const MESSAGES: Record<string, [string, string]> = {
   used: ['Link already used', 'This acknowledge link was used before. Open the task in Roundtide to see who answered.'],
   expired: ['Link expired', 'This acknowledge link has expired. Open Roundtide to acknowledge from the task.'],
   forged: ['Link not valid', 'This acknowledge link is not valid.'],
-  inactive: ['Account not active', 'This link belongs to an account that is no longer active, so it cannot acknowledge. Open Roundtide and acknowledge from the task.'],
+  inactive: [
+    'Account not active',
+    'This link belongs to an account that is no longer active, so it cannot acknowledge. Open Roundtide and acknowledge from the task.',
+  ],
 }
 
 /**
@@ -29,8 +32,13 @@ export function ackRouter(config: AppConfig) {
     next()
   })
   router.get('/:token', (_req, res) => {
-    res.type('html').send(page('Acknowledge', `<h1>Acknowledge this escalation?</h1><p>This tells Roundtide you are dealing with it and stops further messages.</p>
-<form method="post"><button type="submit">Acknowledge</button></form>`))
+    res.type('html').send(
+      page(
+        'Acknowledge',
+        `<h1>Acknowledge this escalation?</h1><p>This tells Roundtide you are dealing with it and stops further messages.</p>
+<form method="post"><button type="submit">Acknowledge</button></form>`,
+      ),
+    )
   })
   router.post('/:token', async (req, res) => {
     const outcome = await acknowledgeByToken(config.ackSecret, req.params.token)

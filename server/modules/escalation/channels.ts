@@ -9,7 +9,8 @@ export const FALLBACK_ORDER: Channel[] = ['sms', 'push', 'email']
 export const acceptedChannels = (p: Pick<Contact, 'channels'>): Channel[] => (p.channels?.length ? p.channels : ['email'])
 
 /** Where a channel reaches this person, or null when it cannot (no mobile number). */
-export const destinationFor = (p: Pick<Contact, 'email' | 'phone'>, channel: Channel): string | null => (channel === 'sms' ? p.phone || null : channel === 'email' ? p.email : 'push')
+export const destinationFor = (p: Pick<Contact, 'email' | 'phone'>, channel: Channel): string | null =>
+  channel === 'sms' ? p.phone || null : channel === 'email' ? p.email : 'push'
 
 /**
  * The channels a ladder step uses for one person: the step's channels that the person accepts,
@@ -29,7 +30,9 @@ export function channelsFor(person: Pick<Contact, 'channels' | 'phone' | 'email'
 export async function queueFallback(failed: NotificationRow, now: Date): Promise<Channel | null> {
   const person = await findContact(failed.personId)
   if (!person) return null
-  const existing = new Set((await db().getRepository(NotificationEntity).findBy({ alertId: failed.alertId, step: failed.step, personId: failed.personId })).map((n) => n.channel))
+  const existing = new Set(
+    (await db().getRepository(NotificationEntity).findBy({ alertId: failed.alertId, step: failed.step, personId: failed.personId })).map((n) => n.channel),
+  )
   const accepted = acceptedChannels(person)
   const next = FALLBACK_ORDER.slice(FALLBACK_ORDER.indexOf(failed.channel) + 1).find(
     (c) => !existing.has(c) && (c === 'email' || accepted.includes(c)) && destinationFor(person, c) !== null,
@@ -39,7 +42,19 @@ export async function queueFallback(failed: NotificationRow, now: Date): Promise
     .getRepository(NotificationEntity)
     .createQueryBuilder()
     .insert()
-    .values({ alertId: failed.alertId, step: failed.step, personId: failed.personId, channel: next, email: person.email, destination: destinationFor(person, next), subject: '', status: 'pending', urgent: failed.urgent, attempts: 0, nextAttemptAt: now })
+    .values({
+      alertId: failed.alertId,
+      step: failed.step,
+      personId: failed.personId,
+      channel: next,
+      email: person.email,
+      destination: destinationFor(person, next),
+      subject: '',
+      status: 'pending',
+      urgent: failed.urgent,
+      attempts: 0,
+      nextAttemptAt: now,
+    })
     .orIgnore()
     .execute()
   return next

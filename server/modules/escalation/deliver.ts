@@ -44,7 +44,15 @@ type Outcome =
   | { status: 'sent'; subject: string; providerId?: string; providerStatus?: string; replyCode?: string }
   | { status: 'suppressed' | 'undelivered'; subject: string; note: string }
 
-interface Context { config: AppConfig; transport: Transport; channels: Channels; alert: AlertRow; task: TaskRow; label: string; now: Date }
+interface Context {
+  config: AppConfig
+  transport: Transport
+  channels: Channels
+  alert: AlertRow
+  task: TaskRow
+  label: string
+  now: Date
+}
 
 /**
  * Sends every queued message that is due, on its own channel. Each row is claimed before
@@ -71,7 +79,15 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
       const outcome = await sendOne(row, context)
       const base = { subject: outcome.subject.slice(0, 300), attempts: row.attempts + 1 }
       if (outcome.status === 'sent') {
-        await repo.update(row.id, { ...base, status: 'sent', sentAt: new Date(), lastError: null, providerId: outcome.providerId ?? null, providerStatus: outcome.providerStatus ?? null, replyCode: outcome.replyCode ?? null })
+        await repo.update(row.id, {
+          ...base,
+          status: 'sent',
+          sentAt: new Date(),
+          lastError: null,
+          providerId: outcome.providerId ?? null,
+          providerStatus: outcome.providerStatus ?? null,
+          replyCode: outcome.replyCode ?? null,
+        })
         sent++
       } else {
         await repo.update(row.id, { ...base, status: outcome.status, lastError: outcome.note.slice(0, 500) })
@@ -110,7 +126,11 @@ async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
     if (!c.channels.text) return { status: 'undelivered', subject, note: 'Text messages are not set up on this server' }
     if (!row.destination) return { status: 'undelivered', subject, note: 'No mobile number on file' }
     if (!(await takeTextSlot(row.personId, c.now, c.config.sms.maxPerHour))) {
-      return { status: 'suppressed', subject, note: `Not texted: ${c.config.sms.maxPerHour} texts an hour already went to this person; counted in one summary text` }
+      return {
+        status: 'suppressed',
+        subject,
+        note: `Not texted: ${c.config.sms.maxPerHour} texts an hour already went to this person; counted in one summary text`,
+      }
     }
     const replyCode = String(randomInt(1000, 10_000))
     const message = await c.channels.text.send(row.destination, composeText({ ...input, replyCode }))
@@ -119,7 +139,13 @@ async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
   if (!c.channels.push) return { status: 'undelivered', subject, note: 'Push notifications are not set up on this server' }
   // The same single-use acknowledge token as the mail link; the notification's action posts it.
   const body = composeMessage({ ...input, ackUrl: '' }).text.split('\n')[0]
-  const pushed = await sendPushAlert(c.channels.push, row, { title: subject, body, tag: `alert-${c.alert.id}`, url: `/tasks/${c.task.id}`, ackUrl: `/ack/${token}` })
+  const pushed = await sendPushAlert(c.channels.push, row, {
+    title: subject,
+    body,
+    tag: `alert-${c.alert.id}`,
+    url: `/tasks/${c.task.id}`,
+    ackUrl: `/ack/${token}`,
+  })
   return pushed.status === 'sent' ? { status: 'sent', subject, providerId: pushed.providerId ?? undefined } : { ...pushed, subject }
 }
 

@@ -43,14 +43,23 @@ export async function sendDailyDigestIfDue(config: AppConfig, transport: Transpo
     ...(flagged.length
       ? flagged.map((t) => {
           const a = alerts.find((x) => x.taskId === t.id)
-          const answer = a?.acknowledgedAt ? `acknowledged by ${people.get(a.acknowledgedById ?? 0)?.name ?? 'someone'}` : a ? 'escalated, not acknowledged' : 'recheck set'
+          const answer = a?.acknowledgedAt
+            ? `acknowledged by ${people.get(a.acknowledgedById ?? 0)?.name ?? 'someone'}`
+            : a
+              ? 'escalated, not acknowledged'
+              : 'recheck set'
           return `- ${t.flag?.toUpperCase()} ${t.title} at ${where(t)}: ${answer}`
         })
       : ['- none']),
   ]
   const managers = [...people.values()].filter((p) => p.role === 'manager' && p.active)
   for (const m of managers) {
-    await transport.sendMail({ from: config.mail.from, to: m.email, subject: `Roundtide daily summary ${yesterday}: ${missed.length} missed, ${flagged.length} flagged`, text: lines.join('\n') })
+    await transport.sendMail({
+      from: config.mail.from,
+      to: m.email,
+      subject: `Roundtide daily summary ${yesterday}: ${missed.length} missed, ${flagged.length} flagged`,
+      text: lines.join('\n'),
+    })
   }
   return true
 }

@@ -32,9 +32,16 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
       continue
     }
     const ladder = await ladderFor(alert, task)
-    const reached = await db().getRepository(NotificationEntity).createQueryBuilder('n').select('MAX(n.step)', 'max').where('n.alertId = :id', { id: alert.id }).getRawOne<{ max: number | null }>()
+    const reached = await db()
+      .getRepository(NotificationEntity)
+      .createQueryBuilder('n')
+      .select('MAX(n.step)', 'max')
+      .where('n.alertId = :id', { id: alert.id })
+      .getRawOne<{ max: number | null }>()
     const highest = reached?.max ?? -1
-    const dueSteps = ladder.steps.map((s, i) => ({ ...s, i })).filter((s) => s.i > highest && alert.startedAt.getTime() + s.afterMinutes * 60_000 <= now.getTime())
+    const dueSteps = ladder.steps
+      .map((s, i) => ({ ...s, i }))
+      .filter((s) => s.i > highest && alert.startedAt.getTime() + s.afterMinutes * 60_000 <= now.getTime())
     const step = dueSteps.at(-1)
     if (!step) continue
     const people = await resolveRecipients(step.notify, task, now, zone)
@@ -46,14 +53,39 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
       const held = !urgent && !onCall && inQuietHours(p, now, zone)
       const nextAttemptAt = held ? quietHoursEnd(p, now, zone) : now
       return channelsFor(p, stepChannels(step), onCall).map((channel) => ({
-        alertId: alert.id, step: step.i, personId: p.id, channel, email: p.email, destination: destinationFor(p, channel), subject: '',
-        status: held ? ('held' as const) : ('pending' as const), urgent, attempts: 0, nextAttemptAt,
+        alertId: alert.id,
+        step: step.i,
+        personId: p.id,
+        channel,
+        email: p.email,
+        destination: destinationFor(p, channel),
+        subject: '',
+        status: held ? ('held' as const) : ('pending' as const),
+        urgent,
+        attempts: 0,
+        nextAttemptAt,
       }))
     })
     // Record the step even when nobody matched, so the ladder moves on instead of retrying it.
-    const values = rows.length ? rows : [{ alertId: alert.id, step: step.i, personId: 0, channel: 'email' as const, email: '', destination: null, subject: 'Nobody to notify at this step', status: 'superseded' as const, urgent, attempts: 0, nextAttemptAt: now }]
+    const values = rows.length
+      ? rows
+      : [
+          {
+            alertId: alert.id,
+            step: step.i,
+            personId: 0,
+            channel: 'email' as const,
+            email: '',
+            destination: null,
+            subject: 'Nobody to notify at this step',
+            status: 'superseded' as const,
+            urgent,
+            attempts: 0,
+            nextAttemptAt: now,
+          },
+        ]
     const result = await db().getRepository(NotificationEntity).createQueryBuilder().insert().values(values).orIgnore().execute()
-    queued += rows.length ? (result.identifiers.filter(Boolean).length || rows.length) : 0
+    queued += rows.length ? result.identifiers.filter(Boolean).length || rows.length : 0
   }
   return { queued, closed }
 }
@@ -70,6 +102,8 @@ async function answered(alert: AlertRow, task: TaskRow): Promise<boolean> {
 /** Acknowledging in the app or through a mail link stops the ladder and records who answered. */
 export async function acknowledgeAlert(alertId: number, personId: number, at = new Date()): Promise<boolean> {
   const first = await acknowledgeOpenAlert(alertId, personId, at)
-  await db().getRepository(NotificationEntity).update({ alertId, status: In(['pending', 'held', 'failed']) }, { status: 'superseded' })
+  await db()
+    .getRepository(NotificationEntity)
+    .update({ alertId, status: In(['pending', 'held', 'failed']) }, { status: 'superseded' })
   return first
 }

@@ -16,7 +16,9 @@ export async function escalationRecord(taskId: number): Promise<EscalationRecord
   if (!task) throw notFound('That task')
   const alerts = await alertsOfTask(taskId)
   if (!alerts.length) return []
-  const notes = await db().getRepository(NotificationEntity).find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { step: 'ASC', id: 'ASC' } })
+  const notes = await db()
+    .getRepository(NotificationEntity)
+    .find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { step: 'ASC', id: 'ASC' } })
   const names = new Map((await listContacts()).map((p) => [p.id, p.name]))
   return Promise.all(
     alerts.map(async (a) => ({
@@ -30,7 +32,19 @@ export async function escalationRecord(taskId: number): Promise<EscalationRecord
       ladderName: (await ladderFor(a, task)).name,
       notifications: notes
         .filter((n) => n.alertId === a.id && n.personId !== 0)
-        .map((n) => ({ step: n.step, channel: n.channel, personName: names.get(n.personId) ?? n.email, email: n.email, destination: n.destination ?? n.email, providerId: n.providerId, providerStatus: n.providerStatus, status: n.status, attempts: n.attempts, sentAt: n.sentAt?.toISOString() ?? null, lastError: n.lastError })),
+        .map((n) => ({
+          step: n.step,
+          channel: n.channel,
+          personName: names.get(n.personId) ?? n.email,
+          email: n.email,
+          destination: n.destination ?? n.email,
+          providerId: n.providerId,
+          providerStatus: n.providerStatus,
+          status: n.status,
+          attempts: n.attempts,
+          sentAt: n.sentAt?.toISOString() ?? null,
+          lastError: n.lastError,
+        })),
     })),
   )
 }

@@ -42,7 +42,15 @@ export function composeMessage(m: MessageInput) {
   ].filter((l, i, all) => l !== '' || all[i - 1] !== '')
   const text = lines.join('\n')
   const html = `<div style="font-family:sans-serif">${lines
-    .map((l) => (l.startsWith('Open the task:') ? `<p><a href="${escapeHtml(m.taskUrl)}">Open the task</a></p>` : l.startsWith('Acknowledge') ? `<p><a href="${escapeHtml(m.ackUrl)}"><strong>Acknowledge</strong></a> (stops further messages)</p>` : l ? `<p>${escapeHtml(l)}</p>` : ''))
+    .map((l) =>
+      l.startsWith('Open the task:')
+        ? `<p><a href="${escapeHtml(m.taskUrl)}">Open the task</a></p>`
+        : l.startsWith('Acknowledge')
+          ? `<p><a href="${escapeHtml(m.ackUrl)}"><strong>Acknowledge</strong></a> (stops further messages)</p>`
+          : l
+            ? `<p>${escapeHtml(l)}</p>`
+            : '',
+    )
     .join('')}</div>`
   return { subject, text, html }
 }

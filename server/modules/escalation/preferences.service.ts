@@ -32,7 +32,8 @@ export async function updateMyPreferences(config: AppConfig, personId: number, c
   const { currentPassword, ...input } = changes
   const current = await getPersonRow(personId)
   if (input.email !== undefined && input.email !== current.email) {
-    if (!currentPassword) throw validationError('Enter your current password to change the address you sign in with.', { currentPassword: ['Enter your current password'] })
+    if (!currentPassword)
+      throw validationError('Enter your current password to change the address you sign in with.', { currentPassword: ['Enter your current password'] })
     if (!(await bcrypt.compare(currentPassword, current.passwordHash))) {
       throw validationError('That is not your current password; nothing was saved.', { currentPassword: ['Not your current password'] })
     }
@@ -40,7 +41,10 @@ export async function updateMyPreferences(config: AppConfig, personId: number, c
   const phone = input.phone === undefined ? current.phone : input.phone
   const channels = input.channels ?? acceptedChannels(current)
   // Taking the number away also takes texts away, rather than leaving a channel that cannot work.
-  await updateContact(personId, { ...input, channels: phone ? channels : channels.filter((c) => c !== 'sms').concat(channels.length === 1 && channels[0] === 'sms' ? ['email'] : []) })
+  await updateContact(personId, {
+    ...input,
+    channels: phone ? channels : channels.filter((c) => c !== 'sms').concat(channels.length === 1 && channels[0] === 'sms' ? ['email'] : []),
+  })
   const saved = await myPreferences(config, personId)
   if (saved.email !== current.email) await audit('person', personId, 'update', { email: current.email }, { email: saved.email })
   return saved

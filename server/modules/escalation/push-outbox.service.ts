@@ -15,7 +15,9 @@ const localOnly = (config: AppConfig): string => {
 /** What the local push service decrypted or refused, newest first, with whose device it was. */
 export async function localPushes(config: AppConfig): Promise<PushOutboxMessage[]> {
   localOnly(config)
-  const rows = await db().getRepository(PushOutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
+  const rows = await db()
+    .getRepository(PushOutboxEntity)
+    .find({ order: { id: 'DESC' }, take: 200 })
   const names = new Map<string, string | null>()
   for (const endpoint of new Set(rows.map((r) => r.endpoint))) {
     const device = await pushSubscriptionByEndpoint(endpoint)

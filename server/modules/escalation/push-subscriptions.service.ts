@@ -17,10 +17,15 @@ export async function registerPushSubscription(personId: number, input: PushSubs
 
 /** Forgets this device for the person (only their own). */
 export async function removePushSubscription(personId: number, endpoint: string) {
-  await db().getRepository(PushSubscriptionEntity).delete({ personId, endpointHash: hashOf(endpoint) })
+  await db()
+    .getRepository(PushSubscriptionEntity)
+    .delete({ personId, endpointHash: hashOf(endpoint) })
 }
 
-export const pushSubscriptionByEndpoint = (endpoint: string): Promise<PushSubscriptionRow | null> => db().getRepository(PushSubscriptionEntity).findOneBy({ endpointHash: hashOf(endpoint) })
+export const pushSubscriptionByEndpoint = (endpoint: string): Promise<PushSubscriptionRow | null> =>
+  db()
+    .getRepository(PushSubscriptionEntity)
+    .findOneBy({ endpointHash: hashOf(endpoint) })
 
 export const pushSubscriptionsOf = (personId: number): Promise<PushSubscriptionRow[]> => db().getRepository(PushSubscriptionEntity).findBy({ personId })
 

@@ -12,7 +12,8 @@ import { NotificationEntity } from './escalation.entities'
  */
 export const STUCK_SENDING_AFTER_MS = 5 * 60_000
 
-export const STUCK_NOTE = 'Unknown: the app stopped while sending, so whether it arrived is not known. Not sent again (a second copy could reach the person); the next channel was tried.'
+export const STUCK_NOTE =
+  'Unknown: the app stopped while sending, so whether it arrived is not known. Not sent again (a second copy could reach the person); the next channel was tried.'
 
 /**
  * Resolves messages whose sender stopped after claiming them: each becomes `unknown` (never
@@ -23,14 +24,21 @@ export const STUCK_NOTE = 'Unknown: the app stopped while sending, so whether it
  */
 export async function resolveStuckSends(now: Date): Promise<number> {
   const repo = db().getRepository(NotificationEntity)
-  const stuck = await repo.find({ where: { status: 'sending', claimedAt: LessThan(new Date(now.getTime() - STUCK_SENDING_AFTER_MS)) }, order: { id: 'ASC' }, take: 200 })
+  const stuck = await repo.find({
+    where: { status: 'sending', claimedAt: LessThan(new Date(now.getTime() - STUCK_SENDING_AFTER_MS)) },
+    order: { id: 'ASC' },
+    take: 200,
+  })
   let resolved = 0
   for (const row of stuck) {
     const moved = await repo.update({ id: row.id, status: 'sending' }, { status: 'unknown', lastError: STUCK_NOTE })
     if (!moved.affected) continue
     resolved++
     const next = await queueFallback(row, now)
-    logger.warn({ notification: row.id, channel: row.channel, claimedAt: row.claimedAt, fallback: next }, 'message left sending by a stopped sender; marked unknown')
+    logger.warn(
+      { notification: row.id, channel: row.channel, claimedAt: row.claimedAt, fallback: next },
+      'message left sending by a stopped sender; marked unknown',
+    )
   }
   return resolved
 }

@@ -7,7 +7,9 @@ import { OutboxEntity, TextOutboxEntity } from './escalation.entities'
 /** Local mail mode only: the latest mail the app sent, as the local SMTP server received it. */
 export async function localMail(config: AppConfig): Promise<OutboxMessage[]> {
   if (config.mail.mode !== 'local') throw notFound('The outbox (only in local mail mode)')
-  const rows = await db().getRepository(OutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
+  const rows = await db()
+    .getRepository(OutboxEntity)
+    .find({ order: { id: 'DESC' }, take: 200 })
   return rows.map((r) => ({ ...r, receivedAt: r.receivedAt.toISOString() }))
 }
 
@@ -17,7 +19,9 @@ const localOnly = (config: AppConfig) => {
 
 export async function localTexts(config: AppConfig): Promise<TextOutboxMessage[]> {
   localOnly(config)
-  const rows = await db().getRepository(TextOutboxEntity).find({ order: { id: 'DESC' }, take: 200 })
+  const rows = await db()
+    .getRepository(TextOutboxEntity)
+    .find({ order: { id: 'DESC' }, take: 200 })
   return rows.map(({ statusCallback: _callback, ...r }) => ({ ...r, receivedAt: r.receivedAt.toISOString() }))
 }
 
@@ -31,7 +35,10 @@ export async function replyAsRecipient(config: AppConfig, textId: number, body: 
   if (!text) throw notFound('That text')
   const res = await fetch(`${config.sms.apiBaseUrl}/local/inbound`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json', authorization: `Basic ${Buffer.from(`${config.sms.accountSid}:${config.sms.authToken}`).toString('base64')}` },
+    headers: {
+      'content-type': 'application/json',
+      authorization: `Basic ${Buffer.from(`${config.sms.accountSid}:${config.sms.authToken}`).toString('base64')}`,
+    },
     body: JSON.stringify({ from: text.to, body }),
     signal: AbortSignal.timeout(10_000),
   })

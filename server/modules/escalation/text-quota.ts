@@ -15,9 +15,19 @@ export async function takeTextSlot(personId: number, at: Date, limit: number): P
   const repo = db().getRepository(TextQuotaEntity)
   const hourStart = hourStartOf(at)
   await repo.createQueryBuilder().insert().values({ personId, hourStart }).orIgnore().execute()
-  const taken = await repo.createQueryBuilder().update().set({ used: () => 'used + 1' }).where('personId = :personId AND hourStart = :hourStart AND used < :limit', { personId, hourStart, limit }).execute()
+  const taken = await repo
+    .createQueryBuilder()
+    .update()
+    .set({ used: () => 'used + 1' })
+    .where('personId = :personId AND hourStart = :hourStart AND used < :limit', { personId, hourStart, limit })
+    .execute()
   if (taken.affected) return true
-  await repo.createQueryBuilder().update().set({ suppressed: () => 'suppressed + 1' }).where('personId = :personId AND hourStart = :hourStart', { personId, hourStart }).execute()
+  await repo
+    .createQueryBuilder()
+    .update()
+    .set({ suppressed: () => 'suppressed + 1' })
+    .where('personId = :personId AND hourStart = :hourStart', { personId, hourStart })
+    .execute()
   return false
 }
 

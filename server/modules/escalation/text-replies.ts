@@ -44,4 +44,3 @@ export async function recordTextStatus(messageSid: string, status: string, error
   }
   return true
 }
-

@@ -1,6 +1,4 @@
-import {
-  AreaInputSchema, BatchInputSchema, EquipmentInputSchema, SystemInputSchema, TankInputSchema,
-} from '#shared/schemas/facility'
+import { AreaInputSchema, BatchInputSchema, EquipmentInputSchema, SystemInputSchema, TankInputSchema } from '#shared/schemas/facility'
 import { db } from '../../db/data-source'
 import { conflict, validationError } from '../../lib/errors'
 import { removeUntouchedFutureTasks, materialiseForTank } from '../tasks/materialiser'
@@ -13,7 +11,9 @@ async function mustExist(entity: typeof AreaEntity | typeof SystemEntity | typeo
 }
 
 async function mustBeEmpty(column: 'areaId' | 'systemId', id: number, label: string) {
-  const count = await db().getRepository(TankEntity).countBy({ [column]: id })
+  const count = await db()
+    .getRepository(TankEntity)
+    .countBy({ [column]: id })
   if (count) throw conflict(`This ${label} still holds ${count} tank${count === 1 ? '' : 's'}; move or delete them first.`)
 }
 
@@ -49,7 +49,8 @@ export const tanks = catalogue(TankEntity, TankInputSchema, 'tank', {
     if (before && !after) {
       // A deleted tank leaves the batches that listed it.
       const repo = db().getRepository(BatchEntity)
-      for (const b of (await repo.find()).filter((x) => x.tankIds.includes(before.id))) await repo.save({ ...b, tankIds: b.tankIds.filter((id) => id !== before.id) })
+      for (const b of (await repo.find()).filter((x) => x.tankIds.includes(before.id)))
+        await repo.save({ ...b, tankIds: b.tankIds.filter((id) => id !== before.id) })
     }
   },
 })

@@ -20,7 +20,8 @@ export async function updateFacility(data: UpdateFacilityInput): Promise<Facilit
   return saved
 }
 
-type NewFacility = Omit<Facility, 'id' | 'defaultLadderId' | 'fastLadderId' | 'digestTime'> & Partial<Pick<Facility, 'defaultLadderId' | 'fastLadderId' | 'digestTime'>>
+type NewFacility = Omit<Facility, 'id' | 'defaultLadderId' | 'fastLadderId' | 'digestTime'> &
+  Partial<Pick<Facility, 'defaultLadderId' | 'fastLadderId' | 'digestTime'>>
 
 export async function createFacilityIfMissing(facility: NewFacility): Promise<Facility> {
   const [row] = await repo().find({ order: { id: 'ASC' }, take: 1 })

@@ -23,7 +23,9 @@ export async function importTanksCsv(text: string): Promise<TankImportResult> {
   })
   const missing = TANK_CSV_COLUMNS.filter((c) => !parsed.meta.fields?.includes(c))
   if (missing.length) {
-    throw validationError(`The CSV needs a header row with: ${TANK_CSV_COLUMNS.join(', ')}. Missing: ${missing.join(', ')}.`, { file: [`Missing columns: ${missing.join(', ')}`] })
+    throw validationError(`The CSV needs a header row with: ${TANK_CSV_COLUMNS.join(', ')}. Missing: ${missing.join(', ')}.`, {
+      file: [`Missing columns: ${missing.join(', ')}`],
+    })
   }
   const areaByCode = new Map((await db().getRepository(AreaEntity).find()).map((a) => [a.code.toLowerCase(), a.id]))
   const systemByCode = new Map((await db().getRepository(SystemEntity).find()).map((s) => [s.code.toLowerCase(), s.id]))
@@ -65,8 +67,7 @@ export async function importTanksCsv(text: string): Promise<TankImportResult> {
   return saveTanks(rows)
 }
 
-const columnFor = (field: string) =>
-  ({ volumeL: 'volume_l', inUse: 'in_use', areaId: 'area', systemId: 'system' })[field] ?? field
+const columnFor = (field: string) => ({ volumeL: 'volume_l', inUse: 'in_use', areaId: 'area', systemId: 'system' })[field] ?? field
 
 async function saveTanks(rows: TankInput[]): Promise<TankImportResult> {
   const result = { created: 0, updated: 0, unchanged: 0 }

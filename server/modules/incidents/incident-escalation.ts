@@ -22,9 +22,30 @@ interface DeadlineRule {
  * proposal waits for its decision; the committee and the full report follow a confirmed incident.
  */
 export const DEADLINE_RULES: DeadlineRule[] = [
-  { due: 'welfareDueAt', done: 'welfareNotifiedAt', claim: 'welfareEscalatedAt', statuses: ['proposed', 'open', 'reported'], kind: 'incident_welfare_overdue', say: 'welfare officer not told by the deadline' },
-  { due: 'committeeDueAt', done: 'reportedAt', claim: 'escalatedAt', statuses: ['open'], kind: 'incident_overdue', say: 'not reported to the ethics committee by its deadline' },
-  { due: 'reportDueAt', done: 'closedAt', claim: 'reportEscalatedAt', statuses: ['open', 'reported'], kind: 'incident_report_overdue', say: 'full report not filed by its deadline' },
+  {
+    due: 'welfareDueAt',
+    done: 'welfareNotifiedAt',
+    claim: 'welfareEscalatedAt',
+    statuses: ['proposed', 'open', 'reported'],
+    kind: 'incident_welfare_overdue',
+    say: 'welfare officer not told by the deadline',
+  },
+  {
+    due: 'committeeDueAt',
+    done: 'reportedAt',
+    claim: 'escalatedAt',
+    statuses: ['open'],
+    kind: 'incident_overdue',
+    say: 'not reported to the ethics committee by its deadline',
+  },
+  {
+    due: 'reportDueAt',
+    done: 'closedAt',
+    claim: 'reportEscalatedAt',
+    statuses: ['open', 'reported'],
+    kind: 'incident_report_overdue',
+    say: 'full report not filed by its deadline',
+  },
 ]
 
 /** Every deadline passed without its date climbs the ladder of the incident's task, once each. */

@@ -29,13 +29,36 @@ export async function proposeIncident(p: IncidentProposal, now: Date): Promise<v
     .createQueryBuilder()
     .insert()
     .values({
-      status: 'proposed', source: p.source, sourceKey: p.sourceKey, taskId: p.taskId, title: p.title.slice(0, 160), whatHappened: p.whatHappened,
-      startedAt: p.startedAt, noticedAt: now, tankIds: p.tankIds, batchIds: p.batchIds ?? [], personIds: [], affected: p.dead ?? 0, dead: p.dead ?? 0,
-      immediateActions: '', told: [], rootCause: '', correctiveActions: '', decisionReason: null, decidedById: null, decidedAt: null,
+      status: 'proposed',
+      source: p.source,
+      sourceKey: p.sourceKey,
+      taskId: p.taskId,
+      title: p.title.slice(0, 160),
+      whatHappened: p.whatHappened,
+      startedAt: p.startedAt,
+      noticedAt: now,
+      tankIds: p.tankIds,
+      batchIds: p.batchIds ?? [],
+      personIds: [],
+      affected: p.dead ?? 0,
+      dead: p.dead ?? 0,
+      immediateActions: '',
+      told: [],
+      rootCause: '',
+      correctiveActions: '',
+      decisionReason: null,
+      decidedById: null,
+      decidedAt: null,
       welfareDueAt: new Date(now.getTime() + s.notifyWelfareOfficerHours * HOUR),
       committeeDueAt: new Date(now.getTime() + s.notifyCommitteeHours * HOUR),
       reportDueAt: new Date(now.getTime() + s.fullReportHours * HOUR),
-      welfareNotifiedAt: null, reportedAt: null, closedAt: null, escalatedAt: null, welfareEscalatedAt: null, reportEscalatedAt: null, notes: [],
+      welfareNotifiedAt: null,
+      reportedAt: null,
+      closedAt: null,
+      escalatedAt: null,
+      welfareEscalatedAt: null,
+      reportEscalatedAt: null,
+      notes: [],
     })
     .orIgnore()
     .execute()
@@ -45,27 +68,70 @@ export async function proposeIncident(p: IncidentProposal, now: Date): Promise<v
 /** Missed welfare-critical checks: one proposal each (the clock passes the tasks it just marked missed). */
 export async function proposeForMissedTasks(tasks: Array<{ id: number; title: string; tankId: number | null; graceUntil: Date }>, now: Date) {
   for (const t of tasks) {
-    await proposeIncident({ source: 'missed_task', sourceKey: `missed_task:${t.id}`, taskId: t.id, title: `Missed welfare-critical check: ${t.title}`, whatHappened: `"${t.title}" was not done within its grace time.`, startedAt: t.graceUntil, tankIds: t.tankId ? [t.tankId] : [] }, now)
+    await proposeIncident(
+      {
+        source: 'missed_task',
+        sourceKey: `missed_task:${t.id}`,
+        taskId: t.id,
+        title: `Missed welfare-critical check: ${t.title}`,
+        whatHappened: `"${t.title}" was not done within its grace time.`,
+        startedAt: t.graceUntil,
+        tankIds: t.tankId ? [t.tankId] : [],
+      },
+      now,
+    )
   }
 }
 
 /** A recheck that reads critical again confirms the first critical reading: one proposal per recheck. */
-export async function proposeForCriticalRecheck(recheck: { id: number; title: string; tankId: number | null }, firstAt: Date | null, critical: string, now: Date) {
+export async function proposeForCriticalRecheck(
+  recheck: { id: number; title: string; tankId: number | null },
+  firstAt: Date | null,
+  critical: string,
+  now: Date,
+) {
   const title = recheck.title.replace(/^Recheck: /, '')
-  await proposeIncident({
-    source: 'critical_recheck', sourceKey: `critical_recheck:${recheck.id}`, taskId: recheck.id, title: `Critical reading confirmed by its recheck: ${title}`,
-    whatHappened: `The recheck of "${title}" read critical again: ${critical}.`, startedAt: firstAt ?? now, tankIds: recheck.tankId ? [recheck.tankId] : [],
-  }, now)
+  await proposeIncident(
+    {
+      source: 'critical_recheck',
+      sourceKey: `critical_recheck:${recheck.id}`,
+      taskId: recheck.id,
+      title: `Critical reading confirmed by its recheck: ${title}`,
+      whatHappened: `The recheck of "${title}" read critical again: ${critical}.`,
+      startedAt: firstAt ?? now,
+      tankIds: recheck.tankId ? [recheck.tankId] : [],
+    },
+    now,
+  )
 }
 
 /** Deaths on the round took the batch's 7-day losses over the facility's threshold: one proposal per crossing. */
 export async function proposeForMortalityThreshold(
-  p: { taskId: number; completionId: string; tankId: number; tankCode: string; batchId: number; dead: number; weekDead: number; weekPct: number; thresholdPct: number },
+  p: {
+    taskId: number
+    completionId: string
+    tankId: number
+    tankCode: string
+    batchId: number
+    dead: number
+    weekDead: number
+    weekPct: number
+    thresholdPct: number
+  },
   now: Date,
 ) {
-  await proposeIncident({
-    source: 'mortality_threshold', sourceKey: `mortality_threshold:${p.completionId}`, taskId: p.taskId, title: `Deaths above the 7-day threshold in ${p.tankCode}`,
-    whatHappened: `${p.dead} dead were removed from ${p.tankCode}; ${p.weekDead} of the batch died in the last 7 days (${p.weekPct.toFixed(1)} %, the facility's threshold is ${p.thresholdPct} %).`,
-    startedAt: now, tankIds: [p.tankId], batchIds: [p.batchId], dead: p.weekDead,
-  }, now)
+  await proposeIncident(
+    {
+      source: 'mortality_threshold',
+      sourceKey: `mortality_threshold:${p.completionId}`,
+      taskId: p.taskId,
+      title: `Deaths above the 7-day threshold in ${p.tankCode}`,
+      whatHappened: `${p.dead} dead were removed from ${p.tankCode}; ${p.weekDead} of the batch died in the last 7 days (${p.weekPct.toFixed(1)} %, the facility's threshold is ${p.thresholdPct} %).`,
+      startedAt: now,
+      tankIds: [p.tankId],
+      batchIds: [p.batchId],
+      dead: p.weekDead,
+    },
+    now,
+  )
 }

@@ -2,7 +2,19 @@ import { EntitySchema } from 'typeorm'
 import type { Incident } from '#shared/schemas/incident'
 import { INCIDENT_SOURCES, INCIDENT_STATUSES } from '#shared/schemas/incident'
 
-type Dates = 'startedAt' | 'noticedAt' | 'decidedAt' | 'welfareDueAt' | 'committeeDueAt' | 'reportDueAt' | 'welfareNotifiedAt' | 'reportedAt' | 'closedAt' | 'escalatedAt' | 'welfareEscalatedAt' | 'reportEscalatedAt'
+type Dates =
+  | 'startedAt'
+  | 'noticedAt'
+  | 'decidedAt'
+  | 'welfareDueAt'
+  | 'committeeDueAt'
+  | 'reportDueAt'
+  | 'welfareNotifiedAt'
+  | 'reportedAt'
+  | 'closedAt'
+  | 'escalatedAt'
+  | 'welfareEscalatedAt'
+  | 'reportEscalatedAt'
 // Names are looked up when answering, never stored.
 export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'people'> & {
   startedAt: Date

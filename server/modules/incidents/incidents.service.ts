@@ -22,10 +22,18 @@ export function toIncident(r: IncidentRow, names: Map<number, string> = new Map(
     ...rest,
     decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
     people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
-    startedAt: r.startedAt.toISOString(), noticedAt: r.noticedAt.toISOString(), decidedAt: iso(r.decidedAt),
-    welfareDueAt: r.welfareDueAt.toISOString(), committeeDueAt: r.committeeDueAt.toISOString(), reportDueAt: r.reportDueAt.toISOString(),
-    welfareNotifiedAt: iso(r.welfareNotifiedAt), reportedAt: iso(r.reportedAt), closedAt: iso(r.closedAt),
-    escalatedAt: iso(r.escalatedAt), welfareEscalatedAt: iso(r.welfareEscalatedAt), reportEscalatedAt: iso(r.reportEscalatedAt),
+    startedAt: r.startedAt.toISOString(),
+    noticedAt: r.noticedAt.toISOString(),
+    decidedAt: iso(r.decidedAt),
+    welfareDueAt: r.welfareDueAt.toISOString(),
+    committeeDueAt: r.committeeDueAt.toISOString(),
+    reportDueAt: r.reportDueAt.toISOString(),
+    welfareNotifiedAt: iso(r.welfareNotifiedAt),
+    reportedAt: iso(r.reportedAt),
+    closedAt: iso(r.closedAt),
+    escalatedAt: iso(r.escalatedAt),
+    welfareEscalatedAt: iso(r.welfareEscalatedAt),
+    reportEscalatedAt: iso(r.reportEscalatedAt),
   }
 }
 
@@ -48,7 +56,10 @@ type Actor = { id: number; name: string }
 
 /** Confirm or dismiss a proposal, always with a reason that stays on the record. */
 export async function decideIncident(id: number, decision: 'confirm' | 'dismiss', { reason }: DecideIncidentInput, who: Actor, now = new Date()) {
-  const result = await repo().update({ id, status: 'proposed' }, { status: decision === 'confirm' ? 'open' : 'dismissed', decisionReason: reason, decidedById: who.id, decidedAt: now })
+  const result = await repo().update(
+    { id, status: 'proposed' },
+    { status: decision === 'confirm' ? 'open' : 'dismissed', decisionReason: reason, decidedById: who.id, decidedAt: now },
+  )
   if (!result.affected) {
     const row = await load(id)
     throw conflict(`This incident is already ${row.status}; nothing was changed.`)
@@ -71,7 +82,11 @@ export async function updateIncident(id: number, data: UpdateIncidentInput, now 
   if (status === 'closed') {
     // Closing files the full report (the third deadline), so the report must say why and what changes.
     const missing = (['rootCause', 'correctiveActions'] as const).filter((k) => !(next[k] ?? row[k]).trim())
-    if (missing.length) throw validationError('Nothing was saved: the full report needs the root cause and the corrective actions before the incident is closed.', Object.fromEntries(missing.map((k) => [k, ['Required to close']])))
+    if (missing.length)
+      throw validationError(
+        'Nothing was saved: the full report needs the root cause and the corrective actions before the incident is closed.',
+        Object.fromEntries(missing.map((k) => [k, ['Required to close']])),
+      )
     Object.assign(next, { status, closedAt: now, reportedAt: row.reportedAt ?? now })
   }
   // An empty patch changes nothing (TypeORM refuses an UPDATE without values).

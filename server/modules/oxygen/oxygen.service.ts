@@ -12,7 +12,12 @@ const repo = () => db().getRepository(CylinderEntity)
 
 function settingsOf(c: CylinderRow): CylinderSettings {
   return c.method === 'metric'
-    ? { method: 'metric', waterCapacityL: c.waterCapacityL!, reserveBar: c.reservePressure, compressibility: c.compressibility ? { atReading: c.compressibility } : undefined }
+    ? {
+        method: 'metric',
+        waterCapacityL: c.waterCapacityL!,
+        reserveBar: c.reservePressure,
+        compressibility: c.compressibility ? { atReading: c.compressibility } : undefined,
+      }
     : { method: 'psi-factor', factorLPerPsi: c.factorLPerPsi!, reservePsi: c.reservePressure }
 }
 
@@ -26,11 +31,19 @@ function levelOf(hours: number | null, minHours: number): CylinderStatus['level'
 const replaceTitle = (c: CylinderRow) => `Replace oxygen cylinder ${c.code}`
 
 async function toStatus(c: CylinderRow, minHours: number): Promise<CylinderStatus> {
-  const estimate = c.lastPressure !== null && c.flowLPerMin > 0 ? estimateSupply(settingsOf(c), { gaugePressure: c.lastPressure, flowLPerMin: c.flowLPerMin }) : null
+  const estimate =
+    c.lastPressure !== null && c.flowLPerMin > 0 ? estimateSupply(settingsOf(c), { gaugePressure: c.lastPressure, flowLPerMin: c.flowLPerMin }) : null
   const openReplace = c.replaceTaskId === null ? null : await openTask(c.replaceTaskId)
   return {
-    id: c.id, code: c.code, label: c.label, method: c.method, unit: pressureUnitFor(settingsOf(c)), reservePressure: c.reservePressure,
-    lastPressure: c.lastPressure, flowLPerMin: c.flowLPerMin, lastReadAt: c.lastReadAt?.toISOString() ?? null,
+    id: c.id,
+    code: c.code,
+    label: c.label,
+    method: c.method,
+    unit: pressureUnitFor(settingsOf(c)),
+    reservePressure: c.reservePressure,
+    lastPressure: c.lastPressure,
+    flowLPerMin: c.flowLPerMin,
+    lastReadAt: c.lastReadAt?.toISOString() ?? null,
     gasLeftL: estimate ? Math.round(estimate.gasLeftL) : null,
     hoursToReserve: estimate ? Math.round(estimate.hoursToReserve * 10) / 10 : null,
     level: levelOf(estimate?.hoursToReserve ?? null, minHours),
@@ -75,12 +88,27 @@ async function raiseReplaceTask(c: CylinderRow, status: CylinderStatus, zone: st
   const due = DateTime.now().setZone(zone).plus({ minutes: 30 })
   const critical = status.level === 'critical'
   const task = await createTask({
-    routineId: null, eventId: null, title: replaceTitle(c), category: 'life_support',
+    routineId: null,
+    eventId: null,
+    title: replaceTitle(c),
+    category: 'life_support',
     instructions: `${status.hoursToReserve} h of oxygen left to the reserve pressure at ${c.flowLPerMin} L/min. Change over to a full cylinder and record the new pressure.`,
-    priority: critical ? 'welfare_critical' : 'routine', targetKind: 'facility', targetId: 0, tankId: null, areaId: null,
-    localDate: due.toISODate()!, localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"), occurrenceStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
-    dueAt: due.toJSDate(), windowStartAt: new Date(), graceUntil: due.plus({ minutes: 30 }).toJSDate(), durationMinutes: 15,
-    status: 'open', assigneeId: null, requiredReadings: [], version: 1,
+    priority: critical ? 'welfare_critical' : 'routine',
+    targetKind: 'facility',
+    targetId: 0,
+    tankId: null,
+    areaId: null,
+    localDate: due.toISODate()!,
+    localStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+    occurrenceStart: due.toFormat("yyyy-MM-dd'T'HH:mm:ss"),
+    dueAt: due.toJSDate(),
+    windowStartAt: new Date(),
+    graceUntil: due.plus({ minutes: 30 }).toJSDate(),
+    durationMinutes: 15,
+    status: 'open',
+    assigneeId: null,
+    requiredReadings: [],
+    version: 1,
   })
   await repo().update(c.id, { replaceTaskId: task.id })
   if (critical) {

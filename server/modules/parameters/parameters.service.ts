@@ -4,8 +4,14 @@ import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import { LimitEntity, ParameterEntity } from './parameter.entities'
 
-export const listParameters = (): Promise<Parameter[]> => db().getRepository(ParameterEntity).find({ order: { id: 'ASC' } })
-export const listLimits = (): Promise<Limit[]> => db().getRepository(LimitEntity).find({ order: { parameterKey: 'ASC', scope: 'ASC' } })
+export const listParameters = (): Promise<Parameter[]> =>
+  db()
+    .getRepository(ParameterEntity)
+    .find({ order: { id: 'ASC' } })
+export const listLimits = (): Promise<Limit[]> =>
+  db()
+    .getRepository(LimitEntity)
+    .find({ order: { parameterKey: 'ASC', scope: 'ASC' } })
 
 /** Sets the limits for one parameter at one scope, replacing what was there. */
 export async function upsertLimit(data: LimitInput): Promise<Limit> {

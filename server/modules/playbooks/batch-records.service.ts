@@ -21,7 +21,14 @@ export async function addBatchRecord(batchId: number, person: Person, { eventId,
   let stored: Record<string, unknown> = { ...data }
   if (data.kind === 'transport_box') {
     const facility = await getFacility()
-    stored = { ...data, ...compareWater({ tempC: data.tempC, pH: data.pH, doMgL: data.doMgL }, { tempC: data.receivingTempC, pH: data.receivingPH }, facility.arrivalTempDiffLimitC) }
+    stored = {
+      ...data,
+      ...compareWater(
+        { tempC: data.tempC, pH: data.pH, doMgL: data.doMgL },
+        { tempC: data.receivingTempC, pH: data.receivingPH },
+        facility.arrivalTempDiffLimitC,
+      ),
+    }
   }
   if (data.kind === 'transport_water') {
     let nh3: number | null
@@ -43,7 +50,17 @@ export async function addBatchRecord(batchId: number, person: Person, { eventId,
 }
 
 export async function listBatchRecords(batchId: number): Promise<BatchRecord[]> {
-  const rows = await db().getRepository(BatchRecordEntity).find({ where: { batchId }, order: { createdAt: 'ASC' } })
+  const rows = await db()
+    .getRepository(BatchRecordEntity)
+    .find({ where: { batchId }, order: { createdAt: 'ASC' } })
   const ctx = await loadTaskContext()
-  return rows.map((r) => ({ id: r.id, batchId: r.batchId, eventId: r.eventId, kind: r.kind, data: r.data, personName: ctx.names.get(r.personId) ?? 'Unknown', createdAt: r.createdAt.toISOString() }))
+  return rows.map((r) => ({
+    id: r.id,
+    batchId: r.batchId,
+    eventId: r.eventId,
+    kind: r.kind,
+    data: r.data,
+    personName: ctx.names.get(r.personId) ?? 'Unknown',
+    createdAt: r.createdAt.toISOString(),
+  }))
 }

@@ -9,9 +9,10 @@ export function planEventTasks(event: EventRow, playbook: PlaybookRow, tankIds: 
   const tanks = tankIds.map((id) => cat.tanks.get(id)).filter((t) => !!t)
   const rows: NewTask[] = []
   for (const step of playbook.steps) {
-    const targets = step.perTank || !tanks.length
-      ? tanks.map((t) => ({ kind: 'tank' as const, id: t.id, tankId: t.id, areaId: t.areaId }))
-      : [{ kind: 'tank' as const, id: tanks[0].id, tankId: tanks[0].id, areaId: tanks[0].areaId }]
+    const targets =
+      step.perTank || !tanks.length
+        ? tanks.map((t) => ({ kind: 'tank' as const, id: t.id, tankId: t.id, areaId: t.areaId }))
+        : [{ kind: 'tank' as const, id: tanks[0].id, tankId: tanks[0].id, areaId: tanks[0].areaId }]
     for (const occ of stepOccurrences(step, event.localStart, zone)) {
       for (const target of targets) {
         rows.push({

@@ -65,8 +65,16 @@ export async function startEvent(data: ParsedEventInput, person: Person): Promis
   const fastingHours = FASTING_KINDS.includes(playbook.kind) ? (data.fastingHours ?? playbook.fastingHours) : 0
   const saved = await db().transaction(async (manager) => {
     const row = await manager.getRepository(EventEntity).save({
-      playbookId: playbook.id, kind: playbook.kind, title: data.title, tankIds: ids, batchId: data.batchId, notes: data.notes,
-      status: 'planned' as const, createdById: person.id, version: 1, ...timing(data.localStart, cat.facility.timeZone, fastingHours),
+      playbookId: playbook.id,
+      kind: playbook.kind,
+      title: data.title,
+      tankIds: ids,
+      batchId: data.batchId,
+      notes: data.notes,
+      status: 'planned' as const,
+      createdById: person.id,
+      version: 1,
+      ...timing(data.localStart, cat.facility.timeZone, fastingHours),
     })
     const rows = planEventTasks(row, playbook, ids, cat)
     await createEventTasks(rows)
@@ -87,7 +95,13 @@ export async function updateEvent(id: number, data: UpdateEventInput): Promise<F
   const fastingHours = current.fastingFrom && current.fastingTo ? (current.fastingTo.getTime() - current.fastingFrom.getTime()) / 3_600_000 : 0
   const hours = data.fastingHours === undefined ? fastingHours : (data.fastingHours ?? 0)
   await releaseFeedsForEvent(current)
-  const next: EventRow = { ...current, tankIds: ids, notes: data.notes ?? current.notes, version: current.version + 1, ...timing(data.localStart ?? current.localStart, cat.facility.timeZone, FASTING_KINDS.includes(current.kind) ? hours : 0) }
+  const next: EventRow = {
+    ...current,
+    tankIds: ids,
+    notes: data.notes ?? current.notes,
+    version: current.version + 1,
+    ...timing(data.localStart ?? current.localStart, cat.facility.timeZone, FASTING_KINDS.includes(current.kind) ? hours : 0),
+  }
   await db().transaction(async (manager) => {
     await manager.getRepository(EventEntity).save(next)
     await removeUntouchedEventTasks(id)

@@ -22,7 +22,9 @@ export async function releaseFeedsForEvent(event: EventRow, now = new Date()): P
 
 /** Re-applies every planned event's fasting window (new feeding tasks may have been materialised). */
 export async function holdFeedsForAllEvents(): Promise<number> {
-  const events = await db().getRepository(EventEntity).find({ where: { status: 'planned' } })
+  const events = await db()
+    .getRepository(EventEntity)
+    .find({ where: { status: 'planned' } })
   let held = 0
   for (const e of events) if (e.fastingTo && e.fastingTo > new Date()) held += await holdFeedsForEvent(e)
   return held

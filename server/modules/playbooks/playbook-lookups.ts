@@ -6,11 +6,22 @@ import { BatchRecordEntity, EventEntity, type BatchRecordRow, type EventRow } fr
 
 /** The latest records of these batches, newest first. */
 export const latestBatchRecords = async (batchIds: readonly number[], take: number): Promise<BatchRecordRow[]> =>
-  batchIds.length ? db().getRepository(BatchRecordEntity).find({ where: { batchId: In([...batchIds]) }, order: { createdAt: 'DESC' }, take }) : []
+  batchIds.length
+    ? db()
+        .getRepository(BatchRecordEntity)
+        .find({ where: { batchId: In([...batchIds]) }, order: { createdAt: 'DESC' }, take })
+    : []
 
 /** The events among the latest `scanned` (by start, newest first) that involve this tank. */
 export const latestEventsOfTank = async (tankId: number, scanned: number): Promise<EventRow[]> =>
-  (await db().getRepository(EventEntity).find({ order: { startsAt: 'DESC' }, take: scanned })).filter((e) => e.tankIds.includes(tankId))
+  (
+    await db()
+      .getRepository(EventEntity)
+      .find({ order: { startsAt: 'DESC' }, take: scanned })
+  ).filter((e) => e.tankIds.includes(tankId))
 
 /** Events that still stand (planned or ended, not cancelled), for the calendar. */
-export const eventsNotCancelled = () => db().getRepository(EventEntity).find({ where: { status: Not('cancelled') } })
+export const eventsNotCancelled = () =>
+  db()
+    .getRepository(EventEntity)
+    .find({ where: { status: Not('cancelled') } })

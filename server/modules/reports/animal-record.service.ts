@@ -44,12 +44,22 @@ export async function stockReport(from: string, to: string, batchId?: number): P
   for (const id of [...new Set(figures.map((f) => f.batchId))]) {
     const batch = batchOf.get(id)
     const lines = figures.filter((f) => f.batchId === id)
-    const line = (f: Omit<TankPeriodFigures, 'batchId' | 'tankId'>, tankId: number | null, balanced: boolean): StockReportRow => ({
-      batchId: id, batchCode: batch?.code ?? `#${id}`, species: batch?.species ?? '', tankId, tank: tankId === null ? 'All tanks' : (tankCode.get(tankId) ?? `tank ${tankId}`),
-      ...Object.fromEntries(NUMBERS.map((k) => [k, f[k]])), diedByCause: causes(f.diedByCause), balanced,
-    }) as StockReportRow
+    const line = (f: Omit<TankPeriodFigures, 'batchId' | 'tankId'>, tankId: number | null, balanced: boolean): StockReportRow =>
+      ({
+        batchId: id,
+        batchCode: batch?.code ?? `#${id}`,
+        species: batch?.species ?? '',
+        tankId,
+        tank: tankId === null ? 'All tanks' : (tankCode.get(tankId) ?? `tank ${tankId}`),
+        ...Object.fromEntries(NUMBERS.map((k) => [k, f[k]])),
+        diedByCause: causes(f.diedByCause),
+        balanced,
+      }) as StockReportRow
     const tankLines = lines.map((f) => line(f, f.tankId, f.closing === (held.get(balanceKey(id, f.tankId)) ?? 0)))
-    const total = { ...Object.fromEntries(NUMBERS.map((k) => [k, lines.reduce((s, f) => s + f[k], 0)])), diedByCause: sumCauses(lines) } as Omit<TankPeriodFigures, 'batchId' | 'tankId'>
+    const total = { ...Object.fromEntries(NUMBERS.map((k) => [k, lines.reduce((s, f) => s + f[k], 0)])), diedByCause: sumCauses(lines) } as Omit<
+      TankPeriodFigures,
+      'batchId' | 'tankId'
+    >
     const onRegister = [...held.entries()].filter(([k]) => k.startsWith(`${id}:`)).reduce((s, [, n]) => s + n, 0)
     const arithmetic = total.opening + total.arrived - total.died - total.culled - total.used - total.dispatched + total.corrected
     const balanced = total.movedIn === total.movedOut && total.closing === arithmetic && total.closing === onRegister && tankLines.every((t) => t.balanced)
@@ -73,10 +83,22 @@ export async function incidentReport(from: string, to: string, now = new Date())
   return found.map((i) => {
     const [welfare, committee, report] = deadlineStatuses(i, now.toISOString())
     return {
-      id: i.id, title: i.title, status: i.status, source: i.source, noticedAt: i.noticedAt, tanks: i.tankIds.map((t) => codes.get(t) ?? `tank ${t}`).join(', '), dead: i.dead,
-      welfareDueAt: welfare.dueAt, welfareDoneAt: welfare.doneAt ?? '', welfare: welfare.state,
-      committeeDueAt: committee.dueAt, committeeDoneAt: committee.doneAt ?? '', committee: committee.state,
-      reportDueAt: report.dueAt, reportDoneAt: report.doneAt ?? '', report: report.state,
+      id: i.id,
+      title: i.title,
+      status: i.status,
+      source: i.source,
+      noticedAt: i.noticedAt,
+      tanks: i.tankIds.map((t) => codes.get(t) ?? `tank ${t}`).join(', '),
+      dead: i.dead,
+      welfareDueAt: welfare.dueAt,
+      welfareDoneAt: welfare.doneAt ?? '',
+      welfare: welfare.state,
+      committeeDueAt: committee.dueAt,
+      committeeDoneAt: committee.doneAt ?? '',
+      committee: committee.state,
+      reportDueAt: report.dueAt,
+      reportDoneAt: report.doneAt ?? '',
+      report: report.state,
     }
   })
 }

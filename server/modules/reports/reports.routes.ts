@@ -1,7 +1,15 @@
 import { Router } from 'express'
 import { AnimalReportQuerySchema, INCIDENT_REPORT_COLUMNS, ReportRangeSchema, STOCK_REPORT_COLUMNS } from '#shared/schemas/animal-report'
 import { IdParamSchema } from '#shared/schemas/facility'
-import { AUDIT_COLUMNS, AuditQuerySchema, COMPLIANCE_COLUMNS, ComplianceQuerySchema, RESPONSE_COLUMNS, WELFARE_COLUMNS, WelfareQuerySchema } from '#shared/schemas/report'
+import {
+  AUDIT_COLUMNS,
+  AuditQuerySchema,
+  COMPLIANCE_COLUMNS,
+  ComplianceQuerySchema,
+  RESPONSE_COLUMNS,
+  WELFARE_COLUMNS,
+  WelfareQuerySchema,
+} from '#shared/schemas/report'
 import { TankReadingsQuerySchema } from '#shared/schemas/tank-page'
 import { toCsv } from '../../lib/csv'
 import { auditTrail } from '../audit/audit-trail'
@@ -14,7 +22,13 @@ export const reportsRouter = Router()
 const readers = requireRole('manager', 'supervisor', 'observer')
 const everyone = requireRole('manager', 'supervisor', 'technician', 'observer')
 
-function send<Row extends object>(res: import('express').Response, format: 'json' | 'csv', name: string, rows: Row[], columns: ReadonlyArray<keyof Row & string>) {
+function send<Row extends object>(
+  res: import('express').Response,
+  format: 'json' | 'csv',
+  name: string,
+  rows: Row[],
+  columns: ReadonlyArray<keyof Row & string>,
+) {
   if (format === 'json') return res.json(rows)
   res.setHeader('content-type', 'text/csv; charset=utf-8')
   res.setHeader('content-disposition', `attachment; filename="${name}.csv"`)

@@ -12,8 +12,15 @@ export async function complianceReport(from: string, to: string, by: GroupBy, pe
   const rows = await tasksBetween(from, to)
   const ctx = await loadTaskContext()
   const groupOf = (t: TaskRow) =>
-    by === 'category' ? t.category : by === 'area' ? (ctx.cat.areas.get(t.areaId ?? -1)?.name ?? 'No area') : (ctx.names.get(t.completedById ?? t.assigneeId ?? -1) ?? 'Unassigned')
-  return complianceRows(rows.map((t) => ({ localDate: t.localDate, status: t.status, lateMinutes: t.lateMinutes, group: groupOf(t) })), period)
+    by === 'category'
+      ? t.category
+      : by === 'area'
+        ? (ctx.cat.areas.get(t.areaId ?? -1)?.name ?? 'No area')
+        : (ctx.names.get(t.completedById ?? t.assigneeId ?? -1) ?? 'Unassigned')
+  return complianceRows(
+    rows.map((t) => ({ localDate: t.localDate, status: t.status, lateMinutes: t.lateMinutes, group: groupOf(t) })),
+    period,
+  )
 }
 
 /** How fast flags and escalations were answered: alert to acknowledgement, flag to recheck done. */
@@ -27,11 +34,17 @@ export async function responseReport(from: string, to: string): Promise<Response
     const alert = alerts.find((a) => a.taskId === t.id)
     const recheck = rechecks.find((r) => r.recheckOfTaskId === t.id)
     return {
-      date: t.localDate, time: t.localStart.slice(11, 16), task: t.title, where: targetLabel(t.targetKind, t.targetId, ctx.cat),
-      flag: t.flag ?? (t.status === 'missed' ? 'missed' : ''), alert: alert?.kind ?? '', alertStartedAt: alert?.startedAt.toISOString() ?? '',
+      date: t.localDate,
+      time: t.localStart.slice(11, 16),
+      task: t.title,
+      where: targetLabel(t.targetKind, t.targetId, ctx.cat),
+      flag: t.flag ?? (t.status === 'missed' ? 'missed' : ''),
+      alert: alert?.kind ?? '',
+      alertStartedAt: alert?.startedAt.toISOString() ?? '',
       acknowledgedBy: alert?.acknowledgedById ? (ctx.names.get(alert.acknowledgedById) ?? '') : '',
       minutesToAcknowledge: minutesBetween(alert?.startedAt, alert?.acknowledgedAt),
-      recheckStatus: recheck?.status ?? '', minutesToRecheck: minutesBetween(t.completedAt, recheck?.completedAt),
+      recheckStatus: recheck?.status ?? '',
+      minutesToRecheck: minutesBetween(t.completedAt, recheck?.completedAt),
     }
   })
 }
@@ -44,8 +57,14 @@ export async function welfareReport(from: string, to: string, tankIds: number[])
   return tasks.map((t) => {
     const own = readings.filter((r) => r.taskId === t.id && !r.supersededAt)
     return {
-      date: t.localDate, due: t.localStart.slice(11, 16), task: t.title, tank: targetLabel(t.targetKind, t.targetId, ctx.cat), status: t.status,
-      doneAt: t.completedAt?.toISOString() ?? '', doneBy: t.completedById ? (ctx.names.get(t.completedById) ?? '') : '', lateMinutes: t.lateMinutes ?? '',
+      date: t.localDate,
+      due: t.localStart.slice(11, 16),
+      task: t.title,
+      tank: targetLabel(t.targetKind, t.targetId, ctx.cat),
+      status: t.status,
+      doneAt: t.completedAt?.toISOString() ?? '',
+      doneBy: t.completedById ? (ctx.names.get(t.completedById) ?? '') : '',
+      lateMinutes: t.lateMinutes ?? '',
       readings: own.map((r) => `${r.parameterKey}=${r.value} ${r.unit} (${r.band})${r.amendmentId ? ' amended' : ''}`).join('; '),
       flag: t.flag ?? '',
     }

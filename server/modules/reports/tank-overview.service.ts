@@ -14,7 +14,15 @@ export async function tankOverview(tankId: number): Promise<TankOverview> {
   const tank = ctx.cat.tanks.get(tankId)
   if (!tank) throw notFound('That tank')
   const batches = [...ctx.cat.batches.values()].filter((b) => b.tankIds.includes(tankId))
-  const [parameters, limits, tasks, records] = await Promise.all([listParameters(), listLimits(), latestTasksOfTank(tankId, 40), latestBatchRecords(batches.map((b) => b.id), 20)])
+  const [parameters, limits, tasks, records] = await Promise.all([
+    listParameters(),
+    listLimits(),
+    latestTasksOfTank(tankId, 40),
+    latestBatchRecords(
+      batches.map((b) => b.id),
+      20,
+    ),
+  ])
   const events = await latestEventsOfTank(tankId, 100)
   const where = { systemId: tank.systemId, batchIds: batches.filter((b) => b.status === 'active' || b.status === 'quarantine').map((b) => b.id) }
   return {
@@ -25,14 +33,31 @@ export async function tankOverview(tankId: number): Promise<TankOverview> {
     batchRecords: records.map((r) => ({ id: r.id, batchId: r.batchId, kind: r.kind, data: r.data, createdAt: r.createdAt.toISOString() })),
     limits: parameters.map((p) => {
       const l = pickLimit(limits, p.key, where)
-      return { key: p.key, name: p.name, unit: p.unit, derived: p.derived, scope: l?.scope ?? null, okMin: l?.okMin ?? null, okMax: l?.okMax ?? null, criticalMin: l?.criticalMin ?? null, criticalMax: l?.criticalMax ?? null }
+      return {
+        key: p.key,
+        name: p.name,
+        unit: p.unit,
+        derived: p.derived,
+        scope: l?.scope ?? null,
+        okMin: l?.okMin ?? null,
+        okMax: l?.okMax ?? null,
+        criticalMin: l?.criticalMin ?? null,
+        criticalMax: l?.criticalMax ?? null,
+      }
     }),
     recentTasks: tasks.map((t) => toTask(t, ctx)),
     events: events.map((e) => ({ id: e.id, title: e.title, kind: e.kind, localStart: e.localStart, status: e.status })),
   }
 }
 
-const toTrendReading = (r: ReadingRow): TrendReading => ({ parameterKey: r.parameterKey, value: r.value, unit: r.unit, band: r.band, derived: r.derived, takenAt: r.takenAt.toISOString() })
+const toTrendReading = (r: ReadingRow): TrendReading => ({
+  parameterKey: r.parameterKey,
+  value: r.value,
+  unit: r.unit,
+  band: r.band,
+  derived: r.derived,
+  takenAt: r.takenAt.toISOString(),
+})
 
 /** Readings for trend charts: the tank's own, its system's (chemistry sampled at the loop), and deaths per day. */
 export async function tankReadings(tankId: number, from: Date, to: Date): Promise<TankReadings> {

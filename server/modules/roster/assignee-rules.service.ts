@@ -26,13 +26,17 @@ export async function applyAssigneeRules(from: string, to: string, opts: { routi
   if (!withRoutine.length) return 0
   const routines = await assigneeRulesOf([...new Set(withRoutine.map((t) => t.routineId!))])
   const [shifts, duties, people, cat] = await Promise.all([
-    db().getRepository(ShiftEntity).find({ where: { date: Between(from, to) } }),
+    db()
+      .getRepository(ShiftEntity)
+      .find({ where: { date: Between(from, to) } }),
     db().getRepository(OnCallEntity).find(),
     listStaff(),
     loadCatalogue(),
   ])
   const roleOf = new Map(people.map((p) => [p.id, p.role]))
-  const areaRank = new Map([...cat.areas.values()].sort((a, b) => Number(a.quarantine) - Number(b.quarantine) || a.roundOrder - b.roundOrder).map((a, i) => [a.id, i]))
+  const areaRank = new Map(
+    [...cat.areas.values()].sort((a, b) => Number(a.quarantine) - Number(b.quarantine) || a.roundOrder - b.roundOrder).map((a, i) => [a.id, i]),
+  )
   const walkKey = (t: TaskRow) => `${String(areaRank.get(t.areaId ?? -1) ?? 99).padStart(3, '0')}|${t.targetKind}|${String(t.targetId).padStart(8, '0')}`
 
   // Each day's distinct stops in walking order, so each person gets a contiguous stretch.
@@ -51,7 +55,9 @@ export async function applyAssigneeRules(from: string, to: string, opts: { routi
       assignee = duties.filter((d) => d.startsAt <= task.dueAt && d.endsAt > task.dueAt).sort((a, b) => +b.startsAt - +a.startsAt)[0]?.personId ?? null
     } else {
       const time = task.localStart.slice(11, 16)
-      const candidates = [...new Set(shifts.filter((s) => s.date === task.localDate && covers(s, time) && roleOf.get(s.personId) === rule.role).map((s) => s.personId))].sort((a, b) => a - b)
+      const candidates = [
+        ...new Set(shifts.filter((s) => s.date === task.localDate && covers(s, time) && roleOf.get(s.personId) === rule.role).map((s) => s.personId)),
+      ].sort((a, b) => a - b)
       if (candidates.length) {
         const stops = stopsByDate.get(task.localDate)!
         const index = stops.get(walkKey(task))!

@@ -10,12 +10,7 @@ const OPEN = new Set(['planned', 'open', 'overdue'])
 /** Per day in a range: task counts by status and category, who is on shift and on call. */
 export async function getCalendar(from: string, to: string): Promise<CalendarDay[]> {
   const zone = (await getFacility()).timeZone
-  const [counts, shifts, duties, events] = await Promise.all([
-    taskCountsByDay(from, to),
-    listShifts(from, to),
-    listOnCall(from, to),
-    eventsNotCancelled(),
-  ])
+  const [counts, shifts, duties, events] = await Promise.all([taskCountsByDay(from, to), listShifts(from, to), listOnCall(from, to), eventsNotCancelled()])
   const days: CalendarDay[] = []
   for (let d = DateTime.fromISO(from, { zone }); d.toISODate()! <= to; d = d.plus({ days: 1 })) {
     const date = d.toISODate()!
@@ -27,7 +22,13 @@ export async function getCalendar(from: string, to: string): Promise<CalendarDay
     for (const c of own) byCategory[c.category] = (byCategory[c.category] ?? 0) + Number(c.n)
     days.push({
       date,
-      counts: { done: sum((s) => s === 'done'), open: sum((s) => OPEN.has(s)), missed: sum((s) => s === 'missed'), held: sum((s) => s === 'held'), skipped: sum((s) => s === 'skipped') },
+      counts: {
+        done: sum((s) => s === 'done'),
+        open: sum((s) => OPEN.has(s)),
+        missed: sum((s) => s === 'missed'),
+        held: sum((s) => s === 'held'),
+        skipped: sum((s) => s === 'skipped'),
+      },
       byCategory,
       onShift: [...new Set(shifts.filter((s) => s.date === date).map((s) => s.personName))],
       onCall: [...new Set(duties.filter((x) => Date.parse(x.startsAt) < end && Date.parse(x.endsAt) > start).map((x) => x.personName))],

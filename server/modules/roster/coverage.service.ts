@@ -10,12 +10,7 @@ export async function rosterCoverage(from: string, to: string): Promise<Coverage
   const zone = (await getFacility()).timeZone
   const dates: string[] = []
   for (let d = DateTime.fromISO(from); d <= DateTime.fromISO(to); d = d.plus({ days: 1 })) dates.push(d.toISODate()!)
-  const [shifts, duties, rows, ctx] = await Promise.all([
-    listShifts(from, to),
-    listOnCall(from, to),
-    tasksStillToDo(from, to),
-    loadTaskContext(),
-  ])
+  const [shifts, duties, rows, ctx] = await Promise.all([listShifts(from, to), listOnCall(from, to), tasksStillToDo(from, to), loadTaskContext()])
   return coverageWarnings({
     dates,
     shifts,
@@ -25,8 +20,13 @@ export async function rosterCoverage(from: string, to: string): Promise<Coverage
       return [start.toMillis(), start.plus({ days: 1 }).toMillis()] as const
     },
     tasks: rows.map((t) => ({
-      id: t.id, date: t.localDate, time: t.localStart.slice(11, 16), title: t.title, priority: t.priority,
-      assigneeId: t.assigneeId, assigneeName: t.assigneeId ? (ctx.names.get(t.assigneeId) ?? null) : null,
+      id: t.id,
+      date: t.localDate,
+      time: t.localStart.slice(11, 16),
+      title: t.title,
+      priority: t.priority,
+      assigneeId: t.assigneeId,
+      assigneeName: t.assigneeId ? (ctx.names.get(t.assigneeId) ?? null) : null,
     })),
   })
 }

@@ -36,16 +36,43 @@ export async function getOnCallSummary() {
     now: duty ? { ...duty, phone: holder?.phone ?? null, email: holder?.email ?? null } : null,
     next: next ?? null,
     weekend: { ...weekend, tasks: weekendTasks.map((t) => toTask(t, ctx)) },
-    openFlags: recentFlags.map((f) => ({ task: toTask(f, ctx), recheck: rechecks.find((r) => r.recheckOfTaskId === f.id) ? toTask(rechecks.find((r) => r.recheckOfTaskId === f.id)!, ctx) : null })),
-    alerts: alerts.map((a) => ({ id: a.id, kind: a.kind, detail: a.detail, startedAt: a.startedAt.toISOString(), task: alertTasks.find((t) => t.id === a.taskId) ? toTask(alertTasks.find((t) => t.id === a.taskId)!, ctx) : null })),
+    openFlags: recentFlags.map((f) => ({
+      task: toTask(f, ctx),
+      recheck: rechecks.find((r) => r.recheckOfTaskId === f.id)
+        ? toTask(
+            rechecks.find((r) => r.recheckOfTaskId === f.id)!,
+            ctx,
+          )
+        : null,
+    })),
+    alerts: alerts.map((a) => ({
+      id: a.id,
+      kind: a.kind,
+      detail: a.detail,
+      startedAt: a.startedAt.toISOString(),
+      task: alertTasks.find((t) => t.id === a.taskId)
+        ? toTask(
+            alertTasks.find((t) => t.id === a.taskId)!,
+            ctx,
+          )
+        : null,
+    })),
     notes: await listHandoverNotes(),
   }
 }
 
 export async function listHandoverNotes(): Promise<HandoverNote[]> {
-  const rows = await db().getRepository(HandoverNoteEntity).find({ order: { createdAt: 'DESC' }, take: 10 })
+  const rows = await db()
+    .getRepository(HandoverNoteEntity)
+    .find({ order: { createdAt: 'DESC' }, take: 10 })
   const ctx = await loadTaskContext()
-  return rows.map((r) => ({ id: r.id, personId: r.personId, personName: ctx.names.get(r.personId) ?? 'Unknown', text: r.text, createdAt: r.createdAt.toISOString() }))
+  return rows.map((r) => ({
+    id: r.id,
+    personId: r.personId,
+    personName: ctx.names.get(r.personId) ?? 'Unknown',
+    text: r.text,
+    createdAt: r.createdAt.toISOString(),
+  }))
 }
 
 export async function addHandoverNote(person: Person, { text }: HandoverNoteInput): Promise<HandoverNote> {

@@ -2,7 +2,13 @@ import { Router } from 'express'
 import { DateTime } from 'luxon'
 import { IdParamSchema } from '#shared/schemas/facility'
 import {
-  HandoverNoteInputSchema, OnCallInputSchema, RosterRangeQuerySchema, RotationInputSchema, ShiftInputSchema, ShiftPatchSchema, ShiftPatternInputSchema,
+  HandoverNoteInputSchema,
+  OnCallInputSchema,
+  RosterRangeQuerySchema,
+  RotationInputSchema,
+  ShiftInputSchema,
+  ShiftPatchSchema,
+  ShiftPatternInputSchema,
 } from '#shared/schemas/roster'
 import { recordChange } from '../../realtime/change-outbox'
 import { requireRole, signedIn } from '../auth/require-role'

@@ -1,8 +1,14 @@
 import { DateTime } from 'luxon'
 import { Between, LessThan, MoreThan } from 'typeorm'
 import {
-  ShiftInputSchema, WEEKDAYS,
-  type OnCallDuty, type OnCallInput, type Shift, type ShiftInput, type ShiftPatch, type ShiftPatternInput,
+  ShiftInputSchema,
+  WEEKDAYS,
+  type OnCallDuty,
+  type OnCallInput,
+  type Shift,
+  type ShiftInput,
+  type ShiftPatch,
+  type ShiftPatternInput,
 } from '#shared/schemas/roster'
 import { audit } from '../audit/audit.service'
 import { db } from '../../db/data-source'
@@ -13,12 +19,19 @@ import { OnCallEntity, ShiftEntity, type OnCallRow, type ShiftRow } from './rost
 
 const toShift = (row: ShiftRow, n: Map<number, string>): Shift => ({ ...row, personName: n.get(row.personId) ?? 'Unknown' })
 const toDuty = (row: OnCallRow, n: Map<number, string>): OnCallDuty => ({
-  id: row.id, personId: row.personId, personName: n.get(row.personId) ?? 'Unknown', fromDate: row.fromDate, toDate: row.toDate,
-  startsAt: row.startsAt.toISOString(), endsAt: row.endsAt.toISOString(),
+  id: row.id,
+  personId: row.personId,
+  personName: n.get(row.personId) ?? 'Unknown',
+  fromDate: row.fromDate,
+  toDate: row.toDate,
+  startsAt: row.startsAt.toISOString(),
+  endsAt: row.endsAt.toISOString(),
 })
 
 export async function listShifts(from: string, to: string): Promise<Shift[]> {
-  const rows = await db().getRepository(ShiftEntity).find({ where: { date: Between(from, to) }, order: { date: 'ASC', start: 'ASC' } })
+  const rows = await db()
+    .getRepository(ShiftEntity)
+    .find({ where: { date: Between(from, to) }, order: { date: 'ASC', start: 'ASC' } })
   const n = await names()
   return rows.map((r) => toShift(r, n))
 }
@@ -81,7 +94,9 @@ export async function dutyInstants(fromDate: string, toDate: string) {
 }
 
 export async function listOnCall(from: string, to: string): Promise<OnCallDuty[]> {
-  const rows = await db().getRepository(OnCallEntity).find({ where: { fromDate: LessThan(to + 'z'), toDate: MoreThan(from) }, order: { startsAt: 'ASC' } })
+  const rows = await db()
+    .getRepository(OnCallEntity)
+    .find({ where: { fromDate: LessThan(to + 'z'), toDate: MoreThan(from) }, order: { startsAt: 'ASC' } })
   const n = await names()
   return rows.map((r) => toDuty(r, n))
 }
@@ -89,7 +104,9 @@ export async function listOnCall(from: string, to: string): Promise<OnCallDuty[]
 export async function createOnCall(data: OnCallInput): Promise<OnCallDuty> {
   const person = await assertPerson(data.personId)
   if (!person.onCallEligible) throw validationError(`${person.name} is not set up to hold on-call duty.`, { personId: ['Not eligible for on-call'] })
-  const row = await db().getRepository(OnCallEntity).save({ ...data, ...(await dutyInstants(data.fromDate, data.toDate)) })
+  const row = await db()
+    .getRepository(OnCallEntity)
+    .save({ ...data, ...(await dutyInstants(data.fromDate, data.toDate)) })
   await audit('on_call', row.id, 'create', null, row)
   return toDuty(row, await names())
 }

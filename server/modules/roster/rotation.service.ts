@@ -19,7 +19,9 @@ export async function generateRotation(data: RotationInput): Promise<RotationRes
   const people = await findPeople(data.personIds)
   const refused = people.filter((p) => !p.active || !p.onCallEligible)
   if (people.length !== data.personIds.length || refused.length) {
-    throw validationError('Everyone in a rotation must be active and eligible for on-call.', { personIds: refused.map((p) => `${p.name} cannot hold on-call duty`) })
+    throw validationError('Everyone in a rotation must be active and eligible for on-call.', {
+      personIds: refused.map((p) => `${p.name} cannot hold on-call duty`),
+    })
   }
   const plan = planRotation(data.personIds, data.weeks)
   const end = start.plus({ weeks: data.weeks })

@@ -16,11 +16,43 @@ export interface WriteExtras {
 
 /** The row a parsed movement input becomes (a correction's tank and signed change go in toTankId and count). */
 export function rowFor(input: ParsedMovementInput, personId: number): Omit<MovementRow, 'id' | 'createdAt'> {
-  const none = { fromTankId: null, toTankId: null, meanWeightG: null, origin: null, permitRef: null, healthCertificateRef: null, transportWater: null, destination: null, reason: null, cause: null, causeText: null, necropsy: false, correctsId: null }
-  const common = { ...none, batchId: input.batchId, kind: input.kind, occurredAt: input.occurredAt ? new Date(input.occurredAt) : new Date(), note: input.note ?? null, personId, completionId: null, sourceKey: null }
+  const none = {
+    fromTankId: null,
+    toTankId: null,
+    meanWeightG: null,
+    origin: null,
+    permitRef: null,
+    healthCertificateRef: null,
+    transportWater: null,
+    destination: null,
+    reason: null,
+    cause: null,
+    causeText: null,
+    necropsy: false,
+    correctsId: null,
+  }
+  const common = {
+    ...none,
+    batchId: input.batchId,
+    kind: input.kind,
+    occurredAt: input.occurredAt ? new Date(input.occurredAt) : new Date(),
+    note: input.note ?? null,
+    personId,
+    completionId: null,
+    sourceKey: null,
+  }
   switch (input.kind) {
     case 'arrival':
-      return { ...common, toTankId: input.toTankId, count: input.count, meanWeightG: input.meanWeightG ?? null, origin: input.origin, permitRef: input.permitRef ?? null, healthCertificateRef: input.healthCertificateRef ?? null, transportWater: input.transportWater ?? null }
+      return {
+        ...common,
+        toTankId: input.toTankId,
+        count: input.count,
+        meanWeightG: input.meanWeightG ?? null,
+        origin: input.origin,
+        permitRef: input.permitRef ?? null,
+        healthCertificateRef: input.healthCertificateRef ?? null,
+        transportWater: input.transportWater ?? null,
+      }
     case 'transfer':
     case 'grading':
       return { ...common, fromTankId: input.fromTankId, toTankId: input.toTankId, count: input.count, meanWeightG: input.meanWeightG ?? null }
@@ -43,7 +75,8 @@ export function rowFor(input: ParsedMovementInput, personId: number): Omit<Movem
  */
 export async function writeMovement(manager: EntityManager, row: Omit<MovementRow, 'id' | 'createdAt'>, extras: WriteExtras = {}): Promise<MovementRow> {
   const { rows, onHand } = await lockBatchRegister(manager, row.batchId)
-  if (row.correctsId && !rows.some((r) => r.id === row.correctsId)) throw validationError('The movement it corrects is not on this batch.', { correctsId: ['Choose a movement of this batch'] })
+  if (row.correctsId && !rows.some((r) => r.id === row.correctsId))
+    throw validationError('The movement it corrects is not on this batch.', { correctsId: ['Choose a movement of this batch'] })
   const entry: LedgerEntry = { ...row, id: undefined }
   const short = applyMovement(onHand, entry)
   if (short) {
@@ -51,9 +84,16 @@ export async function writeMovement(manager: EntityManager, row: Omit<MovementRo
     const message = `Nothing was saved: the register shows ${short.onHand} fish of this batch in ${where}, so ${short.wanted} cannot be taken off. Check the count, or ask a supervisor to correct the register.`
     throw validationError(message, { [extras.field ?? (row.kind === 'correction' ? 'delta' : 'count')]: [`Only ${short.onHand} on the register here`] })
   }
-  const saved = await manager.getRepository(MovementEntity).save({ ...row, sourceKey: extras.sourceKey ?? row.sourceKey, completionId: extras.completionId ?? row.completionId })
+  const saved = await manager
+    .getRepository(MovementEntity)
+    .save({ ...row, sourceKey: extras.sourceKey ?? row.sourceKey, completionId: extras.completionId ?? row.completionId })
   const holding = [...onHand.entries()].filter(([k, n]) => k.startsWith(`${row.batchId}:`) && n > 0)
-  await updateBatchFromRegister(manager, row.batchId, holding.reduce((s, [, n]) => s + n, 0), holding.map(([k]) => Number(k.split(':')[1])))
+  await updateBatchFromRegister(
+    manager,
+    row.batchId,
+    holding.reduce((s, [, n]) => s + n, 0),
+    holding.map(([k]) => Number(k.split(':')[1])),
+  )
   return saved
 }
 

@@ -39,7 +39,9 @@ export interface RoundMortalityAssessment {
 
 /** The batch holding most fish in a tank on the register, with the register's counts. */
 async function batchInTank(tankId: number) {
-  const rows = await db().getRepository(MovementEntity).find({ where: [{ fromTankId: tankId }, { toTankId: tankId }] })
+  const rows = await db()
+    .getRepository(MovementEntity)
+    .find({ where: [{ fromTankId: tankId }, { toTankId: tankId }] })
   const onHand = balances(rows.map(toEntry))
   const held = [...onHand.entries()].filter(([k, n]) => k.endsWith(`:${tankId}`) && n > 0).sort((a, b) => b[1] - a[1])
   return held.length ? { batchId: Number(held[0][0].split(':')[0]), onHand: held[0][1] } : null
@@ -51,18 +53,36 @@ async function batchInTank(tankId: number) {
  * (a watch flag, like a reading out of its band). Refuses (nothing saved) a count the register
  * cannot hold. A tank the register shows empty keeps the count with the readings only.
  */
-export async function assessRoundMortality(tankId: number | null, dead: number | undefined, detail: RoundMortalityDetail | undefined, at: Date): Promise<RoundMortalityAssessment> {
+export async function assessRoundMortality(
+  tankId: number | null,
+  dead: number | undefined,
+  detail: RoundMortalityDetail | undefined,
+  at: Date,
+): Promise<RoundMortalityAssessment> {
   if (!tankId || !dead) return { plan: null, band: 'ok', notes: [] }
   const d = RoundMortalityDetailSchema.parse(detail ?? {})
   const settings = await getStockSettings()
-  if (![UNKNOWN_CAUSE, OTHER_CAUSE, ...settings.mortalityCauses].includes(d.cause)) throw validationError('Nothing was saved: choose a cause from the list, "unknown" or "other".', { 'mortality.cause': ['Not on the facility’s list'] })
+  if (![UNKNOWN_CAUSE, OTHER_CAUSE, ...settings.mortalityCauses].includes(d.cause))
+    throw validationError('Nothing was saved: choose a cause from the list, "unknown" or "other".', { 'mortality.cause': ['Not on the facility’s list'] })
   const code = (await tankCodes()).get(tankId) ?? `tank ${tankId}`
   const where = await batchInTank(tankId)
-  if (!where) return { plan: null, band: 'ok', notes: [`The stock register shows no fish in ${code}: the ${dead} dead are kept with the readings only. Ask a supervisor to record the arrival.`] }
+  if (!where)
+    return {
+      plan: null,
+      band: 'ok',
+      notes: [`The stock register shows no fish in ${code}: the ${dead} dead are kept with the readings only. Ask a supervisor to record the arrival.`],
+    }
   if (dead > where.onHand) {
-    throw validationError(`Nothing was saved: the register shows ${where.onHand} fish in ${code}, fewer than ${dead} dead. Check the count, or ask a supervisor to correct the register.`, { [FIELD]: [`Only ${where.onHand} on the register here`] })
+    throw validationError(
+      `Nothing was saved: the register shows ${where.onHand} fish in ${code}, fewer than ${dead} dead. Check the count, or ask a supervisor to correct the register.`,
+      { [FIELD]: [`Only ${where.onHand} on the register here`] },
+    )
   }
-  const entries = (await db().getRepository(MovementEntity).find({ where: { batchId: where.batchId } })).map((m) => ({ ...toEntry(m), occurredAt: m.occurredAt.toISOString() }))
+  const entries = (
+    await db()
+      .getRepository(MovementEntity)
+      .find({ where: { batchId: where.batchId } })
+  ).map((m) => ({ ...toEntry(m), occurredAt: m.occurredAt.toISOString() }))
   const [week] = periodFigures(entries, new Date(at.getTime() - WEEK_MS).toISOString(), new Date(at.getTime() + 1).toISOString())
   const atRisk = (week?.opening ?? 0) + (week?.arrived ?? 0)
   const before = week?.died ?? 0
@@ -70,7 +90,20 @@ export async function assessRoundMortality(tankId: number | null, dead: number |
   const weekPct = pct(before + dead)
   const overThreshold = weekPct > settings.mortalityWeekPct
   const crossedThreshold = overThreshold && pct(before) <= settings.mortalityWeekPct
-  const plan = { batchId: where.batchId, tankId, count: dead, cause: d.cause, causeText: d.causeText ?? null, necropsy: d.necropsy, overThreshold, crossedThreshold, weekPct, weekDead: before + dead, thresholdPct: settings.mortalityWeekPct, tankCode: code }
+  const plan = {
+    batchId: where.batchId,
+    tankId,
+    count: dead,
+    cause: d.cause,
+    causeText: d.causeText ?? null,
+    necropsy: d.necropsy,
+    overThreshold,
+    crossedThreshold,
+    weekPct,
+    weekDead: before + dead,
+    thresholdPct: settings.mortalityWeekPct,
+    tankCode: code,
+  }
   const notes = overThreshold ? [`${weekPct.toFixed(1)} % of the batch died in the last 7 days (the facility flags above ${settings.mortalityWeekPct} %).`] : []
   return { plan, band: overThreshold ? 'watch' : 'ok', notes }
 }
@@ -81,9 +114,27 @@ export async function writeRoundMortality(manager: EntityManager, plan: RoundMor
   return writeMovement(
     manager,
     {
-      batchId: plan.batchId, kind: 'mortality', occurredAt: source.at, fromTankId: plan.tankId, toTankId: null, count: plan.count, meanWeightG: null, origin: null, permitRef: null,
-      healthCertificateRef: null, transportWater: null, destination: null, reason: null, cause: plan.cause, causeText: plan.causeText, necropsy: plan.necropsy, correctsId: null,
-      completionId: source.completionId, sourceKey: `completion:${source.completionId}`, note: null, personId: source.personId,
+      batchId: plan.batchId,
+      kind: 'mortality',
+      occurredAt: source.at,
+      fromTankId: plan.tankId,
+      toTankId: null,
+      count: plan.count,
+      meanWeightG: null,
+      origin: null,
+      permitRef: null,
+      healthCertificateRef: null,
+      transportWater: null,
+      destination: null,
+      reason: null,
+      cause: plan.cause,
+      causeText: plan.causeText,
+      necropsy: plan.necropsy,
+      correctsId: null,
+      completionId: source.completionId,
+      sourceKey: `completion:${source.completionId}`,
+      note: null,
+      personId: source.personId,
     },
     { field: FIELD, describeTank: (id) => codes.get(id) ?? `tank ${id}` },
   )
@@ -93,22 +144,67 @@ export async function writeRoundMortality(manager: EntityManager, plan: RoundMor
  * Inside an amendment's transaction: the completion's recorded deaths become the amended
  * count by one correction pointing at the original movement, never a second mortality.
  */
-export async function adjustRoundMortality(manager: EntityManager, a: { completionId: string; amendmentId: number; tankId: number | null; count: number | undefined; reason: string; personId: number; at: Date }) {
+export async function adjustRoundMortality(
+  manager: EntityManager,
+  a: { completionId: string; amendmentId: number; tankId: number | null; count: number | undefined; reason: string; personId: number; at: Date },
+) {
   if (a.count === undefined || !a.tankId) return
   const mine = await manager.getRepository(MovementEntity).find({ where: { completionId: a.completionId }, order: { id: 'ASC' } })
   const original = mine.find((m) => m.kind === 'mortality')
   const codes = await tankCodes()
   const describeTank = (id: number) => codes.get(id) ?? `tank ${id}`
-  const common = { meanWeightG: null, origin: null, permitRef: null, healthCertificateRef: null, transportWater: null, destination: null, causeText: null, necropsy: false, note: null, personId: a.personId, completionId: a.completionId, sourceKey: `amendment:${a.amendmentId}`, occurredAt: a.at }
+  const common = {
+    meanWeightG: null,
+    origin: null,
+    permitRef: null,
+    healthCertificateRef: null,
+    transportWater: null,
+    destination: null,
+    causeText: null,
+    necropsy: false,
+    note: null,
+    personId: a.personId,
+    completionId: a.completionId,
+    sourceKey: `amendment:${a.amendmentId}`,
+    occurredAt: a.at,
+  }
   if (!original) {
     if (a.count === 0) return
     const where = await batchInTank(a.tankId)
     if (!where) return
-    await writeMovement(manager, { ...common, batchId: where.batchId, kind: 'mortality', fromTankId: a.tankId, toTankId: null, count: a.count, reason: null, cause: UNKNOWN_CAUSE, correctsId: null }, { field: FIELD, describeTank })
+    await writeMovement(
+      manager,
+      {
+        ...common,
+        batchId: where.batchId,
+        kind: 'mortality',
+        fromTankId: a.tankId,
+        toTankId: null,
+        count: a.count,
+        reason: null,
+        cause: UNKNOWN_CAUSE,
+        correctsId: null,
+      },
+      { field: FIELD, describeTank },
+    )
     return
   }
   const recorded = original.count - mine.filter((m) => m.kind === 'correction' && m.correctsId === original.id).reduce((s, m) => s + m.count, 0)
   const delta = recorded - a.count
   if (delta === 0) return
-  await writeMovement(manager, { ...common, batchId: original.batchId, kind: 'correction', fromTankId: null, toTankId: original.fromTankId, count: delta, reason: `Round record amended: ${a.reason}`, cause: null, correctsId: original.id }, { field: FIELD, describeTank })
+  await writeMovement(
+    manager,
+    {
+      ...common,
+      batchId: original.batchId,
+      kind: 'correction',
+      fromTankId: null,
+      toTankId: original.fromTankId,
+      count: delta,
+      reason: `Round record amended: ${a.reason}`,
+      cause: null,
+      correctsId: original.id,
+    },
+    { field: FIELD, describeTank },
+  )
 }

@@ -71,10 +71,15 @@ export async function getBoard(date: string): Promise<BoardWire> {
     const card: BoardCardWire = {
       id: r.id,
       kind: kindOf(`${r.title}\u0000${r.category}\u0000${r.priority}\u0000${r.durationMinutes}`, () => ({
-        title: r.title, category: r.category, priority: r.priority, durationMinutes: r.durationMinutes,
+        title: r.title,
+        category: r.category,
+        priority: r.priority,
+        durationMinutes: r.durationMinutes,
       })),
       target: targetOf(`${r.targetKind}:${r.targetId}:${r.tankId}:${r.areaId}`, () => ({
-        label: r.tankLabel ?? targetLabel(r.targetKind, r.targetId, cat!), tankId: r.tankId, areaId: r.areaId,
+        label: r.tankLabel ?? targetLabel(r.targetKind, r.targetId, cat!),
+        tankId: r.tankId,
+        areaId: r.areaId,
       })),
       time: r.time,
       status: r.status,
@@ -98,7 +103,12 @@ export async function getBoard(date: string): Promise<BoardWire> {
 async function columns(shifts: ShiftRow[], load: Map<number, { taskCount: number; plannedMinutes: number }>): Promise<BoardColumnPerson[]> {
   const byPerson = new Map<number, BoardColumnPerson>()
   const column = (personId: number, name: string, role: string): BoardColumnPerson => ({
-    personId, name, role, shifts: [], taskCount: load.get(personId)?.taskCount ?? 0, plannedMinutes: load.get(personId)?.plannedMinutes ?? 0,
+    personId,
+    name,
+    role,
+    shifts: [],
+    taskCount: load.get(personId)?.taskCount ?? 0,
+    plannedMinutes: load.get(personId)?.plannedMinutes ?? 0,
   })
   for (const s of shifts) {
     const c = byPerson.get(s.personId) ?? column(s.personId, s.name, s.role)
@@ -107,10 +117,12 @@ async function columns(shifts: ShiftRow[], load: Map<number, { taskCount: number
   }
   const offShift = [...load.keys()].filter((id) => !byPerson.has(id))
   if (offShift.length) {
-    const people = (await db().query(`SELECT id, name, role FROM people WHERE id IN (${offShift.map(() => '?').join(',')})`, offShift)) as Array<{ id: number; name: string; role: string }>
+    const people = (await db().query(`SELECT id, name, role FROM people WHERE id IN (${offShift.map(() => '?').join(',')})`, offShift)) as Array<{
+      id: number
+      name: string
+      role: string
+    }>
     for (const p of people) byPerson.set(p.id, column(p.id, p.name, p.role))
   }
-  return [...byPerson.values()].sort(
-    (a, b) => (a.shifts[0]?.start ?? '99').localeCompare(b.shifts[0]?.start ?? '99') || a.name.localeCompare(b.name),
-  )
+  return [...byPerson.values()].sort((a, b) => (a.shifts[0]?.start ?? '99').localeCompare(b.shifts[0]?.start ?? '99') || a.name.localeCompare(b.name))
 }

@@ -17,8 +17,26 @@ export const DEFAULT_HORIZON_DAYS = RULE_LIMITS.horizonDays
 const CHUNK = 2000
 // Columns the materialiser writes; the rest take their defaults.
 const INSERT_COLUMNS = [
-  'routineId', 'title', 'category', 'instructions', 'priority', 'targetKind', 'targetId', 'tankId', 'areaId', 'localDate', 'localStart',
-  'occurrenceStart', 'dueAt', 'windowStartAt', 'graceUntil', 'durationMinutes', 'status', 'assigneeId', 'requiredReadings', 'version',
+  'routineId',
+  'title',
+  'category',
+  'instructions',
+  'priority',
+  'targetKind',
+  'targetId',
+  'tankId',
+  'areaId',
+  'localDate',
+  'localStart',
+  'occurrenceStart',
+  'dueAt',
+  'windowStartAt',
+  'graceUntil',
+  'durationMinutes',
+  'status',
+  'assigneeId',
+  'requiredReadings',
+  'version',
 ] as const
 const ROW_PLACEHOLDER = `(${INSERT_COLUMNS.map(() => '?').join(',')})`
 
@@ -73,7 +91,9 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
     // A named person was set while planning; only rules that read the roster need a pass over the tasks.
     const rosterBound = routines.filter((r) => r.assigneeRule.kind === 'on_call' || r.assigneeRule.kind === 'role_on_shift').map((r) => r.id)
     if (rosterBound.length) {
-      await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!, { routineIds: rosterBound })
+      await applyAssigneeRules(DateTime.fromJSDate(from).setZone(zone).toISODate()!, DateTime.fromJSDate(until).setZone(zone).toISODate()!, {
+        routineIds: rosterBound,
+      })
     }
     // New feeding tasks may fall inside a planned event's fasting window.
     await holdFeedsForAllEvents()
@@ -108,7 +128,14 @@ function occurrencesBetween(routine: Routine, zone: string, lower: Date, upper: 
   const found: Occurrence[] = []
   for (let start = lower.getTime(); start <= upper.getTime(); start += WEEK_MS) {
     const end = Math.min(start + WEEK_MS - 1, upper.getTime())
-    const week = expandRuleBounded({ rrule: routine.rrule, dtstart: routine.dtstart, tzid: zone, from: new Date(start).toISOString(), to: new Date(end).toISOString(), limit: RULE_LIMITS.maxPerHorizon })
+    const week = expandRuleBounded({
+      rrule: routine.rrule,
+      dtstart: routine.dtstart,
+      tzid: zone,
+      from: new Date(start).toISOString(),
+      to: new Date(end).toISOString(),
+      limit: RULE_LIMITS.maxPerHorizon,
+    })
     if (!week.complete) logger.warn({ routineId: routine.id, from: new Date(start).toISOString() }, 'rule expansion stopped at its work limit')
     found.push(...week.occurrences)
   }

@@ -44,7 +44,13 @@ export async function moveTask(taskId: number, actor: Person, data: MoveTaskInpu
       .where('id = :id AND version = :version', { id: task.id, version: task.version })
       .execute()
     if (!result.affected) throw conflict('Someone changed this task a moment ago; the board has been refreshed.')
-    await audit('assignment', task.id, 'update', { assigneeId: task.assigneeId, localDate: task.localDate }, { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate })
+    await audit(
+      'assignment',
+      task.id,
+      'update',
+      { assigneeId: task.assigneeId, localDate: task.localDate },
+      { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate },
+    )
     await recordTaskChanges([task.id])
   })
   return getTask(task.id)
@@ -62,10 +68,20 @@ async function newDay(task: TaskRow, date: string): Promise<Partial<TaskRow>> {
   const today = DateTime.now().setZone(zone).toISODate()!
   if (date < today) throw conflict('A task cannot be moved into the past.')
   if (task.routineId !== null) {
-    const siblings = await db().getRepository(TaskEntity).find({
-      where: { routineId: task.routineId, targetKind: task.targetKind, targetId: task.targetId, localDate: Between(minDate(date, task.localDate), maxDate(date, task.localDate)) },
-    })
-    const inTheWay = siblings.find((s) => s.id !== task.id && (date > task.localDate ? s.localDate > task.localDate && s.localDate <= date : s.localDate < task.localDate && s.localDate >= date))
+    const siblings = await db()
+      .getRepository(TaskEntity)
+      .find({
+        where: {
+          routineId: task.routineId,
+          targetKind: task.targetKind,
+          targetId: task.targetId,
+          localDate: Between(minDate(date, task.localDate), maxDate(date, task.localDate)),
+        },
+      })
+    const inTheWay = siblings.find(
+      (s) =>
+        s.id !== task.id && (date > task.localDate ? s.localDate > task.localDate && s.localDate <= date : s.localDate < task.localDate && s.localDate >= date),
+    )
     if (inTheWay) {
       throw conflict(`This routine already has this task on ${inTheWay.localDate}; it can only move between its own occurrences.`)
     }

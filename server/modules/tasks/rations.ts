@@ -12,10 +12,12 @@ import type { Catalogue } from './targets'
 export async function rationsForDay(date: string, tankIds: number[], cat: Catalogue): Promise<Map<number, number>> {
   const out = new Map<number, number>()
   if (!tankIds.length) return out
-  const feeds = await db().getRepository(TaskEntity).find({
-    where: { localDate: date, category: 'feeding', tankId: In(tankIds), status: In(['planned', 'open', 'overdue', 'done', 'missed']) },
-    order: { dueAt: 'ASC' },
-  })
+  const feeds = await db()
+    .getRepository(TaskEntity)
+    .find({
+      where: { localDate: date, category: 'feeding', tankId: In(tankIds), status: In(['planned', 'open', 'overdue', 'done', 'missed']) },
+      order: { dueAt: 'ASC' },
+    })
   const batches = [...cat.batches.values()].filter((b) => b.status === 'active' || b.status === 'quarantine')
   for (const tankId of new Set(feeds.map((f) => f.tankId!))) {
     const batch = batches.find((b) => b.tankIds.includes(tankId))

@@ -53,7 +53,20 @@ async function roundFor(date: string | undefined, narrow: (qb: SelectQueryBuilde
         const p = paramByKey.get(key)
         if (!p) return []
         const l = pickLimit(limits, key, where)
-        return [{ key, name: p.name, unit: p.unit, decimals: p.decimals, physicalMin: p.physicalMin, physicalMax: p.physicalMax, okMin: l?.okMin ?? null, okMax: l?.okMax ?? null, criticalMin: l?.criticalMin ?? null, criticalMax: l?.criticalMax ?? null }]
+        return [
+          {
+            key,
+            name: p.name,
+            unit: p.unit,
+            decimals: p.decimals,
+            physicalMin: p.physicalMin,
+            physicalMax: p.physicalMax,
+            okMin: l?.okMin ?? null,
+            okMax: l?.okMax ?? null,
+            criticalMin: l?.criticalMin ?? null,
+            criticalMax: l?.criticalMax ?? null,
+          },
+        ]
       }),
     }
   })

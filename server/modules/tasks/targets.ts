@@ -23,10 +23,16 @@ export function resolveTargets(routine: Pick<Routine, 'targetKind' | 'targetIds'
     case 'facility':
       return [{ kind: 'facility', id: 0, tankId: null, areaId: null, label: cat.facility.name }]
     case 'tank':
-      return routine.targetIds.map((id) => cat.tanks.get(id)).filter(usable).map(tankTarget)
+      return routine.targetIds
+        .map((id) => cat.tanks.get(id))
+        .filter(usable)
+        .map(tankTarget)
     case 'area_tanks': {
       const wanted = new Set(routine.targetIds)
-      return [...cat.tanks.values()].filter((t) => wanted.has(t.areaId) && usable(t)).sort((a, b) => a.code.localeCompare(b.code)).map(tankTarget)
+      return [...cat.tanks.values()]
+        .filter((t) => wanted.has(t.areaId) && usable(t))
+        .sort((a, b) => a.code.localeCompare(b.code))
+        .map(tankTarget)
     }
     case 'area':
       return routine.targetIds.flatMap((id) => {

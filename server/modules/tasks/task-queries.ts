@@ -15,7 +15,9 @@ export const tasksForAssigneeRules = (from: string, to: string, routineIds?: num
   tasks().find({
     select: { id: true, routineId: true, localDate: true, localStart: true, dueAt: true, areaId: true, targetKind: true, targetId: true, assigneeId: true },
     where: {
-      localDate: Between(from, to), assignedManually: false, status: In(['planned', 'open', 'overdue']),
+      localDate: Between(from, to),
+      assignedManually: false,
+      status: In(['planned', 'open', 'overdue']),
       ...(routineIds ? { routineId: In(routineIds) } : {}),
     },
   })
@@ -26,7 +28,9 @@ export const taskCountsByDay = (from: string, to: string) =>
     .createQueryBuilder('t')
     .select(['t.localDate AS date', 't.status AS status', 't.category AS category', 'COUNT(*) AS n'])
     .where('t.localDate BETWEEN :from AND :to', { from, to })
-    .groupBy('t.localDate').addGroupBy('t.status').addGroupBy('t.category')
+    .groupBy('t.localDate')
+    .addGroupBy('t.status')
+    .addGroupBy('t.category')
     .getRawMany<{ date: string; status: string; category: string; n: string }>()
 
 /** Tasks between two facility dates that are still to do (not finished, not held). */
@@ -49,7 +53,8 @@ export const rechecksOf = (taskIds: readonly number[]): Promise<TaskRow[]> =>
 export const taskRowsByIds = (ids: readonly number[]): Promise<TaskRow[]> => (ids.length ? tasks().findBy({ id: In([...ids]) }) : Promise.resolve([]))
 
 /** The welfare-critical tasks among these. */
-export const welfareCriticalAmong = (ids: number[]): Promise<TaskRow[]> => (ids.length ? tasks().findBy({ id: In(ids), priority: 'welfare_critical' }) : Promise.resolve([]))
+export const welfareCriticalAmong = (ids: number[]): Promise<TaskRow[]> =>
+  ids.length ? tasks().findBy({ id: In(ids), priority: 'welfare_critical' }) : Promise.resolve([])
 
 export const findTaskRow = (id: number): Promise<TaskRow | null> => tasks().findOneBy({ id })
 
@@ -63,7 +68,10 @@ export const flaggedOrMissedBetween = (from: string, to: string): Promise<TaskRo
 
 /** Welfare and quarantine checks of facility days from–to, of these tanks (all when none named), by due time. */
 export function welfareChecksBetween(from: string, to: string, tankIds: number[]): Promise<TaskRow[]> {
-  const qb = tasks().createQueryBuilder('t').where('t.localDate BETWEEN :from AND :to', { from, to }).andWhere('t.category IN (:...cats)', { cats: ['welfare', 'quarantine'] })
+  const qb = tasks()
+    .createQueryBuilder('t')
+    .where('t.localDate BETWEEN :from AND :to', { from, to })
+    .andWhere('t.category IN (:...cats)', { cats: ['welfare', 'quarantine'] })
   if (tankIds.length) qb.andWhere('t.tankId IN (:...tankIds)', { tankIds })
   return qb.orderBy('t.dueAt', 'ASC').getMany()
 }

@@ -146,7 +146,12 @@ export async function advanceDueTasks(now: Date): Promise<{ changed: number[]; m
       .getRawMany<{ id: number }>()
     if (!due.length) continue
     const ids = due.map((d) => Number(d.id))
-    await tasks().createQueryBuilder().update().set({ status: step.to, version: () => 'version + 1' }).where({ id: In(ids), status: In(step.from) }).execute()
+    await tasks()
+      .createQueryBuilder()
+      .update()
+      .set({ status: step.to, version: () => 'version + 1' })
+      .where({ id: In(ids), status: In(step.from) })
+      .execute()
     changed.push(...ids)
     if (step.to === 'missed') missed.push(...ids)
   }

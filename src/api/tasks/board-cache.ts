@@ -14,9 +14,22 @@ export const byTime = (a: BoardCard, b: BoardCard) => a.localTime.localeCompare(
 
 /** The part of a full task a card draws, so the cache never keeps a task's whole record. */
 export const toBoardCard = (t: BoardCard): BoardCard => ({
-  id: t.id, title: t.title, category: t.category, priority: t.priority, durationMinutes: t.durationMinutes,
-  targetLabel: t.targetLabel, tankId: t.tankId, areaId: t.areaId, localDate: t.localDate, localTime: t.localTime,
-  status: t.status, assigneeId: t.assigneeId, assigneeName: t.assigneeName, flag: t.flag, heldReason: t.heldReason, version: t.version,
+  id: t.id,
+  title: t.title,
+  category: t.category,
+  priority: t.priority,
+  durationMinutes: t.durationMinutes,
+  targetLabel: t.targetLabel,
+  tankId: t.tankId,
+  areaId: t.areaId,
+  localDate: t.localDate,
+  localTime: t.localTime,
+  status: t.status,
+  assigneeId: t.assigneeId,
+  assigneeName: t.assigneeName,
+  flag: t.flag,
+  heldReason: t.heldReason,
+  version: t.version,
 })
 
 /** The board as it will look once the server accepts the move; tasks moved to another day leave it. */

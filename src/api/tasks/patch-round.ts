@@ -6,9 +6,7 @@ export function sortRoundTasks(round: Round, tasks: RoundTask[]): RoundTask[] {
   const rank = new Map(round.areas.map((a, i) => [a.id, i]))
   return [...tasks].sort(
     (a, b) =>
-      (rank.get(a.areaId ?? -1) ?? 99) - (rank.get(b.areaId ?? -1) ?? 99) ||
-      a.targetLabel.localeCompare(b.targetLabel) ||
-      a.dueAt.localeCompare(b.dueAt),
+      (rank.get(a.areaId ?? -1) ?? 99) - (rank.get(b.areaId ?? -1) ?? 99) || a.targetLabel.localeCompare(b.targetLabel) || a.dueAt.localeCompare(b.dueAt),
   )
 }
 

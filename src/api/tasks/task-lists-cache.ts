@@ -35,7 +35,11 @@ export function patchTaskLists(queryClient: QueryClient, task: Task) {
     const others = data.filter((t) => t.id !== task.id)
     const fit = fits(task, queryKey[2])
     if (fit === null) {
-      if (existing) queryClient.setQueryData(queryKey, data.map((t) => (t.id === task.id ? task : t)))
+      if (existing)
+        queryClient.setQueryData(
+          queryKey,
+          data.map((t) => (t.id === task.id ? task : t)),
+        )
       else void queryClient.invalidateQueries({ queryKey, exact: true })
     } else if (fit) {
       queryClient.setQueryData(queryKey, [...others, task].sort(byDue))

@@ -9,17 +9,19 @@ import { useSignOut } from '../../features/auth/api/use-sign-out'
 import { ApiError } from '../../lib/api-client'
 import { navFor } from '../navigation'
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  try {
-    return await queryClient.ensureQueryData(authQueries.me())
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 401) {
-      const url = new URL(request.url)
-      throw redirect(`/sign-in?redirectTo=${encodeURIComponent(url.pathname + url.search)}`)
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    try {
+      return await queryClient.ensureQueryData(authQueries.me())
+    } catch (error) {
+      if (error instanceof ApiError && error.status === 401) {
+        const url = new URL(request.url)
+        throw redirect(`/sign-in?redirectTo=${encodeURIComponent(url.pathname + url.search)}`)
+      }
+      throw error
     }
-    throw error
   }
-}
 
 export function AppLayout() {
   const { data: me } = useSuspenseQuery(authQueries.me())
@@ -59,18 +61,27 @@ export function AppLayout() {
 
       <nav aria-label="Main" className="fixed inset-x-0 bottom-0 z-20 border-t border-tide-200 bg-white pb-[env(safe-area-inset-bottom)] md:hidden">
         <ul className="flex">
-          {items.filter((i) => i.primary).map((item) => (
-            <li key={item.to} className="flex-1">
-              <NavLink
-                to={item.to}
-                className={({ isActive }) => clsx('flex min-h-14 flex-col items-center justify-center text-xs font-semibold', isActive ? 'text-tide-800' : 'text-tide-500')}
-              >
-                <item.icon aria-hidden className="size-6" /> {item.label}
-              </NavLink>
-            </li>
-          ))}
+          {items
+            .filter((i) => i.primary)
+            .map((item) => (
+              <li key={item.to} className="flex-1">
+                <NavLink
+                  to={item.to}
+                  className={({ isActive }) =>
+                    clsx('flex min-h-14 flex-col items-center justify-center text-xs font-semibold', isActive ? 'text-tide-800' : 'text-tide-500')
+                  }
+                >
+                  <item.icon aria-hidden className="size-6" /> {item.label}
+                </NavLink>
+              </li>
+            ))}
           <li className="flex-1">
-            <button type="button" aria-expanded={moreOpen} onClick={() => setMoreOpen((o) => !o)} className="flex min-h-14 w-full flex-col items-center justify-center text-xs font-semibold text-tide-500">
+            <button
+              type="button"
+              aria-expanded={moreOpen}
+              onClick={() => setMoreOpen((o) => !o)}
+              className="flex min-h-14 w-full flex-col items-center justify-center text-xs font-semibold text-tide-500"
+            >
               <Menu aria-hidden className="size-6" /> More
             </button>
           </li>
@@ -78,15 +89,25 @@ export function AppLayout() {
         {moreOpen && (
           <div className="absolute inset-x-0 bottom-full border-t border-tide-200 bg-white p-3 shadow-lg">
             <ul className="grid grid-cols-2 gap-2">
-              {items.filter((i) => !i.primary).map((item) => (
-                <li key={item.to}>
-                  <NavLink to={item.to} onClick={() => setMoreOpen(false)} className="flex min-h-11 items-center gap-2 rounded-lg px-3 font-semibold text-tide-800 hover:bg-tide-50">
-                    <item.icon aria-hidden className="size-5" /> {item.label}
-                  </NavLink>
-                </li>
-              ))}
+              {items
+                .filter((i) => !i.primary)
+                .map((item) => (
+                  <li key={item.to}>
+                    <NavLink
+                      to={item.to}
+                      onClick={() => setMoreOpen(false)}
+                      className="flex min-h-11 items-center gap-2 rounded-lg px-3 font-semibold text-tide-800 hover:bg-tide-50"
+                    >
+                      <item.icon aria-hidden className="size-5" /> {item.label}
+                    </NavLink>
+                  </li>
+                ))}
               <li>
-                <button type="button" onClick={doSignOut} className="flex min-h-11 w-full items-center gap-2 rounded-lg px-3 font-semibold text-tide-800 hover:bg-tide-50">
+                <button
+                  type="button"
+                  onClick={doSignOut}
+                  className="flex min-h-11 w-full items-center gap-2 rounded-lg px-3 font-semibold text-tide-800 hover:bg-tide-50"
+                >
                   <LogOut aria-hidden className="size-5" /> Sign out
                 </button>
               </li>

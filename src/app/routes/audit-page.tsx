@@ -18,16 +18,21 @@ import '../../features/reports/report-print.css'
 
 const filterFrom = (search: URLSearchParams, timeZone: string): AuditFilter => ({ ...rangeFrom(search, timeZone), entity: search.get('entity') ?? '' })
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const [facility, me] = await Promise.all([queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility), queryClient.ensureQueryData(authQueries.me())])
-  const filter = filterFrom(new URL(request.url).searchParams, facility.timeZone)
-  await Promise.all([
-    rangeProblem(filter) ? null : queryClient.ensureQueryData(reportQueries.audit(filter)),
-    // Observers may not read the staff list; they see person numbers instead.
-    me.role === 'manager' || me.role === 'supervisor' ? queryClient.ensureQueryData(staffQueries.staff()) : null,
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const [facility, me] = await Promise.all([
+      queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility),
+      queryClient.ensureQueryData(authQueries.me()),
+    ])
+    const filter = filterFrom(new URL(request.url).searchParams, facility.timeZone)
+    await Promise.all([
+      rangeProblem(filter) ? null : queryClient.ensureQueryData(reportQueries.audit(filter)),
+      // Observers may not read the staff list; they see person numbers instead.
+      me.role === 'manager' || me.role === 'supervisor' ? queryClient.ensureQueryData(staffQueries.staff()) : null,
+    ])
+    return null
+  }
 
 export function Component() {
   const [search] = useSearchParams()
@@ -40,13 +45,17 @@ export function Component() {
   return (
     <section data-print-layout className="flex flex-col gap-4">
       <PageHeader title="Audit trail">
-        <Link to={`/reports?from=${filter.from}&to=${filter.to}`} className="inline-flex min-h-11 items-center gap-2 font-semibold text-tide-700 underline print:hidden">
+        <Link
+          to={`/reports?from=${filter.from}&to=${filter.to}`}
+          className="inline-flex min-h-11 items-center gap-2 font-semibold text-tide-700 underline print:hidden"
+        >
           <BarChart3 aria-hidden className="size-4" /> Reports
         </Link>
       </PageHeader>
       <PrintHeading facility={facility.name} title="Audit trail" range={describeRange(filter)} />
       <p className="max-w-2xl text-sm text-tide-800 print:hidden">
-        Every change to routines, limits, ladders, the roster, people, events and completed records, with the values before and after. Nothing here is ever deleted.
+        Every change to routines, limits, ladders, the roster, people, events and completed records, with the values before and after. Nothing here is ever
+        deleted.
       </p>
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="flex flex-wrap items-end gap-3 print:hidden">
@@ -55,7 +64,11 @@ export function Component() {
         </div>
         {!problem && <ReportActions csvHref={csvHref('audit', filter)} label="audit trail" />}
       </div>
-      {problem ? <ErrorState title="Choose another range" message={problem} /> : <AuditList filter={filter} timeZone={facility.timeZone} canReadStaff={me.role === 'manager' || me.role === 'supervisor'} />}
+      {problem ? (
+        <ErrorState title="Choose another range" message={problem} />
+      ) : (
+        <AuditList filter={filter} timeZone={facility.timeZone} canReadStaff={me.role === 'manager' || me.role === 'supervisor'} />
+      )}
     </section>
   )
 }

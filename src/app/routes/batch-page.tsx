@@ -28,19 +28,21 @@ function batchIdFrom(params: Params): number {
   return id
 }
 
-export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  const id = batchIdFrom(params)
-  // The stock register loads beside the page (its own loading and error states), so it is not awaited.
-  void queryClient.prefetchQuery(stockQueries.batch(id))
-  void queryClient.prefetchQuery(stockQueries.movements({ batchId: id }))
-  await Promise.all([
-    queryClient.ensureQueryData(batchRecordQueries.batch(id)),
-    queryClient.ensureQueryData(batchRecordQueries.records(id)),
-    queryClient.ensureQueryData(facilityQueries.facility()),
-    queryClient.ensureQueryData(catalogueQueries.tanks()),
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = batchIdFrom(params)
+    // The stock register loads beside the page (its own loading and error states), so it is not awaited.
+    void queryClient.prefetchQuery(stockQueries.batch(id))
+    void queryClient.prefetchQuery(stockQueries.movements({ batchId: id }))
+    await Promise.all([
+      queryClient.ensureQueryData(batchRecordQueries.batch(id)),
+      queryClient.ensureQueryData(batchRecordQueries.records(id)),
+      queryClient.ensureQueryData(facilityQueries.facility()),
+      queryClient.ensureQueryData(catalogueQueries.tanks()),
+    ])
+    return null
+  }
 
 export function Component() {
   const id = batchIdFrom(useParams())
@@ -53,11 +55,14 @@ export function Component() {
   const eventId = positiveId(params.get('event'))
   const form: RecordFormName = RECORD_FORMS.find((f) => f === params.get('form')) ?? 'weighing'
   const pick = (next: RecordFormName) =>
-    setParams((current) => {
-      const p = new URLSearchParams(current)
-      p.set('form', next)
-      return p
-    }, { replace: true })
+    setParams(
+      (current) => {
+        const p = new URLSearchParams(current)
+        p.set('form', next)
+        return p
+      },
+      { replace: true },
+    )
   const canRecord = me.role !== 'observer'
 
   return (
@@ -68,7 +73,9 @@ export function Component() {
       {eventId !== null && (
         <p className="flex items-center gap-2 text-sm text-tide-800">
           <CalendarRange aria-hidden className="size-4" /> Records added here belong to
-          <Link to={`/events/${eventId}`} className="font-semibold underline">the event</Link>
+          <Link to={`/events/${eventId}`} className="font-semibold underline">
+            the event
+          </Link>
         </p>
       )}
       {canRecord && (
@@ -83,7 +90,9 @@ export function Component() {
         </section>
       )}
       <section aria-labelledby="record-heading" className="flex flex-col gap-3">
-        <h2 id="record-heading" className="text-xl font-bold text-tide-900">Record</h2>
+        <h2 id="record-heading" className="text-xl font-bold text-tide-900">
+          Record
+        </h2>
         <RecordList records={records} zone={facility.timeZone} />
       </section>
     </section>

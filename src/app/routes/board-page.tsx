@@ -16,17 +16,19 @@ function todayIn(timeZone: string | undefined) {
 
 const facilityToday = async (queryClient: QueryClient) => todayIn((await queryClient.ensureQueryData(facilityQueries.facility()))?.timeZone)
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const url = new URL(request.url)
-  const date = url.searchParams.get('date')
-  if (!date || !ISO_DATE.test(date)) {
-    url.searchParams.set('date', await facilityToday(queryClient))
-    throw redirect(`${url.pathname}?${url.searchParams}`)
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const url = new URL(request.url)
+    const date = url.searchParams.get('date')
+    if (!date || !ISO_DATE.test(date)) {
+      url.searchParams.set('date', await facilityToday(queryClient))
+      throw redirect(`${url.pathname}?${url.searchParams}`)
+    }
+    void queryClient.prefetchQuery(catalogueQueries.areas())
+    await queryClient.ensureQueryData(boardQueries.day(date))
+    return null
   }
-  void queryClient.prefetchQuery(catalogueQueries.areas())
-  await queryClient.ensureQueryData(boardQueries.day(date))
-  return null
-}
 
 export function Component() {
   const [params] = useSearchParams()
@@ -46,13 +48,7 @@ export function Component() {
           {fullDay(board.date)}
         </p>
       </PageHeader>
-      <BoardView
-        key={board.date}
-        board={board}
-        areas={areas}
-        today={todayIn(facility?.timeZone)}
-        canEdit={me.role === 'manager' || me.role === 'supervisor'}
-      />
+      <BoardView key={board.date} board={board} areas={areas} today={todayIn(facility?.timeZone)} canEdit={me.role === 'manager' || me.role === 'supervisor'} />
     </section>
   )
 }

@@ -15,10 +15,7 @@ export function Component() {
     return { date: date && ISO_DATE.test(date) ? date : null, view: (params.get('view') === 'week' ? 'week' : 'month') as CalendarViewName }
   })
   const onOpenDay = useCallback((date: string) => navigate(`/board?date=${date}`), [navigate])
-  const onShown = useCallback(
-    (date: string, view: CalendarViewName) => setParams(view === 'week' ? { date, view } : { date }, { replace: true }),
-    [setParams],
-  )
+  const onShown = useCallback((date: string, view: CalendarViewName) => setParams(view === 'week' ? { date, view } : { date }, { replace: true }), [setParams])
   return (
     <section className="flex flex-col">
       <PageHeader title="Calendar" />

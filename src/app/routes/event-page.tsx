@@ -15,17 +15,19 @@ function eventIdFrom(params: Params): number {
   return id
 }
 
-export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  const id = eventIdFrom(params)
-  const [event] = await Promise.all([
-    queryClient.ensureQueryData(playbookQueries.event(id)),
-    queryClient.ensureQueryData(facilityQueries.facility()),
-    queryClient.ensureQueryData(refs.tanks()),
-    queryClient.ensureQueryData(refs.batches()),
-  ])
-  await queryClient.ensureQueryData(playbookQueries.detail(event.playbookId))
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = eventIdFrom(params)
+    const [event] = await Promise.all([
+      queryClient.ensureQueryData(playbookQueries.event(id)),
+      queryClient.ensureQueryData(facilityQueries.facility()),
+      queryClient.ensureQueryData(refs.tanks()),
+      queryClient.ensureQueryData(refs.batches()),
+    ])
+    await queryClient.ensureQueryData(playbookQueries.detail(event.playbookId))
+    return null
+  }
 
 export function Component() {
   const id = eventIdFrom(useParams())

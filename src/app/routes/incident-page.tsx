@@ -25,10 +25,12 @@ function incidentIdFrom(params: Params): number {
   return id
 }
 
-export const loader = (queryClient: QueryClient) => ({ params }: LoaderFunctionArgs) => {
-  void queryClient.prefetchQuery(incidentQueries.detail(incidentIdFrom(params)))
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(incidentQueries.detail(incidentIdFrom(params)))
+    return null
+  }
 
 export function Component() {
   const id = incidentIdFrom(useParams())
@@ -44,7 +46,9 @@ export function Component() {
 
   return (
     <section className="mx-auto flex w-full max-w-6xl flex-col gap-4">
-      <Link to="/incidents" className="text-sm font-semibold text-tide-700 underline">← All incidents</Link>
+      <Link to="/incidents" className="text-sm font-semibold text-tide-700 underline">
+        ← All incidents
+      </Link>
       <QueryState queries={[incident, tanks, batches, zone]} what="this incident">
         {() => {
           const i = incident.data!
@@ -61,7 +65,11 @@ export function Component() {
                 <div className="flex min-w-0 flex-col gap-4">
                   <div className="flex flex-wrap items-center justify-between gap-2">
                     <h2 className="text-xl font-bold text-tide-900">Record</h2>
-                    {editable && !editing && <Button variant="secondary" onClick={() => setEditing(true)}>Fill in the record</Button>}
+                    {editable && !editing && (
+                      <Button variant="secondary" onClick={() => setEditing(true)}>
+                        Fill in the record
+                      </Button>
+                    )}
                   </div>
                   {editing ? (
                     <IncidentEditForm
@@ -73,14 +81,21 @@ export function Component() {
                       onDone={() => setEditing(false)}
                     />
                   ) : (
-                    <IncidentDetails incident={i} timeZone={timeZone} tankCodes={new Map(tanks.data!.map((t) => [t.id, t.code]))} batchCodes={new Map(batches.data!.map((b) => [b.id, b.code]))} />
+                    <IncidentDetails
+                      incident={i}
+                      timeZone={timeZone}
+                      tankCodes={new Map(tanks.data!.map((t) => [t.id, t.code]))}
+                      batchCodes={new Map(batches.data!.map((b) => [b.id, b.code]))}
+                    />
                   )}
                 </div>
                 {/* On a phone the deadlines and the timeline come first: they are what a reader checks. */}
                 <div className="order-first flex min-w-0 flex-col gap-4 lg:order-none">
                   <IncidentDeadlines deadlines={deadlines} now={now} timeZone={timeZone} />
                   <section aria-labelledby="timeline-heading" className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-4">
-                    <h2 id="timeline-heading" className="text-lg font-bold text-tide-900">Timeline</h2>
+                    <h2 id="timeline-heading" className="text-lg font-bold text-tide-900">
+                      Timeline
+                    </h2>
                     <IncidentTimeline incident={i} deadlines={deadlines} now={now} timeZone={timeZone} />
                     {me.role !== 'technician' && <IncidentNoteForm incidentId={i.id} />}
                   </section>

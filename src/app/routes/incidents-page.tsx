@@ -25,29 +25,39 @@ export function Component() {
   const tanks = useQuery(catalogueQueries.tanks())
   const zone = useQuery(facilityQueries.timeZone())
   const change = (next: Partial<IncidentFilters>) =>
-    setParams((current) => {
-      const p = new URLSearchParams(current)
-      const f = { ...filters, ...next }
-      p.set('status', f.status)
-      if (f.overdueOnly) p.set('overdue', '1')
-      else p.delete('overdue')
-      if (f.text) p.set('q', f.text)
-      else p.delete('q')
-      return p
-    }, { replace: true })
+    setParams(
+      (current) => {
+        const p = new URLSearchParams(current)
+        const f = { ...filters, ...next }
+        p.set('status', f.status)
+        if (f.overdueOnly) p.set('overdue', '1')
+        else p.delete('overdue')
+        if (f.text) p.set('q', f.text)
+        else p.delete('q')
+        return p
+      },
+      { replace: true },
+    )
 
   return (
     <section className="mx-auto flex w-full max-w-5xl flex-col gap-4">
       <PageHeader title="Incidents" />
       <p className="text-sm text-tide-700">
-        Roundtide proposes an incident when a welfare-critical check is missed; a supervisor or manager confirms or dismisses it. Deadlines count down from when it was noticed.
+        Roundtide proposes an incident when a welfare-critical check is missed; a supervisor or manager confirms or dismisses it. Deadlines count down from when
+        it was noticed.
       </p>
       <IncidentFilterBar filters={filters} onChange={change} />
       <QueryState queries={[list, tanks, zone]} what="the incidents">
         {() => {
           const shown = filterIncidents(list.data!, filters, now)
-          if (list.data!.length === 0) return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No incidents have been proposed or recorded.</p>
-          if (shown.length === 0) return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No incident matches these filters ({list.data!.length} in all).</p>
+          if (list.data!.length === 0)
+            return <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No incidents have been proposed or recorded.</p>
+          if (shown.length === 0)
+            return (
+              <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">
+                No incident matches these filters ({list.data!.length} in all).
+              </p>
+            )
           return <IncidentList incidents={shown} now={now} timeZone={zone.data!} tankCodes={new Map(tanks.data!.map((t) => [t.id, t.code]))} />
         }}
       </QueryState>

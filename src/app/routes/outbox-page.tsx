@@ -12,7 +12,11 @@ import { PushOutboxSection } from '../../features/outbox/components/push-outbox-
 import { TextOutboxList } from '../../features/outbox/components/text-outbox-list'
 
 export const loader = (queryClient: QueryClient) => () =>
-  Promise.all([queryClient.ensureQueryData(outboxQueries.list()), queryClient.ensureQueryData(outboxQueries.texts()), queryClient.ensureQueryData(facilityQueries.timeZone())])
+  Promise.all([
+    queryClient.ensureQueryData(outboxQueries.list()),
+    queryClient.ensureQueryData(outboxQueries.texts()),
+    queryClient.ensureQueryData(facilityQueries.timeZone()),
+  ])
 
 export function Component() {
   const { data: messages, refetch, isFetching } = useSuspenseQuery(outboxQueries.list())
@@ -33,19 +37,26 @@ export function Component() {
       </PageHeader>
       {texts && (
         <section aria-labelledby="texts-heading" className="flex flex-col gap-2">
-          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">Text messages</h2>
-          <p className="text-sm text-tide-700">Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.</p>
+          <h2 id="texts-heading" className="text-lg font-bold text-tide-900">
+            Text messages
+          </h2>
+          <p className="text-sm text-tide-700">
+            Local text mode: texts go to a stand-in provider on this machine. Reply as the recipient to try acknowledging by text.
+          </p>
           <TextOutboxList texts={texts} timeZone={timeZone} />
         </section>
       )}
       <PushOutboxSection timeZone={timeZone} />
       {messages === null ? (
         <p className="flex max-w-xl items-start gap-2 rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
-          <Info aria-hidden className="mt-0.5 size-5 shrink-0" /> This server sends real e-mail through its mail host, so there is no outbox to show. The outbox exists only in local mail mode.
+          <Info aria-hidden className="mt-0.5 size-5 shrink-0" /> This server sends real e-mail through its mail host, so there is no outbox to show. The outbox
+          exists only in local mail mode.
         </p>
       ) : (
         <>
-          <p className="text-sm text-tide-700">Local mail mode: the e-mail Roundtide sent is kept here instead of leaving this machine. Checked every 10 seconds.</p>
+          <p className="text-sm text-tide-700">
+            Local mail mode: the e-mail Roundtide sent is kept here instead of leaving this machine. Checked every 10 seconds.
+          </p>
           <div className="grid gap-4 md:grid-cols-[minmax(0,2fr)_minmax(0,3fr)] md:items-start">
             <div className={clsx(selected && 'hidden md:block')}>
               <OutboxList messages={messages} selectedId={selected?.id ?? null} timeZone={timeZone} />
@@ -53,7 +64,9 @@ export function Component() {
             {selected ? (
               <OutboxMessageView key={selected.id} message={selected} timeZone={timeZone} />
             ) : (
-              messages.length > 0 && <p className="hidden rounded-xl border border-dashed border-tide-300 p-6 text-center text-tide-600 md:block">Choose a message to read it.</p>
+              messages.length > 0 && (
+                <p className="hidden rounded-xl border border-dashed border-tide-300 p-6 text-center text-tide-600 md:block">Choose a message to read it.</p>
+              )
             )}
           </div>
         </>

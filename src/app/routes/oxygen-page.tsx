@@ -26,18 +26,23 @@ export function Component() {
     <section className="mx-auto flex w-full max-w-4xl flex-col gap-4">
       <PageHeader title="Oxygen supply">
         {canAdd && !adding && (
-          <Button variant="secondary" onClick={() => setAdding(true)}><Plus aria-hidden className="size-5" /> Add cylinder</Button>
+          <Button variant="secondary" onClick={() => setAdding(true)}>
+            <Plus aria-hidden className="size-5" /> Add cylinder
+          </Button>
         )}
       </PageHeader>
       <p className="text-tide-700">
-        Below {facility.minOxygenHours} h to the reserve pressure a cylinder is low and a replace task goes on the board; below a quarter of that it is critical and escalates.
+        Below {facility.minOxygenHours} h to the reserve pressure a cylinder is low and a replace task goes on the board; below a quarter of that it is critical
+        and escalates.
       </p>
       {adding && <AddCylinderForm onDone={() => setAdding(false)} />}
       {cylinders.length === 0 ? (
         <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No cylinders or banks are set up yet.</p>
       ) : (
         <ul aria-label="Cylinders" className="flex flex-col gap-3">
-          {cylinders.map((c) => <CylinderCard key={c.id} cylinder={c} zone={facility.timeZone} canRead={me.role !== 'observer'} />)}
+          {cylinders.map((c) => (
+            <CylinderCard key={c.id} cylinder={c} zone={facility.timeZone} canRead={me.role !== 'observer'} />
+          ))}
         </ul>
       )}
       <Link to="/calculators?tool=cylinder" className="inline-flex min-h-11 items-center gap-2 self-start font-semibold text-tide-700 underline">

@@ -19,22 +19,34 @@ import type { DateRange } from '../../features/reports/utils/report-paths'
 import { useSearchUpdate } from '../../lib/use-search-update'
 import '../../features/reports/report-print.css'
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const search = new URL(request.url).searchParams
-  const facility = await queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility)
-  const f = reportFilters(search, facility.timeZone)
-  if (rangeProblem(f.range)) return null
-  const view = parseReportView(search.get('view'))
-  if (view === 'compliance') await queryClient.ensureQueryData(reportQueries.compliance(f.compliance))
-  if (view === 'responses') await queryClient.ensureQueryData(reportQueries.responses(f.range))
-  if (view === 'welfare') await Promise.all([queryClient.ensureQueryData(reportQueries.welfare(f.welfare)), queryClient.ensureQueryData(catalogueQueries.tanks())])
-  if (view === 'animals') {
-    await Promise.all([queryClient.ensureQueryData(reportQueries.stock(f.stock)), queryClient.ensureQueryData(reportQueries.incidents(f.range)), queryClient.ensureQueryData(catalogueQueries.batches())])
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const search = new URL(request.url).searchParams
+    const facility = await queryClient.ensureQueryData(facilityQueries.facility()).then(requireFacility)
+    const f = reportFilters(search, facility.timeZone)
+    if (rangeProblem(f.range)) return null
+    const view = parseReportView(search.get('view'))
+    if (view === 'compliance') await queryClient.ensureQueryData(reportQueries.compliance(f.compliance))
+    if (view === 'responses') await queryClient.ensureQueryData(reportQueries.responses(f.range))
+    if (view === 'welfare')
+      await Promise.all([queryClient.ensureQueryData(reportQueries.welfare(f.welfare)), queryClient.ensureQueryData(catalogueQueries.tanks())])
+    if (view === 'animals') {
+      await Promise.all([
+        queryClient.ensureQueryData(reportQueries.stock(f.stock)),
+        queryClient.ensureQueryData(reportQueries.incidents(f.range)),
+        queryClient.ensureQueryData(catalogueQueries.batches()),
+      ])
+    }
+    return null
   }
-  return null
-}
 
-const TITLES = { compliance: 'Compliance', responses: 'Response times', welfare: 'Welfare-check record', animals: 'Animal record: numbers per batch and incidents' }
+const TITLES = {
+  compliance: 'Compliance',
+  responses: 'Response times',
+  welfare: 'Welfare-check record',
+  animals: 'Animal record: numbers per batch and incidents',
+}
 
 export function Component() {
   const [search] = useSearchParams()
@@ -48,7 +60,10 @@ export function Component() {
   return (
     <section data-print-layout className="flex flex-col gap-4">
       <PageHeader title="Reports">
-        <Link to={`/audit?from=${f.range.from}&to=${f.range.to}`} className="inline-flex min-h-11 items-center gap-2 font-semibold text-tide-700 underline print:hidden">
+        <Link
+          to={`/audit?from=${f.range.from}&to=${f.range.to}`}
+          className="inline-flex min-h-11 items-center gap-2 font-semibold text-tide-700 underline print:hidden"
+        >
           <History aria-hidden className="size-4" /> Audit trail
         </Link>
       </PageHeader>
@@ -59,7 +74,9 @@ export function Component() {
         <ErrorState title="Choose another range" message={problem} />
       ) : (
         <>
-          <p className="text-sm text-tide-800 print:hidden">{describeRange(f.range)} · facility days in {facility.timeZone}</p>
+          <p className="text-sm text-tide-800 print:hidden">
+            {describeRange(f.range)} · facility days in {facility.timeZone}
+          </p>
           {view === 'compliance' && <ComplianceReport filter={f.compliance} onFilterChange={(c) => update(c)} />}
           {view === 'responses' && <ResponsesReport range={f.range} />}
           {view === 'welfare' && <WelfareReport filter={f.welfare} onTanksChange={(ids) => update({ tankIds: ids.join(',') })} />}

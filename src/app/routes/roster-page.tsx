@@ -19,17 +19,19 @@ function rangeFrom(params: URLSearchParams, timeZone: string) {
   return { from, days, to: addDays(from, days - 1) }
 }
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const timeZone = facilityZone(await queryClient.ensureQueryData(facilityQueries.facility()))
-  const { from, to } = rangeFrom(new URL(request.url).searchParams, timeZone)
-  await Promise.all([
-    queryClient.ensureQueryData(staffQueries.staff()),
-    queryClient.ensureQueryData(rosterQueries.shifts(from, to)),
-    queryClient.ensureQueryData(rosterQueries.duties(from, to)),
-    queryClient.ensureQueryData(rosterQueries.coverage(from, to)),
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const timeZone = facilityZone(await queryClient.ensureQueryData(facilityQueries.facility()))
+    const { from, to } = rangeFrom(new URL(request.url).searchParams, timeZone)
+    await Promise.all([
+      queryClient.ensureQueryData(staffQueries.staff()),
+      queryClient.ensureQueryData(rosterQueries.shifts(from, to)),
+      queryClient.ensureQueryData(rosterQueries.duties(from, to)),
+      queryClient.ensureQueryData(rosterQueries.coverage(from, to)),
+    ])
+    return null
+  }
 
 export function Component() {
   const { data: facility } = useSuspenseQuery(facilityQueries.facility())
@@ -67,7 +69,15 @@ export function Component() {
         />
       </PageHeader>
       <CoverageWarnings warnings={warnings} />
-      <RosterGrid dates={datesFrom(from, days)} today={today} people={rows} shifts={shifts} duties={duties} onAdd={(personId, date) => openShift({ shift: null, personId, date })} onEdit={onEdit} />
+      <RosterGrid
+        dates={datesFrom(from, days)}
+        today={today}
+        people={rows}
+        shifts={shifts}
+        duties={duties}
+        onAdd={(personId, date) => openShift({ shift: null, personId, date })}
+        onEdit={onEdit}
+      />
       <RosterPlanner
         ref={planner}
         tab={tab}

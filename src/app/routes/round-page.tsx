@@ -14,10 +14,12 @@ const dateFrom = (params: URLSearchParams) => {
 }
 
 // Not awaited: the page shows its own loading, offline and error states instead of blocking navigation.
-export const loader = (queryClient: QueryClient) => ({ request }: LoaderFunctionArgs) => {
-  void queryClient.prefetchQuery(roundQueries.day(dateFrom(new URL(request.url).searchParams)))
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  ({ request }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(roundQueries.day(dateFrom(new URL(request.url).searchParams)))
+    return null
+  }
 
 export function Component() {
   const { data: me } = useSuspenseQuery(authQueries.me())

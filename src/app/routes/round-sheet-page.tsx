@@ -27,16 +27,18 @@ function filterFrom(search: URLSearchParams, me: Person, timeZone: string): Shee
   return { date, personId: null, areaId }
 }
 
-export const loader = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const [me, facility] = await Promise.all([queryClient.ensureQueryData(authQueries.me()), queryClient.ensureQueryData(facilityQueries.facility())])
-  const filter = filterFrom(new URL(request.url).searchParams, me, requireFacility(facility).timeZone)
-  await Promise.all([
-    queryClient.ensureQueryData(roundSheetQueries.sheet(filter)),
-    queryClient.ensureQueryData(catalogueQueries.areas()),
-    plans(me) ? queryClient.ensureQueryData(staffQueries.staff()) : null,
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const [me, facility] = await Promise.all([queryClient.ensureQueryData(authQueries.me()), queryClient.ensureQueryData(facilityQueries.facility())])
+    const filter = filterFrom(new URL(request.url).searchParams, me, requireFacility(facility).timeZone)
+    await Promise.all([
+      queryClient.ensureQueryData(roundSheetQueries.sheet(filter)),
+      queryClient.ensureQueryData(catalogueQueries.areas()),
+      plans(me) ? queryClient.ensureQueryData(staffQueries.staff()) : null,
+    ])
+    return null
+  }
 
 export function Component() {
   const [search, setSearch] = useSearchParams()

@@ -10,14 +10,16 @@ export function RouteError() {
   if (status === 404) return <NotFound />
   if (status === 403) return <ErrorState title="Not for your role" message={(error as Error).message} />
   const message =
-    error instanceof ApiError
-      ? error.message + (error.requestId ? ` (request ${error.requestId})` : '')
-      : 'Something went wrong while showing this page.'
+    error instanceof ApiError ? error.message + (error.requestId ? ` (request ${error.requestId})` : '') : 'Something went wrong while showing this page.'
   return (
     <ErrorState
       title="Could not load this page"
       message={message}
-      action={<Button variant="secondary" onClick={() => window.location.reload()}>Try again</Button>}
+      action={
+        <Button variant="secondary" onClick={() => window.location.reload()}>
+          Try again
+        </Button>
+      }
     />
   )
 }

@@ -23,17 +23,19 @@ function routineIdFrom(params: Params): number | null {
   return id
 }
 
-export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  const id = routineIdFrom(params)
-  const me = await queryClient.ensureQueryData(authQueries.me())
-  if (id === null && !canEditRoutines(me.role)) return redirect('/routines')
-  await Promise.all([
-    queryClient.ensureQueryData(facilityQueries.facility()),
-    queryClient.ensureQueryData(parameterQueries.parameters()),
-    id === null ? null : queryClient.ensureQueryData(routineQueries.detail(id)),
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = routineIdFrom(params)
+    const me = await queryClient.ensureQueryData(authQueries.me())
+    if (id === null && !canEditRoutines(me.role)) return redirect('/routines')
+    await Promise.all([
+      queryClient.ensureQueryData(facilityQueries.facility()),
+      queryClient.ensureQueryData(parameterQueries.parameters()),
+      id === null ? null : queryClient.ensureQueryData(routineQueries.detail(id)),
+    ])
+    return null
+  }
 
 function useEditorContext() {
   const { data: me } = useSuspenseQuery(authQueries.me())

@@ -28,8 +28,12 @@ function Ladders() {
   return (
     <section aria-labelledby="ladders-heading" className="flex flex-col gap-3">
       <div>
-        <h2 id="ladders-heading" className="text-xl font-bold text-tide-900">Escalation ladders</h2>
-        <p className="text-sm text-tide-700">Each step says how many minutes after a missed task or critical reading it goes out, and whom it notifies. Acknowledging stops the ladder.</p>
+        <h2 id="ladders-heading" className="text-xl font-bold text-tide-900">
+          Escalation ladders
+        </h2>
+        <p className="text-sm text-tide-700">
+          Each step says how many minutes after a missed task or critical reading it goes out, and whom it notifies. Acknowledging stops the ladder.
+        </p>
       </div>
       <LadderEditor ladders={ladders} staff={staff} />
     </section>
@@ -41,8 +45,12 @@ function AnimalRecord() {
   return (
     <section aria-labelledby="animal-record-heading" className="flex flex-col gap-3">
       <div>
-        <h2 id="animal-record-heading" className="text-xl font-bold text-tide-900">Animal record</h2>
-        <p className="text-sm text-tide-700">Causes of death offered on the round, when losses raise a flag and an incident proposal, and the deadlines an incident carries.</p>
+        <h2 id="animal-record-heading" className="text-xl font-bold text-tide-900">
+          Animal record
+        </h2>
+        <p className="text-sm text-tide-700">
+          Causes of death offered on the round, when losses raise a flag and an incident proposal, and the deadlines an incident carries.
+        </p>
       </div>
       <AnimalRecordSettingsForm settings={settings} />
     </section>
@@ -57,7 +65,9 @@ export function Component() {
     <section className="mx-auto flex w-full max-w-3xl flex-col gap-6">
       <PageHeader title="Settings" />
       <section aria-labelledby="prefs-heading" className="flex flex-col gap-3">
-        <h2 id="prefs-heading" className="text-xl font-bold text-tide-900">How escalations reach me</h2>
+        <h2 id="prefs-heading" className="text-xl font-bold text-tide-900">
+          How escalations reach me
+        </h2>
         <PreferencesForm preferences={preferences} timeZone={timeZone} />
         <PushDeviceControl available={preferences.available.push} accepted={preferences.channels.includes('push')} />
       </section>

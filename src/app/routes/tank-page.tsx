@@ -23,18 +23,20 @@ function tankIdFrom(params: Params): number {
 
 const daysFrom = (search: URLSearchParams): TrendRange => TREND_RANGES.find((d) => String(d) === search.get('days')) ?? 30
 
-export const loader = (queryClient: QueryClient) => async ({ params, request }: LoaderFunctionArgs) => {
-  const id = tankIdFrom(params)
-  // The stock register loads beside the page (its own loading and error states), so it is not awaited.
-  void queryClient.prefetchQuery(stockQueries.tank(id))
-  void queryClient.prefetchQuery(stockQueries.movements({ tankId: id }))
-  await Promise.all([
-    queryClient.ensureQueryData(tankPageQueries.overview(id)),
-    queryClient.ensureQueryData(tankPageQueries.readings(id, daysFrom(new URL(request.url).searchParams))),
-    queryClient.ensureQueryData(facilityQueries.facility()),
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    const id = tankIdFrom(params)
+    // The stock register loads beside the page (its own loading and error states), so it is not awaited.
+    void queryClient.prefetchQuery(stockQueries.tank(id))
+    void queryClient.prefetchQuery(stockQueries.movements({ tankId: id }))
+    await Promise.all([
+      queryClient.ensureQueryData(tankPageQueries.overview(id)),
+      queryClient.ensureQueryData(tankPageQueries.readings(id, daysFrom(new URL(request.url).searchParams))),
+      queryClient.ensureQueryData(facilityQueries.facility()),
+    ])
+    return null
+  }
 
 export function Component() {
   const id = tankIdFrom(useParams())
@@ -48,11 +50,14 @@ export function Component() {
   const shown = search.get('show')
   const selected = shown === null ? defaultSelection(parameters) : shown.split(',').filter(Boolean)
   const update = (key: string, value: string) =>
-    setSearch((current) => {
-      const next = new URLSearchParams(current)
-      next.set(key, value)
-      return next
-    }, { replace: true, preventScrollReset: true })
+    setSearch(
+      (current) => {
+        const next = new URLSearchParams(current)
+        next.set(key, value)
+        return next
+      },
+      { replace: true, preventScrollReset: true },
+    )
   const systemLabel = overview.system ? `System ${overview.system.code}` : null
 
   return (

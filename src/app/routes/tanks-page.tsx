@@ -52,7 +52,11 @@ export function Component() {
   return (
     <section className="flex flex-col gap-4">
       <PageHeader title="Tanks">
-        {facility && <p className="text-sm text-tide-700">{facility.name} · {facility.timeZone}</p>}
+        {facility && (
+          <p className="text-sm text-tide-700">
+            {facility.name} · {facility.timeZone}
+          </p>
+        )}
       </PageHeader>
       <FacilityTabs current={tab} />
       {!isManager && (
@@ -124,7 +128,9 @@ export function Component() {
       {tab === 'settings' && (
         <div className="flex flex-col gap-6">
           <section aria-labelledby="facility-settings-title" className="flex flex-col gap-3">
-            <h2 id="facility-settings-title" className="text-xl font-bold text-tide-900">Facility settings</h2>
+            <h2 id="facility-settings-title" className="text-xl font-bold text-tide-900">
+              Facility settings
+            </h2>
             {facility ? (
               <FacilitySettingsForm facility={facility} canEdit={isManager} />
             ) : (
@@ -134,7 +140,9 @@ export function Component() {
             )}
           </section>
           <section aria-labelledby="limits-title" className="flex flex-col gap-3">
-            <h2 id="limits-title" className="text-xl font-bold text-tide-900">Reading limits</h2>
+            <h2 id="limits-title" className="text-xl font-bold text-tide-900">
+              Reading limits
+            </h2>
             <p className="max-w-2xl text-sm text-tide-700">
               A reading inside the ok range is ok; outside it is watch; past a critical limit it is critical and escalates at once.
             </p>

@@ -14,16 +14,18 @@ function taskIdFrom(params: Params): number {
   return id
 }
 
-export const loader = (queryClient: QueryClient) => async ({ params }: LoaderFunctionArgs) => {
-  const id = taskIdFrom(params)
-  await Promise.all([
-    queryClient.ensureQueryData(escalationQueries.task(id)),
-    queryClient.ensureQueryData(escalationQueries.record(id)),
-    queryClient.ensureQueryData(facilityQueries.timeZone()),
-    queryClient.ensureQueryData(parameterQueries.parameters()),
-  ])
-  return null
-}
+export const loader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const id = taskIdFrom(params)
+    await Promise.all([
+      queryClient.ensureQueryData(escalationQueries.task(id)),
+      queryClient.ensureQueryData(escalationQueries.record(id)),
+      queryClient.ensureQueryData(facilityQueries.timeZone()),
+      queryClient.ensureQueryData(parameterQueries.parameters()),
+    ])
+    return null
+  }
 
 export function Component() {
   const id = taskIdFrom(useParams())

@@ -20,24 +20,27 @@ export function BatchStock({ batchId, me, timeZone }: { batchId: number; me: Per
         const here = stock.data!
         const mostFish = [...here.tanks].sort((a, b) => b.count - a.count)[0]
         const tankId = mostFish ? String(mostFish.tankId) : ''
-        const form = me.role === 'observer' ? null : (
-          <MovementForm
-            role={me.role}
-            timeZone={timeZone}
-            batches={[{ id: batchId, label: here.batchCode }]}
-            tanks={tanks.data!.map((t) => ({ id: t.id, label: `${t.code} · ${t.name}` }))}
-            causes={settings.data!.mortalityCauses}
-            movements={movements.data!}
-            start={{ kind: here.onRegister || me.role === 'technician' ? 'mortality' : 'arrival', batchId: String(batchId), fromTankId: tankId, tankId }}
-            onRecorded={() => void queryClient.invalidateQueries({ queryKey: batchRecordKeys.batch(batchId) })}
-          />
-        )
+        const form =
+          me.role === 'observer' ? null : (
+            <MovementForm
+              role={me.role}
+              timeZone={timeZone}
+              batches={[{ id: batchId, label: here.batchCode }]}
+              tanks={tanks.data!.map((t) => ({ id: t.id, label: `${t.code} · ${t.name}` }))}
+              causes={settings.data!.mortalityCauses}
+              movements={movements.data!}
+              start={{ kind: here.onRegister || me.role === 'technician' ? 'mortality' : 'arrival', batchId: String(batchId), fromTankId: tankId, tankId }}
+              onRecorded={() => void queryClient.invalidateQueries({ queryKey: batchRecordKeys.batch(batchId) })}
+            />
+          )
         return (
           <StockRegisterSection
             figures={here}
             rows={here.tanks.map((t) => ({ ...t, key: t.tankId, label: t.tankCode, to: `/tanks/${t.tankId}` }))}
             rowsLabel="Tank"
-            emptyText={here.onRegister ? 'The register shows none of this batch left in any tank.' : 'This batch is not on the stock register yet: record its arrival.'}
+            emptyText={
+              here.onRegister ? 'The register shows none of this batch left in any tank.' : 'This batch is not on the stock register yet: record its arrival.'
+            }
             movements={movements.data!}
             view={{ batchId }}
             timeZone={timeZone}

@@ -20,18 +20,24 @@ export function TankStock({ tankId, me, timeZone }: { tankId: number; me: Person
       {() => {
         const here = stock.data!
         const live = batches.data!.filter((b) => b.status !== 'ended' || here.batches.some((h) => h.batchId === b.id))
-        const form = me.role === 'observer' ? null : (
-          <MovementForm
-            role={me.role}
-            timeZone={timeZone}
-            batches={live.map((b) => ({ id: b.id, label: `${b.code} · ${b.species}` }))}
-            tanks={tanks.data!.map((t) => ({ id: t.id, label: `${t.code} · ${t.name}` }))}
-            causes={settings.data!.mortalityCauses}
-            movements={movements.data!}
-            start={{ batchId: here.batches[0] ? String(here.batches[0].batchId) : '', fromTankId: String(tankId), toTankId: String(tankId), tankId: String(tankId) }}
-            onRecorded={() => void queryClient.invalidateQueries({ queryKey: tankPageKeys.overview(tankId) })}
-          />
-        )
+        const form =
+          me.role === 'observer' ? null : (
+            <MovementForm
+              role={me.role}
+              timeZone={timeZone}
+              batches={live.map((b) => ({ id: b.id, label: `${b.code} · ${b.species}` }))}
+              tanks={tanks.data!.map((t) => ({ id: t.id, label: `${t.code} · ${t.name}` }))}
+              causes={settings.data!.mortalityCauses}
+              movements={movements.data!}
+              start={{
+                batchId: here.batches[0] ? String(here.batches[0].batchId) : '',
+                fromTankId: String(tankId),
+                toTankId: String(tankId),
+                tankId: String(tankId),
+              }}
+              onRecorded={() => void queryClient.invalidateQueries({ queryKey: tankPageKeys.overview(tankId) })}
+            />
+          )
         return (
           <StockRegisterSection
             figures={here}

@@ -12,7 +12,9 @@ export const BAND_LOOK: Record<Band, { label: string; icon: LucideIcon; tone: st
 export function BandBadge({ band, prefix, ringed, className }: { band: Band; prefix?: string; ringed?: boolean; className?: string }) {
   const b = BAND_LOOK[band]
   return (
-    <span className={clsx('inline-flex shrink-0 items-center gap-1 rounded-md px-1.5 py-0.5 text-sm font-bold', b.tone, ringed && ['ring-1', b.ring], className)}>
+    <span
+      className={clsx('inline-flex shrink-0 items-center gap-1 rounded-md px-1.5 py-0.5 text-sm font-bold', b.tone, ringed && ['ring-1', b.ring], className)}
+    >
       <b.icon aria-hidden className="size-4" /> {prefix ? `${prefix}: ${b.label}` : b.label}
     </span>
   )

@@ -14,13 +14,17 @@ export function BathCautions({ permanganate }: { permanganate?: boolean }) {
         <ShieldAlert aria-hidden className="size-5" /> Cautions
       </p>
       <ul className="mt-1 list-disc space-y-1 pl-6 text-sm text-tide-900">
-        {general.map((c) => <li key={c}>{c}</li>)}
+        {general.map((c) => (
+          <li key={c}>{c}</li>
+        ))}
       </ul>
       {permanganate === undefined && (
         <>
           <p className="mt-2 text-sm font-semibold text-tide-900">Potassium permanganate</p>
           <ul className="mt-1 list-disc space-y-1 pl-6 text-sm text-tide-900">
-            {PERMANGANATE_CAUTIONS.map((c) => <li key={c}>{c}</li>)}
+            {PERMANGANATE_CAUTIONS.map((c) => (
+              <li key={c}>{c}</li>
+            ))}
           </ul>
         </>
       )}

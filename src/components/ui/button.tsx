@@ -8,11 +8,7 @@ const variants = {
   ghost: 'text-tide-700 hover:bg-tide-100',
 }
 
-export function Button({
-  variant = 'primary',
-  className,
-  ...props
-}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: keyof typeof variants }) {
+export function Button({ variant = 'primary', className, ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: keyof typeof variants }) {
   return (
     <button
       className={clsx(

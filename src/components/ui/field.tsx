@@ -16,10 +16,7 @@ export const Field = forwardRef<HTMLInputElement, FieldProps>(function Field({ l
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : undefined}
-        className={clsx(
-          'min-h-11 rounded-lg border bg-white px-3 text-base',
-          error ? 'border-alarm-500' : 'border-tide-200 focus:border-tide-500',
-        )}
+        className={clsx('min-h-11 rounded-lg border bg-white px-3 text-base', error ? 'border-alarm-500' : 'border-tide-200 focus:border-tide-500')}
         {...props}
       />
       {hint && !error && <p className="text-sm text-tide-600">{hint}</p>}

@@ -12,7 +12,11 @@ export function QueryState({ queries, what, children }: { queries: UseQueryResul
   if (missing.length === 0) return <>{children()}</>
   const failed = missing.find((q) => q.isError)
   if (failed) {
-    const retry = <Button variant="secondary" onClick={() => missing.forEach((q) => void q.refetch())}>Try again</Button>
+    const retry = (
+      <Button variant="secondary" onClick={() => missing.forEach((q) => void q.refetch())}>
+        Try again
+      </Button>
+    )
     return <ErrorState title={`Could not load ${what}`} message={failed.error?.message ?? 'The server did not answer.'} action={retry} />
   }
   if (missing.some((q) => q.fetchStatus === 'paused') || (typeof navigator !== 'undefined' && !navigator.onLine)) {

@@ -8,7 +8,9 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, Props>(function Tex
   const id = useId()
   return (
     <div className={clsx('flex min-w-0 flex-col gap-1', className)}>
-      <label htmlFor={id} className="text-sm font-semibold text-tide-800">{label}</label>
+      <label htmlFor={id} className="text-sm font-semibold text-tide-800">
+        {label}
+      </label>
       <textarea
         ref={ref}
         id={id}
@@ -18,7 +20,11 @@ export const TextAreaField = forwardRef<HTMLTextAreaElement, Props>(function Tex
         className={clsx('rounded-lg border bg-white px-3 py-2 text-base', error ? 'border-alarm-500' : 'border-tide-200')}
         {...props}
       />
-      {error && <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">
+          {error}
+        </p>
+      )}
     </div>
   )
 })

@@ -20,12 +20,16 @@ export const tag = () => randomUUID().slice(0, 6)
 export const OK_READINGS = { do_mgL: 6.8, temp_c: 28.2 }
 
 export async function personIds(): Promise<Record<string, number>> {
-  const rows = await db().getRepository(PersonEntity).find({ select: { id: true, email: true } })
+  const rows = await db()
+    .getRepository(PersonEntity)
+    .find({ select: { id: true, email: true } })
   return Object.fromEntries(rows.map((p) => [p.email, p.id]))
 }
 
 export async function facilityToday(): Promise<DateTime> {
-  return DateTime.now().setZone((await getFacility()).timeZone).startOf('day')
+  return DateTime.now()
+    .setZone((await getFacility()).timeZone)
+    .startOf('day')
 }
 
 /**
@@ -36,7 +40,13 @@ export async function dayWithShifts(ids: number[], fromDays = 3): Promise<string
   const today = await facilityToday()
   for (let d = fromDays; d <= 28; d++) {
     const date = today.plus({ days: d }).toISODate()!
-    const onShift = new Set((await db().getRepository(ShiftEntity).find({ where: { date, personId: In(ids) } })).map((s) => s.personId))
+    const onShift = new Set(
+      (
+        await db()
+          .getRepository(ShiftEntity)
+          .find({ where: { date, personId: In(ids) } })
+      ).map((s) => s.personId),
+    )
     if (ids.every((id) => onShift.has(id))) return date
   }
   throw new Error('No day in the next four weeks has all of these people on shift')
@@ -57,12 +67,29 @@ export async function makeTaskPool(count: number, date: string, title: string): 
     const dueAt = local.toJSDate()
     const localStart = local.toFormat("yyyy-MM-dd'T'HH:mm:ss")
     rows.push({
-      routineId: null, eventId: null, title, category: 'welfare', instructions: '', priority: 'routine',
-      targetKind: 'tank', targetId: tank.id, tankId: tank.id, areaId: tank.areaId,
-      localDate: date, localStart, occurrenceStart: localStart,
-      dueAt, windowStartAt: new Date(dueAt.getTime() - 30 * 60_000), graceUntil: new Date(dueAt.getTime() + 4 * 3_600_000),
-      durationMinutes: 3, status: 'planned', assigneeId: null, assignedManually: false, edited: false,
-      requiredReadings: ['do_mgL', 'temp_c'], version: 1,
+      routineId: null,
+      eventId: null,
+      title,
+      category: 'welfare',
+      instructions: '',
+      priority: 'routine',
+      targetKind: 'tank',
+      targetId: tank.id,
+      tankId: tank.id,
+      areaId: tank.areaId,
+      localDate: date,
+      localStart,
+      occurrenceStart: localStart,
+      dueAt,
+      windowStartAt: new Date(dueAt.getTime() - 30 * 60_000),
+      graceUntil: new Date(dueAt.getTime() + 4 * 3_600_000),
+      durationMinutes: 3,
+      status: 'planned',
+      assigneeId: null,
+      assignedManually: false,
+      edited: false,
+      requiredReadings: ['do_mgL', 'temp_c'],
+      version: 1,
     })
   }
   for (let i = 0; i < rows.length; i += 500) await repo.insert(rows.slice(i, i + 500) as TaskRow[])
@@ -76,7 +103,15 @@ export async function makeTaskPool(count: number, date: string, title: string): 
  */
 export function overdueTask(tank: Tank, title: string, assigneeId: number, graceUntil: Date): Promise<TaskRow> {
   const dueAt = new Date(graceUntil.getTime() - 60 * 60_000)
-  return makeTankTask(tank, { title, assigneeId, status: 'overdue', priority: 'welfare_critical', dueAt, windowStartAt: new Date(dueAt.getTime() - 30 * 60_000), graceUntil })
+  return makeTankTask(tank, {
+    title,
+    assigneeId,
+    status: 'overdue',
+    priority: 'welfare_critical',
+    dueAt,
+    windowStartAt: new Date(dueAt.getTime() - 30 * 60_000),
+    graceUntil,
+  })
 }
 
 export async function freshTanks(count = 2) {
@@ -85,14 +120,20 @@ export async function freshTanks(count = 2) {
 
 /** Every escalation message received for a task (its unique title is in the subject). */
 export async function mailsFor(title: string) {
-  return (await db().getRepository(OutboxEntity).find({ order: { id: 'ASC' } })).filter((m) => m.subject.includes(title))
+  return (
+    await db()
+      .getRepository(OutboxEntity)
+      .find({ order: { id: 'ASC' } })
+  ).filter((m) => m.subject.includes(title))
 }
 
 /** The notification rows of a task's alerts (one per alert, step and person). */
 export async function notificationsFor(taskId: number) {
   const alerts = await db().getRepository(AlertEntity).findBy({ taskId })
   if (!alerts.length) return []
-  return db().getRepository(NotificationEntity).find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { id: 'ASC' } })
+  return db()
+    .getRepository(NotificationEntity)
+    .find({ where: { alertId: In(alerts.map((a) => a.id)) }, order: { id: 'ASC' } })
 }
 
 export async function taskStatus(id: number) {

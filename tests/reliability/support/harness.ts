@@ -36,7 +36,9 @@ export function reliabilityDb() {
     throw new Error('Run the reliability tests with `npm run test:reliability` (scripts/reliability.sh gives them a database server of their own).')
   }
   if (path.resolve(home) === path.resolve('.data/mariadb') || port === '3307' || name === 'roundtide' || name.endsWith('_test')) {
-    throw new Error(`Refusing to run: these tests kill their database server, so it must not be the developer's or the other tests' (${home}, port ${port}, ${name}).`)
+    throw new Error(
+      `Refusing to run: these tests kill their database server, so it must not be the developer's or the other tests' (${home}, port ${port}, ${name}).`,
+    )
   }
   return { home: path.resolve(home), port: Number(port), name, pidFile: path.join(path.resolve(home), 'run', 'mariadbd.pid') }
 }
@@ -93,7 +95,10 @@ export async function call(
     return { status: res.status, body, ms: performance.now() - started }
   } catch (err) {
     const e = err as Error
-    const error = e.name === 'TimeoutError' || e.name === 'AbortError' ? 'timeout' : `${e.message}${(e.cause as Error | undefined)?.message ? `: ${(e.cause as Error).message}` : ''}`
+    const error =
+      e.name === 'TimeoutError' || e.name === 'AbortError'
+        ? 'timeout'
+        : `${e.message}${(e.cause as Error | undefined)?.message ? `: ${(e.cause as Error).message}` : ''}`
     return { status: 0, body: null, ms: performance.now() - started, error }
   }
 }
@@ -316,7 +321,15 @@ export async function startRedis(port = Number(process.env.ROUNDTIDE_RELIABILITY
   const stopOld = async () => {
     if (!existsSync(pidFile)) return
     const pid = Number(readFileSync(pidFile, 'utf8').trim())
-    const cmdline = pid ? (() => { try { return readFileSync(`/proc/${pid}/cmdline`, 'utf8') } catch { return '' } })() : ''
+    const cmdline = pid
+      ? (() => {
+          try {
+            return readFileSync(`/proc/${pid}/cmdline`, 'utf8')
+          } catch {
+            return ''
+          }
+        })()
+      : ''
     if (pid && !isGone(pid) && cmdline.includes('redis-server')) {
       process.kill(pid, 'SIGTERM')
       await waitFor('redis-server to stop', async () => isGone(pid) || isZombie(pid), 10_000, 50)
@@ -325,7 +338,28 @@ export async function startRedis(port = Number(process.env.ROUNDTIDE_RELIABILITY
   }
   await stopOld() // left over from an interrupted run
   if (await redisPing(port)) throw new Error(`Something already answers on 127.0.0.1:${port}; set ROUNDTIDE_RELIABILITY_REDIS_PORT to a free port.`)
-  await run('redis-server', ['--port', String(port), '--bind', '127.0.0.1', '--save', '', '--appendonly', 'no', '--daemonize', 'yes', '--pidfile', pidFile, '--dir', dir, '--logfile', path.join(dir, 'redis.log')], 15_000)
+  await run(
+    'redis-server',
+    [
+      '--port',
+      String(port),
+      '--bind',
+      '127.0.0.1',
+      '--save',
+      '',
+      '--appendonly',
+      'no',
+      '--daemonize',
+      'yes',
+      '--pidfile',
+      pidFile,
+      '--dir',
+      dir,
+      '--logfile',
+      path.join(dir, 'redis.log'),
+    ],
+    15_000,
+  )
   await waitFor('redis-server to answer PING', () => redisPing(port), 10_000, 50)
   return { url: `redis://127.0.0.1:${port}`, port, stop: stopOld }
 }
@@ -351,7 +385,9 @@ export const percentile = (values: number[], p: number) => {
  * the process list gives that connection's client port, and /proc says which process owns it.
  */
 export async function schedulerLeader(ds: DataSource, processes: AppProcess[], lockName = 'roundtide_scheduler'): Promise<AppProcess | null> {
-  const [row] = (await ds.query('SELECT p.HOST AS host FROM information_schema.PROCESSLIST p WHERE p.ID = IS_USED_LOCK(?)', [lockName])) as Array<{ host: string }>
+  const [row] = (await ds.query('SELECT p.HOST AS host FROM information_schema.PROCESSLIST p WHERE p.ID = IS_USED_LOCK(?)', [lockName])) as Array<{
+    host: string
+  }>
   const port = Number(row?.host?.split(':').at(-1))
   if (!port) return null
   const hexPort = port.toString(16).toUpperCase().padStart(4, '0')

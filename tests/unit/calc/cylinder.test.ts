@@ -84,32 +84,21 @@ describe('metric method: water capacity × pressure (rows computed with a refere
   const zAt15C = reference.compressibility.filter((row) => row.inputs.temp_C === 15)
   /** Z from the 15 °C table row nearest the absolute pressure (the rows are ~1 bar apart from gauge + 1 atm). */
   const nearestZ = (absoluteBar: number) =>
-    zAt15C.reduce((best, row) =>
-      Math.abs(row.inputs.pressure_bar_abs - absoluteBar) < Math.abs(best.inputs.pressure_bar_abs - absoluteBar)
-        ? row
-        : best,
-    ).expected
+    zAt15C.reduce((best, row) => (Math.abs(row.inputs.pressure_bar_abs - absoluteBar) < Math.abs(best.inputs.pressure_bar_abs - absoluteBar) ? row : best))
+      .expected
   const zReference = 0.9992 // Z of O₂ at 1 atm and 15 °C, from the reference formulas
 
-  const freeGasCases = reference.free_gas.map(
-    (row) => [row.inputs.water_capacity_L, row.inputs.fill_pressure_bar_gauge, row] as const,
-  )
-  it.each(freeGasCases)(
-    'a %f L cylinder at %f bar holds the ideal-gas and real-gas volumes of the table',
-    (_capacity, _bar, row) => {
-      const { water_capacity_L: capacity, fill_pressure_bar_gauge: gauge } = row.inputs
-      const ideal = metricFreeGasL(capacity, gauge)
-      const real = metricFreeGasL(capacity, gauge, nearestZ(gauge + 1.01325), zReference)
-      expect(relativeError(ideal, row.expected.ideal_gas_L)).toBeLessThan(row.tolerance_rel)
-      expect(relativeError(real, row.expected.real_gas_L)).toBeLessThan(row.tolerance_rel)
-    },
-  )
+  const freeGasCases = reference.free_gas.map((row) => [row.inputs.water_capacity_L, row.inputs.fill_pressure_bar_gauge, row] as const)
+  it.each(freeGasCases)('a %f L cylinder at %f bar holds the ideal-gas and real-gas volumes of the table', (_capacity, _bar, row) => {
+    const { water_capacity_L: capacity, fill_pressure_bar_gauge: gauge } = row.inputs
+    const ideal = metricFreeGasL(capacity, gauge)
+    const real = metricFreeGasL(capacity, gauge, nearestZ(gauge + 1.01325), zReference)
+    expect(relativeError(ideal, row.expected.ideal_gas_L)).toBeLessThan(row.tolerance_rel)
+    expect(relativeError(real, row.expected.real_gas_L)).toBeLessThan(row.tolerance_rel)
+  })
 
   it('a 10 L cylinder read at 200 bar with a 137 bar reserve lasts (1984 − 1362) L / 10 L/min', () => {
-    const at = (bar: number) =>
-      reference.free_gas.find(
-        (row) => row.inputs.water_capacity_L === 10 && row.inputs.fill_pressure_bar_gauge === bar,
-      )
+    const at = (bar: number) => reference.free_gas.find((row) => row.inputs.water_capacity_L === 10 && row.inputs.fill_pressure_bar_gauge === bar)
     const reading = at(200)
     const reserve = at(137)
     if (!reading || !reserve) throw new Error('10 L rows missing from the fixture')

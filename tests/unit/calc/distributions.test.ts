@@ -1,17 +1,6 @@
 import { describe, expect, it } from 'vitest'
-import {
-  normalCdf,
-  normalQuantile,
-  studentTCdf,
-  studentTQuantile,
-  twoSidedProbability,
-} from '#shared/stats/distributions'
-import {
-  lnBeta,
-  lnGamma,
-  regularizedIncompleteBeta,
-  regularizedLowerGamma,
-} from '#shared/stats/special-functions'
+import { normalCdf, normalQuantile, studentTCdf, studentTQuantile, twoSidedProbability } from '#shared/stats/distributions'
+import { lnBeta, lnGamma, regularizedIncompleteBeta, regularizedLowerGamma } from '#shared/stats/special-functions'
 
 const relativeError = (actual: number, expected: number) => Math.abs(actual - expected) / Math.abs(expected)
 
@@ -64,7 +53,11 @@ describe('incomplete beta and gamma agree with their closed forms', () => {
   })
 
   it('I_x(a, b) + I_{1−x}(b, a) = 1 on both sides of the continued-fraction switch', () => {
-    for (const [x, a, b] of [[0.2, 2.5, 9], [0.8, 2.5, 9], [0.6, 40, 0.5]]) {
+    for (const [x, a, b] of [
+      [0.2, 2.5, 9],
+      [0.8, 2.5, 9],
+      [0.6, 40, 0.5],
+    ]) {
       expect(regularizedIncompleteBeta(x, a, b) + regularizedIncompleteBeta(1 - x, b, a)).toBeCloseTo(1, 14)
     }
   })
@@ -105,8 +98,21 @@ describe("Student's t quantiles", () => {
 
   // Published two-sided 95 % t table (3 decimals), from memory.
   const twoSided95: [number, number][] = [
-    [1, 12.706], [2, 4.303], [3, 3.182], [4, 2.776], [5, 2.571], [6, 2.447], [7, 2.365], [8, 2.306],
-    [9, 2.262], [10, 2.228], [15, 2.131], [20, 2.086], [30, 2.042], [60, 2.0], [120, 1.98],
+    [1, 12.706],
+    [2, 4.303],
+    [3, 3.182],
+    [4, 2.776],
+    [5, 2.571],
+    [6, 2.447],
+    [7, 2.365],
+    [8, 2.306],
+    [9, 2.262],
+    [10, 2.228],
+    [15, 2.131],
+    [20, 2.086],
+    [30, 2.042],
+    [60, 2.0],
+    [120, 1.98],
   ]
   it.each(twoSided95)('t(0.975, %i df) = %f as printed in a t table (from memory)', (df, printed) => {
     expect(studentTQuantile(twoSidedProbability(0.95), df)).toBeCloseTo(printed, 3)

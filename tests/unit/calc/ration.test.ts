@@ -3,8 +3,7 @@ import { biomassKg, dailyRationG, planDailyRation, splitDailyRation } from '#sha
 import reference from '../../fixtures/feeding.json'
 
 /** Sum of portions counted in whole scale steps, so the comparison itself adds no rounding. */
-const stepsIn = (grams: number[], scaleDecimals: number) =>
-  grams.reduce((total, portion) => total + Math.round(portion * 10 ** scaleDecimals), 0)
+const stepsIn = (grams: number[], scaleDecimals: number) => grams.reduce((total, portion) => total + Math.round(portion * 10 ** scaleDecimals), 0)
 
 describe('ration = biomass × % body weight per day (definitions in the feeding reference)', () => {
   it('2000 fish of 50 g at 3 %/day are 100 kg of fish eating 3 kg a day', () => {

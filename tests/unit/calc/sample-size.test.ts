@@ -1,11 +1,6 @@
 import { describe, expect, it } from 'vitest'
 import { normalQuantile, studentTQuantile } from '#shared/stats/distributions'
-import {
-  nextTBasedSampleSize,
-  normalApproxSampleSize,
-  roundUpSampleSize,
-  sampleSizeForMean,
-} from '#shared/stats/sample-stats'
+import { nextTBasedSampleSize, normalApproxSampleSize, roundUpSampleSize, sampleSizeForMean } from '#shared/stats/sample-stats'
 import reference from '../../fixtures/stats.json'
 
 const relativeRows = reference.sample_size_relative.map((row) => ({
@@ -55,9 +50,7 @@ describe('absolute-precision rows n = (z·s/d)² (same formula source)', () => {
 })
 
 describe('what the returned sample size promises', () => {
-  const grid = [0.05, 0.12, 0.2, 0.35, 0.6, 1.1].flatMap((cv) =>
-    [0.03, 0.05, 0.1, 0.2, 0.3].map((relativeError) => ({ cv, relativeError })),
-  )
+  const grid = [0.05, 0.12, 0.2, 0.35, 0.6, 1.1].flatMap((cv) => [0.03, 0.05, 0.1, 0.2, 0.3].map((relativeError) => ({ cv, relativeError })))
 
   it('always meets the precision it was asked for: n ≥ (t(0.975, n − 1)·CV/E)²', () => {
     for (const { cv, relativeError } of grid) {

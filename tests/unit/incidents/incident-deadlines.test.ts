@@ -6,7 +6,15 @@ const noticed = Date.UTC(2026, 11, 1, 8)
 const at = (hours: number) => new Date(noticed + hours * HOUR).toISOString()
 // The facility's defaults: welfare officer 24 h, committee 72 h, full report 7 d (common practice; local codes decide).
 const incident = (extra: Partial<Parameters<typeof deadlineStatuses>[0]> = {}) => ({
-  status: 'open' as const, told: [], welfareNotifiedAt: null, welfareDueAt: at(24), committeeDueAt: at(72), reportDueAt: at(168), reportedAt: null, closedAt: null, ...extra,
+  status: 'open' as const,
+  told: [],
+  welfareNotifiedAt: null,
+  welfareDueAt: at(24),
+  committeeDueAt: at(72),
+  reportDueAt: at(168),
+  reportedAt: null,
+  closedAt: null,
+  ...extra,
 })
 
 describe('an incident’s three deadlines', () => {
@@ -18,7 +26,15 @@ describe('an incident’s three deadlines', () => {
   })
 
   test('the first person told answers the welfare deadline; reporting and closing answer the others, late when after the hour', () => {
-    const done = incident({ status: 'closed', told: [{ who: 'Committee secretary', at: at(40) }, { who: 'Welfare officer', at: at(3) }], reportedAt: at(80), closedAt: at(100) })
+    const done = incident({
+      status: 'closed',
+      told: [
+        { who: 'Committee secretary', at: at(40) },
+        { who: 'Welfare officer', at: at(3) },
+      ],
+      reportedAt: at(80),
+      closedAt: at(100),
+    })
     const [welfare, committee, report] = deadlineStatuses(done, new Date(noticed + 300 * HOUR))
     expect(welfare).toMatchObject({ state: 'met', doneAt: at(3) })
     expect(committee).toMatchObject({ state: 'late', doneAt: at(80) })
@@ -26,7 +42,11 @@ describe('an incident’s three deadlines', () => {
   })
 
   test('a dismissed proposal has no deadlines, and the list shows the overdue one before one still running', () => {
-    expect(deadlineStatuses(incident({ status: 'dismissed' }), new Date(noticed + 100 * HOUR)).map((d) => d.state)).toEqual(['not_needed', 'not_needed', 'not_needed'])
+    expect(deadlineStatuses(incident({ status: 'dismissed' }), new Date(noticed + 100 * HOUR)).map((d) => d.state)).toEqual([
+      'not_needed',
+      'not_needed',
+      'not_needed',
+    ])
     const told = incident({ told: [{ who: 'Welfare officer', at: at(2) }] })
     expect(nextDeadline(deadlineStatuses(told, new Date(noticed + 80 * HOUR)))?.key).toBe('committee')
     expect(nextDeadline(deadlineStatuses(told, new Date(noticed + 10 * HOUR)))?.key).toBe('committee')

@@ -34,7 +34,7 @@ describe('import boundaries', () => {
     expect(found[0]).toMatch(/^import-x\/no-restricted-paths: .*"\.\.\/\.\.\/nets\/api\/net-queries".*Features never import each other/)
   })
 
-  test('when a module imports another module\'s entity, then lint fails and points to the service API', () => {
+  test("when a module imports another module's entity, then lint fails and points to the service API", () => {
     const found = problemsOf('server/modules/feeding/feed-plan.ts')
     expect(found).toHaveLength(1)
     expect(found[0]).toMatch(/^import-x\/no-restricted-paths: .*hatchery\.entity.*through its service API/)

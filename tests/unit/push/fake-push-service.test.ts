@@ -43,14 +43,19 @@ describe('the stand-in push service', () => {
   })
 
   test('checks the claims: a changed audience breaks the signature; an expired or foreign-audience token is refused', () => {
-    const signed = (audience: string, expiration?: number) => webpush.getVapidHeaders(audience, subject, serverKeys.publicKey, serverKeys.privateKey, 'aes128gcm', expiration).Authorization
+    const signed = (audience: string, expiration?: number) =>
+      webpush.getVapidHeaders(audience, subject, serverKeys.publicKey, serverKeys.privateKey, 'aes128gcm', expiration).Authorization
     const now = Date.now()
     expect(vapidProblem(signed(service.url), service.url, serverKeys.publicKey, now)).toBeNull()
     expect(vapidProblem(signed('https://push.example.net'), service.url, serverKeys.publicKey, now)).toBe(`The JWT audience is not ${service.url}`)
     const [, jwt] = /t=([^,]+),/.exec(signed(service.url))!
     const [head, body, signature] = jwt.split('.')
-    const otherAudience = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(body, 'base64url').toString()), aud: 'https://push.example.net' })).toString('base64url')
-    expect(vapidProblem(`vapid t=${head}.${otherAudience}.${signature}, k=${serverKeys.publicKey}`, 'https://push.example.net', serverKeys.publicKey, now)).toBe('The JWT signature does not verify')
+    const otherAudience = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(body, 'base64url').toString()), aud: 'https://push.example.net' })).toString(
+      'base64url',
+    )
+    expect(
+      vapidProblem(`vapid t=${head}.${otherAudience}.${signature}, k=${serverKeys.publicKey}`, 'https://push.example.net', serverKeys.publicKey, now),
+    ).toBe('The JWT signature does not verify')
     const inAnHour = Math.floor(now / 1000) + 3600
     expect(vapidProblem(signed(service.url, inAnHour), service.url, serverKeys.publicKey, now + 2 * 3_600_000)).toBe('The JWT has expired')
     expect(vapidProblem('WebPush abc', service.url, undefined, now)).toBe('Missing or malformed VAPID Authorization header')

@@ -7,7 +7,18 @@ const RULES: Record<string, ReadingRule & { key: string }> = {
   do_mgL: { key: 'do_mgL', name: 'Dissolved oxygen', unit: 'mg/L', physicalMin: 0, physicalMax: 30, okMin: 5, okMax: 10.5, criticalMin: 4, criticalMax: null },
   temp_c: { key: 'temp_c', name: 'Temperature', unit: '°C', physicalMin: -2, physicalMax: 45, okMin: 26, okMax: 31, criticalMin: 24, criticalMax: 33 },
   ph: { key: 'ph', name: 'pH', unit: 'pH', physicalMin: 0, physicalMax: 14, okMin: 7, okMax: 8.2, criticalMin: 6.8, criticalMax: 8.5 },
-  do_pct: { key: 'do_pct', name: 'DO saturation', unit: '% sat', physicalMin: 0, physicalMax: 400, derived: true, okMin: 70, okMax: 140, criticalMin: 55, criticalMax: null },
+  do_pct: {
+    key: 'do_pct',
+    name: 'DO saturation',
+    unit: '% sat',
+    physicalMin: 0,
+    physicalMax: 400,
+    derived: true,
+    okMin: 70,
+    okMax: 140,
+    criticalMin: 55,
+    criticalMax: null,
+  },
 }
 const ruleFor = (key: string) => RULES[key]
 
@@ -16,7 +27,11 @@ describe('one judgement of a set of readings', () => {
     const normal = judgeReadings({ do_mgL: 6.8, temp_c: 28.4 }, ruleFor, { required: ['do_mgL', 'temp_c'] })
     expect(normal.problems).toEqual({})
     expect(normal.flag).toBe('ok')
-    expect(normal.readings.map((r) => [r.parameterKey, r.band, r.derived])).toEqual([['do_mgL', 'ok', false], ['temp_c', 'ok', false], ['do_pct', 'ok', true]])
+    expect(normal.readings.map((r) => [r.parameterKey, r.band, r.derived])).toEqual([
+      ['do_mgL', 'ok', false],
+      ['temp_c', 'ok', false],
+      ['do_pct', 'ok', true],
+    ])
 
     expect(judgeReadings({ do_mgL: 4.5, temp_c: 28 }, ruleFor).flag).toBe('watch')
     const critical = judgeReadings({ do_mgL: 3.1, temp_c: 28 }, ruleFor)

@@ -19,7 +19,16 @@ const TASKS = [
 describe('compliance arithmetic', () => {
   test('per day and group: on time, late, missed, skipped, held and open are counted apart', () => {
     const rows = complianceRows(TASKS, 'day')
-    expect(rows.find((r) => r.period === '2026-06-01' && r.group === 'welfare')).toMatchObject({ total: 3, onTime: 1, late: 1, missed: 1, skipped: 0, held: 0, open: 0, onTimeRate: 0.333 })
+    expect(rows.find((r) => r.period === '2026-06-01' && r.group === 'welfare')).toMatchObject({
+      total: 3,
+      onTime: 1,
+      late: 1,
+      missed: 1,
+      skipped: 0,
+      held: 0,
+      open: 0,
+      onTimeRate: 0.333,
+    })
     expect(rows.find((r) => r.period === '2026-06-01' && r.group === 'feeding')).toMatchObject({ total: 2, onTime: 1, held: 1, onTimeRate: 1 })
     expect(rows.find((r) => r.period === '2026-06-02' && r.group === 'welfare')).toMatchObject({ total: 3, onTime: 1, skipped: 1, open: 1, onTimeRate: 0.5 })
   })
@@ -28,7 +37,15 @@ describe('compliance arithmetic', () => {
     expect(isoWeek('2026-06-01')).toBe('2026-W23')
     expect(isoWeek('2026-06-08')).toBe('2026-W24')
     const rows = complianceRows(TASKS, 'week')
-    expect(rows.find((r) => r.period === '2026-W23' && r.group === 'welfare')).toMatchObject({ total: 6, onTime: 2, late: 1, missed: 1, skipped: 1, open: 1, onTimeRate: 0.4 })
+    expect(rows.find((r) => r.period === '2026-W23' && r.group === 'welfare')).toMatchObject({
+      total: 6,
+      onTime: 2,
+      late: 1,
+      missed: 1,
+      skipped: 1,
+      open: 1,
+      onTimeRate: 0.4,
+    })
     expect(rows.find((r) => r.period === '2026-W24')).toMatchObject({ total: 1, onTime: 1, onTimeRate: 1 })
   })
 
@@ -41,7 +58,10 @@ describe('CSV export', () => {
   test('commas, quotes and newlines survive a round trip', () => {
     const rows = [{ a: 'Bin, spare', b: 'said "hi"', c: 'two\nlines' }]
     const parsed = Papa.parse<string[]>(toCsv(rows, ['a', 'b', 'c']), { skipEmptyLines: true }).data
-    expect(parsed).toEqual([['a', 'b', 'c'], ['Bin, spare', 'said "hi"', 'two\nlines']])
+    expect(parsed).toEqual([
+      ['a', 'b', 'c'],
+      ['Bin, spare', 'said "hi"', 'two\nlines'],
+    ])
   })
 
   test.each(['=1+1', '+SUM(A1)', '-2+3', '@cmd', '\tx'])('a cell starting like a formula (%j) is kept as text', (text) => {

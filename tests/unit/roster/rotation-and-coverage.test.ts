@@ -49,22 +49,30 @@ describe('coverage warnings', () => {
   })
 
   test('a person rostered twice at overlapping times is reported; back-to-back shifts are not', () => {
-    const overlapping = coverageWarnings(base({ shifts: [...base().shifts, { id: 2, personId: 1, personName: 'Kai', date: '2026-06-01', start: '14:00', end: '22:00' }] }))
+    const overlapping = coverageWarnings(
+      base({ shifts: [...base().shifts, { id: 2, personId: 1, personName: 'Kai', date: '2026-06-01', start: '14:00', end: '22:00' }] }),
+    )
     expect(overlapping.map((x) => x.kind)).toContain('double_booked')
-    const backToBack = coverageWarnings(base({ shifts: [...base().shifts, { id: 2, personId: 1, personName: 'Kai', date: '2026-06-01', start: '15:00', end: '22:00' }] }))
+    const backToBack = coverageWarnings(
+      base({ shifts: [...base().shifts, { id: 2, personId: 1, personName: 'Kai', date: '2026-06-01', start: '15:00', end: '22:00' }] }),
+    )
     expect(backToBack.map((x) => x.kind)).not.toContain('double_booked')
   })
 
   test('a welfare-critical task given to someone not on shift at its time is reported', () => {
-    const w = coverageWarnings(base({ tasks: [{ id: 9, date: '2026-06-01', time: '17:30', title: 'Evening check', priority: 'welfare_critical', assigneeId: 1, assigneeName: 'Kai' }] }))
+    const w = coverageWarnings(
+      base({ tasks: [{ id: 9, date: '2026-06-01', time: '17:30', title: 'Evening check', priority: 'welfare_critical', assigneeId: 1, assigneeName: 'Kai' }] }),
+    )
     expect(w.find((x) => x.kind === 'welfare_task_off_shift')).toMatchObject({ taskId: 9, personId: 1 })
   })
 
   test('a night shift that runs past midnight covers a task at 02:00', () => {
-    const w = coverageWarnings(base({
-      shifts: [{ id: 1, personId: 1, personName: 'Kai', date: '2026-06-01', start: '22:00', end: '06:00' }],
-      tasks: [{ id: 9, date: '2026-06-01', time: '23:30', title: 'Night check', priority: 'welfare_critical', assigneeId: 1, assigneeName: 'Kai' }],
-    }))
+    const w = coverageWarnings(
+      base({
+        shifts: [{ id: 1, personId: 1, personName: 'Kai', date: '2026-06-01', start: '22:00', end: '06:00' }],
+        tasks: [{ id: 9, date: '2026-06-01', time: '23:30', title: 'Night check', priority: 'welfare_critical', assigneeId: 1, assigneeName: 'Kai' }],
+      }),
+    )
     expect(w.map((x) => x.kind)).not.toContain('welfare_task_off_shift')
   })
 })

@@ -67,15 +67,31 @@ describe('expandRule inputs and bounds', () => {
 
   it.each([
     ['an unknown time zone', { ...berlinMorning, rrule: 'FREQ=DAILY', tzid: 'Mars/Base' }, 'Unknown time zone "Mars/Base"'],
-    ['a dtstart in the wrong format', { ...berlinMorning, rrule: 'FREQ=DAILY', dtstart: '2025-01-01 09:00' }, 'Invalid dtstart "2025-01-01 09:00": expected local time as YYYY-MM-DDTHH:mm:ss'],
-    ['a dtstart on a date that does not exist', { ...berlinMorning, rrule: 'FREQ=DAILY', dtstart: '2025-02-30T09:00:00' }, 'Invalid dtstart "2025-02-30T09:00:00": no such calendar date or time'],
+    [
+      'a dtstart in the wrong format',
+      { ...berlinMorning, rrule: 'FREQ=DAILY', dtstart: '2025-01-01 09:00' },
+      'Invalid dtstart "2025-01-01 09:00": expected local time as YYYY-MM-DDTHH:mm:ss',
+    ],
+    [
+      'a dtstart on a date that does not exist',
+      { ...berlinMorning, rrule: 'FREQ=DAILY', dtstart: '2025-02-30T09:00:00' },
+      'Invalid dtstart "2025-02-30T09:00:00": no such calendar date or time',
+    ],
     ['an unknown FREQ', { ...berlinMorning, rrule: 'FREQ=FORTNIGHTLY' }, 'Invalid RRULE: FREQ=FORTNIGHTLY is not one of'],
     ['no FREQ', { ...berlinMorning, rrule: 'INTERVAL=2' }, 'Invalid RRULE: FREQ is required'],
     ['a misspelt weekday', { ...berlinMorning, rrule: 'FREQ=WEEKLY;BYDAY=MX' }, 'Invalid RRULE: BYDAY value "MX" is not a weekday'],
     ['an hour past 23', { ...berlinMorning, rrule: 'FREQ=DAILY;BYHOUR=24' }, 'Invalid RRULE: BYHOUR=24: expected whole numbers from 0 to 23'],
     ['both COUNT and UNTIL', { ...berlinMorning, rrule: 'FREQ=DAILY;COUNT=3;UNTIL=20250301T000000Z' }, 'Invalid RRULE: COUNT and UNTIL cannot both be given'],
-    ['a day that never exists (30 February)', { ...berlinMorning, rrule: 'FREQ=YEARLY;BYMONTH=2;BYMONTHDAY=30' }, 'Invalid RRULE: BYMONTHDAY=30 never falls in BYMONTH=2'],
-    ['a DTSTART line inside the rule', { ...berlinMorning, rrule: 'DTSTART:20250101T090000\nRRULE:FREQ=DAILY' }, 'Invalid RRULE: expected a single RRULE value'],
+    [
+      'a day that never exists (30 February)',
+      { ...berlinMorning, rrule: 'FREQ=YEARLY;BYMONTH=2;BYMONTHDAY=30' },
+      'Invalid RRULE: BYMONTHDAY=30 never falls in BYMONTH=2',
+    ],
+    [
+      'a DTSTART line inside the rule',
+      { ...berlinMorning, rrule: 'DTSTART:20250101T090000\nRRULE:FREQ=DAILY' },
+      'Invalid RRULE: expected a single RRULE value',
+    ],
     ['an unreadable from', { ...berlinMorning, rrule: 'FREQ=DAILY', from: 'next tuesday' }, 'Invalid from "next tuesday"'],
     ['a negative limit', { ...berlinMorning, rrule: 'FREQ=DAILY', limit: -1 }, 'Invalid limit -1'],
   ])('when the input has %s, then it throws a message saying what is wrong', (_case, input, message) => {

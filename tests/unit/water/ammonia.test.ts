@@ -172,9 +172,7 @@ describe('inputs outside the range of the equations are refused with a clear mes
   })
 
   it('refuses a negative TAN reading', () => {
-    expect(() => unionizedAmmoniaMgL(-0.2, 7, 20)).toThrow(
-      'Total ammonia nitrogen -0.2 mg/L is negative; a concentration is 0 mg/L or more',
-    )
+    expect(() => unionizedAmmoniaMgL(-0.2, 7, 20)).toThrow('Total ammonia nitrogen -0.2 mg/L is negative; a concentration is 0 mg/L or more')
   })
 
   it('accepts the exported range limits themselves, so the UI can show them as inclusive', () => {

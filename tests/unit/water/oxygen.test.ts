@@ -136,9 +136,7 @@ describe('percent saturation', () => {
 
 describe('inputs outside the range of the equations are refused with a clear message', () => {
   it('refuses a temperature of 60 °C, naming the input and the range', () => {
-    expect(() => oxygenSolubilityMgL(60, 0)).toThrow(
-      'Temperature 60 °C is outside 0–40 °C, the range of the Benson & Krause equation',
-    )
+    expect(() => oxygenSolubilityMgL(60, 0)).toThrow('Temperature 60 °C is outside 0–40 °C, the range of the Benson & Krause equation')
   })
 
   it('refuses water below 0 °C', () => {
@@ -146,16 +144,13 @@ describe('inputs outside the range of the equations are refused with a clear mes
   })
 
   it('refuses a salinity of 45 g/kg and a negative salinity', () => {
-    expect(() => oxygenSolubilityMgL(10, 45)).toThrow(
-      'Salinity 45 g/kg is outside 0–40 g/kg, the range of the Benson & Krause equation',
-    )
+    expect(() => oxygenSolubilityMgL(10, 45)).toThrow('Salinity 45 g/kg is outside 0–40 g/kg, the range of the Benson & Krause equation')
     expect(() => oxygenSolubilityMgL(10, -2)).toThrow('Salinity -2 g/kg is outside 0–40 g/kg')
   })
 
   it('refuses a pressure of 760 typed in mm Hg where kPa is expected', () => {
     expect(() => oxygenSolubilityMgL(10, 0, 760)).toThrow(
-      'Barometric pressure 760 kPa is outside 51–111 kPa, ' +
-        'the range of the Benson & Krause pressure correction (0.5–1.1 atm)',
+      'Barometric pressure 760 kPa is outside 51–111 kPa, ' + 'the range of the Benson & Krause pressure correction (0.5–1.1 atm)',
     )
   })
 
@@ -166,16 +161,12 @@ describe('inputs outside the range of the equations are refused with a clear mes
   it('refuses a missing number (NaN) or infinity for any input', () => {
     expect(() => oxygenSolubilityMgL(Number.NaN, 0)).toThrow('Temperature must be a number (got NaN)')
     expect(() => oxygenSolubilityMgL(10, Number.NaN)).toThrow('Salinity must be a number (got NaN)')
-    expect(() => oxygenSolubilityMgL(10, 0, Number.POSITIVE_INFINITY)).toThrow(
-      'Barometric pressure must be a number (got Infinity)',
-    )
+    expect(() => oxygenSolubilityMgL(10, 0, Number.POSITIVE_INFINITY)).toThrow('Barometric pressure must be a number (got Infinity)')
     expect(() => oxygenPercentSaturation(Number.NaN, 10, 0)).toThrow('Dissolved oxygen must be a number (got NaN)')
   })
 
   it('refuses a negative oxygen reading', () => {
-    expect(() => oxygenPercentSaturation(-0.5, 10, 0)).toThrow(
-      'Dissolved oxygen -0.5 mg/L is negative; a concentration is 0 mg/L or more',
-    )
+    expect(() => oxygenPercentSaturation(-0.5, 10, 0)).toThrow('Dissolved oxygen -0.5 mg/L is negative; a concentration is 0 mg/L or more')
   })
 
   it('accepts the exported range limits themselves, so the UI can show them as inclusive', () => {

@@ -12,11 +12,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (person: Person) => voi
   const failure = signIn.error instanceof ApiError ? signIn.error.message : signIn.error ? 'Could not sign in.' : null
 
   return (
-    <form
-      noValidate
-      className="flex flex-col gap-4"
-      onSubmit={form.handleSubmit((input) => signIn.mutate(input, { onSuccess: onSignedIn }))}
-    >
+    <form noValidate className="flex flex-col gap-4" onSubmit={form.handleSubmit((input) => signIn.mutate(input, { onSuccess: onSignedIn }))}>
       <Field label="E-mail" type="email" autoComplete="username" inputMode="email" {...form.register('email')} error={form.formState.errors.email?.message} />
       <Field label="Password" type="password" autoComplete="current-password" {...form.register('password')} error={form.formState.errors.password?.message} />
       {failure && (

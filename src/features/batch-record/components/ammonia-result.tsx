@@ -29,9 +29,13 @@ export function AmmoniaResult({ tanMgL, pH, tempC, salinity }: Inputs) {
     <div aria-live="polite" className="flex flex-col gap-2 rounded-lg bg-tide-50 p-3">
       <p className="flex flex-wrap items-baseline justify-between gap-2">
         <span className="font-semibold text-tide-800">Un-ionised ammonia</span>
-        <span className="text-xl font-bold tabular-nums text-tide-900" data-testid="nh3">{nh3.toFixed(4)} mg/L NH3-N</span>
+        <span className="text-xl font-bold tabular-nums text-tide-900" data-testid="nh3">
+          {nh3.toFixed(4)} mg/L NH3-N
+        </span>
       </p>
-      <p className="text-sm text-tide-700">= {(nh3 * NH3_PER_N).toFixed(4)} mg/L as NH3 · {AMMONIA_METHOD_NAMES[method]}</p>
+      <p className="text-sm text-tide-700">
+        = {(nh3 * NH3_PER_N).toFixed(4)} mg/L as NH3 · {AMMONIA_METHOD_NAMES[method]}
+      </p>
       <p className="text-sm text-tide-700">{NOTES[method]}</p>
     </div>
   )

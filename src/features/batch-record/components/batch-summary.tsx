@@ -18,13 +18,29 @@ export function BatchSummary({ batch, tanks }: { batch: Batch; tanks: Tank[] }) 
       <p className="flex flex-wrap items-center gap-x-3 gap-y-1">
         <Fish aria-hidden className="size-5 text-tide-600" />
         <span className="text-lg font-semibold text-tide-900">{batch.species}</span>
-        <span className={clsx('inline-flex items-center gap-1 text-sm font-semibold', s.tone)}><s.icon aria-hidden className="size-4" /> {s.label}</span>
+        <span className={clsx('inline-flex items-center gap-1 text-sm font-semibold', s.tone)}>
+          <s.icon aria-hidden className="size-4" /> {s.label}
+        </span>
       </p>
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
-        <div><dt className="text-sm text-tide-600">Count</dt><dd className="font-semibold text-tide-900 tabular-nums">{batch.count.toLocaleString('en-GB')}</dd></div>
-        <div><dt className="text-sm text-tide-600">Mean weight</dt><dd className="font-semibold text-tide-900 tabular-nums" data-testid="batch-mean">{batch.meanWeightG} g</dd></div>
-        <div><dt className="text-sm text-tide-600">Tanks</dt><dd className="text-tide-900">{codes.join(', ') || 'None'}</dd></div>
-        <div><dt className="text-sm text-tide-600">Arrived</dt><dd className="text-tide-900">{formatDate(batch.arrivalDate)}</dd></div>
+        <div>
+          <dt className="text-sm text-tide-600">Count</dt>
+          <dd className="font-semibold text-tide-900 tabular-nums">{batch.count.toLocaleString('en-GB')}</dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Mean weight</dt>
+          <dd className="font-semibold text-tide-900 tabular-nums" data-testid="batch-mean">
+            {batch.meanWeightG} g
+          </dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Tanks</dt>
+          <dd className="text-tide-900">{codes.join(', ') || 'None'}</dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Arrived</dt>
+          <dd className="text-tide-900">{formatDate(batch.arrivalDate)}</dd>
+        </div>
       </dl>
       {batch.origin && <p className="mt-2 text-sm text-tide-700">From {batch.origin}</p>}
     </section>

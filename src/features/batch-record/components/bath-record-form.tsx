@@ -26,15 +26,30 @@ function expectedGrams(v: BathValues) {
 
 /** A bath as given: what, how strong, how long, what was weighed, and how the fish took it. */
 export function BathRecordForm({ batchId, eventId }: { batchId: number; eventId: number | null }) {
-  const { form, submit, saving } = useRecordForm(bathForm, { batchId, eventId, defaultValues: empty, saved: (r) => `Saved the ${String(r.data.product)} bath.` })
-  const { register, watch, formState: { errors } } = form
+  const { form, submit, saving } = useRecordForm(bathForm, {
+    batchId,
+    eventId,
+    defaultValues: empty,
+    saved: (r) => `Saved the ${String(r.data.product)} bath.`,
+  })
+  const {
+    register,
+    watch,
+    formState: { errors },
+  } = form
   const v = watch()
   const expected = expectedGrams(v)
   const weighed = parseDecimal(v.gramsWeighed)
   const off = expected !== null && weighed !== null && Math.abs(weighed - expected) / expected > TOLERANCE
   const num = { inputMode: 'decimal' as const, autoComplete: 'off' }
   return (
-    <FormCard title="Bath record" description="Record a bath given on the veterinarian’s instruction." onSubmit={submit} saving={saving} saveLabel="Save bath record">
+    <FormCard
+      title="Bath record"
+      description="Record a bath given on the veterinarian’s instruction."
+      onSubmit={submit}
+      saving={saving}
+      saveLabel="Save bath record"
+    >
       <Field label="Product" error={errors.product?.message} {...register('product')} />
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         <Field label="Target (mg/L)" {...num} error={errors.targetMgL?.message} {...register('targetMgL')} />
@@ -51,7 +66,9 @@ export function BathRecordForm({ batchId, eventId }: { batchId: number; eventId:
       )}
       <TextAreaField label="Observations" rows={3} {...register('observations')} />
       <BathCautions permanganate={/permanganate|kmno4/i.test(v.product)} />
-      <Link to="/calculators" className="text-sm font-semibold text-tide-700 underline">Open the bath calculator</Link>
+      <Link to="/calculators" className="text-sm font-semibold text-tide-700 underline">
+        Open the bath calculator
+      </Link>
     </FormCard>
   )
 }

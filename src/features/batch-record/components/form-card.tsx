@@ -3,7 +3,14 @@ import type { FormEventHandler, ReactNode } from 'react'
 import { Button } from '../../../components/ui/button'
 
 /** The frame every record form shares: a heading, the fields, and one big Save. */
-export function FormCard({ title, description, onSubmit, saving, saveLabel, children }: {
+export function FormCard({
+  title,
+  description,
+  onSubmit,
+  saving,
+  saveLabel,
+  children,
+}: {
   title: string
   description?: string
   onSubmit: FormEventHandler<HTMLFormElement>

@@ -14,7 +14,10 @@ export function Notice({ tone, children }: { tone: keyof typeof TONES; children:
   return (
     <div className={clsx('flex items-start gap-2 rounded-lg border p-3 text-sm', t.box)}>
       <t.icon aria-hidden className="mt-0.5 size-4 shrink-0" />
-      <p className="text-tide-900">{t.label && <strong className={clsx('mr-1', t.box.split(' ').at(-1))}>{t.label}:</strong>}{children}</p>
+      <p className="text-tide-900">
+        {t.label && <strong className={clsx('mr-1', t.box.split(' ').at(-1))}>{t.label}:</strong>}
+        {children}
+      </p>
     </div>
   )
 }

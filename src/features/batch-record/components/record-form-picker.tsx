@@ -25,7 +25,10 @@ export function RecordFormPicker({ value, onChange }: { value: RecordFormName; o
             type="button"
             aria-pressed={on}
             onClick={() => onChange(name)}
-            className={clsx('flex min-h-12 items-center gap-2 rounded-lg border px-3 text-left font-semibold', on ? 'border-tide-700 bg-tide-700 text-white' : 'border-tide-200 bg-white text-tide-800 hover:bg-tide-50')}
+            className={clsx(
+              'flex min-h-12 items-center gap-2 rounded-lg border px-3 text-left font-semibold',
+              on ? 'border-tide-700 bg-tide-700 text-white' : 'border-tide-200 bg-white text-tide-800 hover:bg-tide-50',
+            )}
           >
             <c.icon aria-hidden className="size-5 shrink-0" /> {c.label}
           </button>

@@ -16,22 +16,36 @@ const nextBox = (v: TransportBoxValues): TransportBoxValues => {
 
 export function TransportBoxForm({ batchId, eventId, tempLimitC }: { batchId: number; eventId: number | null; tempLimitC: number }) {
   const { form, submit, saving } = useRecordForm(transportBoxForm, {
-    batchId, eventId, defaultValues: empty, next: nextBox,
+    batchId,
+    eventId,
+    defaultValues: empty,
+    next: nextBox,
     saved: (r) => {
       const warnings = Array.isArray(r.data.warnings) ? r.data.warnings.length : 0
       return `Saved the check of ${String(r.data.box)}${warnings ? ` with ${warnings} ${warnings === 1 ? 'warning' : 'warnings'}` : ''}.`
     },
   })
-  const { register, watch, formState: { errors } } = form
+  const {
+    register,
+    watch,
+    formState: { errors },
+  } = form
   const v = watch()
   const [tempC, pH, doMgL, receivingTempC, receivingPH] = [v.tempC, v.pH, v.doMgL, v.receivingTempC, v.receivingPH].map(parseDecimal)
-  const comparison = tempC !== null && pH !== null && receivingTempC !== null && receivingPH !== null
-    ? compareWater({ tempC, pH, doMgL: doMgL ?? undefined }, { tempC: receivingTempC, pH: receivingPH }, tempLimitC)
-    : null
+  const comparison =
+    tempC !== null && pH !== null && receivingTempC !== null && receivingPH !== null
+      ? compareWater({ tempC, pH, doMgL: doMgL ?? undefined }, { tempC: receivingTempC, pH: receivingPH }, tempLimitC)
+      : null
   const num = { inputMode: 'decimal' as const, autoComplete: 'off' }
 
   return (
-    <FormCard title="Transport box check" description="Each box beside the receiving water, before any fish go in." onSubmit={submit} saving={saving} saveLabel="Save box check">
+    <FormCard
+      title="Transport box check"
+      description="Each box beside the receiving water, before any fish go in."
+      onSubmit={submit}
+      saving={saving}
+      saveLabel="Save box check"
+    >
       <Field label="Box" error={errors.box?.message} {...register('box')} />
       <fieldset className="grid grid-cols-2 items-end gap-3 sm:grid-cols-3">
         <legend className="mb-1 text-sm font-bold text-tide-900">Box water</legend>

@@ -9,14 +9,26 @@ const empty: TransportWaterValues = { alkalinityMgL: '', pH: '', tanMgL: '', nit
 
 export function TransportWaterForm({ batchId, eventId }: { batchId: number; eventId: number | null }) {
   const { form, submit, saving } = useRecordForm(transportWaterForm, {
-    batchId, eventId, defaultValues: empty,
+    batchId,
+    eventId,
+    defaultValues: empty,
     saved: (r) => `Saved the transport-water test${typeof r.data.nh3MgL === 'number' ? ` (NH3-N ${r.data.nh3MgL} mg/L)` : ''}.`,
   })
-  const { register, watch, formState: { errors } } = form
+  const {
+    register,
+    watch,
+    formState: { errors },
+  } = form
   const v = watch()
   const num = { inputMode: 'decimal' as const, autoComplete: 'off' }
   return (
-    <FormCard title="Transport-water test" description="Test the bag or box water before it mixes with the system." onSubmit={submit} saving={saving} saveLabel="Save water test">
+    <FormCard
+      title="Transport-water test"
+      description="Test the bag or box water before it mixes with the system."
+      onSubmit={submit}
+      saving={saving}
+      saveLabel="Save water test"
+    >
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         <Field label="Temperature (°C)" {...num} error={errors.tempC?.message} {...register('tempC')} />
         <Field label="pH" {...num} error={errors.pH?.message} {...register('pH')} />

@@ -8,10 +8,15 @@ export function WaterComparison({ comparison, tempLimitC }: { comparison: Compar
       {!comparison && <Notice tone="info">Enter both temperatures and both pH values to compare the box with the receiving water.</Notice>}
       {comparison && comparison.warnings.length === 0 && (
         <Notice tone="ok">
-          Within the limits: {Math.abs(comparison.tempDifferenceC)} °C apart (limit {tempLimitC} °C), pH {Math.abs(comparison.pHDifference)} apart (limit {PH_DIFFERENCE_LIMIT}).
+          Within the limits: {Math.abs(comparison.tempDifferenceC)} °C apart (limit {tempLimitC} °C), pH {Math.abs(comparison.pHDifference)} apart (limit{' '}
+          {PH_DIFFERENCE_LIMIT}).
         </Notice>
       )}
-      {comparison?.warnings.map((w) => <Notice key={w} tone="watch">{w}</Notice>)}
+      {comparison?.warnings.map((w) => (
+        <Notice key={w} tone="watch">
+          {w}
+        </Notice>
+      ))}
       <p className="text-sm text-tide-600">
         These limits are prompts, not rules for any species: temper gradually and follow the supplier’s and the veterinarian’s advice.
       </p>

@@ -15,7 +15,11 @@ function Stat({ label, id, value, unit, wide }: { label: string; id: string; val
 }
 
 /** Live summary of the sample: n, mean, SD, CV, range and how many fish the chosen precision needs. */
-export function WeighingStats({ entries, allowedErrorPct, onAllowedErrorChange }: {
+export function WeighingStats({
+  entries,
+  allowedErrorPct,
+  onAllowedErrorChange,
+}: {
   entries: WeightEntry[]
   allowedErrorPct: number
   onAllowedErrorChange: (pct: number) => void

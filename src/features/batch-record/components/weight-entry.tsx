@@ -24,7 +24,9 @@ export function WeightEntryField({ count, onAdd, disabled }: { count: number; on
 
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-tide-800">Weight of fish {count + 1} (g)</label>
+      <label htmlFor={id} className="text-sm font-semibold text-tide-800">
+        Weight of fish {count + 1} (g)
+      </label>
       <div className="flex gap-2">
         <input
           ref={input}

@@ -11,7 +11,12 @@ export function WeightList({ entries, onDelete }: { entries: WeightEntry[]; onDe
           <span className="whitespace-nowrap tabular-nums text-tide-900">
             <span className="text-xs text-tide-600">{index + 1}.</span> {e.grams.toFixed(e.decimals)} g
           </span>
-          <button type="button" onClick={() => onDelete(e.id)} aria-label={`Delete fish ${index + 1} (${e.grams.toFixed(e.decimals)} g)`} className="inline-flex h-11 w-10 shrink-0 items-center justify-center rounded-lg text-tide-700 hover:bg-tide-100">
+          <button
+            type="button"
+            onClick={() => onDelete(e.id)}
+            aria-label={`Delete fish ${index + 1} (${e.grams.toFixed(e.decimals)} g)`}
+            className="inline-flex h-11 w-10 shrink-0 items-center justify-center rounded-lg text-tide-700 hover:bg-tide-100"
+          >
             <X aria-hidden className="size-5" />
           </button>
         </li>

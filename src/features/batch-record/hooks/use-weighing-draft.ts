@@ -6,7 +6,9 @@ const keyFor = (batchId: number) => `roundtide:weighing:${batchId}`
 function read(batchId: number): WeightEntry[] {
   try {
     const stored: unknown = JSON.parse(sessionStorage.getItem(keyFor(batchId)) ?? '[]')
-    return Array.isArray(stored) ? stored.filter((e): e is WeightEntry => typeof e?.id === 'number' && typeof e?.grams === 'number' && typeof e?.decimals === 'number') : []
+    return Array.isArray(stored)
+      ? stored.filter((e): e is WeightEntry => typeof e?.id === 'number' && typeof e?.grams === 'number' && typeof e?.decimals === 'number')
+      : []
   } catch {
     return []
   }

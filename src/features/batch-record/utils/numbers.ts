@@ -19,9 +19,13 @@ export const decimalField = (min: number, max: number, unit = '') =>
     .min(1, 'Required')
     .refine((s) => parseDecimal(s) !== null, 'Enter a number')
     .transform((s) => parseDecimal(s)!)
-    .pipe(z.number().min(min, `At least ${min}${unit ? ` ${unit}` : ''}`).max(max, `At most ${max}${unit ? ` ${unit}` : ''}`))
+    .pipe(
+      z
+        .number()
+        .min(min, `At least ${min}${unit ? ` ${unit}` : ''}`)
+        .max(max, `At most ${max}${unit ? ` ${unit}` : ''}`),
+    )
 
-export const wholeField = (min: number, max: number, unit = '') =>
-  decimalField(min, max, unit).pipe(z.number().int('Whole numbers only'))
+export const wholeField = (min: number, max: number, unit = '') => decimalField(min, max, unit).pipe(z.number().int('Whole numbers only'))
 
 export const fixed = (value: number, decimals: number) => value.toFixed(decimals)

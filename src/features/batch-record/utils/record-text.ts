@@ -36,7 +36,10 @@ export function describeRecord(r: BatchRecord): RecordText {
     case 'bath':
       return {
         title: `Bath: ${String(d.product ?? '')}`,
-        lines: [`${n(d.targetMgL)} mg/L in ${n(d.volumeL)} L for ${n(d.minutes)} min; ${n(d.gramsWeighed)} g weighed (purity ${n(d.purityPct)} %)`, ...(d.observations ? [String(d.observations)] : [])],
+        lines: [
+          `${n(d.targetMgL)} mg/L in ${n(d.volumeL)} L for ${n(d.minutes)} min; ${n(d.gramsWeighed)} g weighed (purity ${n(d.purityPct)} %)`,
+          ...(d.observations ? [String(d.observations)] : []),
+        ],
         warnings: [],
       }
     case 'review':

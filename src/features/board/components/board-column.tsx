@@ -19,7 +19,9 @@ interface Props {
 /** Unassigned, or one person's day: a drop target for cards. */
 export function BoardColumn({ person, allTasks, shown, droppable, activeId, renderCard }: Props) {
   const headingId = useId()
-  const target: DropTarget = person ? { kind: 'column', assigneeId: person.personId, name: person.name } : { kind: 'column', assigneeId: null, name: 'Unassigned' }
+  const target: DropTarget = person
+    ? { kind: 'column', assigneeId: person.personId, name: person.name }
+    : { kind: 'column', assigneeId: null, name: 'Unassigned' }
   const { setNodeRef, isOver } = useDroppable({ id: columnId(target.assigneeId), data: target, disabled: !droppable })
   const hidden = allTasks.length - shown.length
 

@@ -25,7 +25,11 @@ export function BoardFiltersBar({ areas, value, onChange }: Props) {
           className={selectClass}
         >
           <option value="">All areas</option>
-          {areas.map((a) => <option key={a.id} value={a.id}>{a.name}</option>)}
+          {areas.map((a) => (
+            <option key={a.id} value={a.id}>
+              {a.name}
+            </option>
+          ))}
         </select>
       </label>
       <label className="flex min-w-0 flex-col gap-1 text-sm font-semibold text-tide-800">
@@ -36,7 +40,11 @@ export function BoardFiltersBar({ areas, value, onChange }: Props) {
           className={selectClass}
         >
           <option value="">All categories</option>
-          {ROUTINE_CATEGORIES.map((c) => <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>)}
+          {ROUTINE_CATEGORIES.map((c) => (
+            <option key={c} value={c}>
+              {CATEGORY_LABELS[c]}
+            </option>
+          ))}
         </select>
       </label>
       <label className="flex min-w-0 flex-col gap-1 text-sm font-semibold text-tide-800">
@@ -47,7 +55,11 @@ export function BoardFiltersBar({ areas, value, onChange }: Props) {
           className={selectClass}
         >
           <option value="">All statuses</option>
-          {TASK_STATUSES.map((s) => <option key={s} value={s}>{STATUS_LOOK[s].label}</option>)}
+          {TASK_STATUSES.map((s) => (
+            <option key={s} value={s}>
+              {STATUS_LOOK[s].label}
+            </option>
+          ))}
         </select>
       </label>
       {isFiltered(value) && (

@@ -79,7 +79,15 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
           {board.people.map((person) => {
             const own = column(person.personId)
             return (
-              <BoardColumn key={person.personId} person={person} allTasks={own.all} shown={own.shown} droppable={canEdit} activeId={activeId} renderCard={renderCard} />
+              <BoardColumn
+                key={person.personId}
+                person={person}
+                allTasks={own.all}
+                shown={own.shown}
+                droppable={canEdit}
+                activeId={activeId}
+                renderCard={renderCard}
+              />
             )
           })}
         </div>

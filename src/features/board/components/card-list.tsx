@@ -53,9 +53,9 @@ function WindowedCards({ cards, activeId, renderCard }: Props) {
     // focusable, so the keyboard can scroll it on a read-only board too.
     <div ref={scrollRef} className="max-h-[70vh] flex-1 overflow-y-auto overscroll-contain" tabIndex={0}>
       <ul className="relative" style={{ height: virtualizer.getTotalSize() }}>
-        {virtualizer.getVirtualItems().map((item) =>
-          renderCard(cards[item.index], { index: item.index, start: item.start, measure: virtualizer.measureElement }),
-        )}
+        {virtualizer
+          .getVirtualItems()
+          .map((item) => renderCard(cards[item.index], { index: item.index, start: item.start, measure: virtualizer.measureElement }))}
       </ul>
     </div>
   )

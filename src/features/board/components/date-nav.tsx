@@ -8,8 +8,7 @@ interface Props {
   hrefFor: (date: string) => string
 }
 
-const stepClass =
-  'inline-flex size-11 items-center justify-center rounded-lg bg-white text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50'
+const stepClass = 'inline-flex size-11 items-center justify-center rounded-lg bg-white text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50'
 
 export function DateNav({ date, today, hrefFor }: Props) {
   const navigate = useNavigate()
@@ -19,7 +18,9 @@ export function DateNav({ date, today, hrefFor }: Props) {
         <ChevronLeft aria-hidden className="size-5" />
       </Link>
       <div className="flex flex-col gap-1">
-        <label htmlFor="board-date" className="text-sm font-semibold text-tide-800">Board date</label>
+        <label htmlFor="board-date" className="text-sm font-semibold text-tide-800">
+          Board date
+        </label>
         <input
           id="board-date"
           type="date"

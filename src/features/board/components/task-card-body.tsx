@@ -14,7 +14,9 @@ export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; c
         <TaskStatusLabel status={task.status} />
       </p>
       <p className="leading-snug font-semibold text-tide-950">{task.title}</p>
-      <p className="truncate text-sm text-tide-700" title={task.targetLabel}>{task.targetLabel}</p>
+      <p className="truncate text-sm text-tide-700" title={task.targetLabel}>
+        {task.targetLabel}
+      </p>
       {(flagged || task.priority === 'welfare_critical') && (
         <p className="mt-0.5 flex flex-wrap items-center gap-x-2 gap-y-1">
           {flagged && <FlagLabel band={task.flag as 'watch' | 'critical'} />}

@@ -70,13 +70,7 @@ export function TaskCard({ task, movable, selected, onToggle, placement }: Props
       <TaskCardBody task={task} cornerTaken={movable} />
       {movable && (
         <label className="absolute top-0.5 right-0.5 flex size-9 cursor-pointer items-center justify-center rounded hover:bg-tide-50">
-          <input
-            type="checkbox"
-            checked={selected}
-            onChange={() => onToggle(task.id)}
-            aria-label={`Select ${phrase}`}
-            className="size-4 accent-tide-700"
-          />
+          <input type="checkbox" checked={selected} onChange={() => onToggle(task.id)} aria-label={`Select ${phrase}`} className="size-4 accent-tide-700" />
         </label>
       )}
     </li>

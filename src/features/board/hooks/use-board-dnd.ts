@@ -1,7 +1,4 @@
-import {
-  KeyboardSensor, MouseSensor, TouchSensor, useSensor, useSensors,
-  type DndContextProps, type DragEndEvent, type DragStartEvent,
-} from '@dnd-kit/core'
+import { KeyboardSensor, MouseSensor, TouchSensor, useSensor, useSensors, type DndContextProps, type DragEndEvent, type DragStartEvent } from '@dnd-kit/core'
 import { useCallback, useMemo, useState } from 'react'
 import type { BoardCard } from '#shared/schemas/board'
 import { useMoveTasks } from '../api/use-move-tasks'

@@ -6,10 +6,7 @@ import { readFilters, writeFilters, type BoardFilters } from '../utils/board-fil
 export function useBoardParams() {
   const [params, setParams] = useSearchParams()
   const filters = useMemo(() => readFilters(params), [params])
-  const setFilters = useCallback(
-    (next: BoardFilters) => setParams((current) => writeFilters(current, next), { replace: true }),
-    [setParams],
-  )
+  const setFilters = useCallback((next: BoardFilters) => setParams((current) => writeFilters(current, next), { replace: true }), [setParams])
   const hrefFor = useCallback(
     (date: string) => {
       const next = new URLSearchParams(params)

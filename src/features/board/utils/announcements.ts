@@ -13,12 +13,10 @@ export const screenReaderInstructions: ScreenReaderInstructions = {
 const taskOf = (active: Active) => (active.data.current as DragItem | undefined)?.task
 const targetOf = (over: Over | null) => over?.data.current as DropTarget | undefined
 
-const overText = (t: DropTarget) =>
-  t.kind === 'day' ? longDay(t.date) : t.assigneeId === null ? 'Unassigned' : `${t.name}'s column`
+const overText = (t: DropTarget) => (t.kind === 'day' ? longDay(t.date) : t.assigneeId === null ? 'Unassigned' : `${t.name}'s column`)
 
 /** Whether dropping here changes nothing for this task. */
-export const isOrigin = (task: BoardCard, t: DropTarget) =>
-  t.kind === 'day' ? t.date === task.localDate : t.assigneeId === task.assigneeId
+export const isOrigin = (task: BoardCard, t: DropTarget) => (t.kind === 'day' ? t.date === task.localDate : t.assigneeId === task.assigneeId)
 
 /**
  * Words for screen readers, never ids. `moving` gives the tasks that travel with the one picked

@@ -17,8 +17,7 @@ export function weekOf(iso: string): string[] {
   return Array.from({ length: 7 }, (_, i) => addDays(monday, i))
 }
 
-const format = (iso: string, options: Intl.DateTimeFormatOptions) =>
-  new Intl.DateTimeFormat('en-GB', { ...options, timeZone: 'UTC' }).format(asDate(iso))
+const format = (iso: string, options: Intl.DateTimeFormatOptions) => new Intl.DateTimeFormat('en-GB', { ...options, timeZone: 'UTC' }).format(asDate(iso))
 
 /** "Tuesday 8 December" */
 export const longDay = (iso: string) => format(iso, { weekday: 'long', day: 'numeric', month: 'long' })

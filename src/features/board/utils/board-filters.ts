@@ -29,6 +29,4 @@ export function writeFilters(params: URLSearchParams, filters: BoardFilters): UR
 export const isFiltered = (f: BoardFilters) => f.areaId !== null || f.category !== null || f.status !== null
 
 export const matchesFilters = (task: BoardCard, f: BoardFilters) =>
-  (f.areaId === null || task.areaId === f.areaId) &&
-  (f.category === null || task.category === f.category) &&
-  (f.status === null || task.status === f.status)
+  (f.areaId === null || task.areaId === f.areaId) && (f.category === null || task.category === f.category) && (f.status === null || task.status === f.status)

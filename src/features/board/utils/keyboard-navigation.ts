@@ -1,6 +1,12 @@
 import {
-  KeyboardCode, pointerWithin, rectIntersection,
-  type ClientRect, type CollisionDetection, type DroppableContainer, type KeyboardCoordinateGetter, type UniqueIdentifier,
+  KeyboardCode,
+  pointerWithin,
+  rectIntersection,
+  type ClientRect,
+  type CollisionDetection,
+  type DroppableContainer,
+  type KeyboardCoordinateGetter,
+  type UniqueIdentifier,
 } from '@dnd-kit/core'
 import type { DropTarget } from './drop-targets'
 
@@ -36,7 +42,10 @@ export function createKeyboardNavigation() {
     const step = (delta: 1 | -1) => {
       const items = row(currentKind)
       const index = items.findIndex((c) => c.id === currentId)
-      if (index === -1) return delta === 1 ? items.find((c) => droppableRects.get(c.id)!.left > currentRect.left) : items.findLast((c) => droppableRects.get(c.id)!.left < currentRect.left)
+      if (index === -1)
+        return delta === 1
+          ? items.find((c) => droppableRects.get(c.id)!.left > currentRect.left)
+          : items.findLast((c) => droppableRects.get(c.id)!.left < currentRect.left)
       return items[index + delta]
     }
 

@@ -24,8 +24,12 @@ export function BathDoseCalculator() {
     <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
       <section aria-labelledby="bath-heading" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
         <div>
-          <h2 id="bath-heading" className="text-lg font-bold text-tide-900">Bath dose</h2>
-          <p className="text-sm text-tide-600">Arithmetic for a static bath. Which product, strength and time is the veterinarian’s call, with the label or permit.</p>
+          <h2 id="bath-heading" className="text-lg font-bold text-tide-900">
+            Bath dose
+          </h2>
+          <p className="text-sm text-tide-600">
+            Arithmetic for a static bath. Which product, strength and time is the veterinarian’s call, with the label or permit.
+          </p>
         </div>
         <div className="grid grid-cols-2 gap-3">
           <NumberInput label="Target (mg/L)" value={v.target} onChange={set('target')} />
@@ -42,12 +46,18 @@ export function BathDoseCalculator() {
           {result?.value && (
             <>
               <p className="text-sm font-semibold text-tide-700">Amount for the figures you entered</p>
-              <p className="text-2xl font-bold tabular-nums text-tide-900" data-testid="bath-grams">{formatAmount(result.value.dose.productG)} g of product</p>
-              <p className="text-sm text-tide-700">{formatAmount(result.value.dose.activeIngredientG)} g active ingredient in {volume} L{minutes ? `, ${minutes} min` : ''}.</p>
+              <p className="text-2xl font-bold tabular-nums text-tide-900" data-testid="bath-grams">
+                {formatAmount(result.value.dose.productG)} g of product
+              </p>
+              <p className="text-sm text-tide-700">
+                {formatAmount(result.value.dose.activeIngredientG)} g active ingredient in {volume} L{minutes ? `, ${minutes} min` : ''}.
+              </p>
               {result.value.stock && (
                 <p className="mt-2 text-tide-900">
                   or <strong className="tabular-nums">{formatAmount(result.value.stock.stockMl)} mL</strong> of a {stock} g/L stock
-                  <span className="block text-sm text-tide-700">Taken as small beside the bath; for a large addition enter the final volume as the bath volume.</span>
+                  <span className="block text-sm text-tide-700">
+                    Taken as small beside the bath; for a large addition enter the final volume as the bath volume.
+                  </span>
                 </p>
               )}
             </>

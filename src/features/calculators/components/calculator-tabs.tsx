@@ -22,7 +22,10 @@ export function CalculatorTabs({ current }: { current: CalculatorName }) {
             to={`/calculators?tool=${name}`}
             replace
             aria-current={name === current ? 'page' : undefined}
-            className={clsx('inline-flex min-h-11 items-center gap-2 rounded-lg border px-4 font-semibold', name === current ? 'border-tide-700 bg-tide-700 text-white' : 'border-tide-200 bg-white text-tide-800 hover:bg-tide-50')}
+            className={clsx(
+              'inline-flex min-h-11 items-center gap-2 rounded-lg border px-4 font-semibold',
+              name === current ? 'border-tide-700 bg-tide-700 text-white' : 'border-tide-200 bg-white text-tide-800 hover:bg-tide-50',
+            )}
           >
             <t.icon aria-hidden className="size-5" /> {t.label}
           </Link>

@@ -19,7 +19,8 @@ export function CylinderCalculator() {
   const result = missing
     ? null
     : attempt(() => {
-        const settings: CylinderSettings = method === 'metric' ? { method, waterCapacityL: size, reserveBar: reserve } : { method, factorLPerPsi: size, reservePsi: reserve }
+        const settings: CylinderSettings =
+          method === 'metric' ? { method, waterCapacityL: size, reserveBar: reserve } : { method, factorLPerPsi: size, reservePsi: reserve }
         return estimateSupply(settings, { gaugePressure: pressure, flowLPerMin: flow })
       })
   const switchTo = (next: Method) => {
@@ -29,15 +30,24 @@ export function CylinderCalculator() {
 
   return (
     <section aria-labelledby="cylinder-heading" className="flex max-w-2xl flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
-      <h2 id="cylinder-heading" className="text-lg font-bold text-tide-900">Oxygen cylinder: time to reserve</h2>
+      <h2 id="cylinder-heading" className="text-lg font-bold text-tide-900">
+        Oxygen cylinder: time to reserve
+      </h2>
       <SelectField label="Cylinder described by" value={method} onChange={(e) => switchTo(e.target.value as Method)}>
         <option value="metric">Water capacity (L) and bar</option>
         <option value="psi-factor">Cylinder factor (L per psi) and psi</option>
       </SelectField>
       <div className="grid grid-cols-2 gap-3">
-        {method === 'metric'
-          ? <NumberInput label="Water capacity (L)" value={v.capacity} onChange={set('capacity')} />
-          : <NumberInput label="Factor (L per psi)" value={v.factor} onChange={set('factor')} hint={PUBLISHED_PSI_FACTORS.factors.map((f) => `${f.size} ${f.factorLPerPsi}`).join(' · ')} />}
+        {method === 'metric' ? (
+          <NumberInput label="Water capacity (L)" value={v.capacity} onChange={set('capacity')} />
+        ) : (
+          <NumberInput
+            label="Factor (L per psi)"
+            value={v.factor}
+            onChange={set('factor')}
+            hint={PUBLISHED_PSI_FACTORS.factors.map((f) => `${f.size} ${f.factorLPerPsi}`).join(' · ')}
+          />
+        )}
         <NumberInput label={`Gauge pressure (${unit})`} value={v.pressure} onChange={set('pressure')} />
         <NumberInput label={`Reserve pressure (${unit})`} value={v.reserve} onChange={set('reserve')} />
         <NumberInput label="Flow (L/min)" value={v.flow} onChange={set('flow')} />
@@ -46,8 +56,13 @@ export function CylinderCalculator() {
         {result?.value && (
           <>
             <p className="text-sm font-semibold text-tide-700">Time to the reserve pressure</p>
-            <p className="text-2xl font-bold tabular-nums text-tide-900" data-testid="cylinder-hours">{result.value.atOrBelowReserve ? 'At or below reserve now' : formatHours(result.value.hoursToReserve)}</p>
-            <p className="text-sm text-tide-700">{Math.round(result.value.gasLeftL).toLocaleString('en-GB')} L of gas left, {Math.round(result.value.usableL).toLocaleString('en-GB')} L usable above the reserve.</p>
+            <p className="text-2xl font-bold tabular-nums text-tide-900" data-testid="cylinder-hours">
+              {result.value.atOrBelowReserve ? 'At or below reserve now' : formatHours(result.value.hoursToReserve)}
+            </p>
+            <p className="text-sm text-tide-700">
+              {Math.round(result.value.gasLeftL).toLocaleString('en-GB')} L of gas left, {Math.round(result.value.usableL).toLocaleString('en-GB')} L usable
+              above the reserve.
+            </p>
           </>
         )}
       </ResultBox>

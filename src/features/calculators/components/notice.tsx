@@ -13,7 +13,10 @@ export function Notice({ tone, children }: { tone: keyof typeof TONES; children:
   return (
     <div className={clsx('flex items-start gap-2 rounded-lg border p-3 text-sm text-tide-900', t.box)}>
       <t.icon aria-hidden className={clsx('mt-0.5 size-4 shrink-0', t.wordTone)} />
-      <p>{t.word && <strong className={clsx('mr-1', t.wordTone)}>{t.word}:</strong>}{children}</p>
+      <p>
+        {t.word && <strong className={clsx('mr-1', t.wordTone)}>{t.word}:</strong>}
+        {children}
+      </p>
     </div>
   )
 }

@@ -17,13 +17,19 @@ export function PublishedBaths() {
         {PUBLISHED_PERMANGANATE_BATHS.map((b) => (
           <li key={b.id} className="py-2 text-sm">
             <p className="font-semibold text-tide-900">{b.use}</p>
-            <p className="text-tide-800">{figure(b.mgPerL, b.upToMgPerL)} · {b.duration}</p>
-            <p className="text-tide-700">{b.details} <span className="text-tide-600">[{sources.indexOf(b.source) + 1}]</span></p>
+            <p className="text-tide-800">
+              {figure(b.mgPerL, b.upToMgPerL)} · {b.duration}
+            </p>
+            <p className="text-tide-700">
+              {b.details} <span className="text-tide-600">[{sources.indexOf(b.source) + 1}]</span>
+            </p>
           </li>
         ))}
       </ul>
       <ol className="mt-2 list-decimal space-y-1 pl-5 text-xs text-tide-700">
-        {sources.map((s) => <li key={s}>{s}</li>)}
+        {sources.map((s) => (
+          <li key={s}>{s}</li>
+        ))}
       </ol>
     </section>
   )

@@ -16,7 +16,9 @@ export function RationCalculator() {
 
   return (
     <section aria-labelledby="ration-heading" className="flex max-w-2xl flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
-      <h2 id="ration-heading" className="text-lg font-bold text-tide-900">Daily ration</h2>
+      <h2 id="ration-heading" className="text-lg font-bold text-tide-900">
+        Daily ration
+      </h2>
       <div className="grid grid-cols-2 gap-3">
         <NumberInput label="Number of fish" value={v.count} onChange={set('count')} />
         <NumberInput label="Mean weight (g)" value={v.weight} onChange={set('weight')} />
@@ -36,7 +38,8 @@ export function RationCalculator() {
               {[...new Set(result.value.perFeedG)].map((g) => `${g.toFixed(scale)} g`).join(' or ')}
             </p>
             <p className="text-sm text-tide-700">
-              {result.value.dailyG.toFixed(scale)} g a day in {result.value.perFeedG.length} feeds ({result.value.perFeedG.map((g) => g.toFixed(scale)).join(' + ')}) for {formatAmount(result.value.biomassKg)} kg of fish.
+              {result.value.dailyG.toFixed(scale)} g a day in {result.value.perFeedG.length} feeds (
+              {result.value.perFeedG.map((g) => g.toFixed(scale)).join(' + ')}) for {formatAmount(result.value.biomassKg)} kg of fish.
             </p>
           </>
         )}

@@ -12,7 +12,8 @@ interface Props {
   onView: (view: CalendarViewName) => void
 }
 
-const buttonClass = 'inline-flex min-h-11 items-center justify-center gap-1 rounded-lg bg-white px-3 font-semibold text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50'
+const buttonClass =
+  'inline-flex min-h-11 items-center justify-center gap-1 rounded-lg bg-white px-3 font-semibold text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50'
 
 export function CalendarToolbar({ title, view, loading, onPrev, onNext, onToday, onView }: Props) {
   const unit = view === 'month' ? 'month' : 'week'
@@ -25,7 +26,9 @@ export function CalendarToolbar({ title, view, loading, onPrev, onNext, onToday,
         <button type="button" onClick={onNext} aria-label={`Next ${unit}`} className={clsx(buttonClass, 'w-11 px-0')}>
           <ChevronRight aria-hidden className="size-5" />
         </button>
-        <button type="button" onClick={onToday} className={buttonClass}>Today</button>
+        <button type="button" onClick={onToday} className={buttonClass}>
+          Today
+        </button>
         <h2 aria-live="polite" className="ml-2 flex items-center gap-2 text-xl font-bold text-tide-900">
           {title}
           {loading && <Loader2 aria-label="Loading" className="size-5 animate-spin text-tide-600" />}

@@ -32,7 +32,11 @@ export function DaySummary({ dayNumber, day, roomy }: Props) {
       {day && total > 0 && <StatusCounts counts={day.counts} />}
       {day && total > 0 && (
         <p className="flex flex-wrap gap-x-1.5 text-tide-700 @max-[6rem]:hidden">
-          {topCategories(day.byCategory, roomy ? 6 : 2).map((c) => <span key={c} className="whitespace-nowrap">{c}</span>)}
+          {topCategories(day.byCategory, roomy ? 6 : 2).map((c) => (
+            <span key={c} className="whitespace-nowrap">
+              {c}
+            </span>
+          ))}
         </p>
       )}
       {day && (

@@ -26,7 +26,9 @@ export function PeopleLine({ icon: Icon, label, names, limit }: Props) {
   return (
     <p className="flex items-start gap-1" title={`${label}: ${names.join(', ')}`}>
       <Icon aria-hidden className="mt-0.5 size-3.5 shrink-0" />
-      <span aria-hidden className="hidden tabular-nums @max-[3.5rem]:inline">{names.length}</span>
+      <span aria-hidden className="hidden tabular-nums @max-[3.5rem]:inline">
+        {names.length}
+      </span>
       <span aria-hidden className="hidden min-w-0 @min-[3.5rem]:@max-[7.5rem]:inline">
         {shown.map(shortName).join(', ')}
         {extra}

@@ -80,7 +80,11 @@ export function WorkloadCalendar({ initialDate, initialView, onOpenDay, onShown 
         <ErrorState
           title="Could not load the workload for these days"
           message={query.error.message}
-          action={<Button variant="secondary" onClick={() => void query.refetch()}>Try again</Button>}
+          action={
+            <Button variant="secondary" onClick={() => void query.refetch()}>
+              Try again
+            </Button>
+          }
         />
       )}
       <div className="roundtide-calendar overflow-hidden rounded-xl bg-white ring-1 ring-tide-200" aria-busy={query.isPending && shown !== null}>

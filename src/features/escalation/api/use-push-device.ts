@@ -40,7 +40,11 @@ export function useSubscribePushDevice() {
       const subscription = await registration.pushManager.subscribe({ userVisibleOnly: true, applicationServerKey: publicKey }).catch((error: unknown) => {
         // The browser registers at its vendor's push service; its own words ("Registration failed - …") say little to a person.
         const reason = error instanceof Error ? error.message : String(error)
-        throw new ApiError(0, 'network', `This browser could not register this device with its push service, so nothing was saved and this device gets no alerts. You are still reached by your other channels. Check the connection and try again. (Browser said: ${reason})`)
+        throw new ApiError(
+          0,
+          'network',
+          `This browser could not register this device with its push service, so nothing was saved and this device gets no alerts. You are still reached by your other channels. Check the connection and try again. (Browser said: ${reason})`,
+        )
       })
       try {
         await apiFetch('/me/push-subscriptions', z.null(), { method: 'POST', ...jsonBody(subscription.toJSON()) })

@@ -32,7 +32,17 @@ function Answer({ alert, timeZone }: { alert: EscalationRecord; timeZone: string
 }
 
 /** One alert on the task: what started it, which ladder it climbs, who answered, and its messages. */
-export function AlertRecord({ alert, taskId, timeZone, canAcknowledge }: { alert: EscalationRecord; taskId: number; timeZone: string; canAcknowledge: boolean }) {
+export function AlertRecord({
+  alert,
+  taskId,
+  timeZone,
+  canAcknowledge,
+}: {
+  alert: EscalationRecord
+  taskId: number
+  timeZone: string
+  canAcknowledge: boolean
+}) {
   const acknowledge = useAcknowledge(taskId)
   const open = !alert.acknowledgedAt && !alert.closedAt
   return (

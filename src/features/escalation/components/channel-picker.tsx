@@ -8,7 +8,19 @@ export const CHANNEL_LOOK: Record<Channel, { label: string; icon: LucideIcon }> 
 }
 
 /** Tick the channels a step uses or a person accepts; each box is a 44 px target. */
-export function ChannelPicker({ label, value, onChange, error, disabled = [] }: { label: string; value: Channel[]; onChange: (v: Channel[]) => void; error?: string; disabled?: Channel[] }) {
+export function ChannelPicker({
+  label,
+  value,
+  onChange,
+  error,
+  disabled = [],
+}: {
+  label: string
+  value: Channel[]
+  onChange: (v: Channel[]) => void
+  error?: string
+  disabled?: Channel[]
+}) {
   const toggle = (c: Channel, on: boolean) => onChange(CHANNELS.filter((x) => (x === c ? on : value.includes(x))))
   return (
     <fieldset className="flex flex-col gap-1">
@@ -17,8 +29,17 @@ export function ChannelPicker({ label, value, onChange, error, disabled = [] }: 
         {CHANNELS.map((c) => {
           const look = CHANNEL_LOOK[c]
           return (
-            <label key={c} className="inline-flex min-h-11 items-center gap-2 rounded-lg border border-tide-200 px-3 text-tide-900 has-[:checked]:border-tide-600 has-[:checked]:bg-tide-50 has-[:disabled]:opacity-60">
-              <input type="checkbox" className="size-5 accent-tide-700" checked={value.includes(c)} disabled={disabled.includes(c)} onChange={(e) => toggle(c, e.target.checked)} />
+            <label
+              key={c}
+              className="inline-flex min-h-11 items-center gap-2 rounded-lg border border-tide-200 px-3 text-tide-900 has-[:checked]:border-tide-600 has-[:checked]:bg-tide-50 has-[:disabled]:opacity-60"
+            >
+              <input
+                type="checkbox"
+                className="size-5 accent-tide-700"
+                checked={value.includes(c)}
+                disabled={disabled.includes(c)}
+                onChange={(e) => toggle(c, e.target.checked)}
+              />
               <look.icon aria-hidden className="size-4 text-tide-600" /> {look.label}
             </label>
           )

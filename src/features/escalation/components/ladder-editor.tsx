@@ -14,13 +14,16 @@ export function LadderEditor({ ladders, staff }: { ladders: Ladder[]; staff: Sta
     <div className="flex flex-col gap-3">
       {ladders.length === 0 && editing !== 'new' && (
         <p className="rounded-xl border border-tide-200 bg-white p-4 text-tide-700">
-          No ladders yet. Until there are, missed work escalates to the assignee, then on call, then managers; urgent work to the assignee and on call at once, then supervisors, then managers.
+          No ladders yet. Until there are, missed work escalates to the assignee, then on call, then managers; urgent work to the assignee and on call at once,
+          then supervisors, then managers.
         </p>
       )}
       <ul className="flex flex-col gap-3">
         {ladders.map((ladder) =>
           editing === ladder.id ? (
-            <li key={ladder.id}><LadderForm ladder={ladder} staff={staff} onDone={() => setEditing(null)} /></li>
+            <li key={ladder.id}>
+              <LadderForm ladder={ladder} staff={staff} onDone={() => setEditing(null)} />
+            </li>
           ) : (
             <li key={ladder.id} className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-4 sm:flex-row sm:items-start sm:justify-between">
               <div className="min-w-0">
@@ -29,7 +32,9 @@ export function LadderEditor({ ladders, staff }: { ladders: Ladder[]; staff: Sta
                 </p>
                 <ol className="mt-1 text-sm text-tide-700">
                   {ladder.steps.map((s, i) => (
-                    <li key={i}>{describeDelay(s.afterMinutes)}: {s.notify.map((r) => describeRecipient(r, names)).join(', ')}</li>
+                    <li key={i}>
+                      {describeDelay(s.afterMinutes)}: {s.notify.map((r) => describeRecipient(r, names)).join(', ')}
+                    </li>
                   ))}
                 </ol>
               </div>

@@ -45,14 +45,23 @@ export function LadderForm({ ladder, staff, onDone }: { ladder: Ladder | null; s
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={submit} aria-label={ladder ? `Edit ladder ${ladder.name}` : 'New ladder'} className="flex flex-col gap-4 rounded-xl border border-tide-300 bg-white p-4">
+      <form
+        noValidate
+        onSubmit={submit}
+        aria-label={ladder ? `Edit ladder ${ladder.name}` : 'New ladder'}
+        className="flex flex-col gap-4 rounded-xl border border-tide-300 bg-white p-4"
+      >
         <Field label="Ladder name" {...form.register('name')} error={errors.name?.message} />
         <ol className="flex flex-col gap-3">
           {steps.fields.map((f, i) => (
             <LadderStepFields key={f.id} index={i} staff={staff} onRemove={steps.fields.length > 1 ? () => steps.remove(i) : undefined} />
           ))}
         </ol>
-        {stepsError && <p role="alert" className="text-sm font-semibold text-alarm-700">{stepsError}</p>}
+        {stepsError && (
+          <p role="alert" className="text-sm font-semibold text-alarm-700">
+            {stepsError}
+          </p>
+        )}
         <div className="flex flex-wrap gap-2">
           {steps.fields.length < 10 && (
             <Button type="button" variant="secondary" onClick={addStep}>
@@ -62,7 +71,9 @@ export function LadderForm({ ladder, staff, onDone }: { ladder: Ladder | null; s
           <Button type="submit" disabled={save.isPending}>
             <Save aria-hidden className="size-5" /> {save.isPending ? 'Saving…' : 'Save ladder'}
           </Button>
-          <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+          <Button type="button" variant="ghost" onClick={onDone}>
+            Cancel
+          </Button>
         </div>
       </form>
     </FormProvider>

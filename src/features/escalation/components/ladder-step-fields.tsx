@@ -16,7 +16,11 @@ export function LadderStepFields({ index, staff, onRemove }: { index: number; st
       <div className="flex flex-wrap items-end justify-between gap-3">
         <p className="font-bold text-tide-900">Step {index + 1}</p>
         {onRemove && (
-          <button type="button" onClick={onRemove} className="inline-flex min-h-11 items-center gap-1 rounded-lg px-3 font-semibold text-alarm-700 hover:bg-alarm-50">
+          <button
+            type="button"
+            onClick={onRemove}
+            className="inline-flex min-h-11 items-center gap-1 rounded-lg px-3 font-semibold text-alarm-700 hover:bg-alarm-50"
+          >
             <Trash2 aria-hidden className="size-4" /> Remove step {index + 1}
           </button>
         )}
@@ -34,14 +38,25 @@ export function LadderStepFields({ index, staff, onRemove }: { index: number; st
         control={control}
         name={`steps.${index}.notify`}
         render={({ field }) => (
-          <RecipientPicker label={`Step ${index + 1}: notify`} value={field.value} onChange={field.onChange} staff={staff} error={errors?.notify?.message ?? errors?.notify?.root?.message} />
+          <RecipientPicker
+            label={`Step ${index + 1}: notify`}
+            value={field.value}
+            onChange={field.onChange}
+            staff={staff}
+            error={errors?.notify?.message ?? errors?.notify?.root?.message}
+          />
         )}
       />
       <Controller
         control={control}
         name={`steps.${index}.channels`}
         render={({ field }) => (
-          <ChannelPicker label={`Step ${index + 1}: send by`} value={field.value ?? ['email']} onChange={field.onChange} error={errors?.channels?.message ?? errors?.channels?.root?.message} />
+          <ChannelPicker
+            label={`Step ${index + 1}: send by`}
+            value={field.value ?? ['email']}
+            onChange={field.onChange}
+            error={errors?.channels?.message ?? errors?.channels?.root?.message}
+          />
         )}
       />
       <p className="text-sm text-tide-700">Whoever is on call at that moment is reached by every channel they accept, whatever is ticked here.</p>

@@ -34,7 +34,14 @@ export function PreferencesForm({ preferences, timeZone }: { preferences: Prefer
 
   return (
     <form noValidate onSubmit={submit} aria-label="My preferences" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
-      <Field label="E-mail for escalations" type="email" autoComplete="email" hint="This is also the address you sign in with." {...form.register('email')} error={errors.email?.message} />
+      <Field
+        label="E-mail for escalations"
+        type="email"
+        autoComplete="email"
+        hint="This is also the address you sign in with."
+        {...form.register('email')}
+        error={errors.email?.message}
+      />
       {changingEmail && (
         <Field
           label="Current password"
@@ -45,7 +52,15 @@ export function PreferencesForm({ preferences, timeZone }: { preferences: Prefer
           error={errors.currentPassword?.message}
         />
       )}
-      <Field label="Mobile number for texts" type="tel" autoComplete="tel" placeholder="+447700900123" hint="International form, starting with + and the country code." {...form.register('phone')} error={errors.phone?.message} />
+      <Field
+        label="Mobile number for texts"
+        type="tel"
+        autoComplete="tel"
+        placeholder="+447700900123"
+        hint="International form, starting with + and the country code."
+        {...form.register('phone')}
+        error={errors.phone?.message}
+      />
       <Controller
         control={form.control}
         name="channels"
@@ -59,14 +74,16 @@ export function PreferencesForm({ preferences, timeZone }: { preferences: Prefer
           />
         )}
       />
-      <p className="-mt-2 text-sm text-tide-700">A ladder step uses the channels it names that you accept. While you are on call, every channel you accept is used, quiet hours or not.</p>
+      <p className="-mt-2 text-sm text-tide-700">
+        A ladder step uses the channels it names that you accept. While you are on call, every channel you accept is used, quiet hours or not.
+      </p>
       <fieldset className="flex flex-col gap-2">
         <legend className="flex items-center gap-2 font-semibold text-tide-900">
           <MoonStar aria-hidden className="size-5 text-tide-600" /> Quiet hours
         </legend>
         <p className="text-sm text-tide-700">
-          Messages about routine work wait until your quiet hours end. Messages about a welfare-critical task or a critical reading never wait, nor do any while you are on call.
-          Times are facility time ({timeZone}); leave both empty for no quiet hours.
+          Messages about routine work wait until your quiet hours end. Messages about a welfare-critical task or a critical reading never wait, nor do any while
+          you are on call. Times are facility time ({timeZone}); leave both empty for no quiet hours.
         </p>
         <div className="grid grid-cols-2 gap-3 sm:max-w-sm">
           <Field label="From" type="time" {...form.register('quietStart')} error={errors.quietStart?.message} />

@@ -5,7 +5,13 @@ import { ROLE_LABELS, type StaffMember } from '#shared/schemas/person'
 import { GROUP_RECIPIENTS } from '../utils/recipient-text'
 
 /** Whom one ladder step notifies: any of the groups, plus named people such as the welfare officer. */
-export function RecipientPicker({ value, onChange, staff, label, error }: {
+export function RecipientPicker({
+  value,
+  onChange,
+  staff,
+  label,
+  error,
+}: {
   value: Recipient[]
   onChange: (next: Recipient[]) => void
   staff: StaffMember[]
@@ -15,8 +21,7 @@ export function RecipientPicker({ value, onChange, staff, label, error }: {
   const id = useId()
   const has = (kind: Recipient['kind']) => value.some((r) => r.kind === kind)
   const named = value.flatMap((r) => (r.kind === 'person' ? [r.personId] : []))
-  const toggle = (kind: Exclude<Recipient['kind'], 'person'>, on: boolean) =>
-    onChange(on ? [...value, { kind }] : value.filter((r) => r.kind !== kind))
+  const toggle = (kind: Exclude<Recipient['kind'], 'person'>, on: boolean) => onChange(on ? [...value, { kind }] : value.filter((r) => r.kind !== kind))
   const nameOf = (personId: number) => staff.find((p) => p.id === personId)?.name ?? `Person #${personId}`
 
   return (
@@ -54,11 +59,19 @@ export function RecipientPicker({ value, onChange, staff, label, error }: {
         className="mt-1 min-h-11 rounded-lg border border-tide-200 bg-white px-3 sm:max-w-xs"
       >
         <option value="">Add a named person…</option>
-        {staff.filter((p) => !named.includes(p.id)).map((p) => (
-          <option key={p.id} value={p.id}>{p.name} ({ROLE_LABELS[p.role]})</option>
-        ))}
+        {staff
+          .filter((p) => !named.includes(p.id))
+          .map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name} ({ROLE_LABELS[p.role]})
+            </option>
+          ))}
       </select>
-      {error && <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">
+          {error}
+        </p>
+      )}
     </fieldset>
   )
 }

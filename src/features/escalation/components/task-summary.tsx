@@ -29,7 +29,9 @@ export function TaskSummary({ task, timeZone, readingNames }: { task: Task; time
       </div>
       <dl className="mt-4 grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
         <Fact label="Target">
-          <span className="inline-flex items-center gap-1"><Crosshair aria-hidden className="size-4 text-tide-500" /> {task.targetLabel}</span>
+          <span className="inline-flex items-center gap-1">
+            <Crosshair aria-hidden className="size-4 text-tide-500" /> {task.targetLabel}
+          </span>
         </Fact>
         <Fact label="Due">
           <span className="inline-flex items-center gap-1">
@@ -38,7 +40,9 @@ export function TaskSummary({ task, timeZone, readingNames }: { task: Task; time
           <span className="block text-sm text-tide-600">grace until {formatWhen(task.graceUntil, timeZone)}</span>
         </Fact>
         <Fact label="Assignee">
-          <span className="inline-flex items-center gap-1"><UserRound aria-hidden className="size-4 text-tide-500" /> {task.assigneeName ?? 'Unassigned'}</span>
+          <span className="inline-flex items-center gap-1">
+            <UserRound aria-hidden className="size-4 text-tide-500" /> {task.assigneeName ?? 'Unassigned'}
+          </span>
         </Fact>
         <Fact label="Done">
           {task.completedAt ? `${formatWhen(task.completedAt, timeZone)}${task.completedByName ? ` by ${task.completedByName}` : ''}` : 'Not yet'}

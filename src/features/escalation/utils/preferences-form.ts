@@ -22,7 +22,10 @@ export const preferencesFormSchema = (savedEmail: string) =>
     })
     .refine((p) => (p.quietStart === '') === (p.quietEnd === ''), { path: ['quietEnd'], message: 'Give both the start and the end of quiet hours, or neither' })
     .refine((p) => !p.channels.includes('sms') || p.phone !== '', { path: ['phone'], message: 'Texts need a mobile number' })
-    .refine((p) => p.email === savedEmail || p.currentPassword !== '', { path: ['currentPassword'], message: 'Enter your current password to change your e-mail' })
+    .refine((p) => p.email === savedEmail || p.currentPassword !== '', {
+      path: ['currentPassword'],
+      message: 'Enter your current password to change your e-mail',
+    })
 export type PreferencesFormValues = z.infer<ReturnType<typeof preferencesFormSchema>>
 
 export const toFormValues = (p: Preferences): PreferencesFormValues => ({

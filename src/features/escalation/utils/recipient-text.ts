@@ -14,4 +14,10 @@ export function describeRecipient(r: Recipient, names: Map<number, string>) {
 }
 
 export const describeDelay = (minutes: number) =>
-  minutes === 0 ? 'At once' : minutes % 60 === 0 ? `After ${minutes / 60} h` : minutes > 60 ? `After ${Math.floor(minutes / 60)} h ${minutes % 60} min` : `After ${minutes} min`
+  minutes === 0
+    ? 'At once'
+    : minutes % 60 === 0
+      ? `After ${minutes / 60} h`
+      : minutes > 60
+        ? `After ${Math.floor(minutes / 60)} h ${minutes % 60} min`
+        : `After ${minutes} min`

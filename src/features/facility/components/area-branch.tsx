@@ -19,7 +19,9 @@ export function AreaBranch({ area, position, systems, tanks, equipment, canEdit,
   const here = tanks.filter((t) => t.areaId === area.id).sort((a, b) => a.code.localeCompare(b.code))
   const systemIds = new Set([...systems.filter((s) => s.areaId === area.id).map((s) => s.id), ...here.flatMap((t) => (t.systemId == null ? [] : [t.systemId]))])
   const groups = [
-    ...systems.filter((s) => systemIds.has(s.id)).map((s) => ({ key: `s${s.id}`, system: s as System | undefined, tanks: here.filter((t) => t.systemId === s.id) })),
+    ...systems
+      .filter((s) => systemIds.has(s.id))
+      .map((s) => ({ key: `s${s.id}`, system: s as System | undefined, tanks: here.filter((t) => t.systemId === s.id) })),
     { key: 'standalone', system: undefined, tanks: here.filter((t) => t.systemId == null || !systems.some((s) => s.id === t.systemId)) },
   ].filter((g) => g.system || g.tanks.length)
   const inUse = here.filter((t) => t.inUse).length
@@ -37,7 +39,9 @@ export function AreaBranch({ area, position, systems, tanks, equipment, canEdit,
     <li className="overflow-hidden rounded-xl border border-tide-200 bg-white">
       <div className="flex items-start justify-between gap-2 border-b border-tide-100 bg-tide-50 px-4 py-2">
         <div className="flex min-h-11 flex-wrap items-center gap-x-3 gap-y-1">
-          <span aria-hidden className="grid size-8 shrink-0 place-items-center rounded-full bg-tide-800 text-sm font-bold text-white">{position}</span>
+          <span aria-hidden className="grid size-8 shrink-0 place-items-center rounded-full bg-tide-800 text-sm font-bold text-white">
+            {position}
+          </span>
           <h3 className="font-bold text-tide-900">
             <span className="sr-only">Round stop {position}: </span>
             {area.name} <span className="font-normal text-tide-600">({area.code})</span>
@@ -57,8 +61,7 @@ export function AreaBranch({ area, position, systems, tanks, equipment, canEdit,
               <Network aria-hidden className="size-4" />
               {g.system ? (
                 <>
-                  System {g.system.name} ({g.system.code})
-                  <span className="font-normal text-tide-600">{formatLitres(g.system.volumeL)} loop</span>
+                  System {g.system.name} ({g.system.code})<span className="font-normal text-tide-600">{formatLitres(g.system.volumeL)} loop</span>
                 </>
               ) : (
                 'Standalone tanks'
@@ -66,7 +69,9 @@ export function AreaBranch({ area, position, systems, tanks, equipment, canEdit,
             </h4>
             {g.tanks.length ? (
               <ul className="mt-2 grid grid-cols-[repeat(auto-fill,minmax(9.5rem,1fr))] gap-2">
-                {g.tanks.map((t) => <TankTile key={t.id} tank={t} />)}
+                {g.tanks.map((t) => (
+                  <TankTile key={t.id} tank={t} />
+                ))}
               </ul>
             ) : (
               <p className="mt-1 text-sm text-tide-600">No tanks on this system in this area.</p>

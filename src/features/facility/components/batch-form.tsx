@@ -40,15 +40,15 @@ export function BatchForm({ batch, tanks, onDone }: { batch?: Batch; tanks: Tank
       />
       <SelectField label="Status" {...form.register('status')} error={errors.status?.message}>
         {BATCH_STATUSES.map((s) => (
-          <option key={s} value={s}>{BATCH_STATUS_LABELS[s]}</option>
+          <option key={s} value={s}>
+            {BATCH_STATUS_LABELS[s]}
+          </option>
         ))}
       </SelectField>
       <Controller
         control={form.control}
         name="tankIds"
-        render={({ field, fieldState }) => (
-          <TankPicker tanks={tanks} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
-        )}
+        render={({ field, fieldState }) => <TankPicker tanks={tanks} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />}
       />
     </FormShell>
   )

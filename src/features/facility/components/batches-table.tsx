@@ -23,10 +23,17 @@ export function BatchesTable({ batches, tanks, canEdit, onEdit }: BatchesTablePr
     return [
       column.accessor('code', { header: 'Code' }),
       column.accessor('species', { header: 'Species' }),
-      column.accessor((b) => BATCH_STATUS_LABELS[b.status], { id: 'status', header: 'Status', cell: ({ row }) => <BatchStatus status={row.original.status} /> }),
+      column.accessor((b) => BATCH_STATUS_LABELS[b.status], {
+        id: 'status',
+        header: 'Status',
+        cell: ({ row }) => <BatchStatus status={row.original.status} />,
+      }),
       column.accessor('arrivalDate', { header: 'Arrived', cell: (info) => <span className="whitespace-nowrap tabular-nums">{info.getValue()}</span> }),
       column.accessor('count', { header: 'Fish', cell: (info) => <span className="tabular-nums">{formatNumber(info.getValue(), 0)}</span> }),
-      column.accessor('meanWeightG', { header: 'Mean weight', cell: (info) => <span className="whitespace-nowrap tabular-nums">{formatNumber(info.getValue())} g</span> }),
+      column.accessor('meanWeightG', {
+        header: 'Mean weight',
+        cell: (info) => <span className="whitespace-nowrap tabular-nums">{formatNumber(info.getValue())} g</span>,
+      }),
       column.accessor((b) => b.tankIds.map((id) => codes.get(id) ?? `#${id}`).join(', '), {
         id: 'tanks',
         header: 'Tanks',

@@ -48,7 +48,10 @@ export function DataTable<T>({ table, caption, emptyText, minWidth = 'min-w-[40r
           {rows.map((row) => (
             <tr key={row.id} className="border-t border-tide-100 align-middle hover:bg-tide-50/60">
               {row.getVisibleCells().map((cell, index) => (
-                <td key={cell.id} className={clsx('px-3 py-2 md:py-1.5', index === 0 && 'sticky left-0 z-10 bg-white font-semibold text-tide-900 shadow-[1px_0_0_#d5e9ee]')}>
+                <td
+                  key={cell.id}
+                  className={clsx('px-3 py-2 md:py-1.5', index === 0 && 'sticky left-0 z-10 bg-white font-semibold text-tide-900 shadow-[1px_0_0_#d5e9ee]')}
+                >
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}

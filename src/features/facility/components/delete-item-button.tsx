@@ -36,11 +36,17 @@ export function DeleteItemButton({ name, id, label, blockedReason }: DeleteItemB
   }
 
   return (
-    <div role="group" aria-label={`Delete ${label}`} className="flex w-64 flex-col gap-2 whitespace-normal rounded-lg border border-alarm-100 bg-alarm-50 p-2 text-sm text-alarm-700">
+    <div
+      role="group"
+      aria-label={`Delete ${label}`}
+      className="flex w-64 flex-col gap-2 whitespace-normal rounded-lg border border-alarm-100 bg-alarm-50 p-2 text-sm text-alarm-700"
+    >
       {blockedReason ? (
         <>
           <p className="font-semibold">{blockedReason}</p>
-          <Button type="button" variant="secondary" autoFocus onClick={close}>OK</Button>
+          <Button type="button" variant="secondary" autoFocus onClick={close}>
+            OK
+          </Button>
         </>
       ) : (
         <>
@@ -55,7 +61,9 @@ export function DeleteItemButton({ name, id, label, blockedReason }: DeleteItemB
             >
               {remove.isPending ? 'Deleting…' : 'Delete'}
             </Button>
-            <Button type="button" variant="secondary" autoFocus onClick={close}>Keep</Button>
+            <Button type="button" variant="secondary" autoFocus onClick={close}>
+              Keep
+            </Button>
           </div>
         </>
       )}

@@ -29,12 +29,16 @@ export function EquipmentForm({ equipment, areas, onDone }: { equipment?: Equipm
       <Field label="Name" autoComplete="off" {...form.register('name')} error={errors.name?.message} />
       <Field label="Kind" autoComplete="off" list={listId} {...form.register('kind')} error={errors.kind?.message} />
       <datalist id={listId}>
-        {KIND_SUGGESTIONS.map((k) => <option key={k} value={k} />)}
+        {KIND_SUGGESTIONS.map((k) => (
+          <option key={k} value={k} />
+        ))}
       </datalist>
       <SelectField label="Area" {...form.register('areaId', { setValueAs: toOptionalNumber })} error={errors.areaId?.message}>
         <option value="">No single area</option>
         {areas.map((a) => (
-          <option key={a.id} value={a.id}>{a.name} ({a.code})</option>
+          <option key={a.id} value={a.id}>
+            {a.name} ({a.code})
+          </option>
         ))}
       </SelectField>
     </FormShell>

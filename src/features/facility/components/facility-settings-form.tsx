@@ -39,9 +39,17 @@ export function FacilitySettingsForm({ facility, canEdit }: { facility: Facility
           error={errors.timeZone?.message}
         />
         <datalist id={zonesId}>
-          {TIME_ZONES.map((tz) => <option key={tz} value={tz} />)}
+          {TIME_ZONES.map((tz) => (
+            <option key={tz} value={tz} />
+          ))}
         </datalist>
-        <Field label="On-call handover" type="time" hint="When on-call duty changes hands each day." {...form.register('handoverTime')} error={errors.handoverTime?.message} />
+        <Field
+          label="On-call handover"
+          type="time"
+          hint="When on-call duty changes hands each day."
+          {...form.register('handoverTime')}
+          error={errors.handoverTime?.message}
+        />
         <Field
           label="Quarantine (days)"
           type="number"
@@ -70,12 +78,20 @@ export function FacilitySettingsForm({ facility, canEdit }: { facility: Facility
         />
       </fieldset>
       {errors.root?.server && (
-        <p role="alert" className="rounded-lg bg-alarm-50 p-3 text-sm font-semibold text-alarm-700">{errors.root.server.message}</p>
+        <p role="alert" className="rounded-lg bg-alarm-50 p-3 text-sm font-semibold text-alarm-700">
+          {errors.root.server.message}
+        </p>
       )}
       {canEdit ? (
         <div className="flex flex-wrap gap-2">
-          <Button type="submit" disabled={update.isPending || !form.formState.isDirty}>{update.isPending ? 'Saving…' : 'Save settings'}</Button>
-          {form.formState.isDirty && <Button type="button" variant="ghost" onClick={() => form.reset()}>Undo changes</Button>}
+          <Button type="submit" disabled={update.isPending || !form.formState.isDirty}>
+            {update.isPending ? 'Saving…' : 'Save settings'}
+          </Button>
+          {form.formState.isDirty && (
+            <Button type="button" variant="ghost" onClick={() => form.reset()}>
+              Undo changes
+            </Button>
+          )}
         </div>
       ) : (
         <p className="text-sm text-tide-600">Only a manager can change these settings.</p>

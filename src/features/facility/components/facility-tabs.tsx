@@ -13,8 +13,7 @@ const TABS: Record<FacilityTab, { label: string; icon: LucideIcon }> = {
   settings: { label: 'Settings', icon: Settings },
 }
 
-export const parseFacilityTab = (value: string | null): FacilityTab =>
-  FACILITY_TABS.find((t) => t === value) ?? 'overview'
+export const parseFacilityTab = (value: string | null): FacilityTab => FACILITY_TABS.find((t) => t === value) ?? 'overview'
 
 /** Section links kept in the URL (?tab=), so a section can be bookmarked and the back button works. */
 export function FacilityTabs({ current }: { current: FacilityTab }) {

@@ -44,7 +44,9 @@ export function FacilityTree({ areas, systems, tanks, equipment, canEdit, onEdit
           <h3 className="font-bold text-ember-700">Tanks without an area ({lost.length})</h3>
           <p className="text-sm text-ember-700">Their area was deleted. Edit each tank on the Tanks tab and choose an area.</p>
           <ul className="mt-2 grid grid-cols-[repeat(auto-fill,minmax(9.5rem,1fr))] gap-2">
-            {lost.map((t) => <TankTile key={t.id} tank={t} />)}
+            {lost.map((t) => (
+              <TankTile key={t.id} tank={t} />
+            ))}
           </ul>
         </section>
       )}

@@ -27,7 +27,17 @@ export function LimitsList({ systems, batches }: { systems: System[]; batches: B
       <ErrorState
         title="Could not load the limits"
         message={(parameters.error ?? limits.error)?.message ?? ''}
-        action={<Button variant="secondary" onClick={() => { void parameters.refetch(); void limits.refetch() }}>Try again</Button>}
+        action={
+          <Button
+            variant="secondary"
+            onClick={() => {
+              void parameters.refetch()
+              void limits.refetch()
+            }}
+          >
+            Try again
+          </Button>
+        }
       />
     )
   }
@@ -45,10 +55,18 @@ export function LimitsList({ systems, batches }: { systems: System[]; batches: B
         <caption className="sr-only">Reading limits</caption>
         <thead className="bg-tide-100 text-tide-800">
           <tr>
-            <th scope="col" className="px-3 py-2">Parameter</th>
-            <th scope="col" className="px-3 py-2">Applies to</th>
-            <th scope="col" className="px-3 py-2">Ok</th>
-            <th scope="col" className="px-3 py-2">Critical when</th>
+            <th scope="col" className="px-3 py-2">
+              Parameter
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Applies to
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Ok
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Critical when
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -57,7 +75,9 @@ export function LimitsList({ systems, batches }: { systems: System[]; batches: B
             const unit = p?.unit ?? ''
             return (
               <tr key={l.id} className="border-t border-tide-100">
-                <th scope="row" className="px-3 py-1.5 font-semibold text-tide-900">{p?.name ?? l.parameterKey}</th>
+                <th scope="row" className="px-3 py-1.5 font-semibold text-tide-900">
+                  {p?.name ?? l.parameterKey}
+                </th>
                 <td className="px-3 py-1.5">{scopeName(l)}</td>
                 <td className="px-3 py-1.5 tabular-nums">{range(l.okMin, l.okMax, unit)}</td>
                 <td className="px-3 py-1.5 tabular-nums">{critical(l.criticalMin, l.criticalMax, unit)}</td>

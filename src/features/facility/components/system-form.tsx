@@ -5,7 +5,6 @@ import { toOptionalNumber } from '../utils/form-values'
 import { FormShell } from './form-shell'
 import { SelectField } from '../../../components/ui/select-field'
 
-
 export function SystemForm({ system, areas, onDone }: { system?: System; areas: Area[]; onDone: () => void }) {
   const { form, submit, pending, editing } = useCatalogueForm('systems', {
     item: system,
@@ -24,10 +23,17 @@ export function SystemForm({ system, areas, onDone }: { system?: System; areas: 
     >
       <Field label="Code" autoComplete="off" hint="e.g. RAS-1" {...form.register('code')} error={errors.code?.message} />
       <Field label="Name" autoComplete="off" {...form.register('name')} error={errors.name?.message} />
-      <SelectField label="Area" hint="Leave open when the system feeds tanks in several areas." {...form.register('areaId', { setValueAs: toOptionalNumber })} error={errors.areaId?.message}>
+      <SelectField
+        label="Area"
+        hint="Leave open when the system feeds tanks in several areas."
+        {...form.register('areaId', { setValueAs: toOptionalNumber })}
+        error={errors.areaId?.message}
+      >
         <option value="">Several areas</option>
         {areas.map((a) => (
-          <option key={a.id} value={a.id}>{a.name} ({a.code})</option>
+          <option key={a.id} value={a.id}>
+            {a.name} ({a.code})
+          </option>
         ))}
       </SelectField>
       <Field

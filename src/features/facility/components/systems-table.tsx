@@ -47,7 +47,11 @@ export function SystemsTable({ systems, areas, tanks, canEdit, onEdit }: Systems
                     id={row.original.id}
                     label={`system ${row.original.code}`}
                     onEdit={() => onEdit(row.original)}
-                    blockedReason={count ? `${count === 1 ? '1 tank is' : `${count} tanks are`} on this system. Move them to another system or make them standalone first.` : undefined}
+                    blockedReason={
+                      count
+                        ? `${count === 1 ? '1 tank is' : `${count} tanks are`} on this system. Move them to another system or make them standalone first.`
+                        : undefined
+                    }
                   />
                 )
               },

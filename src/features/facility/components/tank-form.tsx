@@ -36,13 +36,17 @@ export function TankForm({ tank, areas, systems, onDone }: TankFormProps) {
       <SelectField label="Area" {...form.register('areaId', { setValueAs: toRequiredNumber })} error={errors.areaId && 'Choose an area'}>
         {areas.length === 0 && <option value="">Add an area first</option>}
         {areas.map((a) => (
-          <option key={a.id} value={a.id}>{a.name} ({a.code})</option>
+          <option key={a.id} value={a.id}>
+            {a.name} ({a.code})
+          </option>
         ))}
       </SelectField>
       <SelectField label="System" {...form.register('systemId', { setValueAs: toOptionalNumber })} error={errors.systemId?.message}>
         <option value="">Not on a system (standalone)</option>
         {systems.map((s) => (
-          <option key={s.id} value={s.id}>{s.name} ({s.code})</option>
+          <option key={s.id} value={s.id}>
+            {s.name} ({s.code})
+          </option>
         ))}
       </SelectField>
       <Field
@@ -55,7 +59,9 @@ export function TankForm({ tank, areas, systems, onDone }: TankFormProps) {
       />
       <SelectField label="Kind" {...form.register('kind')} error={errors.kind?.message}>
         {TANK_KINDS.map((k) => (
-          <option key={k} value={k}>{KIND_LABELS[k]}</option>
+          <option key={k} value={k}>
+            {KIND_LABELS[k]}
+          </option>
         ))}
       </SelectField>
       <CheckboxField label="In use" hint="Holds fish now; an empty tank gets no new tasks." {...form.register('inUse')} />

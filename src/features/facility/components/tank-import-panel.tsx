@@ -38,8 +38,8 @@ export function TankImportPanel() {
       </h3>
       <div className="flex flex-col gap-2 text-sm text-tide-700">
         <p>
-          One tank per line, with this header. Give area and system by their code (leave system empty for a standalone tank), and
-          in_use as yes or no. A line whose code already exists updates that tank. If any line has a problem, nothing is imported.
+          One tank per line, with this header. Give area and system by their code (leave system empty for a standalone tank), and in_use as yes or no. A line
+          whose code already exists updates that tank. If any line has a problem, nothing is imported.
         </p>
         <pre className="overflow-x-auto rounded-lg bg-tide-50 p-3 font-mono text-xs text-tide-900">{EXAMPLE}</pre>
         <a href={TEMPLATE_HREF} download="roundtide-tanks.csv" className="inline-flex min-h-11 w-fit items-center gap-1 font-semibold text-tide-700 underline">
@@ -48,7 +48,9 @@ export function TankImportPanel() {
       </div>
       <form onSubmit={submit} className="flex flex-col gap-3 sm:flex-row sm:items-end">
         <div className="flex min-w-0 flex-1 flex-col gap-1">
-          <label htmlFor={inputId} className="text-sm font-semibold text-tide-800">CSV file</label>
+          <label htmlFor={inputId} className="text-sm font-semibold text-tide-800">
+            CSV file
+          </label>
           <input
             key={inputKey}
             id={inputId}
@@ -80,7 +82,9 @@ export function TankImportPanel() {
           </p>
           {lines && lines.length > 0 && (
             <ul className="mt-2 flex list-disc flex-col gap-1 pl-5">
-              {lines.map((line) => <li key={line}>{line}</li>)}
+              {lines.map((line) => (
+                <li key={line}>{line}</li>
+              ))}
             </ul>
           )}
         </div>

@@ -19,7 +19,9 @@ export function TankPicker({ tanks, value, onChange, error }: TankPickerProps) {
           {tanks.map((t) => (
             <label key={t.id} className="flex min-h-11 items-center gap-2 text-tide-800">
               <input type="checkbox" className="size-5 accent-tide-700" checked={value.includes(t.id)} onChange={(e) => toggle(t.id, e.target.checked)} />
-              <span className="truncate" title={t.name}>{t.code}</span>
+              <span className="truncate" title={t.name}>
+                {t.code}
+              </span>
             </label>
           ))}
         </div>

@@ -15,7 +15,9 @@ export function TankTile({ tank }: { tank: Tank }) {
         <span className="font-bold text-tide-900">{tank.code}</span>
         <span className="text-xs text-tide-600">{tank.kind === 'bin' ? 'Bin' : 'Tank'}</span>
       </span>
-      <span className="truncate text-tide-800" title={tank.name}>{tank.name}</span>
+      <span className="truncate text-tide-800" title={tank.name}>
+        {tank.name}
+      </span>
       <span className="mt-1 flex flex-wrap items-center justify-between gap-x-2 text-tide-700">
         <span className="tabular-nums">{formatLitres(tank.volumeL)}</span>
         <TankUseStatus inUse={tank.inUse} />

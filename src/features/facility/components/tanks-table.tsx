@@ -1,6 +1,11 @@
 import {
-  createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable,
-  type ColumnFiltersState, type SortingState,
+  createColumnHelper,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
 } from '@tanstack/react-table'
 import { useMemo, useState } from 'react'
 import { Link } from 'react-router-dom'
@@ -27,8 +32,7 @@ export function TanksTable({ tanks, areas, systems, canEdit, onEdit }: TanksTabl
   const [search, setSearch] = useState('')
   const [filters, setFilters] = useState<ColumnFiltersState>([])
   const filterValue = (id: string) => filters.find((f) => f.id === id)?.value
-  const setFilter = (id: string, value: unknown) =>
-    setFilters((prev) => [...prev.filter((f) => f.id !== id), ...(value === undefined ? [] : [{ id, value }])])
+  const setFilter = (id: string, value: unknown) => setFilters((prev) => [...prev.filter((f) => f.id !== id), ...(value === undefined ? [] : [{ id, value }])])
 
   const columns = useMemo(() => {
     const areaName = nameById(areas)
@@ -101,7 +105,9 @@ export function TanksTable({ tanks, areas, systems, canEdit, onEdit }: TanksTabl
           <select className={selectClass} value={areaFilter ?? ''} onChange={(e) => setFilter('area', e.target.value ? Number(e.target.value) : undefined)}>
             <option value="">All areas</option>
             {areas.map((a) => (
-              <option key={a.id} value={a.id}>{a.name}</option>
+              <option key={a.id} value={a.id}>
+                {a.name}
+              </option>
             ))}
           </select>
         </label>

@@ -29,10 +29,26 @@ export function deadlineText(d: DeadlineStatus, now: Date, timeZone: string): st
 }
 
 /** One deadline as icon and words that count down live; overdue says so in words, not colour alone. */
-export function DeadlineCountdown({ deadline, now, timeZone, withLabel = true }: { deadline: DeadlineStatus; now: Date; timeZone: string; withLabel?: boolean }) {
+export function DeadlineCountdown({
+  deadline,
+  now,
+  timeZone,
+  withLabel = true,
+}: {
+  deadline: DeadlineStatus
+  now: Date
+  timeZone: string
+  withLabel?: boolean
+}) {
   const look = LOOK[deadline.state]
   return (
-    <span className={clsx('inline-flex items-start gap-1 text-sm', look.tone, deadline.state === 'overdue' || deadline.state === 'late' ? 'font-bold' : 'font-semibold')}>
+    <span
+      className={clsx(
+        'inline-flex items-start gap-1 text-sm',
+        look.tone,
+        deadline.state === 'overdue' || deadline.state === 'late' ? 'font-bold' : 'font-semibold',
+      )}
+    >
       <look.icon aria-hidden className="mt-0.5 size-4 shrink-0" />
       <span>
         {withLabel && <span className="text-tide-900">{DEADLINE_LABELS[deadline.key]}: </span>}

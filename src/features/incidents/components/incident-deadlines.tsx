@@ -8,10 +8,14 @@ export function IncidentDeadlines({ deadlines, now, timeZone }: { deadlines: Dea
       <h2 className="text-lg font-bold text-tide-900">Deadlines</h2>
       <ul className="flex flex-col gap-1.5">
         {deadlines.map((d) => (
-          <li key={d.key}><DeadlineCountdown deadline={d} now={now} timeZone={timeZone} /></li>
+          <li key={d.key}>
+            <DeadlineCountdown deadline={d} now={now} timeZone={timeZone} />
+          </li>
         ))}
       </ul>
-      <p className="text-xs text-tide-600">Hours from the facility’s settings, counted from when the incident was noticed. Your local animal-ethics code decides what is required.</p>
+      <p className="text-xs text-tide-600">
+        Hours from the facility’s settings, counted from when the incident was noticed. Your local animal-ethics code decides what is required.
+      </p>
     </section>
   )
 }

@@ -24,20 +24,50 @@ export function IncidentDetails({ incident: i, timeZone, tankCodes, batchCodes }
   return (
     <dl className="rounded-xl border border-tide-200 bg-white px-4 py-1">
       <Row label="What happened">{orNone(i.whatHappened)}</Row>
-      <Row label="Started · noticed">{formatWhen(i.startedAt, timeZone)} · {formatWhen(i.noticedAt, timeZone)}</Row>
+      <Row label="Started · noticed">
+        {formatWhen(i.startedAt, timeZone)} · {formatWhen(i.noticedAt, timeZone)}
+      </Row>
       <Row label="Tanks">
-        {i.tankIds.length ? i.tankIds.map((id, n) => <span key={id}>{n > 0 && ', '}<Link to={`/tanks/${id}`} className="underline">{tankCodes.get(id) ?? `tank ${id}`}</Link></span>) : orNone('', 'None')}
+        {i.tankIds.length
+          ? i.tankIds.map((id, n) => (
+              <span key={id}>
+                {n > 0 && ', '}
+                <Link to={`/tanks/${id}`} className="underline">
+                  {tankCodes.get(id) ?? `tank ${id}`}
+                </Link>
+              </span>
+            ))
+          : orNone('', 'None')}
       </Row>
       <Row label="Batches">
-        {i.batchIds.length ? i.batchIds.map((id, n) => <span key={id}>{n > 0 && ', '}<Link to={`/batches/${id}`} className="underline">{batchCodes.get(id) ?? `batch ${id}`}</Link></span>) : orNone('', 'None')}
+        {i.batchIds.length
+          ? i.batchIds.map((id, n) => (
+              <span key={id}>
+                {n > 0 && ', '}
+                <Link to={`/batches/${id}`} className="underline">
+                  {batchCodes.get(id) ?? `batch ${id}`}
+                </Link>
+              </span>
+            ))
+          : orNone('', 'None')}
       </Row>
       <Row label="People involved">{i.people.length ? i.people.map((p) => p.name).join(', ') : orNone('', 'None')}</Row>
-      <Row label="Animals">{i.affected} affected · {i.dead} dead</Row>
+      <Row label="Animals">
+        {i.affected} affected · {i.dead} dead
+      </Row>
       <Row label="Immediate actions">{orNone(i.immediateActions)}</Row>
-      <Row label="Who was told">{i.told.length ? i.told.map((t) => `${t.who} (${formatWhen(t.at, timeZone)})`).join('\n') : orNone('', 'Nobody recorded yet')}</Row>
+      <Row label="Who was told">
+        {i.told.length ? i.told.map((t) => `${t.who} (${formatWhen(t.at, timeZone)})`).join('\n') : orNone('', 'Nobody recorded yet')}
+      </Row>
       <Row label="Root cause">{orNone(i.rootCause)}</Row>
       <Row label="Corrective actions">{orNone(i.correctiveActions)}</Row>
-      {i.taskId && <Row label="From the task"><Link to={`/tasks/${i.taskId}`} className="underline">Task #{i.taskId}</Link></Row>}
+      {i.taskId && (
+        <Row label="From the task">
+          <Link to={`/tasks/${i.taskId}`} className="underline">
+            Task #{i.taskId}
+          </Link>
+        </Row>
+      )}
     </dl>
   )
 }

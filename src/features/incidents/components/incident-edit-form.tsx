@@ -26,7 +26,11 @@ interface Props {
 }
 
 const NEXT_STATUSES: Record<Incident['status'], Array<IncidentFormValues['status']>> = {
-  proposed: [], dismissed: [], open: ['open', 'reported', 'closed'], reported: ['reported', 'closed'], closed: ['closed'],
+  proposed: [],
+  dismissed: [],
+  open: ['open', 'reported', 'closed'],
+  reported: ['reported', 'closed'],
+  closed: ['closed'],
 }
 const STATUS_WORDS = { open: 'Open', reported: 'Reported to the ethics committee', closed: 'Closed: full report done' }
 
@@ -43,13 +47,29 @@ export function IncidentEditForm({ incident, timeZone, tanks, batches, people, o
     const check = checkIncidentForm(values, incident.status, timeZone)
     if (!check.ok) return setErrors(check.errors)
     update.mutate(check.input, {
-      onSuccess: () => { toast.success('Incident record saved.'); onDone() },
-      onError: (e) => { if (e instanceof ApiError && e.fieldErrors) setErrors(e.fieldErrors) },
+      onSuccess: () => {
+        toast.success('Incident record saved.')
+        onDone()
+      },
+      onError: (e) => {
+        if (e instanceof ApiError && e.fieldErrors) setErrors(e.fieldErrors)
+      },
     })
   })
   const multi = (label: string, name: 'tankIds' | 'batchIds' | 'personIds', options: Option[]) => (
-    <SelectField label={label} multiple size={Math.min(6, Math.max(3, options.length))} hint="Hold Ctrl or ⌘ to choose several" error={error(name)} {...register(name)}>
-      {options.map((o) => <option key={o.id} value={o.id}>{o.label}</option>)}
+    <SelectField
+      label={label}
+      multiple
+      size={Math.min(6, Math.max(3, options.length))}
+      hint="Hold Ctrl or ⌘ to choose several"
+      error={error(name)}
+      {...register(name)}
+    >
+      {options.map((o) => (
+        <option key={o.id} value={o.id}>
+          {o.label}
+        </option>
+      ))}
     </SelectField>
   )
   return (
@@ -70,11 +90,19 @@ export function IncidentEditForm({ incident, timeZone, tanks, batches, people, o
       <TextAreaField label="Root cause" rows={3} error={error('rootCause')} {...register('rootCause')} />
       <TextAreaField label="Corrective actions" rows={3} error={error('correctiveActions')} {...register('correctiveActions')} />
       <SelectField label="Status" error={error('status')} {...register('status')}>
-        {NEXT_STATUSES[incident.status].map((s) => <option key={s} value={s}>{STATUS_WORDS[s]}</option>)}
+        {NEXT_STATUSES[incident.status].map((s) => (
+          <option key={s} value={s}>
+            {STATUS_WORDS[s]}
+          </option>
+        ))}
       </SelectField>
       <div className="flex flex-wrap items-end gap-2 sm:col-span-2">
-        <Button type="submit" disabled={update.isPending}><Save aria-hidden className="size-5" /> {update.isPending ? 'Saving…' : 'Save the record'}</Button>
-        <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={update.isPending}>
+          <Save aria-hidden className="size-5" /> {update.isPending ? 'Saving…' : 'Save the record'}
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   )

@@ -23,9 +23,13 @@ export function IncidentList({ incidents, now, timeZone, tankCodes }: Props) {
         return (
           <li key={i.id} className="grid gap-1 rounded-xl border border-tide-200 bg-white p-3 md:grid-cols-[1fr_auto] md:gap-x-6">
             <p className="flex flex-wrap items-baseline gap-x-2">
-              <Link to={`/incidents/${i.id}`} className="text-base font-bold text-tide-900 underline">#{i.id} {i.title}</Link>
+              <Link to={`/incidents/${i.id}`} className="text-base font-bold text-tide-900 underline">
+                #{i.id} {i.title}
+              </Link>
             </p>
-            <div className="md:row-span-2 md:text-right"><IncidentStatusLabel status={i.status} /></div>
+            <div className="md:row-span-2 md:text-right">
+              <IncidentStatusLabel status={i.status} />
+            </div>
             <p className="text-sm text-tide-700">
               Noticed {formatWhen(i.noticedAt, timeZone)}
               {i.tankIds.length > 0 && ` · ${i.tankIds.map((id) => tankCodes.get(id) ?? `tank ${id}`).join(', ')}`}
@@ -33,7 +37,11 @@ export function IncidentList({ incidents, now, timeZone, tankCodes }: Props) {
               {missed > 0 && ` · ${missed} deadline${missed === 1 ? '' : 's'} missed`}
             </p>
             <div className="md:col-span-2">
-              {next ? <DeadlineCountdown deadline={next} now={now} timeZone={timeZone} /> : <span className="text-sm text-tide-700">{i.status === 'dismissed' ? 'No deadlines: dismissed' : 'Every deadline done'}</span>}
+              {next ? (
+                <DeadlineCountdown deadline={next} now={now} timeZone={timeZone} />
+              ) : (
+                <span className="text-sm text-tide-700">{i.status === 'dismissed' ? 'No deadlines: dismissed' : 'Every deadline done'}</span>
+              )}
             </div>
           </li>
         )

@@ -19,12 +19,28 @@ export function IncidentNoteForm({ incidentId }: { incidentId: number }) {
         e.preventDefault()
         const parsed = IncidentNoteInputSchema.safeParse({ text })
         if (!parsed.success) return setError(parsed.error.issues[0].message)
-        add.mutate(parsed.data.text, { onSuccess: () => { setText(''); toast.success('Note added to the incident.') } })
+        add.mutate(parsed.data.text, {
+          onSuccess: () => {
+            setText('')
+            toast.success('Note added to the incident.')
+          },
+        })
       }}
       className="flex flex-col gap-2"
     >
-      <TextAreaField label="Note" rows={3} value={text} error={error} onChange={(e) => { setText(e.target.value); setError(undefined) }} />
-      <Button type="submit" variant="secondary" disabled={add.isPending} className="self-start"><MessageSquarePlus aria-hidden className="size-5" /> {add.isPending ? 'Adding…' : 'Add note'}</Button>
+      <TextAreaField
+        label="Note"
+        rows={3}
+        value={text}
+        error={error}
+        onChange={(e) => {
+          setText(e.target.value)
+          setError(undefined)
+        }}
+      />
+      <Button type="submit" variant="secondary" disabled={add.isPending} className="self-start">
+        <MessageSquarePlus aria-hidden className="size-5" /> {add.isPending ? 'Adding…' : 'Add note'}
+      </Button>
     </form>
   )
 }

@@ -15,10 +15,14 @@ export function ToldFields({ form, timeZone }: { form: UseFormReturn<IncidentFor
         <div key={f.id} className="flex flex-wrap items-end gap-2">
           <Field label={`Person or body ${n + 1}`} className="min-w-48 flex-1" error={error(`told.${n}.who`)} {...form.register(`told.${n}.who`)} />
           <Field label="Told at" type="datetime-local" hint={timeZone} error={error(`told.${n}.at`)} {...form.register(`told.${n}.at`)} />
-          <Button type="button" variant="ghost" aria-label={`Remove person ${n + 1}`} onClick={() => told.remove(n)}><Trash2 aria-hidden className="size-5" /></Button>
+          <Button type="button" variant="ghost" aria-label={`Remove person ${n + 1}`} onClick={() => told.remove(n)}>
+            <Trash2 aria-hidden className="size-5" />
+          </Button>
         </div>
       ))}
-      <Button type="button" variant="secondary" className="self-start" onClick={() => told.append({ who: '', at: '' })}><Plus aria-hidden className="size-5" /> Add who was told</Button>
+      <Button type="button" variant="secondary" className="self-start" onClick={() => told.append({ who: '', at: '' })}>
+        <Plus aria-hidden className="size-5" /> Add who was told
+      </Button>
     </fieldset>
   )
 }

@@ -24,11 +24,20 @@ const fromLocalInput = (local: string, zone: string) => (local ? (DateTime.fromI
 
 export function incidentFormValues(i: Incident, zone: string): IncidentFormValues {
   return {
-    title: i.title, whatHappened: i.whatHappened, startedAt: toLocalInput(i.startedAt, zone), noticedAt: toLocalInput(i.noticedAt, zone),
-    tankIds: i.tankIds.map(String), batchIds: i.batchIds.map(String), personIds: i.personIds.map(String),
-    affected: String(i.affected), dead: String(i.dead), immediateActions: i.immediateActions,
+    title: i.title,
+    whatHappened: i.whatHappened,
+    startedAt: toLocalInput(i.startedAt, zone),
+    noticedAt: toLocalInput(i.noticedAt, zone),
+    tankIds: i.tankIds.map(String),
+    batchIds: i.batchIds.map(String),
+    personIds: i.personIds.map(String),
+    affected: String(i.affected),
+    dead: String(i.dead),
+    immediateActions: i.immediateActions,
     told: i.told.map((t) => ({ who: t.who, at: toLocalInput(t.at, zone) })),
-    rootCause: i.rootCause, correctiveActions: i.correctiveActions, status: i.status === 'reported' || i.status === 'closed' ? i.status : 'open',
+    rootCause: i.rootCause,
+    correctiveActions: i.correctiveActions,
+    status: i.status === 'reported' || i.status === 'closed' ? i.status : 'open',
   }
 }
 
@@ -39,11 +48,20 @@ export type IncidentFormCheck = { ok: true; input: UpdateIncidentInput } | { ok:
 /** The form in the server's shape, checked by the server's schema; status is sent only when it moves on. */
 export function checkIncidentForm(v: IncidentFormValues, current: Incident['status'], zone: string): IncidentFormCheck {
   const parsed = UpdateIncidentInputSchema.safeParse({
-    title: v.title, whatHappened: v.whatHappened, startedAt: fromLocalInput(v.startedAt, zone), noticedAt: fromLocalInput(v.noticedAt, zone),
-    tankIds: v.tankIds.map(Number), batchIds: v.batchIds.map(Number), personIds: v.personIds.map(Number),
-    affected: whole(v.affected), dead: whole(v.dead), immediateActions: v.immediateActions,
+    title: v.title,
+    whatHappened: v.whatHappened,
+    startedAt: fromLocalInput(v.startedAt, zone),
+    noticedAt: fromLocalInput(v.noticedAt, zone),
+    tankIds: v.tankIds.map(Number),
+    batchIds: v.batchIds.map(Number),
+    personIds: v.personIds.map(Number),
+    affected: whole(v.affected),
+    dead: whole(v.dead),
+    immediateActions: v.immediateActions,
     told: v.told.map((t) => ({ who: t.who, at: fromLocalInput(t.at, zone) })),
-    rootCause: v.rootCause, correctiveActions: v.correctiveActions, status: v.status !== current && v.status !== 'open' ? v.status : undefined,
+    rootCause: v.rootCause,
+    correctiveActions: v.correctiveActions,
+    status: v.status !== current && v.status !== 'open' ? v.status : undefined,
   })
   if (parsed.success) return { ok: true, input: parsed.data }
   const errors: Record<string, string> = {}

@@ -24,13 +24,22 @@ export function incidentTimeline(i: Incident, deadlines: DeadlineStatus[]): Time
   const entries: Array<TimelineEntry | null> = [
     { at: i.startedAt, kind: 'started', title: 'Started' },
     { at: i.noticedAt, kind: 'proposed', title: SOURCE[i.source], text: i.whatHappened },
-    i.decidedAt ? { at: i.decidedAt, kind: i.status === 'dismissed' ? 'dismissed' : 'confirmed', title: `${i.status === 'dismissed' ? 'Dismissed' : 'Confirmed'}${by}`, text: i.decisionReason ?? undefined } : null,
+    i.decidedAt
+      ? {
+          at: i.decidedAt,
+          kind: i.status === 'dismissed' ? 'dismissed' : 'confirmed',
+          title: `${i.status === 'dismissed' ? 'Dismissed' : 'Confirmed'}${by}`,
+          text: i.decisionReason ?? undefined,
+        }
+      : null,
     ...i.told.map((t): TimelineEntry => ({ at: t.at, kind: 'told', title: `Told ${t.who}` })),
     ...i.notes.map((n): TimelineEntry => ({ at: n.at, kind: 'note', title: `Note by ${n.personName}`, text: n.text })),
     i.reportedAt ? { at: i.reportedAt, kind: 'reported', title: 'Reported to the ethics committee' } : null,
     i.closedAt ? { at: i.closedAt, kind: 'closed', title: 'Closed with the full report' } : null,
     i.escalatedAt ? { at: i.escalatedAt, kind: 'escalated', title: 'Escalated: the committee deadline passed unreported' } : null,
-    ...deadlines.filter((d) => d.state !== 'not_needed').map((d): TimelineEntry => ({ at: d.dueAt, kind: 'deadline', title: `Deadline: ${DEADLINE_LABELS[d.key].toLowerCase()}`, deadline: d })),
+    ...deadlines
+      .filter((d) => d.state !== 'not_needed')
+      .map((d): TimelineEntry => ({ at: d.dueAt, kind: 'deadline', title: `Deadline: ${DEADLINE_LABELS[d.key].toLowerCase()}`, deadline: d })),
   ]
   return entries.filter((e): e is TimelineEntry => e !== null).sort((a, b) => a.at.localeCompare(b.at))
 }

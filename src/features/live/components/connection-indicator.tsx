@@ -15,7 +15,11 @@ export function ConnectionIndicator() {
   if (status === 'signed-out') return null
   const { label, icon: Icon, spin, className } = LOOK[status]
   return (
-    <p role="status" aria-label={`Connection: ${label}`} className={clsx('inline-flex shrink-0 items-center gap-1.5 rounded-full px-3 py-1 text-sm font-semibold', className)}>
+    <p
+      role="status"
+      aria-label={`Connection: ${label}`}
+      className={clsx('inline-flex shrink-0 items-center gap-1.5 rounded-full px-3 py-1 text-sm font-semibold', className)}
+    >
       <Icon aria-hidden className={clsx('size-4', spin && 'animate-spin')} /> {label}
     </p>
   )

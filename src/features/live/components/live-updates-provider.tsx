@@ -36,9 +36,12 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
     // socket.io-client loads after the first paint: the page needs its data first, live changes next.
     let cancelled = false
     let teardown: (() => void) | undefined
-    void import('../api/socket-client').then(({ createLiveSocket }) => {
-      if (!cancelled) teardown = connect(createLiveSocket())
-    }, () => !cancelled && setState({ personId, status: 'offline' }))
+    void import('../api/socket-client').then(
+      ({ createLiveSocket }) => {
+        if (!cancelled) teardown = connect(createLiveSocket())
+      },
+      () => !cancelled && setState({ personId, status: 'offline' }),
+    )
     const connect = (socket: Socket) => {
       const report = (status: LiveStatus) => setState({ personId, status })
       let missed = false

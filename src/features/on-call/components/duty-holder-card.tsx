@@ -9,7 +9,9 @@ const bigLink = 'inline-flex min-h-12 items-center justify-center gap-2 rounded-
 export function DutyHolderCard({ now, next, timeZone, canPlan }: Pick<OnCallSummary, 'now' | 'next'> & { timeZone: string; canPlan: boolean }) {
   return (
     <section aria-labelledby="on-call-now" className="rounded-xl bg-tide-900 p-5 text-white">
-      <h2 id="on-call-now" className="text-sm font-semibold tracking-wide text-tide-200 uppercase">On call now</h2>
+      <h2 id="on-call-now" className="text-sm font-semibold tracking-wide text-tide-200 uppercase">
+        On call now
+      </h2>
       {now ? (
         <>
           <p className="mt-1 flex items-center gap-2 text-2xl font-bold">
@@ -40,7 +42,13 @@ export function DutyHolderCard({ now, next, timeZone, canPlan }: Pick<OnCallSumm
           </p>
           <p className="mt-1 text-tide-100">
             {canPlan ? (
-              <>Add duty on the <Link to="/roster" className="font-semibold text-white underline">Roster</Link>.</>
+              <>
+                Add duty on the{' '}
+                <Link to="/roster" className="font-semibold text-white underline">
+                  Roster
+                </Link>
+                .
+              </>
             ) : (
               'Ask a supervisor to add duty on the Roster.'
             )}
@@ -49,7 +57,9 @@ export function DutyHolderCard({ now, next, timeZone, canPlan }: Pick<OnCallSumm
       )}
       <p className="mt-4 border-t border-tide-700 pt-3 text-sm text-tide-100">
         {next ? (
-          <>Next: <span className="font-semibold text-white">{next.personName}</span> from {formatWhen(next.startsAt, timeZone)}</>
+          <>
+            Next: <span className="font-semibold text-white">{next.personName}</span> from {formatWhen(next.startsAt, timeZone)}
+          </>
         ) : (
           'Nobody is rostered next in the coming two weeks.'
         )}

@@ -29,7 +29,9 @@ export function HandoverNoteForm() {
 
   return (
     <form noValidate onSubmit={submit} className="flex flex-col gap-2">
-      <label htmlFor="handover-note" className="text-sm font-semibold text-tide-800">Write a handover note</label>
+      <label htmlFor="handover-note" className="text-sm font-semibold text-tide-800">
+        Write a handover note
+      </label>
       <textarea
         id="handover-note"
         rows={3}
@@ -39,7 +41,11 @@ export function HandoverNoteForm() {
         className={`rounded-lg border bg-white p-3 text-base ${error ? 'border-alarm-500' : 'border-tide-200'}`}
         {...form.register('text')}
       />
-      {error && <p id="handover-note-error" className="text-sm font-semibold text-alarm-700">{error}</p>}
+      {error && (
+        <p id="handover-note-error" className="text-sm font-semibold text-alarm-700">
+          {error}
+        </p>
+      )}
       <Button type="submit" disabled={add.isPending} className="self-start">
         <Send aria-hidden className="size-5" /> {add.isPending ? 'Saving…' : 'Save note'}
       </Button>

@@ -51,9 +51,7 @@ export function WaitingEscalations({ alerts, timeZone, canAcknowledge }: { alert
           ))}
         </ul>
       )}
-      {!canAcknowledge && alerts.length > 0 && (
-        <p className="mt-2 text-sm text-tide-600">Observers acknowledge through the link in their e-mail.</p>
-      )}
+      {!canAcknowledge && alerts.length > 0 && <p className="mt-2 text-sm text-tide-600">Observers acknowledge through the link in their e-mail.</p>}
     </OnCallSection>
   )
 }

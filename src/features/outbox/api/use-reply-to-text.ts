@@ -8,7 +8,8 @@ import { outboxKeys } from './outbox-queries'
 export function useReplyToText() {
   const queryClient = useQueryClient()
   return useMutation({
-    mutationFn: ({ id, body }: { id: number; body: string }) => apiFetch(`/outbox/texts/${id}/reply`, z.object({ answer: text() }), { method: 'POST', ...jsonBody({ body }) }),
+    mutationFn: ({ id, body }: { id: number; body: string }) =>
+      apiFetch(`/outbox/texts/${id}/reply`, z.object({ answer: text() }), { method: 'POST', ...jsonBody({ body }) }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: outboxKeys.all }),
   })
 }

@@ -16,7 +16,9 @@ export function OutboxMessageView({ message, timeZone }: { message: OutboxMessag
       </Link>
       <header>
         <h2 className="text-lg font-bold break-words text-tide-900">{message.subject}</h2>
-        <p className="text-sm text-tide-700">To {message.to} · {formatWhen(message.receivedAt, timeZone)}</p>
+        <p className="text-sm text-tide-700">
+          To {message.to} · {formatWhen(message.receivedAt, timeZone)}
+        </p>
       </header>
       {(ack || taskPath) && (
         <div className="flex flex-wrap gap-2">
@@ -34,13 +36,20 @@ export function OutboxMessageView({ message, timeZone }: { message: OutboxMessag
       )}
       <section aria-label="Text part">
         <h3 className="mb-1 text-sm font-semibold tracking-wide text-tide-600 uppercase">Text part</h3>
-        <pre className="overflow-x-auto rounded-lg bg-tide-50 p-3 font-mono text-sm whitespace-pre-wrap break-words text-tide-900">{message.text || '(empty)'}</pre>
+        <pre className="overflow-x-auto rounded-lg bg-tide-50 p-3 font-mono text-sm whitespace-pre-wrap break-words text-tide-900">
+          {message.text || '(empty)'}
+        </pre>
       </section>
       <section aria-label="HTML part">
         <h3 className="mb-1 text-sm font-semibold tracking-wide text-tide-600 uppercase">HTML part</h3>
         {message.html ? (
           // sandbox="" : no scripts, forms, popups or same-origin access for whatever the mail contains.
-          <iframe title={`HTML part of ${message.subject}`} sandbox="" srcDoc={message.html} className="h-72 w-full rounded-lg border border-tide-200 bg-white" />
+          <iframe
+            title={`HTML part of ${message.subject}`}
+            sandbox=""
+            srcDoc={message.html}
+            className="h-72 w-full rounded-lg border border-tide-200 bg-white"
+          />
         ) : (
           <p className="text-sm text-tide-700">This message has no HTML part.</p>
         )}

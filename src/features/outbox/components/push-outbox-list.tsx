@@ -18,7 +18,11 @@ export function PushOutboxList({ pushes, timeZone }: { pushes: PushOutboxMessage
               <span className="text-sm font-semibold text-tide-700">
                 {refused ? 'Refused' : 'Decrypted'} · To {p.personName ?? 'a device no longer registered'} · {formatWhen(p.receivedAt, timeZone)}
               </span>
-              {refused ? <span className="break-words text-alarm-700">{p.note}</span> : <span className="break-words font-semibold text-tide-900">{p.title}</span>}
+              {refused ? (
+                <span className="break-words text-alarm-700">{p.note}</span>
+              ) : (
+                <span className="break-words font-semibold text-tide-900">{p.title}</span>
+              )}
               {p.body && <span className="break-words text-tide-800">{p.body}</span>}
             </span>
           </li>

@@ -17,16 +17,24 @@ export function PushOutboxSection({ timeZone }: { timeZone: string }) {
   if (pushes.data === null) return null
   return (
     <section aria-labelledby="pushes-heading" className="flex flex-col gap-2">
-      <h2 id="pushes-heading" className="text-lg font-bold text-tide-900">Push notifications</h2>
+      <h2 id="pushes-heading" className="text-lg font-bold text-tide-900">
+        Push notifications
+      </h2>
       <p className="text-sm text-tide-700">
-        Local push mode: pushes go to a stand-in push service on this machine, which checks the signature and decrypts them as a phone would. A stand-in device receives your push alerts here.
+        Local push mode: pushes go to a stand-in push service on this machine, which checks the signature and decrypts them as a phone would. A stand-in device
+        receives your push alerts here.
       </p>
       <Button
         type="button"
         variant="secondary"
         className="self-start"
         disabled={addDevice.isPending}
-        onClick={() => addDevice.mutate(undefined, { onSuccess: () => toast.success('A stand-in device now receives your push alerts.'), onError: (e) => toast.error(e.message) })}
+        onClick={() =>
+          addDevice.mutate(undefined, {
+            onSuccess: () => toast.success('A stand-in device now receives your push alerts.'),
+            onError: (e) => toast.error(e.message),
+          })
+        }
       >
         <Smartphone aria-hidden className="size-5" /> {addDevice.isPending ? 'Adding…' : 'Add a stand-in device for me'}
       </Button>

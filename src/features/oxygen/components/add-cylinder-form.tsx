@@ -23,9 +23,13 @@ export function AddCylinderForm({ onDone }: { onDone: () => void }) {
     e.preventDefault()
     const size = parseDecimal(v.size)
     const parsed = CylinderInputSchema.safeParse({
-      code: v.code, label: v.label, method: v.method,
-      waterCapacityL: metric ? size : null, factorLPerPsi: metric ? null : size,
-      reservePressure: parseDecimal(v.reserve) ?? Number.NaN, flowLPerMin: parseDecimal(v.flow) ?? 0,
+      code: v.code,
+      label: v.label,
+      method: v.method,
+      waterCapacityL: metric ? size : null,
+      factorLPerPsi: metric ? null : size,
+      reservePressure: parseDecimal(v.reserve) ?? Number.NaN,
+      flowLPerMin: parseDecimal(v.flow) ?? 0,
     })
     if (!parsed.success) {
       setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])))
@@ -49,17 +53,37 @@ export function AddCylinderForm({ onDone }: { onDone: () => void }) {
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Code" value={v.code} onChange={(e) => set('code')(e.target.value)} error={errors.code} />
         <Field label="Label" value={v.label} onChange={(e) => set('label')(e.target.value)} error={errors.label} />
-        <SelectField label="Gauge reads" value={v.method} onChange={(e) => setV((old) => ({ ...old, method: e.target.value as typeof blank.method, reserve: e.target.value === 'metric' ? '20' : '200' }))}>
+        <SelectField
+          label="Gauge reads"
+          value={v.method}
+          onChange={(e) => setV((old) => ({ ...old, method: e.target.value as typeof blank.method, reserve: e.target.value === 'metric' ? '20' : '200' }))}
+        >
           <option value="metric">bar (give the water capacity)</option>
           <option value="psi-factor">psi (give the cylinder factor)</option>
         </SelectField>
-        <Field label={metric ? 'Water capacity (L)' : 'Factor (L per psi)'} value={v.size} onChange={(e) => set('size')(e.target.value)} inputMode="decimal" error={errors.waterCapacityL ?? errors.factorLPerPsi} />
-        <Field label={`Reserve pressure (${metric ? 'bar' : 'psi'})`} value={v.reserve} onChange={(e) => set('reserve')(e.target.value)} inputMode="decimal" error={errors.reservePressure} />
+        <Field
+          label={metric ? 'Water capacity (L)' : 'Factor (L per psi)'}
+          value={v.size}
+          onChange={(e) => set('size')(e.target.value)}
+          inputMode="decimal"
+          error={errors.waterCapacityL ?? errors.factorLPerPsi}
+        />
+        <Field
+          label={`Reserve pressure (${metric ? 'bar' : 'psi'})`}
+          value={v.reserve}
+          onChange={(e) => set('reserve')(e.target.value)}
+          inputMode="decimal"
+          error={errors.reservePressure}
+        />
         <Field label="Usual flow (L/min)" value={v.flow} onChange={(e) => set('flow')(e.target.value)} inputMode="decimal" error={errors.flowLPerMin} />
       </div>
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={add.isPending}><Plus aria-hidden className="size-5" /> Add cylinder</Button>
-        <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={add.isPending}>
+          <Plus aria-hidden className="size-5" /> Add cylinder
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   )

@@ -9,7 +9,9 @@ function Fact({ label, value, testId }: { label: string; value: string; testId?:
   return (
     <div>
       <dt className="text-sm text-tide-600">{label}</dt>
-      <dd className="font-semibold tabular-nums text-tide-900" data-testid={testId}>{value}</dd>
+      <dd className="font-semibold tabular-nums text-tide-900" data-testid={testId}>
+        {value}
+      </dd>
     </div>
   )
 }
@@ -32,7 +34,9 @@ export function CylinderCard({ cylinder, zone, canRead }: { cylinder: CylinderSt
         <Fact label="Last reading" value={c.lastPressure === null ? 'None yet' : `${c.lastPressure} ${c.unit} at ${c.flowLPerMin} L/min`} />
         <Fact label="Read" value={c.lastReadAt ? formatInstant(c.lastReadAt, zone) : '–'} />
       </dl>
-      <p className="text-sm text-tide-600">Reserve pressure {c.reservePressure} {c.unit}; hours count down to it, not to empty.</p>
+      <p className="text-sm text-tide-600">
+        Reserve pressure {c.reservePressure} {c.unit}; hours count down to it, not to empty.
+      </p>
       <ReplaceTaskNotice status={c} fresh={justRaised !== null && justRaised === c.replaceTaskId} />
       {canRead && <ReadingForm cylinder={c} onSaved={(status) => setJustRaised(c.replaceTaskId === null ? status.replaceTaskId : null)} />}
     </li>

@@ -18,7 +18,10 @@ export function ReadingForm({ cylinder, onSaved }: { cylinder: CylinderStatus; o
     e.preventDefault()
     const p = parseDecimal(pressure)
     const f = parseDecimal(flow)
-    const found = { pressure: p === null ? 'Enter the gauge pressure' : p < 0 ? 'Pressure cannot be negative' : undefined, flow: f === null || f <= 0 ? 'Enter a flow above 0' : undefined }
+    const found = {
+      pressure: p === null ? 'Enter the gauge pressure' : p < 0 ? 'Pressure cannot be negative' : undefined,
+      flow: f === null || f <= 0 ? 'Enter a flow above 0' : undefined,
+    }
     setErrors(found)
     if (found.pressure || found.flow) return
     record.mutate(
@@ -36,8 +39,20 @@ export function ReadingForm({ cylinder, onSaved }: { cylinder: CylinderStatus; o
   }
 
   return (
-    <form noValidate onSubmit={submit} aria-label={`Reading for ${cylinder.code}`} className="grid grid-cols-2 gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-start">
-      <Field label={`Gauge (${cylinder.unit})`} value={pressure} onChange={(e) => setPressure(e.target.value)} inputMode="decimal" autoComplete="off" error={errors.pressure} />
+    <form
+      noValidate
+      onSubmit={submit}
+      aria-label={`Reading for ${cylinder.code}`}
+      className="grid grid-cols-2 gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-start"
+    >
+      <Field
+        label={`Gauge (${cylinder.unit})`}
+        value={pressure}
+        onChange={(e) => setPressure(e.target.value)}
+        inputMode="decimal"
+        autoComplete="off"
+        error={errors.pressure}
+      />
       <Field label="Flow (L/min)" value={flow} onChange={(e) => setFlow(e.target.value)} inputMode="decimal" autoComplete="off" error={errors.flow} />
       <Button type="submit" disabled={record.isPending} className="col-span-2 sm:col-span-1 sm:mt-6">
         <Gauge aria-hidden className="size-5" /> {record.isPending ? 'Saving…' : 'Save reading'}

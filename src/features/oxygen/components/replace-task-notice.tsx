@@ -9,7 +9,10 @@ export function ReplaceTaskNotice({ status, fresh }: { status: CylinderStatus; f
   const critical = status.level === 'critical'
   const Icon = critical ? CircleAlert : TriangleAlert
   return (
-    <div role={fresh ? 'status' : undefined} className={clsx('flex flex-col gap-1 rounded-lg border p-3 text-sm', critical ? 'border-alarm-100 bg-alarm-50' : 'border-ember-100 bg-ember-50')}>
+    <div
+      role={fresh ? 'status' : undefined}
+      className={clsx('flex flex-col gap-1 rounded-lg border p-3 text-sm', critical ? 'border-alarm-100 bg-alarm-50' : 'border-ember-100 bg-ember-50')}
+    >
       <p className="flex items-start gap-2 text-tide-900">
         <Icon aria-hidden className={clsx('mt-0.5 size-4 shrink-0', critical ? 'text-alarm-700' : 'text-ember-700')} />
         <span>

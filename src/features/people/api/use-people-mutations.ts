@@ -20,8 +20,7 @@ export function useCreatePerson() {
 export function useUpdatePerson() {
   const onSuccess = useInvalidatePeople()
   return useMutation({
-    mutationFn: ({ id, ...input }: UpdatePersonInput & { id: number }) =>
-      apiFetch(`/people/${id}`, PersonSchema, { method: 'PATCH', ...jsonBody(input) }),
+    mutationFn: ({ id, ...input }: UpdatePersonInput & { id: number }) => apiFetch(`/people/${id}`, PersonSchema, { method: 'PATCH', ...jsonBody(input) }),
     onSuccess,
   })
 }

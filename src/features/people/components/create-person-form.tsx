@@ -37,20 +37,35 @@ export function CreatePersonForm({ onDone }: { onDone: () => void }) {
       <Field label="Name" {...form.register('name')} error={errors.name?.message} />
       <Field label="E-mail" type="email" {...form.register('email')} error={errors.email?.message} />
       <div className="flex flex-col gap-1">
-        <label htmlFor="new-person-role" className="text-sm font-semibold text-tide-800">Role</label>
+        <label htmlFor="new-person-role" className="text-sm font-semibold text-tide-800">
+          Role
+        </label>
         <select id="new-person-role" className="min-h-11 rounded-lg border border-tide-200 bg-white px-3" {...form.register('role')}>
           {ROLES.map((role) => (
-            <option key={role} value={role}>{ROLE_LABELS[role]}</option>
+            <option key={role} value={role}>
+              {ROLE_LABELS[role]}
+            </option>
           ))}
         </select>
       </div>
-      <Field label="First password" type="password" autoComplete="new-password" hint="At least 10 characters; they can change it later." {...form.register('password')} error={errors.password?.message} />
+      <Field
+        label="First password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters; they can change it later."
+        {...form.register('password')}
+        error={errors.password?.message}
+      />
       <label className="flex min-h-11 items-center gap-2 text-tide-800">
         <input type="checkbox" className="size-5" {...form.register('onCallEligible')} /> Can hold on-call duty
       </label>
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" disabled={create.isPending}>{create.isPending ? 'Adding…' : 'Add person'}</Button>
-        <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+        <Button type="submit" disabled={create.isPending}>
+          {create.isPending ? 'Adding…' : 'Add person'}
+        </Button>
+        <Button type="button" variant="ghost" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   )

@@ -1,6 +1,11 @@
 import {
-  createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel,
-  useReactTable, type SortingState,
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
 } from '@tanstack/react-table'
 import { ArrowDownUp } from 'lucide-react'
 import { useMemo, useState } from 'react'
@@ -29,7 +34,11 @@ export function PeopleTable({ people, meId }: { people: Person[]; meId: number }
             onChange={(e) => update.mutate({ id: info.row.original.id, role: e.target.value as Role })}
             className="min-h-9 rounded border border-tide-200 bg-white px-2"
           >
-            {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+            {ROLES.map((r) => (
+              <option key={r} value={r}>
+                {ROLE_LABELS[r]}
+              </option>
+            ))}
           </select>
         ),
       }),
@@ -41,7 +50,9 @@ export function PeopleTable({ people, meId }: { people: Person[]; meId: number }
         id: 'actions',
         header: 'Actions',
         cell: ({ row }) =>
-          row.original.id === meId ? <span className="text-tide-500">You</span> : (
+          row.original.id === meId ? (
+            <span className="text-tide-500">You</span>
+          ) : (
             <div className="flex flex-wrap gap-2">
               <button
                 type="button"
@@ -91,7 +102,9 @@ export function PeopleTable({ people, meId }: { people: Person[]; meId: number }
                         {flexRender(header.column.columnDef.header, header.getContext())}
                         <ArrowDownUp aria-hidden className="size-3.5" />
                       </button>
-                    ) : flexRender(header.column.columnDef.header, header.getContext())}
+                    ) : (
+                      flexRender(header.column.columnDef.header, header.getContext())
+                    )}
                   </th>
                 ))}
               </tr>
@@ -101,12 +114,18 @@ export function PeopleTable({ people, meId }: { people: Person[]; meId: number }
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-t border-tide-100">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                  <td key={cell.id} className="px-3 py-2">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
                 ))}
               </tr>
             ))}
             {table.getRowModel().rows.length === 0 && (
-              <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-tide-600">Nobody matches that filter.</td></tr>
+              <tr>
+                <td colSpan={columns.length} className="px-3 py-6 text-center text-tide-600">
+                  Nobody matches that filter.
+                </td>
+              </tr>
             )}
           </tbody>
         </table>

@@ -21,7 +21,13 @@ export function ResetPasswordButton({ person }: { person: Person }) {
         e.preventDefault()
         reset.mutate(
           { id: person.id, password },
-          { onSuccess: () => { toast.success(`New password set for ${person.name}; their other sessions have ended.`); setOpen(false); setPassword('') } },
+          {
+            onSuccess: () => {
+              toast.success(`New password set for ${person.name}; their other sessions have ended.`)
+              setOpen(false)
+              setPassword('')
+            },
+          },
         )
       }}
     >
@@ -34,7 +40,9 @@ export function ResetPasswordButton({ person }: { person: Person }) {
         onChange={(e) => setPassword(e.target.value)}
         className="min-h-9 w-36 rounded border border-tide-200 px-2"
       />
-      <button type="submit" className="rounded bg-tide-700 px-2 font-semibold text-white">Set</button>
+      <button type="submit" className="rounded bg-tide-700 px-2 font-semibold text-white">
+        Set
+      </button>
     </form>
   )
 }

@@ -19,7 +19,6 @@ export const eventKeys = {
   detail: (id: number) => [...eventKeys.all, 'detail', id] as const,
 }
 
-
 async function fetchEventTasks(event: FacilityEvent, playbook: Playbook, zone: string) {
   const windows = eventTaskWindows(event, playbook, zone)
   const pages = await Promise.all(windows.map((w) => apiFetch(`/tasks?${new URLSearchParams(w)}`, z.array(TaskSchema))))

@@ -9,10 +9,7 @@ function useRefreshAfterEvent() {
   const queryClient = useQueryClient()
   return (event: FacilityEvent) => {
     queryClient.setQueryData(eventKeys.detail(event.id), event)
-    return Promise.all([
-      queryClient.invalidateQueries({ queryKey: eventKeys.lists() }),
-      queryClient.invalidateQueries({ queryKey: taskKeys.all }),
-    ])
+    return Promise.all([queryClient.invalidateQueries({ queryKey: eventKeys.lists() }), queryClient.invalidateQueries({ queryKey: taskKeys.all })])
   }
 }
 

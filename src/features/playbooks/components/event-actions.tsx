@@ -7,7 +7,11 @@ import { useFinishEvent } from '../api/use-event-mutations'
 
 const CONFIRM = {
   end: { ask: 'End this event? Its tasks stay as records; held feeds still ahead go back on the board.', yes: 'Yes, end event', done: 'Event ended.' },
-  cancel: { ask: 'Cancel this event? Its untouched tasks are removed; held feeds still ahead go back on the board.', yes: 'Yes, cancel event', done: 'Event cancelled.' },
+  cancel: {
+    ask: 'Cancel this event? Its untouched tasks are removed; held feeds still ahead go back on the board.',
+    yes: 'Yes, cancel event',
+    done: 'Event cancelled.',
+  },
 } as const
 
 /** End or cancel, each behind a second, explicit step. */
@@ -24,11 +28,23 @@ export function EventActions({ event }: { event: FacilityEvent }) {
           <Button
             variant={asking === 'cancel' ? 'danger' : 'primary'}
             disabled={finish.isPending}
-            onClick={() => finish.mutate({ id: event.id, action: asking }, { onSuccess: () => { toast.success(c.done); setAsking(null) } })}
+            onClick={() =>
+              finish.mutate(
+                { id: event.id, action: asking },
+                {
+                  onSuccess: () => {
+                    toast.success(c.done)
+                    setAsking(null)
+                  },
+                },
+              )
+            }
           >
             {c.yes}
           </Button>
-          <Button variant="ghost" onClick={() => setAsking(null)}>Keep it</Button>
+          <Button variant="ghost" onClick={() => setAsking(null)}>
+            Keep it
+          </Button>
         </div>
       </div>
     )

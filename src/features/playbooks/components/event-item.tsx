@@ -16,12 +16,20 @@ export function EventItem({ event, tanks, batches, zone, canManage }: Props) {
   return (
     <li aria-label={event.title} className="grid gap-x-6 gap-y-2 px-4 py-3 lg:grid-cols-[minmax(0,1.3fr)_minmax(0,1.6fr)_auto] lg:items-start">
       <div className="min-w-0">
-        <Link to={`/events/${event.id}`} className="text-lg font-semibold text-tide-900 underline-offset-2 hover:underline">{event.title}</Link>
-        <p className="text-sm text-tide-700">{EVENT_KIND_LABELS[event.kind]} · starts {formatWallTime(event.localStart)}</p>
-        <p className="mt-1"><EventStatusLabel status={event.status} /></p>
+        <Link to={`/events/${event.id}`} className="text-lg font-semibold text-tide-900 underline-offset-2 hover:underline">
+          {event.title}
+        </Link>
+        <p className="text-sm text-tide-700">
+          {EVENT_KIND_LABELS[event.kind]} · starts {formatWallTime(event.localStart)}
+        </p>
+        <p className="mt-1">
+          <EventStatusLabel status={event.status} />
+        </p>
       </div>
       <div className="flex min-w-0 flex-col gap-1 text-sm text-tide-800">
-        <p>{batch ? `Batch ${batch.code} · ` : ''}Tanks: {tankCodes(event.tankIds, tanks)}</p>
+        <p>
+          {batch ? `Batch ${batch.code} · ` : ''}Tanks: {tankCodes(event.tankIds, tanks)}
+        </p>
         <FastingWindow from={event.fastingFrom} to={event.fastingTo} zone={zone} />
         <p className="flex items-center gap-2">
           <ListChecks aria-hidden className="size-4 text-tide-600" /> {event.taskCount} {event.taskCount === 1 ? 'task' : 'tasks'}

@@ -20,7 +20,9 @@ export function EventList({ events, tanks, batches, zone, canManage }: Props) {
         </p>
       ) : (
         <ul aria-label="Events" className="divide-y divide-tide-100 rounded-xl border border-tide-200 bg-white">
-          {shown.map((e) => <EventItem key={e.id} event={e} tanks={tanks} batches={batches} zone={zone} canManage={canManage} />)}
+          {shown.map((e) => (
+            <EventItem key={e.id} event={e} tanks={tanks} batches={batches} zone={zone} canManage={canManage} />
+          ))}
         </ul>
       )}
       {finished.length > 0 && (

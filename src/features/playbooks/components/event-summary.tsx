@@ -22,10 +22,26 @@ export function EventSummary({ event, playbook, tanks, batches, zone, canManage 
   return (
     <section aria-label="About this event" className="flex flex-col gap-3 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
       <dl className="grid gap-x-6 gap-y-2 text-tide-900 sm:grid-cols-2 lg:grid-cols-4">
-        <div><dt className="text-sm text-tide-600">Kind</dt><dd>{EVENT_KIND_LABELS[event.kind]} · {playbook.name}</dd></div>
-        <div><dt className="text-sm text-tide-600">Starts</dt><dd>{formatWallTime(event.localStart)}</dd></div>
-        <div><dt className="text-sm text-tide-600">Tanks</dt><dd>{tankCodes(event.tankIds, tanks, 6)}</dd></div>
-        <div><dt className="text-sm text-tide-600">Status</dt><dd><EventStatusLabel status={event.status} /> · {event.taskCount} tasks</dd></div>
+        <div>
+          <dt className="text-sm text-tide-600">Kind</dt>
+          <dd>
+            {EVENT_KIND_LABELS[event.kind]} · {playbook.name}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Starts</dt>
+          <dd>{formatWallTime(event.localStart)}</dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Tanks</dt>
+          <dd>{tankCodes(event.tankIds, tanks, 6)}</dd>
+        </div>
+        <div>
+          <dt className="text-sm text-tide-600">Status</dt>
+          <dd>
+            <EventStatusLabel status={event.status} /> · {event.taskCount} tasks
+          </dd>
+        </div>
       </dl>
       <FastingWindow from={event.fastingFrom} to={event.fastingTo} zone={zone} />
       {event.notes && <p className="whitespace-pre-line text-tide-800">{event.notes}</p>}
@@ -33,7 +49,10 @@ export function EventSummary({ event, playbook, tanks, batches, zone, canManage 
         <ul aria-label="Batch records" className="flex flex-wrap gap-2">
           {linked.map((b) => (
             <li key={b.id}>
-              <Link to={`/batches/${b.id}?event=${event.id}`} className="inline-flex min-h-11 items-center gap-2 rounded-lg bg-tide-700 px-4 font-semibold text-white hover:bg-tide-800">
+              <Link
+                to={`/batches/${b.id}?event=${event.id}`}
+                className="inline-flex min-h-11 items-center gap-2 rounded-lg bg-tide-700 px-4 font-semibold text-white hover:bg-tide-800"
+              >
                 <ClipboardList aria-hidden className="size-5" /> Batch record {b.code}
               </Link>
             </li>

@@ -17,13 +17,23 @@ export function EventTaskPreview({ playbook, localStart, zone, tankCount, fastin
         <ListChecks aria-hidden className="size-5 text-tide-600" /> Tasks this event will create
       </h3>
       <p className="text-sm text-tide-700" data-testid="preview-total">
-        {tankCount === 0 ? 'Choose the tanks or a batch to see the tasks.' : `${total} ${total === 1 ? 'task' : 'tasks'} for ${tankCount} ${tankCount === 1 ? 'tank' : 'tanks'}, facility time (${zone}).`}
+        {tankCount === 0
+          ? 'Choose the tanks or a batch to see the tasks.'
+          : `${total} ${total === 1 ? 'task' : 'tasks'} for ${tankCount} ${tankCount === 1 ? 'tank' : 'tanks'}, facility time (${zone}).`}
       </p>
-      {fasting && <div className="mt-2"><FastingWindow from={fasting.from} to={fasting.to} zone={zone} /></div>}
+      {fasting && (
+        <div className="mt-2">
+          <FastingWindow from={fasting.from} to={fasting.to} zone={zone} />
+        </div>
+      )}
       {tankCount > 0 && (
         <table className="mt-2 w-full text-left text-sm">
           <thead className="text-tide-700">
-            <tr><th className="py-1 pr-3 font-semibold">When</th><th className="py-1 pr-3 font-semibold">Task</th><th className="py-1 text-right font-semibold">Tasks</th></tr>
+            <tr>
+              <th className="py-1 pr-3 font-semibold">When</th>
+              <th className="py-1 pr-3 font-semibold">Task</th>
+              <th className="py-1 text-right font-semibold">Tasks</th>
+            </tr>
           </thead>
           <tbody className="divide-y divide-tide-100">
             {lines.map((l) => (

@@ -6,8 +6,8 @@ export function FastingCaution() {
     <p className="flex items-start gap-2 rounded-lg bg-tide-50 p-3 text-sm text-tide-800">
       <Info aria-hidden className="mt-0.5 size-4 shrink-0 text-tide-600" />
       <span>
-        Common practice is 24 h for warm-water juveniles; follow your veterinarian and permit. Longer fasts are not suitable
-        for cannibalistic species, and any withdrawal period after medicated feed still applies.
+        Common practice is 24 h for warm-water juveniles; follow your veterinarian and permit. Longer fasts are not suitable for cannibalistic species, and any
+        withdrawal period after medicated feed still applies.
       </span>
     </p>
   )

@@ -7,7 +7,9 @@ export function FastingWindow({ from, to, zone }: { from: string | null; to: str
   return (
     <p className="flex items-start gap-2 text-sm text-tide-800">
       <UtensilsCrossed aria-hidden className="mt-0.5 size-4 shrink-0 text-tide-600" />
-      <span>Feeding held from {formatInstant(from, zone)} to {formatInstant(to, zone)}</span>
+      <span>
+        Feeding held from {formatInstant(from, zone)} to {formatInstant(to, zone)}
+      </span>
     </p>
   )
 }

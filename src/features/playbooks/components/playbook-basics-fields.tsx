@@ -8,13 +8,21 @@ import { SelectField } from '../../../components/ui/select-field'
 import { TextAreaField } from '../../../components/ui/text-area-field'
 
 export function PlaybookBasicsFields() {
-  const { register, watch, formState: { errors } } = useFormContext<PlaybookInput>()
+  const {
+    register,
+    watch,
+    formState: { errors },
+  } = useFormContext<PlaybookInput>()
   const fasts = FASTING_KINDS.includes(watch('kind'))
   return (
     <div className="grid gap-4 md:grid-cols-[minmax(0,2fr)_minmax(0,1fr)_minmax(0,1fr)]">
       <Field label="Name" error={errors.name?.message} {...register('name')} />
       <SelectField label="Kind of event" {...register('kind')}>
-        {EVENT_KINDS.map((k) => <option key={k} value={k}>{EVENT_KIND_LABELS[k]}</option>)}
+        {EVENT_KINDS.map((k) => (
+          <option key={k} value={k}>
+            {EVENT_KIND_LABELS[k]}
+          </option>
+        ))}
       </SelectField>
       {fasts ? (
         <Field
@@ -30,7 +38,11 @@ export function PlaybookBasicsFields() {
         <p className="self-end pb-2 text-sm text-tide-600">This kind of event holds no feeds.</p>
       )}
       <TextAreaField label="Description" className="md:col-span-3" error={errors.description?.message} {...register('description')} />
-      {fasts && <div className="md:col-span-3"><FastingCaution /></div>}
+      {fasts && (
+        <div className="md:col-span-3">
+          <FastingCaution />
+        </div>
+      )}
     </div>
   )
 }

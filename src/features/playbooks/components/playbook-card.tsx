@@ -15,7 +15,9 @@ export function PlaybookCard({ playbook, onEdit }: { playbook: Playbook; onEdit?
           </h3>
           <p className="mt-0.5 flex flex-wrap gap-x-3 text-sm text-tide-700">
             <span>{EVENT_KIND_LABELS[playbook.kind]}</span>
-            <span>{playbook.steps.length} {playbook.steps.length === 1 ? 'step' : 'steps'}</span>
+            <span>
+              {playbook.steps.length} {playbook.steps.length === 1 ? 'step' : 'steps'}
+            </span>
             {fasts && (
               <span className="inline-flex items-center gap-1">
                 <UtensilsCrossed aria-hidden className="size-4" /> Feeding held {playbook.fastingHours} h before

@@ -43,7 +43,12 @@ export function PlaybookEditor({ playbook, onDone }: Props) {
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={submit} aria-label={playbook ? `Edit ${playbook.name}` : 'New playbook'} className="flex flex-col gap-4 rounded-xl border border-tide-300 bg-white p-4 md:p-5">
+      <form
+        noValidate
+        onSubmit={submit}
+        aria-label={playbook ? `Edit ${playbook.name}` : 'New playbook'}
+        className="flex flex-col gap-4 rounded-xl border border-tide-300 bg-white p-4 md:p-5"
+      >
         <h3 className="text-lg font-bold text-tide-900">{playbook ? `Edit “${playbook.name}”` : 'New playbook'}</h3>
         <PlaybookBasicsFields />
         <h4 className="font-bold text-tide-900">Steps</h4>
@@ -59,7 +64,9 @@ export function PlaybookEditor({ playbook, onDone }: Props) {
           <Button type="submit" disabled={save.isPending}>
             <Save aria-hidden className="size-5" /> {save.isPending ? 'Saving…' : 'Save playbook'}
           </Button>
-          <Button type="button" variant="ghost" onClick={onDone}>Cancel</Button>
+          <Button type="button" variant="ghost" onClick={onDone}>
+            Cancel
+          </Button>
         </div>
       </form>
     </FormProvider>

@@ -14,7 +14,9 @@ export function PlaybookLibrary({ playbooks, canEdit }: { playbooks: Playbook[];
     <section aria-labelledby="playbooks-heading" className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end justify-between gap-2">
         <div>
-          <h2 id="playbooks-heading" className="text-xl font-bold text-tide-900">Playbooks</h2>
+          <h2 id="playbooks-heading" className="text-xl font-bold text-tide-900">
+            Playbooks
+          </h2>
           <p className="text-sm text-tide-700">The tasks an event brings with it, timed from the event’s start.</p>
         </div>
         {canEdit && editing === null && (

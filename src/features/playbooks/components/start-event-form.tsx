@@ -14,12 +14,26 @@ import { FastingCaution } from './fasting-caution'
 import { SelectField } from '../../../components/ui/select-field'
 import { TextAreaField } from '../../../components/ui/text-area-field'
 
-type Props = { playbooks: Playbook[]; tanks: Tank[]; areas: Area[]; batches: Batch[]; zone: string; onStarted: (event: FacilityEvent) => void; onClose: () => void }
+type Props = {
+  playbooks: Playbook[]
+  tanks: Tank[]
+  areas: Area[]
+  batches: Batch[]
+  zone: string
+  onStarted: (event: FacilityEvent) => void
+  onClose: () => void
+}
 
 export function StartEventForm({ playbooks, tanks, areas, batches, zone, onStarted, onClose }: Props) {
   const start = useStartEvent()
   const form = useForm<EventFormValues, unknown, EventInput>({ resolver: zodResolver(eventFormSchema), defaultValues: defaultEventValues(zone) })
-  const { register, watch, setValue, getValues, formState: { errors } } = form
+  const {
+    register,
+    watch,
+    setValue,
+    getValues,
+    formState: { errors },
+  } = form
   const values = watch()
   const playbook = playbooks.find((p) => String(p.id) === values.playbookId) ?? null
   const fasts = !!playbook && FASTING_KINDS.includes(playbook.kind)
@@ -51,12 +65,25 @@ export function StartEventForm({ playbooks, tanks, areas, batches, zone, onStart
         <div className="grid gap-4 md:grid-cols-2">
           <SelectField label="Playbook" error={errors.playbookId?.message} {...register('playbookId', { onChange: (e) => pickPlaybook(e.target.value) })}>
             <option value="">Choose a playbook</option>
-            {playbooks.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
+            {playbooks.map((p) => (
+              <option key={p.id} value={p.id}>
+                {p.name}
+              </option>
+            ))}
           </SelectField>
           <Field label="Title" error={errors.title?.message} {...register('title')} />
           <Field label="Starts (facility time)" type="datetime-local" hint={zone} error={errors.localStart?.message} {...register('localStart')} />
           {fasts && (
-            <Field label="Fasting before (hours)" type="number" inputMode="numeric" min={0} max={168} error={errors.fastingHours?.message} hint="Feeding tasks of these tanks are held, not missed." {...register('fastingHours')} />
+            <Field
+              label="Fasting before (hours)"
+              type="number"
+              inputMode="numeric"
+              min={0}
+              max={168}
+              error={errors.fastingHours?.message}
+              hint="Feeding tasks of these tanks are held, not missed."
+              {...register('fastingHours')}
+            />
           )}
         </div>
         {fasts && <FastingCaution />}
@@ -69,7 +96,9 @@ export function StartEventForm({ playbooks, tanks, areas, batches, zone, onStart
           <Button type="submit" disabled={start.isPending}>
             <Play aria-hidden className="size-5" /> {start.isPending ? 'Starting…' : 'Start event'}
           </Button>
-          <Button type="button" variant="ghost" onClick={onClose}>Close</Button>
+          <Button type="button" variant="ghost" onClick={onClose}>
+            Close
+          </Button>
         </div>
       </form>
     </FormProvider>

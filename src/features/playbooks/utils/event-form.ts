@@ -25,7 +25,9 @@ export const eventFormSchema = z
     tankIds: z.array(z.number().int()),
     batchId: text(),
     notes: text().trim().max(4000),
-    fastingHours: text().trim().regex(/^(\d{1,3})?$/, 'Whole hours, 0 to 168'),
+    fastingHours: text()
+      .trim()
+      .regex(/^(\d{1,3})?$/, 'Whole hours, 0 to 168'),
   })
   .superRefine((v, ctx) => {
     if (v.target === 'tanks' && v.tankIds.length === 0) ctx.addIssue({ code: 'custom', path: ['tankIds'], message: 'Choose at least one tank' })

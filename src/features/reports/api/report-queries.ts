@@ -17,8 +17,10 @@ export const reportQueries = {
     queryOptions({ queryKey: reportKeys.report('responses', f), queryFn: () => apiFetch(reportPath('responses', f), z.array(ResponseRowSchema)) }),
   welfare: (f: WelfareFilter) =>
     queryOptions({ queryKey: reportKeys.report('welfare', f), queryFn: () => apiFetch(reportPath('welfare', f), z.array(WelfareRowSchema)) }),
-  stock: (f: StockFilter) => queryOptions({ queryKey: reportKeys.report('stock', f), queryFn: () => apiFetch(reportPath('stock', f), z.array(StockReportRowSchema)) }),
+  stock: (f: StockFilter) =>
+    queryOptions({ queryKey: reportKeys.report('stock', f), queryFn: () => apiFetch(reportPath('stock', f), z.array(StockReportRowSchema)) }),
   incidents: (f: DateRange) =>
     queryOptions({ queryKey: reportKeys.report('incidents', f), queryFn: () => apiFetch(reportPath('incidents', f), z.array(IncidentReportRowSchema)) }),
-  audit: (f: AuditFilter) => queryOptions({ queryKey: reportKeys.report('audit', f), queryFn: () => apiFetch(reportPath('audit', f), z.array(AuditRowSchema)) }),
+  audit: (f: AuditFilter) =>
+    queryOptions({ queryKey: reportKeys.report('audit', f), queryFn: () => apiFetch(reportPath('audit', f), z.array(AuditRowSchema)) }),
 }

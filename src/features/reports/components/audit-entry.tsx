@@ -23,7 +23,9 @@ export function AuditEntry({ row, who, when }: AuditEntryProps) {
         <span className="text-tide-900">
           {ACTIONS[row.action] ?? row.action} {row.entity.replace('_', ' ')} {row.entityId}
         </span>
-        <span className="text-tide-700">{changed} field{changed === 1 ? '' : 's'} changed</span>
+        <span className="text-tide-700">
+          {changed} field{changed === 1 ? '' : 's'} changed
+        </span>
       </summary>
       <div className="flex flex-col gap-2 px-3 pb-3 md:pl-10">
         <div className="overflow-x-auto">
@@ -31,9 +33,15 @@ export function AuditEntry({ row, who, when }: AuditEntryProps) {
             <caption className="sr-only">Fields before and after</caption>
             <thead className="text-tide-800">
               <tr>
-                <th scope="col" className="px-2 py-1">Field</th>
-                <th scope="col" className="px-2 py-1">Before</th>
-                <th scope="col" className="px-2 py-1">After</th>
+                <th scope="col" className="px-2 py-1">
+                  Field
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Before
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  After
+                </th>
               </tr>
             </thead>
             <tbody>

@@ -2,8 +2,18 @@ import { ReportSelect } from './report-select'
 
 // The audited kinds as the server names them (server/modules/audit/audit.entity.ts).
 const KINDS = [
-  ['', 'Every kind'], ['routine', 'Routines'], ['playbook', 'Playbooks'], ['limit', 'Limits'], ['ladder', 'Ladders'], ['shift', 'Shifts'],
-  ['on_call', 'On-call duty'], ['assignment', 'Assignments'], ['person', 'People'], ['completion', 'Completions and corrections'], ['event', 'Events'], ['facility', 'Facility'],
+  ['', 'Every kind'],
+  ['routine', 'Routines'],
+  ['playbook', 'Playbooks'],
+  ['limit', 'Limits'],
+  ['ladder', 'Ladders'],
+  ['shift', 'Shifts'],
+  ['on_call', 'On-call duty'],
+  ['assignment', 'Assignments'],
+  ['person', 'People'],
+  ['completion', 'Completions and corrections'],
+  ['event', 'Events'],
+  ['facility', 'Facility'],
 ] as const
 
 export function AuditKindSelect({ value, onChange }: { value: string; onChange: (entity: string) => void }) {

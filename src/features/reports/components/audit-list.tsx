@@ -5,7 +5,9 @@ import type { AuditFilter } from '../utils/report-paths'
 import { AuditEntry } from './audit-entry'
 
 const when = (iso: string, timeZone: string) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(new Date(iso))
+  new Intl.DateTimeFormat('en-GB', { timeZone, day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(
+    new Date(iso),
+  )
 
 /** Who changed what, newest first; names when this role may read the staff list, numbers otherwise. */
 export function AuditList({ filter, timeZone, canReadStaff }: { filter: AuditFilter; timeZone: string; canReadStaff: boolean }) {

@@ -27,8 +27,18 @@ export function ComplianceReport({ filter, onFilterChange }: ComplianceReportPro
         <ReportActions csvHref={csvHref('compliance', filter)} label="compliance" />
       </div>
       <div className="flex flex-wrap gap-3 print:hidden">
-        <ReportSelect label="Group by" value={filter.by} options={COMPLIANCE_GROUPINGS.map((v) => ({ value: v, label: BY_LABELS[v] }))} onChange={(by) => onFilterChange({ by })} />
-        <ReportSelect label="Per" value={filter.period} options={REPORT_PERIODS.map((v) => ({ value: v, label: PERIOD_LABELS[v] }))} onChange={(period) => onFilterChange({ period })} />
+        <ReportSelect
+          label="Group by"
+          value={filter.by}
+          options={COMPLIANCE_GROUPINGS.map((v) => ({ value: v, label: BY_LABELS[v] }))}
+          onChange={(by) => onFilterChange({ by })}
+        />
+        <ReportSelect
+          label="Per"
+          value={filter.period}
+          options={REPORT_PERIODS.map((v) => ({ value: v, label: PERIOD_LABELS[v] }))}
+          onChange={(period) => onFilterChange({ period })}
+        />
       </div>
       <OnTimeChart rows={rows} />
       <ComplianceTable rows={rows} />

@@ -23,12 +23,6 @@ const COLUMNS: ReadonlyArray<ReportColumn<ComplianceRow>> = [
 
 export function ComplianceTable({ rows }: { rows: ComplianceRow[] }) {
   return (
-    <ReportTable
-      caption="Compliance"
-      columns={COLUMNS}
-      rows={rows}
-      rowKey={(r) => `${r.period}|${r.group}`}
-      emptyText="No tasks were due in this range."
-    />
+    <ReportTable caption="Compliance" columns={COLUMNS} rows={rows} rowKey={(r) => `${r.period}|${r.group}`} emptyText="No tasks were due in this range." />
   )
 }

@@ -25,7 +25,10 @@ function Deadline({ state, dueAt, doneAt, zone }: { state: DeadlineState; dueAt:
       <span className={`inline-flex items-center gap-1 font-semibold ${s.tone}`}>
         <s.icon aria-hidden className="size-4" /> {s.label}
       </span>
-      <span className="text-xs text-tide-800">by {formatWhen(dueAt, zone)}{doneAt ? ` · done ${formatWhen(doneAt, zone)}` : ''}</span>
+      <span className="text-xs text-tide-800">
+        by {formatWhen(dueAt, zone)}
+        {doneAt ? ` · done ${formatWhen(doneAt, zone)}` : ''}
+      </span>
     </span>
   )
 }
@@ -49,13 +52,21 @@ export function IncidentDeadlinesReport({ range, timeZone }: { range: DateRange;
   return (
     <section aria-labelledby="incident-deadlines-heading" className="flex flex-col gap-3 print:break-before-auto">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="incident-deadlines-heading" className="text-xl font-bold text-tide-900">Incidents and their deadlines</h2>
+        <h2 id="incident-deadlines-heading" className="text-xl font-bold text-tide-900">
+          Incidents and their deadlines
+        </h2>
         <ReportActions csvHref={csvHref('incidents', range)} label="incidents and deadlines" />
       </div>
       <p className="text-sm text-tide-800">
         {rows.length} incidents · {missed ? `${missed} with a deadline missed` : 'every deadline met so far'}
       </p>
-      <ReportTable caption="Incidents and their deadlines" columns={columns(timeZone)} rows={rows} rowKey={(r) => String(r.id)} emptyText="No incidents noticed in this range." />
+      <ReportTable
+        caption="Incidents and their deadlines"
+        columns={columns(timeZone)}
+        rows={rows}
+        rowKey={(r) => String(r.id)}
+        emptyText="No incidents noticed in this range."
+      />
     </section>
   )
 }

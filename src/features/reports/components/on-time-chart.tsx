@@ -13,7 +13,13 @@ export function OnTimeChart({ rows }: { rows: ComplianceRow[] }) {
         {overall.judged > 0 && ` of ${overall.judged} tasks that were due (held and still-open tasks left out)`}
       </figcaption>
       {points.length > 1 && (
-        <LineChart responsive style={{ width: '100%', height: 150 }} data={points} margin={{ top: 8, right: 16, bottom: 0, left: 0 }} title="On-time rate per period">
+        <LineChart
+          responsive
+          style={{ width: '100%', height: 150 }}
+          data={points}
+          margin={{ top: 8, right: 16, bottom: 0, left: 0 }}
+          title="On-time rate per period"
+        >
           <CartesianGrid stroke="#d5e9ee" strokeDasharray="3 3" />
           <XAxis dataKey="period" stroke="#265f75" fontSize={12} minTickGap={16} padding={{ left: 16, right: 16 }} />
           <YAxis domain={[0, 100]} ticks={[0, 50, 100]} unit="%" stroke="#265f75" fontSize={12} width={44} />

@@ -16,7 +16,14 @@ export function RangeForm({ range, onChange }: { range: DateRange; onChange: (ra
   return (
     <form aria-label="Report range" onSubmit={submit} className="flex flex-wrap items-end gap-3 print:hidden">
       <Field label="From" type="date" value={draft.from} onChange={(e) => setDraft({ ...draft, from: e.target.value })} className="w-44" />
-      <Field label="To" type="date" value={draft.to} onChange={(e) => setDraft({ ...draft, to: e.target.value })} className="w-44" error={draft.from && draft.to ? (problem ?? undefined) : undefined} />
+      <Field
+        label="To"
+        type="date"
+        value={draft.to}
+        onChange={(e) => setDraft({ ...draft, to: e.target.value })}
+        className="w-44"
+        error={draft.from && draft.to ? (problem ?? undefined) : undefined}
+      />
       <Button type="submit" variant="secondary" disabled={!!problem}>
         <Search aria-hidden className="size-4" /> Show
       </Button>

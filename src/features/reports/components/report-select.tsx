@@ -11,7 +11,9 @@ export function ReportSelect<T extends string>({ label, value, options, onChange
   const id = useId()
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-tide-800">{label}</label>
+      <label htmlFor={id} className="text-sm font-semibold text-tide-800">
+        {label}
+      </label>
       <select
         id={id}
         value={value}
@@ -19,7 +21,9 @@ export function ReportSelect<T extends string>({ label, value, options, onChange
         className="min-h-11 rounded-lg border border-tide-200 bg-white px-3 text-base"
       >
         {options.map((o) => (
-          <option key={o.value} value={o.value}>{o.label}</option>
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
         ))}
       </select>
     </div>

@@ -37,7 +37,9 @@ export function ResponsesReport({ range }: { range: DateRange }) {
   return (
     <section aria-labelledby="responses-heading" className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="responses-heading" className="text-xl font-bold text-tide-900">Response to flags and escalations</h2>
+        <h2 id="responses-heading" className="text-xl font-bold text-tide-900">
+          Response to flags and escalations
+        </h2>
         <ReportActions csvHref={csvHref('responses', range)} label="responses" />
       </div>
       <dl className="grid grid-cols-3 gap-3 text-sm">
@@ -52,7 +54,13 @@ export function ResponsesReport({ range }: { range: DateRange }) {
           </div>
         ))}
       </dl>
-      <ReportTable caption="Responses" columns={COLUMNS} rows={rows} rowKey={(r, i) => `${r.date}-${r.time}-${r.task}-${i}`} emptyText="No flags or missed tasks in this range." />
+      <ReportTable
+        caption="Responses"
+        columns={COLUMNS}
+        rows={rows}
+        rowKey={(r, i) => `${r.date}-${r.time}-${r.task}-${i}`}
+        emptyText="No flags or missed tasks in this range."
+      />
     </section>
   )
 }

@@ -8,7 +8,11 @@ import { ReportActions } from './report-actions'
 import { ReportSelect } from './report-select'
 import { ReportTable, type ReportColumn } from './report-table'
 
-const num = (label: string, value: (r: StockReportRow) => number): ReportColumn<StockReportRow> => ({ label, cell: (r) => value(r).toLocaleString('en-GB'), numeric: true })
+const num = (label: string, value: (r: StockReportRow) => number): ReportColumn<StockReportRow> => ({
+  label,
+  cell: (r) => value(r).toLocaleString('en-GB'),
+  numeric: true,
+})
 
 const COLUMNS: ReadonlyArray<ReportColumn<StockReportRow>> = [
   { label: 'Batch · tank', cell: (r) => (r.tankId === null ? `${r.batchCode} · all tanks` : `${r.batchCode} · ${r.tank}`) },
@@ -40,7 +44,9 @@ export function StockReport({ filter, onBatchChange }: StockReportProps) {
   return (
     <section aria-labelledby="stock-heading" className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="stock-heading" className="text-xl font-bold text-tide-900">Numbers per batch</h2>
+        <h2 id="stock-heading" className="text-xl font-bold text-tide-900">
+          Numbers per batch
+        </h2>
         <ReportActions csvHref={csvHref('stock', filter)} label="numbers per batch" />
       </div>
       <div className="max-w-sm print:hidden">
@@ -55,7 +61,13 @@ export function StockReport({ filter, onBatchChange }: StockReportProps) {
           ))}
         </ul>
       )}
-      <ReportTable caption="Numbers per batch and tank" columns={COLUMNS} rows={rows} rowKey={(r) => `${r.batchId}-${r.tankId ?? 'all'}`} emptyText="No movements in this range." />
+      <ReportTable
+        caption="Numbers per batch and tank"
+        columns={COLUMNS}
+        rows={rows}
+        rowKey={(r) => `${r.batchId}-${r.tankId ?? 'all'}`}
+        emptyText="No movements in this range."
+      />
     </section>
   )
 }

@@ -14,7 +14,7 @@ const COLUMNS: ReadonlyArray<ReportColumn<WelfareRow>> = [
   { label: 'Due', cell: (r) => r.due },
   { label: 'Check', cell: (r) => r.task, wrap: true },
   { label: 'Tank', cell: (r) => r.tank, wrap: true },
-  { label: 'Status', cell: (r) => (r.status === 'missed' ? <FlagText flag="missed" /> : (STATUS_LOOK[r.status].label)) },
+  { label: 'Status', cell: (r) => (r.status === 'missed' ? <FlagText flag="missed" /> : STATUS_LOOK[r.status].label) },
   { label: 'Done by', cell: (r) => r.doneBy || '—' },
   { label: 'Late', cell: (r) => (r.lateMinutes === '' ? '—' : `${r.lateMinutes} min`), numeric: true },
   { label: 'Readings', cell: (r) => r.readings || '—', wrap: true },
@@ -34,12 +34,22 @@ export function WelfareReport({ filter, onTanksChange }: WelfareReportProps) {
   return (
     <section aria-labelledby="welfare-heading" className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="welfare-heading" className="text-xl font-bold text-tide-900">Welfare-check record</h2>
+        <h2 id="welfare-heading" className="text-xl font-bold text-tide-900">
+          Welfare-check record
+        </h2>
         <ReportActions csvHref={csvHref('welfare', filter)} label="welfare checks" />
       </div>
-      <p className="text-sm text-tide-800">{chosen.length ? `Tanks ${chosen.join(', ')}` : 'All tanks'} · {rows.length} checks</p>
+      <p className="text-sm text-tide-800">
+        {chosen.length ? `Tanks ${chosen.join(', ')}` : 'All tanks'} · {rows.length} checks
+      </p>
       <TankFilter key={filter.tankIds.join(',')} tanks={tanks} selected={filter.tankIds} onChange={onTanksChange} />
-      <ReportTable caption="Welfare checks" columns={COLUMNS} rows={rows} rowKey={(r, i) => `${r.date}-${r.due}-${r.tank}-${i}`} emptyText="No welfare checks in this range." />
+      <ReportTable
+        caption="Welfare checks"
+        columns={COLUMNS}
+        rows={rows}
+        rowKey={(r, i) => `${r.date}-${r.due}-${r.tank}-${i}`}
+        emptyText="No welfare checks in this range."
+      />
     </section>
   )
 }

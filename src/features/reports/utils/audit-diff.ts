@@ -22,7 +22,8 @@ export function auditDiff(beforeText: string, afterText: string): DiffRow[] {
   const after = parse(afterText)
   const b = before === null ? {} : before
   const a = after === null ? {} : after
-  if (!isRecord(b) || !isRecord(a)) return [{ key: 'value', before: show(before ?? undefined), after: show(after ?? undefined), changed: show(before) !== show(after) }]
+  if (!isRecord(b) || !isRecord(a))
+    return [{ key: 'value', before: show(before ?? undefined), after: show(after ?? undefined), changed: show(before) !== show(after) }]
   const keys = [...new Set([...Object.keys(b), ...Object.keys(a)])]
   return keys.map((key) => ({ key, before: show(b[key]), after: show(a[key]), changed: show(b[key]) !== show(a[key]) }))
 }

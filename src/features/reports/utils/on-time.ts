@@ -18,7 +18,9 @@ export function onTimeTrend(rows: ComplianceRow[]): OnTimePoint[] {
     p.judged += judgedOf(r)
     byPeriod.set(r.period, p)
   }
-  return [...byPeriod].sort(([a], [b]) => a.localeCompare(b)).map(([period, p]) => ({ period, judged: p.judged, rate: p.judged ? Math.round((p.onTime / p.judged) * 1000) / 10 : null }))
+  return [...byPeriod]
+    .sort(([a], [b]) => a.localeCompare(b))
+    .map(([period, p]) => ({ period, judged: p.judged, rate: p.judged ? Math.round((p.onTime / p.judged) * 1000) / 10 : null }))
 }
 
 export function overallOnTime(rows: ComplianceRow[]) {

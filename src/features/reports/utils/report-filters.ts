@@ -14,7 +14,10 @@ export function reportFilters(search: URLSearchParams, timeZone: string): Report
   const range = rangeFrom(search, timeZone)
   const by = COMPLIANCE_GROUPINGS.find((g) => g === search.get('by')) ?? 'category'
   const period = REPORT_PERIODS.find((p) => p === search.get('period')) ?? 'day'
-  const tankIds = (search.get('tankIds') ?? '').split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0)
+  const tankIds = (search.get('tankIds') ?? '')
+    .split(',')
+    .map(Number)
+    .filter((n) => Number.isInteger(n) && n > 0)
   const batchId = /^[1-9]\d*$/.test(search.get('batchId') ?? '') ? search.get('batchId')! : ''
   return { range, compliance: { ...range, by, period }, welfare: { ...range, tankIds }, stock: { ...range, batchId } }
 }

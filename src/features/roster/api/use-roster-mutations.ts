@@ -1,8 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
 import { z } from 'zod'
 import {
-  OnCallDutySchema, RotationResultSchema, ShiftSchema,
-  type OnCallInput, type RotationInput, type ShiftInput, type ShiftPatternInput,
+  OnCallDutySchema,
+  RotationResultSchema,
+  ShiftSchema,
+  type OnCallInput,
+  type RotationInput,
+  type ShiftInput,
+  type ShiftPatternInput,
 } from '#shared/schemas/roster'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 import { rosterKeys } from './roster-queries'

@@ -21,7 +21,9 @@ export function CoverageWarnings({ warnings }: { warnings: CoverageWarning[] }) 
   }
   return (
     <section aria-labelledby="coverage-heading" className="rounded-xl border border-ember-100 bg-ember-50 p-3">
-      <h2 id="coverage-heading" className="font-bold text-ember-700">{warnings.length} coverage {warnings.length === 1 ? 'warning' : 'warnings'}</h2>
+      <h2 id="coverage-heading" className="font-bold text-ember-700">
+        {warnings.length} coverage {warnings.length === 1 ? 'warning' : 'warnings'}
+      </h2>
       <ul className="mt-2 flex max-h-64 flex-col gap-1 overflow-y-auto">
         {warnings.map((w, i) => {
           const look = LOOK[w.kind]
@@ -29,9 +31,18 @@ export function CoverageWarnings({ warnings }: { warnings: CoverageWarning[] }) 
             <li key={i} className="flex items-start gap-2 text-sm text-tide-900">
               <look.icon aria-hidden className="mt-0.5 size-4 shrink-0 text-ember-700" />
               <span>
-                <span className="font-semibold">{weekdayShort(w.date)} {dayMonth(w.date)} · {look.label}:</span> {w.message}
+                <span className="font-semibold">
+                  {weekdayShort(w.date)} {dayMonth(w.date)} · {look.label}:
+                </span>{' '}
+                {w.message}
                 {w.taskId && (
-                  <> · <Link to={`/tasks/${w.taskId}`} className="font-semibold text-tide-700 underline">task</Link></>
+                  <>
+                    {' '}
+                    ·{' '}
+                    <Link to={`/tasks/${w.taskId}`} className="font-semibold text-tide-700 underline">
+                      task
+                    </Link>
+                  </>
                 )}
               </span>
             </li>

@@ -8,7 +8,13 @@ import { useDeleteShift } from '../api/use-roster-mutations'
 export function DeleteShiftButton({ shift, onDeleted }: { shift: Shift; onDeleted: () => void }) {
   const remove = useDeleteShift()
   const [confirming, setConfirming] = useState(false)
-  const doDelete = () => remove.mutate(shift.id, { onSuccess: () => { toast.success(`Deleted ${shift.personName}’s shift.`); onDeleted() } })
+  const doDelete = () =>
+    remove.mutate(shift.id, {
+      onSuccess: () => {
+        toast.success(`Deleted ${shift.personName}’s shift.`)
+        onDeleted()
+      },
+    })
   return confirming ? (
     <Button type="button" variant="danger" disabled={remove.isPending} onClick={doDelete}>
       <Trash2 aria-hidden className="size-4" /> {remove.isPending ? 'Deleting…' : 'Yes, delete this shift'}

@@ -30,7 +30,11 @@ export function DutyForm({ staff, from, handoverTime }: { staff: StaffMember[]; 
 
   return (
     <form noValidate onSubmit={submit} aria-label="On-call duty" className="grid gap-4 sm:grid-cols-3">
-      <SelectField label="Person on call" {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })} error={personError(errors.personId)}>
+      <SelectField
+        label="Person on call"
+        {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })}
+        error={personError(errors.personId)}
+      >
         <PersonOptions staff={eligible} />
       </SelectField>
       <Field label="From" type="date" {...form.register('fromDate')} error={errors.fromDate?.message} />

@@ -16,7 +16,9 @@ export function DutyList({ duties }: { duties: OnCallDuty[] }) {
         <li key={d.id} className="flex items-center justify-between gap-3 px-3 py-1">
           <span className="flex items-center gap-2 text-tide-900">
             <Phone aria-hidden className="size-4 text-tide-600" />
-            <span><span className="font-semibold">{d.personName}</span> · {day(d.fromDate)} – {day(d.toDate)}</span>
+            <span>
+              <span className="font-semibold">{d.personName}</span> · {day(d.fromDate)} – {day(d.toDate)}
+            </span>
           </span>
           <button
             type="button"

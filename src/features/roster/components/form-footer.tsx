@@ -3,7 +3,13 @@ import type { ReactNode } from 'react'
 import { Button } from '../../../components/ui/button'
 
 /** Submit and cancel, with the server's message when it refused the save for a reason no field shows. */
-export function FormFooter({ submitLabel, pending, serverError, onCancel, children }: {
+export function FormFooter({
+  submitLabel,
+  pending,
+  serverError,
+  onCancel,
+  children,
+}: {
   submitLabel: string
   pending: boolean
   serverError?: string
@@ -18,8 +24,14 @@ export function FormFooter({ submitLabel, pending, serverError, onCancel, childr
         </p>
       )}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" disabled={pending}>{pending ? 'Saving…' : submitLabel}</Button>
-        {onCancel && <Button type="button" variant="ghost" onClick={onCancel}>Cancel</Button>}
+        <Button type="submit" disabled={pending}>
+          {pending ? 'Saving…' : submitLabel}
+        </Button>
+        {onCancel && (
+          <Button type="button" variant="ghost" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
         {children}
       </div>
     </div>

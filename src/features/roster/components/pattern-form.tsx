@@ -18,7 +18,14 @@ export function PatternForm({ staff, from }: { staff: StaffMember[]; from: strin
   const apply = useApplyPattern()
   const form = useForm<ShiftPatternInput>({
     resolver: zodResolver(ShiftPatternInputSchema),
-    defaultValues: { weekdays: ['MO', 'TU', 'WE', 'TH', 'FR'], kind: 'day', start: SHIFT_KIND_LOOK.day.start, end: SHIFT_KIND_LOOK.day.end, from, to: addDays(from, 27) },
+    defaultValues: {
+      weekdays: ['MO', 'TU', 'WE', 'TH', 'FR'],
+      kind: 'day',
+      start: SHIFT_KIND_LOOK.day.start,
+      end: SHIFT_KIND_LOOK.day.end,
+      from,
+      to: addDays(from, 27),
+    },
   })
   const errors = form.formState.errors
   const kind = form.register('kind', {
@@ -39,16 +46,28 @@ export function PatternForm({ staff, from }: { staff: StaffMember[]; from: strin
 
   return (
     <form noValidate onSubmit={submit} aria-label="Weekly pattern" className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
-      <SelectField label="Person" {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })} error={personError(errors.personId)}>
+      <SelectField
+        label="Person"
+        {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })}
+        error={personError(errors.personId)}
+      >
         <PersonOptions staff={staff} />
       </SelectField>
       <SelectField label="Kind" {...kind}>
-        {SHIFT_KINDS.map((k) => <option key={k} value={k}>{SHIFT_KIND_LOOK[k].label}</option>)}
+        {SHIFT_KINDS.map((k) => (
+          <option key={k} value={k}>
+            {SHIFT_KIND_LOOK[k].label}
+          </option>
+        ))}
       </SelectField>
       <Field label="Starts" type="time" {...form.register('start')} error={errors.start?.message} />
       <Field label="Ends" type="time" {...form.register('end')} error={errors.end?.message} />
       <div className="sm:col-span-2">
-        <Controller control={form.control} name="weekdays" render={({ field }) => <WeekdayPicker value={field.value} onChange={field.onChange} error={errors.weekdays?.message} />} />
+        <Controller
+          control={form.control}
+          name="weekdays"
+          render={({ field }) => <WeekdayPicker value={field.value} onChange={field.onChange} error={errors.weekdays?.message} />}
+        />
       </div>
       <Field label="From" type="date" {...form.register('from')} error={errors.from?.message} />
       <Field label="To" type="date" {...form.register('to')} error={errors.to?.message} />

@@ -1,7 +1,13 @@
 import { useId } from 'react'
 import type { StaffMember } from '#shared/schemas/person'
 
-export function PeopleChecklist({ label, people, value, onChange, error }: {
+export function PeopleChecklist({
+  label,
+  people,
+  value,
+  onChange,
+  error,
+}: {
   label: string
   people: StaffMember[]
   value: number[]
@@ -31,7 +37,11 @@ export function PeopleChecklist({ label, people, value, onChange, error }: {
           ))}
         </div>
       )}
-      {error && <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">
+          {error}
+        </p>
+      )}
     </fieldset>
   )
 }

@@ -7,7 +7,9 @@ export function PersonOptions({ staff, extra }: { staff: StaffMember[]; extra?: 
     <>
       <option value="">Choose a person…</option>
       {staff.map((p) => (
-        <option key={p.id} value={p.id}>{p.name}</option>
+        <option key={p.id} value={p.id}>
+          {p.name}
+        </option>
       ))}
       {missing && <option value={extra.id}>{extra.name} (inactive)</option>}
     </>

@@ -3,7 +3,14 @@ import type { Shift } from '#shared/schemas/roster'
 import { ShiftChip } from './shift-chip'
 
 /** One person on one day: their shifts, whether they hold on-call, and a way to add a shift. */
-export function RosterCell({ personName, date, shifts, onCall, onAdd, onEdit }: {
+export function RosterCell({
+  personName,
+  date,
+  shifts,
+  onCall,
+  onAdd,
+  onEdit,
+}: {
   personName: string
   date: string
   shifts: Shift[]
@@ -18,7 +25,9 @@ export function RosterCell({ personName, date, shifts, onCall, onAdd, onEdit }: 
           <Phone aria-hidden className="size-3.5" /> On call
         </span>
       )}
-      {shifts.map((s) => <ShiftChip key={s.id} shift={s} onEdit={onEdit} />)}
+      {shifts.map((s) => (
+        <ShiftChip key={s.id} shift={s} onEdit={onEdit} />
+      ))}
       <button
         type="button"
         onClick={onAdd}

@@ -31,7 +31,10 @@ type Props = {
 }
 
 /** The roster's forms, one at a time: a single shift, a weekly pattern, an on-call duty, or a rotation. */
-export const RosterPlanner = forwardRef<HTMLElement, Props>(function RosterPlanner({ tab, onTab, shiftTarget, onShiftDone, staff, from, duties, handoverTime }, ref) {
+export const RosterPlanner = forwardRef<HTMLElement, Props>(function RosterPlanner(
+  { tab, onTab, shiftTarget, onShiftDone, staff, from, duties, handoverTime },
+  ref,
+) {
   return (
     <section ref={ref} aria-label="Plan the roster" className="scroll-mt-4 rounded-xl border border-tide-200 bg-white">
       <div className="flex overflow-x-auto border-b border-tide-200">
@@ -41,7 +44,10 @@ export const RosterPlanner = forwardRef<HTMLElement, Props>(function RosterPlann
             type="button"
             aria-pressed={tab === t.id}
             onClick={() => onTab(t.id)}
-            className={clsx('flex min-h-12 shrink-0 items-center gap-2 border-b-3 px-4 font-semibold', tab === t.id ? 'border-tide-700 text-tide-900' : 'border-transparent text-tide-600 hover:text-tide-900')}
+            className={clsx(
+              'flex min-h-12 shrink-0 items-center gap-2 border-b-3 px-4 font-semibold',
+              tab === t.id ? 'border-tide-700 text-tide-900' : 'border-transparent text-tide-600 hover:text-tide-900',
+            )}
           >
             <t.icon aria-hidden className="size-5" /> {t.label}
           </button>

@@ -4,7 +4,12 @@ import { Button } from '../../../components/ui/button'
 import { addDays, dayMonth } from '../utils/roster-dates'
 
 /** Move by the visible span, jump back to this week, or switch between one and two weeks. */
-export function RosterToolbar({ from, days, thisMonday, onChange }: {
+export function RosterToolbar({
+  from,
+  days,
+  thisMonday,
+  onChange,
+}: {
   from: string
   days: 7 | 14
   thisMonday: string
@@ -31,7 +36,9 @@ export function RosterToolbar({ from, days, thisMonday, onChange }: {
       <Button type="button" variant="secondary" aria-label="Later" onClick={() => onChange(addDays(from, days), days)}>
         <ChevronRight aria-hidden className="size-5" />
       </Button>
-      <Button type="button" variant="ghost" disabled={from === thisMonday} onClick={() => onChange(thisMonday, days)}>This week</Button>
+      <Button type="button" variant="ghost" disabled={from === thisMonday} onClick={() => onChange(thisMonday, days)}>
+        This week
+      </Button>
       <div role="group" aria-label="Days shown" className="flex overflow-hidden rounded-lg ring-1 ring-tide-200">
         {spanButton(7, 'Week')}
         {spanButton(14, 'Fortnight')}

@@ -40,11 +40,21 @@ export function RotationForm({ staff, from }: { staff: StaffMember[]; from: stri
           <Controller
             control={form.control}
             name="personIds"
-            render={({ field }) => <PeopleChecklist label="Who shares the duty" people={eligible} value={field.value} onChange={field.onChange} error={errors.personIds?.message} />}
+            render={({ field }) => (
+              <PeopleChecklist label="Who shares the duty" people={eligible} value={field.value} onChange={field.onChange} error={errors.personIds?.message} />
+            )}
           />
         </div>
         <Field label="First Monday" type="date" {...form.register('from')} error={errors.from?.message} />
-        <Field label="Number of weeks" type="number" min={1} max={52} inputMode="numeric" {...form.register('weeks', { valueAsNumber: true })} error={numberError(errors.weeks?.message)} />
+        <Field
+          label="Number of weeks"
+          type="number"
+          min={1}
+          max={52}
+          inputMode="numeric"
+          {...form.register('weeks', { valueAsNumber: true })}
+          error={numberError(errors.weeks?.message)}
+        />
         <p className="text-sm text-tide-600 sm:col-span-full">Duty hands over each Monday. Duties already planned in these weeks are replaced.</p>
         <FormFooter submitLabel="Plan the rotation" pending={generate.isPending} serverError={errors.root?.server?.message} />
       </form>

@@ -12,7 +12,9 @@ export function RotationResultView({ result }: { result: RotationResult }) {
         {result.weekendCounts.map((c) => (
           <li key={c.personId} className="flex justify-between gap-3 rounded bg-white px-3 py-1.5 text-tide-900">
             <span>{c.personName}</span>
-            <span className="font-semibold">{c.weekends} {c.weekends === 1 ? 'weekend' : 'weekends'}</span>
+            <span className="font-semibold">
+              {c.weekends} {c.weekends === 1 ? 'weekend' : 'weekends'}
+            </span>
           </li>
         ))}
       </ul>

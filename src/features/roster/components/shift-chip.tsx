@@ -13,7 +13,9 @@ export function ShiftChip({ shift, onEdit }: { shift: Shift; onEdit: (shift: Shi
       <span className="inline-flex items-center gap-1 font-bold">
         <look.icon aria-hidden className="size-3.5 shrink-0" /> {look.label}
       </span>
-      <span className="tabular-nums">{shift.start}–{shift.end}</span>
+      <span className="tabular-nums">
+        {shift.start}–{shift.end}
+      </span>
     </button>
   )
 }

@@ -14,7 +14,12 @@ import { PersonOptions } from './person-options'
 import { SelectField } from '../../../components/ui/select-field'
 
 /** Add one shift, or edit or delete the one chosen in the grid. */
-export function ShiftForm({ shift, initial, staff, onDone }: {
+export function ShiftForm({
+  shift,
+  initial,
+  staff,
+  onDone,
+}: {
   shift: Shift | null
   initial: { personId: number | null; date: string }
   staff: StaffMember[]
@@ -39,28 +44,52 @@ export function ShiftForm({ shift, initial, staff, onDone }: {
   })
 
   const submit = form.handleSubmit((input) => {
-    const done = { onSuccess: () => { toast.success(shift ? 'Shift saved.' : `Shift added on ${longDay(input.date)}.`); onDone() }, onError: (e: Error) => applyServerErrors(form, e) }
+    const done = {
+      onSuccess: () => {
+        toast.success(shift ? 'Shift saved.' : `Shift added on ${longDay(input.date)}.`)
+        onDone()
+      },
+      onError: (e: Error) => applyServerErrors(form, e),
+    }
     if (shift) update.mutate({ id: shift.id, input }, done)
     else create.mutate(input, done)
   })
 
   return (
-    <form noValidate onSubmit={submit} aria-label={shift ? `Edit shift of ${shift.personName}` : 'Add a shift'} className="grid gap-4 sm:grid-cols-2 lg:grid-cols-5">
+    <form
+      noValidate
+      onSubmit={submit}
+      aria-label={shift ? `Edit shift of ${shift.personName}` : 'Add a shift'}
+      className="grid gap-4 sm:grid-cols-2 lg:grid-cols-5"
+    >
       {shift && (
         <p className="font-semibold text-tide-900 sm:col-span-full">
           Editing {shift.personName}’s {SHIFT_KIND_LOOK[shift.kind].label.toLowerCase()} shift on {longDay(shift.date)}
         </p>
       )}
-      <SelectField label="Person" {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })} error={personError(errors.personId)}>
+      <SelectField
+        label="Person"
+        {...form.register('personId', { setValueAs: (v) => (v === '' ? undefined : Number(v)) })}
+        error={personError(errors.personId)}
+      >
         <PersonOptions staff={staff} extra={shift ? { id: shift.personId, name: shift.personName } : undefined} />
       </SelectField>
       <Field label="Date" type="date" {...form.register('date')} error={errors.date?.message} />
       <SelectField label="Kind" {...kind}>
-        {SHIFT_KINDS.map((k) => <option key={k} value={k}>{SHIFT_KIND_LOOK[k].label}</option>)}
+        {SHIFT_KINDS.map((k) => (
+          <option key={k} value={k}>
+            {SHIFT_KIND_LOOK[k].label}
+          </option>
+        ))}
       </SelectField>
       <Field label="Starts" type="time" {...form.register('start')} error={errors.start?.message} />
       <Field label="Ends" type="time" hint="Before the start means past midnight." {...form.register('end')} error={errors.end?.message} />
-      <FormFooter submitLabel={shift ? 'Save shift' : 'Add shift'} pending={create.isPending || update.isPending} serverError={errors.root?.server?.message} onCancel={onDone}>
+      <FormFooter
+        submitLabel={shift ? 'Save shift' : 'Add shift'}
+        pending={create.isPending || update.isPending}
+        serverError={errors.root?.server?.message}
+        onCancel={onDone}
+      >
         {shift && <DeleteShiftButton shift={shift} onDeleted={onDone} />}
       </FormFooter>
     </form>

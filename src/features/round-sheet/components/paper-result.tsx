@@ -22,8 +22,8 @@ export function PaperResult({ result, specs, timeZone }: { result: CompletionRes
       {task.flag && (
         <p className={`flex items-center gap-1.5 font-semibold ${task.flag === 'critical' ? 'text-alarm-700' : 'text-ember-700'}`}>
           {task.flag === 'critical' ? <OctagonAlert aria-hidden className="size-4" /> : <TriangleAlert aria-hidden className="size-4" />}
-          Flag: {BAND_LOOK[task.flag].label} ({flagged.map((r) => `${name(r.parameterKey)} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a
-          sheet typed in later raises no recheck.
+          Flag: {BAND_LOOK[task.flag].label} ({flagged.map((r) => `${name(r.parameterKey)} ${r.value} ${r.unit}`).join(', ')}). Kept on record; a sheet typed in
+          later raises no recheck.
         </p>
       )}
     </div>

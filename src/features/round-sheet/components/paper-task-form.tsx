@@ -41,7 +41,13 @@ export function PaperTaskForm({ task, date, timeZone, people, defaultPersonId }:
       <span className="tabular-nums">{task.localTime}</span> {task.targetLabel} <span className="font-normal">{task.title}</span>
     </h3>
   )
-  if (enter.data) return <li className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-3">{heading}<PaperResult result={enter.data} specs={task.readingSpecs} timeZone={timeZone} /></li>
+  if (enter.data)
+    return (
+      <li className="flex flex-col gap-2 rounded-xl border border-tide-200 bg-white p-3">
+        {heading}
+        <PaperResult result={enter.data} specs={task.readingSpecs} timeZone={timeZone} />
+      </li>
+    )
   if (isFinished(task)) {
     return (
       <li className="flex flex-col gap-1 rounded-xl border border-tide-200 bg-white p-3">
@@ -60,8 +66,13 @@ export function PaperTaskForm({ task, date, timeZone, people, defaultPersonId }:
         {task.readingSpecs.length > 0 && (
           <div className="grid grid-cols-[repeat(auto-fill,minmax(11rem,1fr))] gap-3">
             {task.readingSpecs.map((spec) => (
-              <PaperReadingField key={spec.key} spec={spec} value={draft.values[spec.key] ?? ''} error={shownErrors[spec.key]}
-                onChange={(v) => setDraft((d) => ({ ...d, values: { ...d.values, [spec.key]: v } }))} />
+              <PaperReadingField
+                key={spec.key}
+                spec={spec}
+                value={draft.values[spec.key] ?? ''}
+                error={shownErrors[spec.key]}
+                onChange={(v) => setDraft((d) => ({ ...d, values: { ...d.values, [spec.key]: v } }))}
+              />
             ))}
           </div>
         )}

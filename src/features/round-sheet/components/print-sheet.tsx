@@ -21,13 +21,15 @@ export function PrintSheet({ round, sheetFor, facilityName }: PrintSheetProps) {
       <header className="flex flex-wrap items-end justify-between gap-2 border-b-2 border-tide-900 pb-2 print:border-black">
         <div>
           <h2 className="text-xl font-bold">Round sheet · {sheetFor}</h2>
-          <p className="text-sm">{longDate(round.date)} · {round.tasks.length} task{round.tasks.length === 1 ? '' : 's'}</p>
+          <p className="text-sm">
+            {longDate(round.date)} · {round.tasks.length} task{round.tasks.length === 1 ? '' : 's'}
+          </p>
         </div>
         <p className="text-sm">{facilityName}</p>
       </header>
       <p className="mt-2 text-xs text-tide-800">
-        Walk the areas in this order. Write each reading in its box, then initials and the time. A reading outside its ok range: tell the
-        supervisor now, do not wait to type the sheet in.
+        Walk the areas in this order. Write each reading in its box, then initials and the time. A reading outside its ok range: tell the supervisor now, do not
+        wait to type the sheet in.
       </p>
       {groups.length === 0 && <p className="mt-4 text-tide-800">No tasks on this sheet.</p>}
       {groups.map((g, i) => (

@@ -17,8 +17,16 @@ export function SheetModeTabs({ current, onChange }: { current: SheetMode; onCha
       {SHEET_MODES.map((mode) => {
         const { label, icon: Icon } = MODES[mode]
         return (
-          <button key={mode} type="button" aria-pressed={mode === current} onClick={() => onChange(mode)}
-            className={clsx('inline-flex min-h-11 items-center gap-2 rounded-md px-3 font-semibold', mode === current ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50')}>
+          <button
+            key={mode}
+            type="button"
+            aria-pressed={mode === current}
+            onClick={() => onChange(mode)}
+            className={clsx(
+              'inline-flex min-h-11 items-center gap-2 rounded-md px-3 font-semibold',
+              mode === current ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50',
+            )}
+          >
             <Icon aria-hidden className="size-4" /> {label}
           </button>
         )

@@ -14,8 +14,8 @@ export function TypeInSheet({ round, people, defaultPersonId }: TypeInSheetProps
   return (
     <div className="flex flex-col gap-4">
       <p className="max-w-2xl text-sm text-tide-800">
-        Copy each task from the paper: its readings, the time written beside it and who did it. Roundtide checks every reading against its
-        limits as if it had been entered on the round; out-of-range readings are flagged and escalated but raise no recheck.
+        Copy each task from the paper: its readings, the time written beside it and who did it. Roundtide checks every reading against its limits as if it had
+        been entered on the round; out-of-range readings are flagged and escalated but raise no recheck.
       </p>
       {groups.length === 0 && <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No tasks on this sheet.</p>}
       {groups.map((g) => (

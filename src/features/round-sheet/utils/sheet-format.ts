@@ -2,7 +2,9 @@ import { DateTime } from 'luxon'
 
 /** "Wednesday 2 December 2026" for a facility date (YYYY-MM-DD). */
 export const longDate = (isoDate: string) =>
-  new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(new Date(`${isoDate}T00:00:00Z`))
+  new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(
+    new Date(`${isoDate}T00:00:00Z`),
+  )
 
 /** "08:10" in the facility's zone. */
 export const clockTime = (iso: string, timeZone: string) =>

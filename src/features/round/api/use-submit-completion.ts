@@ -21,8 +21,14 @@ export function useSubmitCompletion(personId: number) {
     mutationFn: async ({ task, payload }: { task: RoundTask; payload: CompletionPayload }): Promise<SubmitOutcome> => {
       const queue = () =>
         addToOutbox({
-          completionId: payload.completionId, taskId: task.id, personId, taskTitle: task.title, targetLabel: task.targetLabel,
-          input: payload, queuedAt: Date.now(), failure: null,
+          completionId: payload.completionId,
+          taskId: task.id,
+          personId,
+          taskTitle: task.title,
+          targetLabel: task.targetLabel,
+          input: payload,
+          queuedAt: Date.now(),
+          failure: null,
         })
       await loadOutbox()
       if (!navigator.onLine || waitingEntries(personId).length > 0) {

@@ -23,7 +23,9 @@ export function CompletedDetails({ task, round, result }: Props) {
         {task.completedAt && <> at {doneAt(task.completedAt, round.timeZone, round.date)}</>}
         {task.lateMinutes ? <span className="text-ember-700"> ({task.lateMinutes} min late)</span> : null}
       </p>
-      {task.flag === 'critical' && <p className="font-semibold text-alarm-700">A critical reading starts the escalation at once. Act on it now, then recheck.</p>}
+      {task.flag === 'critical' && (
+        <p className="font-semibold text-alarm-700">A critical reading starts the escalation at once. Act on it now, then recheck.</p>
+      )}
       {flagged.length > 0 && (
         <ul className="flex flex-col gap-1">
           {flagged.map((r) => (
@@ -40,7 +42,11 @@ export function CompletedDetails({ task, round, result }: Props) {
           {recheck ? `Recheck due at ${recheck.localTime}` : 'A recheck task was made'}
         </p>
       )}
-      {result?.notes.map((note) => <p key={note} className="text-sm text-tide-600">{note}</p>)}
+      {result?.notes.map((note) => (
+        <p key={note} className="text-sm text-tide-600">
+          {note}
+        </p>
+      ))}
     </div>
   )
 }

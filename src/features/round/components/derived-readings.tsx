@@ -26,7 +26,9 @@ export function DerivedReadings({ specs, raw, salinitySetpoint }: { specs: Readi
         </p>
       ))}
       {derived.notes.map((note) => (
-        <p key={note} className="text-sm text-tide-700">{note}</p>
+        <p key={note} className="text-sm text-tide-700">
+          {note}
+        </p>
       ))}
     </div>
   )

@@ -25,19 +25,49 @@ export function MortalityDetail({ value, errors, onChange }: Props) {
   return (
     <div className="flex flex-col gap-3 rounded-xl bg-tide-50 p-3">
       <div className="flex flex-col gap-1">
-        <label htmlFor={`${id}-cause`} className="font-semibold text-tide-900">Cause of death</label>
-        <select id={`${id}-cause`} value={value.cause} onChange={(e) => onChange({ cause: e.target.value })} aria-invalid={causeError ? true : undefined} aria-describedby={`${id}-cause-error`} className={input(causeError)}>
+        <label htmlFor={`${id}-cause`} className="font-semibold text-tide-900">
+          Cause of death
+        </label>
+        <select
+          id={`${id}-cause`}
+          value={value.cause}
+          onChange={(e) => onChange({ cause: e.target.value })}
+          aria-invalid={causeError ? true : undefined}
+          aria-describedby={`${id}-cause-error`}
+          className={input(causeError)}
+        >
           <option value={UNKNOWN_CAUSE}>Unknown</option>
-          {causes.map((c) => <option key={c} value={c}>{c}</option>)}
+          {causes.map((c) => (
+            <option key={c} value={c}>
+              {c}
+            </option>
+          ))}
           <option value={OTHER_CAUSE}>Other (say what)</option>
         </select>
-        {causeError && <p id={`${id}-cause-error`} className="text-sm font-semibold text-alarm-700">{causeError}</p>}
+        {causeError && (
+          <p id={`${id}-cause-error`} className="text-sm font-semibold text-alarm-700">
+            {causeError}
+          </p>
+        )}
       </div>
       {value.cause === OTHER_CAUSE && (
         <div className="flex flex-col gap-1">
-          <label htmlFor={`${id}-text`} className="font-semibold text-tide-900">What was the cause?</label>
-          <input id={`${id}-text`} value={value.causeText} onChange={(e) => onChange({ causeText: e.target.value })} aria-invalid={textError ? true : undefined} aria-describedby={`${id}-text-error`} className={input(textError)} />
-          {textError && <p id={`${id}-text-error`} className="text-sm font-semibold text-alarm-700">{textError}</p>}
+          <label htmlFor={`${id}-text`} className="font-semibold text-tide-900">
+            What was the cause?
+          </label>
+          <input
+            id={`${id}-text`}
+            value={value.causeText}
+            onChange={(e) => onChange({ causeText: e.target.value })}
+            aria-invalid={textError ? true : undefined}
+            aria-describedby={`${id}-text-error`}
+            className={input(textError)}
+          />
+          {textError && (
+            <p id={`${id}-text-error`} className="text-sm font-semibold text-alarm-700">
+              {textError}
+            </p>
+          )}
         </div>
       )}
       <label className="flex min-h-12 items-center gap-3 font-semibold text-tide-900">

@@ -42,7 +42,11 @@ export function OutboxNotice({ entry, round }: { entry: OutboxEntry; round: Roun
       </p>
       <div className="flex flex-wrap gap-2">
         {failure.status >= 500 && (
-          <button type="button" onClick={() => void retryEntry(entry.completionId)} className="min-h-12 rounded-xl bg-white px-4 font-semibold text-tide-800 ring-1 ring-tide-200">
+          <button
+            type="button"
+            onClick={() => void retryEntry(entry.completionId)}
+            className="min-h-12 rounded-xl bg-white px-4 font-semibold text-tide-800 ring-1 ring-tide-200"
+          >
             Try again
           </button>
         )}

@@ -11,7 +11,9 @@ export function OutboxOrphans({ entries, round }: { entries: OutboxEntry[]; roun
       <h2 className="text-lg font-bold text-tide-900">Saved on this phone, not on this round</h2>
       {orphans.map((entry) => (
         <div key={entry.completionId} className="flex flex-col gap-2 rounded-2xl bg-white p-3 ring-1 ring-tide-200">
-          <p className="font-semibold text-tide-900">{entry.taskTitle} · {entry.targetLabel}</p>
+          <p className="font-semibold text-tide-900">
+            {entry.taskTitle} · {entry.targetLabel}
+          </p>
           <OutboxNotice entry={entry} round={round} />
         </div>
       ))}

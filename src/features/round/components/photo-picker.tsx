@@ -19,7 +19,19 @@ export function PhotoPicker({ taskId, online }: { taskId: number; online: boolea
 
   return (
     <div className="flex flex-wrap items-center gap-x-3 gap-y-1">
-      <input ref={input} type="file" accept={PHOTO_TYPES.join(',')} capture="environment" className="sr-only" tabIndex={-1} aria-hidden onChange={(e) => { pick(e.target.files?.[0]); e.target.value = '' }} />
+      <input
+        ref={input}
+        type="file"
+        accept={PHOTO_TYPES.join(',')}
+        capture="environment"
+        className="sr-only"
+        tabIndex={-1}
+        aria-hidden
+        onChange={(e) => {
+          pick(e.target.files?.[0])
+          e.target.value = ''
+        }}
+      />
       <button
         type="button"
         disabled={!online || upload.isPending}
@@ -34,7 +46,11 @@ export function PhotoPicker({ taskId, online }: { taskId: number; online: boolea
           <CircleCheck aria-hidden className="size-4" /> {sent === 1 ? 'Photo added' : `${sent} photos added`}
         </span>
       )}
-      {problem && <span role="alert" className="text-sm font-semibold text-alarm-700">{problem}</span>}
+      {problem && (
+        <span role="alert" className="text-sm font-semibold text-alarm-700">
+          {problem}
+        </span>
+      )}
     </div>
   )
 }

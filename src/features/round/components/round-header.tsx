@@ -26,11 +26,21 @@ export function RoundHeader({ date, done, total, waiting, failed, status }: Prop
         </div>
         {total > 0 && (
           <div className="mt-2">
-            <div role="progressbar" aria-label="Round progress" aria-valuemin={0} aria-valuemax={total} aria-valuenow={done} aria-valuetext={`${done} of ${total} done`} className="h-3 overflow-hidden rounded-full bg-tide-200">
+            <div
+              role="progressbar"
+              aria-label="Round progress"
+              aria-valuemin={0}
+              aria-valuemax={total}
+              aria-valuenow={done}
+              aria-valuetext={`${done} of ${total} done`}
+              className="h-3 overflow-hidden rounded-full bg-tide-200"
+            >
               <div className="h-full rounded-full bg-kelp-500 transition-[width]" style={{ width: `${pct}%` }} />
             </div>
             <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
-              <span className="font-bold text-tide-900">{done} of {total} done</span>
+              <span className="font-bold text-tide-900">
+                {done} of {total} done
+              </span>
               {waiting > 0 && (
                 <span className="inline-flex items-center gap-1 font-semibold text-tide-800">
                   <CloudUpload aria-hidden className="size-4" /> {waiting} waiting to send

@@ -49,7 +49,9 @@ function RoundContent({ personId, date, status }: Props) {
   const [autoOpenedFor, setAutoOpenedFor] = useState<string | null>(null)
   if (round && autoOpenedFor !== round.date) {
     setAutoOpenedFor(round.date)
-    const first = round.tasks.find((t) => (t.status === 'open' || t.status === 'overdue') && t.assigneeId === personId && !t.recheckOfTaskId && !outbox.byTask.has(t.id))
+    const first = round.tasks.find(
+      (t) => (t.status === 'open' || t.status === 'overdue') && t.assigneeId === personId && !t.recheckOfTaskId && !outbox.byTask.has(t.id),
+    )
     if (first) {
       setExpandedId(first.id)
       setAdvancedTo(first.id)
@@ -65,7 +67,15 @@ function RoundContent({ personId, date, status }: Props) {
         <>
           {header()}
           <div className={column}>
-            <ErrorState title="Could not load your round" message={query.error.message} action={<Button variant="secondary" onClick={() => void query.refetch()}>Try again</Button>} />
+            <ErrorState
+              title="Could not load your round"
+              message={query.error.message}
+              action={
+                <Button variant="secondary" onClick={() => void query.refetch()}>
+                  Try again
+                </Button>
+              }
+            />
           </div>
         </>
       )
@@ -76,7 +86,10 @@ function RoundContent({ personId, date, status }: Props) {
         {header()}
         <div className={column}>
           {paused ? (
-            <ErrorState title="You are offline" message="This round has not been opened on this phone yet, so there is no copy here. It will load as soon as the connection is back." />
+            <ErrorState
+              title="You are offline"
+              message="This round has not been opened on this phone yet, so there is no copy here. It will load as soon as the connection is back."
+            />
           ) : (
             <LoadingState label="Loading your round…" />
           )}

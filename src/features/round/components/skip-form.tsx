@@ -31,7 +31,11 @@ export function SkipForm({ draft, onChange }: { draft: Draft; onChange: (patch: 
             </label>
           ))}
         </div>
-        {draft.errors.skipReason && <p id={`${id}-reason-error`} className="mt-1 text-sm font-semibold text-alarm-700">{draft.errors.skipReason}</p>}
+        {draft.errors.skipReason && (
+          <p id={`${id}-reason-error`} className="mt-1 text-sm font-semibold text-alarm-700">
+            {draft.errors.skipReason}
+          </p>
+        )}
       </fieldset>
       <div className="flex flex-col gap-1">
         <label htmlFor={`${id}-note`} className="font-semibold text-tide-900">

@@ -85,34 +85,58 @@ export function TaskForm({ task, personId, online, onFinished }: Props) {
   }
 
   return (
-    <form noValidate onSubmit={(e) => { e.preventDefault(); send('done') }} className="flex flex-col gap-4">
+    <form
+      noValidate
+      onSubmit={(e) => {
+        e.preventDefault()
+        send('done')
+      }}
+      className="flex flex-col gap-4"
+    >
       {task.readingSpecs.map((spec, i) => (
         <Fragment key={spec.key}>
-        <ReadingInput
-          ref={(el) => { inputs.current[i] = el }}
-          spec={spec}
-          aside={spec.key === MORTALITY_READING && inTank !== null ? `${inTank.toLocaleString('en-GB')} fish in this tank on the register` : undefined}
-          value={draft.readings[spec.key] ?? ''}
-          error={draft.errors[`readings.${spec.key}`]}
-          last={i === task.readingSpecs.length - 1}
-          onChange={(value) => update((d) => ({ readings: { ...d.readings, [spec.key]: value }, errors: without(d.errors, `readings.${spec.key}`) }))}
-          onEnter={() => (i < task.readingSpecs.length - 1 ? inputs.current[i + 1]?.focus() : send('done'))}
-        />
-        {spec.key === MORTALITY_READING && dead > 0 && (
-          <MortalityDetail value={draft.mortality} errors={draft.errors} onChange={(patch) => update((d) => ({ mortality: { ...d.mortality, ...patch }, errors: without(without(d.errors, 'mortality.cause'), 'mortality.causeText') }))} />
-        )}
+          <ReadingInput
+            ref={(el) => {
+              inputs.current[i] = el
+            }}
+            spec={spec}
+            aside={spec.key === MORTALITY_READING && inTank !== null ? `${inTank.toLocaleString('en-GB')} fish in this tank on the register` : undefined}
+            value={draft.readings[spec.key] ?? ''}
+            error={draft.errors[`readings.${spec.key}`]}
+            last={i === task.readingSpecs.length - 1}
+            onChange={(value) => update((d) => ({ readings: { ...d.readings, [spec.key]: value }, errors: without(d.errors, `readings.${spec.key}`) }))}
+            onEnter={() => (i < task.readingSpecs.length - 1 ? inputs.current[i + 1]?.focus() : send('done'))}
+          />
+          {spec.key === MORTALITY_READING && dead > 0 && (
+            <MortalityDetail
+              value={draft.mortality}
+              errors={draft.errors}
+              onChange={(patch) =>
+                update((d) => ({ mortality: { ...d.mortality, ...patch }, errors: without(without(d.errors, 'mortality.cause'), 'mortality.causeText') }))
+              }
+            />
+          )}
         </Fragment>
       ))}
       <DerivedReadings specs={task.readingSpecs} raw={draft.readings} salinitySetpoint={task.salinitySetpoint} />
       {draft.noteOpen ? (
         <label className="flex flex-col gap-1 font-semibold text-tide-900">
           Note
-          <textarea rows={2} value={draft.note} onChange={(e) => update({ note: e.target.value })} className="rounded-xl border-2 border-tide-200 bg-white p-3 text-base font-normal focus:border-tide-500 focus:outline-none" />
+          <textarea
+            rows={2}
+            value={draft.note}
+            onChange={(e) => update({ note: e.target.value })}
+            className="rounded-xl border-2 border-tide-200 bg-white p-3 text-base font-normal focus:border-tide-500 focus:outline-none"
+          />
         </label>
       ) : null}
       <div className="flex flex-wrap gap-2">
         {!draft.noteOpen && (
-          <button type="button" onClick={() => update({ noteOpen: true })} className="inline-flex min-h-12 items-center gap-2 rounded-xl px-3 font-semibold text-tide-700 ring-1 ring-tide-200 hover:bg-tide-50">
+          <button
+            type="button"
+            onClick={() => update({ noteOpen: true })}
+            className="inline-flex min-h-12 items-center gap-2 rounded-xl px-3 font-semibold text-tide-700 ring-1 ring-tide-200 hover:bg-tide-50"
+          >
             <NotebookPen aria-hidden className="size-5" /> Add note
           </button>
         )}

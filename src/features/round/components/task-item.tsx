@@ -38,9 +38,17 @@ export function TaskItem({ task, round, personId, online, expanded, advancedTo, 
   }, [advancedTo])
 
   return (
-    <li ref={ref} className={clsx('scroll-mt-36 rounded-2xl bg-white shadow-sm ring-1', task.status === 'missed' ? 'ring-2 ring-alarm-500' : task.status === 'overdue' ? 'ring-2 ring-ember-500' : 'ring-tide-200')}>
+    <li
+      ref={ref}
+      className={clsx(
+        'scroll-mt-36 rounded-2xl bg-white shadow-sm ring-1',
+        task.status === 'missed' ? 'ring-2 ring-alarm-500' : task.status === 'overdue' ? 'ring-2 ring-ember-500' : 'ring-tide-200',
+      )}
+    >
       <button type="button" aria-expanded={expanded} onClick={onToggle} className="flex min-h-16 w-full items-center gap-3 p-3 text-left">
-        <span className={clsx('w-14 shrink-0 text-lg font-bold tabular-nums', late ? 'text-alarm-700' : finished ? 'text-tide-500' : 'text-tide-900')}>{task.localTime}</span>
+        <span className={clsx('w-14 shrink-0 text-lg font-bold tabular-nums', late ? 'text-alarm-700' : finished ? 'text-tide-500' : 'text-tide-900')}>
+          {task.localTime}
+        </span>
         <span className="flex min-w-0 flex-1 flex-col gap-1">
           <span className={clsx('font-semibold', finished ? 'text-tide-600' : 'text-tide-950')}>
             {task.recheckOfTaskId && <RotateCcw aria-hidden className="mr-1 inline size-4 align-[-2px]" />}

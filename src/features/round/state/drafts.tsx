@@ -24,7 +24,13 @@ export interface MortalityDraft {
 }
 
 export const EMPTY_DRAFT: Draft = {
-  readings: {}, note: '', noteOpen: false, mode: 'done', skipReason: null, mortality: { cause: UNKNOWN_CAUSE, causeText: '', necropsy: false }, errors: {},
+  readings: {},
+  note: '',
+  noteOpen: false,
+  mode: 'done',
+  skipReason: null,
+  mortality: { cause: UNKNOWN_CAUSE, causeText: '', necropsy: false },
+  errors: {},
 }
 
 interface DraftsValue {

@@ -35,7 +35,10 @@ export function buildCompletion(task: RoundTask, draft: Draft, outcome: 'done' |
       readings,
       skipReason: outcome === 'skipped' ? (draft.skipReason ?? undefined) : undefined,
       note,
-      mortality: dead > 0 ? { cause: draft.mortality.cause, causeText: draft.mortality.cause === OTHER_CAUSE ? causeText : undefined, necropsy: draft.mortality.necropsy } : undefined,
+      mortality:
+        dead > 0
+          ? { cause: draft.mortality.cause, causeText: draft.mortality.cause === OTHER_CAUSE ? causeText : undefined, necropsy: draft.mortality.necropsy }
+          : undefined,
       // When it was really done, so lateness is right even if the phone sends it an hour later.
       doneAt: new Date().toISOString(),
     },

@@ -9,7 +9,5 @@ import { isFinished } from './group-round'
 export function nextOpenTask(tasks: RoundTask[], finishedId: number, queuedTaskIds: Set<number>): RoundTask | undefined {
   const at = tasks.findIndex((t) => t.id === finishedId)
   const ordered = at < 0 ? tasks : [...tasks.slice(at + 1), ...tasks.slice(0, at)]
-  return ordered.find(
-    (t) => t.id !== finishedId && !isFinished(t) && t.status !== 'held' && !queuedTaskIds.has(t.id) && t.recheckOfTaskId === null,
-  )
+  return ordered.find((t) => t.id !== finishedId && !isFinished(t) && t.status !== 'held' && !queuedTaskIds.has(t.id) && t.recheckOfTaskId === null)
 }

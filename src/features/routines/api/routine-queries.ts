@@ -13,12 +13,10 @@ export const routineKeys = {
 
 export const routineQueries = {
   list: () => queryOptions({ queryKey: routineKeys.lists(), queryFn: () => apiFetch('/routines', z.array(RoutineSchema)) }),
-  detail: (id: number) =>
-    queryOptions({ queryKey: routineKeys.detail(id), queryFn: () => apiFetch(`/routines/${id}`, RoutineSchema) }),
+  detail: (id: number) => queryOptions({ queryKey: routineKeys.detail(id), queryFn: () => apiFetch(`/routines/${id}`, RoutineSchema) }),
   upcomingTasks: (routineId: number, from: string, to: string) =>
     queryOptions({
       queryKey: taskKeys.list({ routineId, from, to }),
-      queryFn: () =>
-        apiFetch(`/tasks?${new URLSearchParams({ routineId: String(routineId), from, to })}`, z.array(TaskSchema)),
+      queryFn: () => apiFetch(`/tasks?${new URLSearchParams({ routineId: String(routineId), from, to })}`, z.array(TaskSchema)),
     }),
 }

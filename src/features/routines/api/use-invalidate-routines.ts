@@ -8,9 +8,6 @@ export function useInvalidateRoutines() {
   const queryClient = useQueryClient()
   return (saved: Routine) => {
     queryClient.setQueryData(routineKeys.detail(saved.id), saved)
-    return Promise.all([
-      queryClient.invalidateQueries({ queryKey: routineKeys.lists() }),
-      queryClient.invalidateQueries({ queryKey: taskKeys.lists() }),
-    ])
+    return Promise.all([queryClient.invalidateQueries({ queryKey: routineKeys.lists() }), queryClient.invalidateQueries({ queryKey: taskKeys.lists() })])
   }
 }

@@ -42,7 +42,8 @@ export function useTargetOptions(kind: TargetKind) {
       case 'area_tanks':
         options = areaList.map((a) => {
           const inArea = tankList.filter((t) => t.areaId === a.id)
-          const note = kind === 'area_tanks' ? `${inArea.filter((t) => t.inUse).length} of ${inArea.length} tanks in use` : a.quarantine ? 'quarantine' : undefined
+          const note =
+            kind === 'area_tanks' ? `${inArea.filter((t) => t.inUse).length} of ${inArea.length} tanks in use` : a.quarantine ? 'quarantine' : undefined
           return { id: a.id, label: `${a.code} · ${a.name}`, note }
         })
         break

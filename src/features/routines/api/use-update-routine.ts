@@ -6,8 +6,7 @@ import { useInvalidateRoutines } from './use-invalidate-routines'
 export function useUpdateRoutine() {
   const onSuccess = useInvalidateRoutines()
   return useMutation({
-    mutationFn: ({ id, input }: { id: number; input: UpdateRoutineInput }) =>
-      apiFetch(`/routines/${id}`, RoutineSchema, { method: 'PUT', ...jsonBody(input) }),
+    mutationFn: ({ id, input }: { id: number; input: UpdateRoutineInput }) => apiFetch(`/routines/${id}`, RoutineSchema, { method: 'PUT', ...jsonBody(input) }),
     onSuccess,
   })
 }

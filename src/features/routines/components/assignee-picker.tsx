@@ -40,7 +40,11 @@ export function AssigneePicker({ canPickPerson }: { canPickPerson: boolean }) {
           hint={people.isPending ? 'Loading people…' : people.isError ? `Could not load people: ${people.error.message}` : undefined}
         >
           {!active.some((p) => p.id === rule.personId) && <option value={rule.personId}>Choose a person</option>}
-          {active.map((p) => <option key={p.id} value={p.id}>{p.name} ({ROLE_LABELS[p.role]})</option>)}
+          {active.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name} ({ROLE_LABELS[p.role]})
+            </option>
+          ))}
         </SelectField>
       )}
       {rule.kind === 'person' && !canPickPerson && (
@@ -48,7 +52,11 @@ export function AssigneePicker({ canPickPerson }: { canPickPerson: boolean }) {
       )}
       {rule.kind === 'role_on_shift' && (
         <SelectField label="Role" value={rule.role} onChange={(e) => field.onChange({ kind: 'role_on_shift', role: e.target.value as Role })}>
-          {ROLES.filter((r) => r !== 'observer').map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+          {ROLES.filter((r) => r !== 'observer').map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABELS[r]}
+            </option>
+          ))}
         </SelectField>
       )}
     </FormSection>

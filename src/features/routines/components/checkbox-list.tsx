@@ -2,7 +2,13 @@ import { useId, useState } from 'react'
 import type { TargetOption } from '../api/use-target-options'
 
 /** A multi-select as a list of checkboxes, with a filter once the list gets long. */
-export function CheckboxList({ label, options, value, onChange, error }: {
+export function CheckboxList({
+  label,
+  options,
+  value,
+  onChange,
+  error,
+}: {
   label: string
   options: TargetOption[]
   value: number[]
@@ -24,7 +30,11 @@ export function CheckboxList({ label, options, value, onChange, error }: {
           {label} <span className="font-normal text-tide-600">({value.length} chosen)</span>
         </p>
         <div className="flex gap-1">
-          <button type="button" onClick={() => onChange([...new Set([...value, ...shown.map((o) => o.id)])])} className="min-h-11 rounded-lg px-3 text-sm font-semibold text-tide-700 hover:bg-tide-100">
+          <button
+            type="button"
+            onClick={() => onChange([...new Set([...value, ...shown.map((o) => o.id)])])}
+            className="min-h-11 rounded-lg px-3 text-sm font-semibold text-tide-700 hover:bg-tide-100"
+          >
             Choose all shown
           </button>
           <button type="button" onClick={() => onChange([])} className="min-h-11 rounded-lg px-3 text-sm font-semibold text-tide-700 hover:bg-tide-100">
@@ -48,17 +58,23 @@ export function CheckboxList({ label, options, value, onChange, error }: {
         {groups.map((group) => (
           <div key={group}>
             {group && <p className="sticky top-0 bg-tide-50 px-3 py-1 text-xs font-bold tracking-wide text-tide-700 uppercase">{group}</p>}
-            {shown.filter((o) => (o.group ?? '') === group).map((o) => (
-              <label key={o.id} className="flex min-h-11 cursor-pointer items-center gap-3 border-t border-tide-100 px-3 first:border-t-0 hover:bg-tide-50">
-                <input type="checkbox" className="size-5 shrink-0" checked={selected.has(o.id)} onChange={(e) => toggle(o.id, e.target.checked)} />
-                <span className="min-w-0 flex-1 truncate text-tide-900">{o.label}</span>
-                {o.note && <span className="shrink-0 text-sm text-tide-600">{o.note}</span>}
-              </label>
-            ))}
+            {shown
+              .filter((o) => (o.group ?? '') === group)
+              .map((o) => (
+                <label key={o.id} className="flex min-h-11 cursor-pointer items-center gap-3 border-t border-tide-100 px-3 first:border-t-0 hover:bg-tide-50">
+                  <input type="checkbox" className="size-5 shrink-0" checked={selected.has(o.id)} onChange={(e) => toggle(o.id, e.target.checked)} />
+                  <span className="min-w-0 flex-1 truncate text-tide-900">{o.label}</span>
+                  {o.note && <span className="shrink-0 text-sm text-tide-600">{o.note}</span>}
+                </label>
+              ))}
           </div>
         ))}
       </div>
-      {error && <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-semibold text-alarm-700">
+          {error}
+        </p>
+      )}
     </div>
   )
 }

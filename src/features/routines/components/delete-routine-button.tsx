@@ -16,10 +16,12 @@ export function DeleteRoutineButton({ routine, onDeleted }: { routine: Routine; 
     )
   }
   return (
-    <div role="group" aria-label="Confirm deletion" className="flex flex-col gap-2 rounded-lg border border-alarm-100 bg-alarm-50 p-3 sm:flex-row sm:items-center">
-      <p className="flex-1 text-sm text-alarm-700">
-        Delete “{routine.name}”? Its untouched future tasks go too; done and past tasks stay as records.
-      </p>
+    <div
+      role="group"
+      aria-label="Confirm deletion"
+      className="flex flex-col gap-2 rounded-lg border border-alarm-100 bg-alarm-50 p-3 sm:flex-row sm:items-center"
+    >
+      <p className="flex-1 text-sm text-alarm-700">Delete “{routine.name}”? Its untouched future tasks go too; done and past tasks stay as records.</p>
       <div className="flex gap-2">
         <Button
           type="button"
@@ -36,7 +38,9 @@ export function DeleteRoutineButton({ routine, onDeleted }: { routine: Routine; 
         >
           {remove.isPending ? 'Deleting…' : 'Delete'}
         </Button>
-        <Button type="button" variant="secondary" onClick={() => setConfirming(false)}>Keep it</Button>
+        <Button type="button" variant="secondary" onClick={() => setConfirming(false)}>
+          Keep it
+        </Button>
       </div>
     </div>
   )

@@ -4,7 +4,10 @@ import { Field } from '../../../components/ui/field'
 
 /** A date input for a nullable date: empty means null. */
 export function OptionalDateField({ name, label, hint }: { name: 'activeFrom' | 'activeTo'; label: string; hint: string }) {
-  const { field: { ref, value, onChange, onBlur }, fieldState } = useController<RoutineInput, typeof name>({ name })
+  const {
+    field: { ref, value, onChange, onBlur },
+    fieldState,
+  } = useController<RoutineInput, typeof name>({ name })
   return (
     <Field
       label={label}

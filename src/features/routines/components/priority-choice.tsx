@@ -21,14 +21,7 @@ export function PriorityChoice() {
             value === c.value ? 'border-tide-600 bg-tide-50 ring-1 ring-tide-600' : 'border-tide-200',
           )}
         >
-          <input
-            type="radio"
-            name={field.name}
-            value={c.value}
-            checked={value === c.value}
-            onChange={() => field.onChange(c.value)}
-            className="mt-1 size-4"
-          />
+          <input type="radio" name={field.name} value={c.value} checked={value === c.value} onChange={() => field.onChange(c.value)} className="mt-1 size-4" />
           <span className="flex flex-col">
             <span className="flex items-center gap-1 font-semibold text-tide-900">
               <c.icon aria-hidden className={clsx('size-4', c.value === 'welfare_critical' ? 'text-alarm-600' : 'text-tide-500')} />

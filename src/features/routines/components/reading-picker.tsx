@@ -18,7 +18,9 @@ export function ReadingPicker({ parameters }: { parameters: Parameter[] }) {
           {offered.map((p) => (
             <label key={p.key} className="flex min-h-11 cursor-pointer items-center gap-3 text-tide-900">
               <input type="checkbox" className="size-5 shrink-0" checked={chosen.includes(p.key)} onChange={(e) => toggle(p.key, e.target.checked)} />
-              <span>{p.name} <span className="text-tide-600">({p.unit})</span></span>
+              <span>
+                {p.name} <span className="text-tide-600">({p.unit})</span>
+              </span>
             </label>
           ))}
         </div>

@@ -1,6 +1,10 @@
 import { CATEGORY_LABELS, ROUTINE_CATEGORIES, type Category, type Routine } from '#shared/schemas/routine'
 
-export function RoutineCategoryFilter({ routines, value, onChange }: {
+export function RoutineCategoryFilter({
+  routines,
+  value,
+  onChange,
+}: {
   routines: Routine[]
   value: Category | null
   onChange: (category: Category | null) => void
@@ -9,7 +13,9 @@ export function RoutineCategoryFilter({ routines, value, onChange }: {
   for (const r of routines) counts.set(r.category, (counts.get(r.category) ?? 0) + 1)
   return (
     <div className="flex flex-col gap-1">
-      <label htmlFor="routine-category-filter" className="text-sm font-semibold text-tide-800">Category</label>
+      <label htmlFor="routine-category-filter" className="text-sm font-semibold text-tide-800">
+        Category
+      </label>
       <select
         id="routine-category-filter"
         value={value ?? ''}
@@ -18,7 +24,9 @@ export function RoutineCategoryFilter({ routines, value, onChange }: {
       >
         <option value="">All categories ({routines.length})</option>
         {ROUTINE_CATEGORIES.filter((c) => counts.has(c) || c === value).map((c) => (
-          <option key={c} value={c}>{CATEGORY_LABELS[c]} ({counts.get(c) ?? 0})</option>
+          <option key={c} value={c}>
+            {CATEGORY_LABELS[c]} ({counts.get(c) ?? 0})
+          </option>
         ))}
       </select>
     </div>

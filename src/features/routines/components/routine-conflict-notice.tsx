@@ -7,8 +7,8 @@ export function RoutineConflictNotice({ onReload, reloading }: { onReload: () =>
       <p className="flex flex-1 items-start gap-2">
         <TriangleAlert aria-hidden className="mt-0.5 size-5 shrink-0" />
         <span>
-          <span className="font-semibold">Someone else changed this routine after you opened it.</span>{' '}
-          Reload to see their version; your unsaved changes here will be replaced.
+          <span className="font-semibold">Someone else changed this routine after you opened it.</span> Reload to see their version; your unsaved changes here
+          will be replaced.
         </span>
       </p>
       <Button type="button" variant="secondary" onClick={onReload} disabled={reloading}>

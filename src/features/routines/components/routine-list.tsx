@@ -8,7 +8,11 @@ import { PlanningErrorLabel } from './planning-error-label'
 import { PriorityLabel } from './priority-label'
 import { RoutineCategoryFilter } from './routine-category-filter'
 
-export function RoutineList({ routines, category, onCategoryChange }: {
+export function RoutineList({
+  routines,
+  category,
+  onCategoryChange,
+}: {
   routines: Routine[]
   category: Category | null
   onCategoryChange: (category: Category | null) => void

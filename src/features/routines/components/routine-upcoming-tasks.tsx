@@ -26,23 +26,33 @@ export function RoutineUpcomingTasks({ routineId, timeZone, paused }: { routineI
       <h2 id="upcoming-tasks-heading" className="flex items-center gap-2 text-lg font-bold text-tide-900">
         <CalendarClock aria-hidden className="size-5 text-tide-600" /> Upcoming tasks
       </h2>
-      <p className="mt-0.5 text-sm text-tide-600">The next {DAYS} days, facility time ({timeZone}).</p>
+      <p className="mt-0.5 text-sm text-tide-600">
+        The next {DAYS} days, facility time ({timeZone}).
+      </p>
       {tasks.isPending && <LoadingState label="Loading tasks…" />}
       {tasks.isError && (
         <ErrorState
           title="Could not load the tasks"
           message={tasks.error.message}
-          action={<Button variant="secondary" onClick={() => void tasks.refetch()}>Try again</Button>}
+          action={
+            <Button variant="secondary" onClick={() => void tasks.refetch()}>
+              Try again
+            </Button>
+          }
         />
       )}
       {tasks.isSuccess && tasks.data.length === 0 && (
         <p className="mt-4 text-tide-700">
-          {paused ? 'Paused: no tasks are planned until the routine is resumed.' : 'No tasks in the next two weeks. Check the rule, the targets and the active period.'}
+          {paused
+            ? 'Paused: no tasks are planned until the routine is resumed.'
+            : 'No tasks in the next two weeks. Check the rule, the targets and the active period.'}
         </p>
       )}
       {tasks.isSuccess && tasks.data.length > 0 && (
         <div className="mt-4 flex flex-col gap-4">
-          {byDate(tasks.data).map(([date, dayTasks]) => <UpcomingDay key={date} date={date} tasks={dayTasks} />)}
+          {byDate(tasks.data).map(([date, dayTasks]) => (
+            <UpcomingDay key={date} date={date} tasks={dayTasks} />
+          ))}
         </div>
       )}
     </section>

@@ -13,7 +13,12 @@ import { StartFields } from './start-fields'
 const isTime = (t: string) => /^([01]\d|2[0-3]):[0-5]\d$/.test(t)
 
 export function RuleEditor() {
-  const { register, setValue, getValues, formState: { errors, isSubmitted } } = useFormContext<RoutineInput>()
+  const {
+    register,
+    setValue,
+    getValues,
+    formState: { errors, isSubmitted },
+  } = useFormContext<RoutineInput>()
   const rrule = useWatch<RoutineInput, 'rrule'>({ name: 'rrule' }) ?? ''
   const startTime = () => timeOf(getValues('dtstart')) || NEW_ROUTINE_TIME
   const [initial] = useState(() => draftOfRule(getValues('rrule'), startTime()))
@@ -76,7 +81,14 @@ export function RuleEditor() {
           Written as{' '}
           <code className="rounded bg-tide-50 px-1 text-tide-800">
             {rrule.split(';').map((part, i) => (
-              <Fragment key={i}>{i > 0 && <>;<wbr /></>}{part}</Fragment>
+              <Fragment key={i}>
+                {i > 0 && (
+                  <>
+                    ;<wbr />
+                  </>
+                )}
+                {part}
+              </Fragment>
             ))}
           </code>
         </p>

@@ -36,7 +36,9 @@ export function RulePreviewPanel({ timeZone }: { timeZone: string }) {
         </p>
       )}
       <div>
-        <h3 id="rule-preview-heading" className="font-bold text-tide-900">Next {PREVIEW_COUNT} dates</h3>
+        <h3 id="rule-preview-heading" className="font-bold text-tide-900">
+          Next {PREVIEW_COUNT} dates
+        </h3>
         <p className="text-sm text-tide-600">Facility time, {timeZone}</p>
       </div>
       {preview.error !== null && <p className="text-tide-700">The dates show here once the rule is valid.</p>}
@@ -45,10 +47,18 @@ export function RulePreviewPanel({ timeZone }: { timeZone: string }) {
         <table aria-labelledby="rule-preview-heading" className="w-full text-left text-sm tabular-nums">
           <thead className="text-tide-700">
             <tr className="border-b border-tide-200">
-              <th scope="col" className="py-1.5 pr-2 font-semibold">Day</th>
-              <th scope="col" className="py-1.5 pr-2 font-semibold">Date</th>
-              <th scope="col" className="py-1.5 pr-2 font-semibold">Time</th>
-              <th scope="col" className="py-1.5 font-semibold">UTC offset</th>
+              <th scope="col" className="py-1.5 pr-2 font-semibold">
+                Day
+              </th>
+              <th scope="col" className="py-1.5 pr-2 font-semibold">
+                Date
+              </th>
+              <th scope="col" className="py-1.5 pr-2 font-semibold">
+                Time
+              </th>
+              <th scope="col" className="py-1.5 font-semibold">
+                UTC offset
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -69,7 +79,9 @@ export function RulePreviewPanel({ timeZone }: { timeZone: string }) {
                     <span className="inline-flex items-center gap-1 font-semibold text-ember-700">
                       <ArrowRightLeft aria-hidden className="size-3.5" /> {formatOffset(row.offsetMinutes)}, clocks changed
                     </span>
-                  ) : formatOffset(row.offsetMinutes)}
+                  ) : (
+                    formatOffset(row.offsetMinutes)
+                  )}
                 </td>
               </tr>
             ))}

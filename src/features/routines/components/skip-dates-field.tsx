@@ -15,7 +15,9 @@ export function SkipDatesField() {
   }
   return (
     <div className="flex flex-col gap-2 sm:col-span-2">
-      <label htmlFor="routine-skip-date" className="text-sm font-semibold text-tide-800">Skip dates</label>
+      <label htmlFor="routine-skip-date" className="text-sm font-semibold text-tide-800">
+        Skip dates
+      </label>
       <p className="-mt-1 text-sm text-tide-600">No tasks on these days, e.g. a shutdown or a stocking day.</p>
       <div className="flex gap-2">
         <input
@@ -31,7 +33,12 @@ export function SkipDatesField() {
           }}
           className="min-h-11 rounded-lg border border-tide-200 bg-white px-3 text-base"
         />
-        <button type="button" onClick={add} disabled={!draft} className="inline-flex min-h-11 items-center gap-1 rounded-lg px-3 font-semibold text-tide-700 hover:bg-tide-100 disabled:text-tide-300">
+        <button
+          type="button"
+          onClick={add}
+          disabled={!draft}
+          className="inline-flex min-h-11 items-center gap-1 rounded-lg px-3 font-semibold text-tide-700 hover:bg-tide-100 disabled:text-tide-300"
+        >
           <Plus aria-hidden className="size-4" /> Add
         </button>
       </div>

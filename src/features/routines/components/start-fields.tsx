@@ -5,12 +5,14 @@ import { dateOf, joinStart, timeOf } from '../utils/routine-form-values'
 
 /** dtstart as two inputs; in the builder the time follows the first time of day. */
 export function StartFields({ timeFollowsRule }: { timeFollowsRule: boolean }) {
-  const { setValue, formState: { errors, isSubmitted } } = useFormContext<RoutineInput>()
+  const {
+    setValue,
+    formState: { errors, isSubmitted },
+  } = useFormContext<RoutineInput>()
   const dtstart = useWatch<RoutineInput, 'dtstart'>({ name: 'dtstart' }) ?? ''
   const date = dateOf(dtstart)
   const time = timeOf(dtstart)
-  const set = (nextDate: string, nextTime: string) =>
-    setValue('dtstart', joinStart(nextDate, nextTime), { shouldDirty: true, shouldValidate: isSubmitted })
+  const set = (nextDate: string, nextTime: string) => setValue('dtstart', joinStart(nextDate, nextTime), { shouldDirty: true, shouldValidate: isSubmitted })
 
   return (
     <div className="grid grid-cols-2 gap-3">

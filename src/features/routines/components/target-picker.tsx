@@ -9,7 +9,11 @@ import { FormSection } from './form-section'
 import { SelectField } from '../../../components/ui/select-field'
 
 export function TargetPicker() {
-  const { register, setValue, formState: { errors } } = useFormContext<RoutineInput>()
+  const {
+    register,
+    setValue,
+    formState: { errors },
+  } = useFormContext<RoutineInput>()
   const kind = useWatch<RoutineInput, 'targetKind'>({ name: 'targetKind' })
   const { field: ids } = useController<RoutineInput, 'targetIds'>({ name: 'targetIds' })
   const targets = useTargetOptions(kind)
@@ -21,14 +25,20 @@ export function TargetPicker() {
   return (
     <FormSection title="Where" description="Which targets get a task each time the routine comes round.">
       <SelectField label="Target kind" {...kindField}>
-        {TARGET_KINDS.map((k: TargetKind) => <option key={k} value={k}>{TARGET_KIND_LABELS[k]}</option>)}
+        {TARGET_KINDS.map((k: TargetKind) => (
+          <option key={k} value={k}>
+            {TARGET_KIND_LABELS[k]}
+          </option>
+        ))}
       </SelectField>
       {kind === 'facility' && <p className="text-tide-700">One task for the whole facility each time.</p>}
       {kind !== 'facility' && targets.status === 'pending' && <LoadingState label="Loading the choices…" />}
       {kind !== 'facility' && targets.status === 'error' && (
         <div role="alert" className="flex flex-wrap items-center gap-3 text-alarm-700">
           Could not load the choices: {targets.error?.message}
-          <Button type="button" variant="secondary" onClick={targets.retry}>Try again</Button>
+          <Button type="button" variant="secondary" onClick={targets.retry}>
+            Try again
+          </Button>
         </div>
       )}
       {kind !== 'facility' && targets.status === 'success' && (

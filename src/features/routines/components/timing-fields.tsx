@@ -4,11 +4,20 @@ import { Field } from '../../../components/ui/field'
 import { plainNumberError } from '../utils/routine-form-schema'
 
 export function TimingFields() {
-  const { register, formState: { errors } } = useFormContext<RoutineInput>()
+  const {
+    register,
+    formState: { errors },
+  } = useFormContext<RoutineInput>()
   const minutes = { type: 'number', inputMode: 'numeric', min: 0 } as const
   return (
     <div className="grid gap-4 sm:grid-cols-3">
-      <Field label="Takes (minutes)" {...minutes} min={1} {...register('durationMinutes', { valueAsNumber: true })} error={plainNumberError(errors.durationMinutes?.message)} />
+      <Field
+        label="Takes (minutes)"
+        {...minutes}
+        min={1}
+        {...register('durationMinutes', { valueAsNumber: true })}
+        error={plainNumberError(errors.durationMinutes?.message)}
+      />
       <Field
         label="Opens before (minutes)"
         hint="The task opens this long before its time."

@@ -14,7 +14,9 @@ export function UpcomingDay({ date, tasks }: { date: string; tasks: Task[] }) {
     <section aria-label={label}>
       <h3 className="flex items-baseline justify-between gap-2 border-b border-tide-200 pb-1 font-semibold text-tide-900">
         <span>{label}</span>
-        <span className="text-sm font-normal text-tide-600">{tasks.length} {tasks.length === 1 ? 'task' : 'tasks'}</span>
+        <span className="text-sm font-normal text-tide-600">
+          {tasks.length} {tasks.length === 1 ? 'task' : 'tasks'}
+        </span>
       </h3>
       <ul className="divide-y divide-tide-100">
         {shown.map((t) => (
@@ -24,7 +26,9 @@ export function UpcomingDay({ date, tasks }: { date: string; tasks: Task[] }) {
               {t.targetLabel}
               {t.assigneeName && <span className="text-sm text-tide-600"> · {t.assigneeName}</span>}
             </span>
-            <span className="col-start-2 sm:col-start-auto"><TaskStatusLabel status={t.status} /></span>
+            <span className="col-start-2 sm:col-start-auto">
+              <TaskStatusLabel status={t.status} />
+            </span>
           </li>
         ))}
       </ul>

@@ -13,5 +13,4 @@ export function routineFormSchema(timeZone: string) {
 }
 
 /** zod's own wording for a cleared number input is written for developers. */
-export const plainNumberError = (message: string | undefined) =>
-  message && /expected number/i.test(message) ? 'Enter a whole number of minutes' : message
+export const plainNumberError = (message: string | undefined) => (message && /expected number/i.test(message) ? 'Enter a whole number of minutes' : message)

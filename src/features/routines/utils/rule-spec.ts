@@ -35,18 +35,30 @@ export const RULE_KIND_LABELS: Record<RuleKind, string> = {
 }
 
 export const defaultDraft = (time = '08:00'): RuleDraft => ({
-  kind: 'dailyAtTimes', times: [time], days: ['MO'], interval: 2, nth: 1, day: 'MO', dayOfMonth: 1,
+  kind: 'dailyAtTimes',
+  times: [time],
+  days: ['MO'],
+  interval: 2,
+  nth: 1,
+  day: 'MO',
+  dayOfMonth: 1,
 })
 
 export function specOfDraft(d: RuleDraft): RuleSpec {
   const times = d.times
   switch (d.kind) {
-    case 'dailyAtTimes': return { kind: d.kind, times }
-    case 'weeklyOnDays': return { kind: d.kind, days: d.days, times }
-    case 'everyNDays': return { kind: d.kind, interval: d.interval, times }
-    case 'everyNWeeksOnDays': return { kind: d.kind, interval: d.interval, days: d.days, times }
-    case 'monthlyOnNthWeekday': return { kind: d.kind, nth: d.nth, day: d.day, times }
-    case 'monthlyOnDayOfMonth': return { kind: d.kind, dayOfMonth: d.dayOfMonth, times }
+    case 'dailyAtTimes':
+      return { kind: d.kind, times }
+    case 'weeklyOnDays':
+      return { kind: d.kind, days: d.days, times }
+    case 'everyNDays':
+      return { kind: d.kind, interval: d.interval, times }
+    case 'everyNWeeksOnDays':
+      return { kind: d.kind, interval: d.interval, days: d.days, times }
+    case 'monthlyOnNthWeekday':
+      return { kind: d.kind, nth: d.nth, day: d.day, times }
+    case 'monthlyOnDayOfMonth':
+      return { kind: d.kind, dayOfMonth: d.dayOfMonth, times }
   }
 }
 
@@ -68,10 +80,18 @@ export function buildDraft(d: RuleDraft): { rrule: string; error: null } | { rru
 
 const sortedList = (text: string) => text.split(',').sort().join(',')
 const canonical = (parts: ReadonlyMap<string, string>) =>
-  [...parts].map(([name, value]) => `${name}=${sortedList(value)}`).sort().join(';')
+  [...parts]
+    .map(([name, value]) => `${name}=${sortedList(value)}`)
+    .sort()
+    .join(';')
 
 function timesOf(parts: ReadonlyMap<string, string>): string[] | undefined {
-  const numbers = (name: string) => (parts.get(name) ?? '').split(',').filter(Boolean).map(Number).sort((a, b) => a - b)
+  const numbers = (name: string) =>
+    (parts.get(name) ?? '')
+      .split(',')
+      .filter(Boolean)
+      .map(Number)
+      .sort((a, b) => a - b)
   if (!parts.has('BYHOUR') && !parts.has('BYMINUTE')) return undefined
   const pad = (n: number) => String(n).padStart(2, '0')
   const grid = numbers('BYHOUR').flatMap((h) => numbers('BYMINUTE').map((m) => `${pad(h)}:${pad(m)}`))

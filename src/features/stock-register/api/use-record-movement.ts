@@ -10,9 +10,6 @@ export function useRecordMovement() {
   return useMutation({
     mutationFn: (input: ParsedMovementInput) => apiFetch('/stock/movements', MovementSchema, { method: 'POST', ...jsonBody(input) }),
     onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: stockKeys.all }),
-        queryClient.invalidateQueries({ queryKey: catalogueKeys.list('batches') }),
-      ]),
+      Promise.all([queryClient.invalidateQueries({ queryKey: stockKeys.all }), queryClient.invalidateQueries({ queryKey: catalogueKeys.list('batches') })]),
   })
 }

@@ -26,23 +26,50 @@ export function AnimalRecordSettingsForm({ settings }: { settings: StockSettings
     }),
   )
   return (
-    <form noValidate onSubmit={submit} aria-label="Animal record settings" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
-      <TextAreaField
-        label="Causes of death (one per line)"
-        rows={5}
-        {...form.register('causes')}
-        error={errors.causes?.message}
-      />
+    <form
+      noValidate
+      onSubmit={submit}
+      aria-label="Animal record settings"
+      className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5"
+    >
+      <TextAreaField label="Causes of death (one per line)" rows={5} {...form.register('causes')} error={errors.causes?.message} />
       <p className="-mt-2 text-sm text-tide-700">The round offers these, and always “Unknown” and “Other” in words.</p>
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="7-day losses that raise a flag (% of the batch)" type="number" inputMode="decimal" step="any" {...form.register('mortalityWeekPct', number)} error={errors.mortalityWeekPct?.message} />
-        <Field label="Tell the welfare officer within (hours)" type="number" inputMode="numeric" {...form.register('notifyWelfareOfficerHours', number)} error={errors.notifyWelfareOfficerHours?.message} />
-        <Field label="Report to the ethics committee within (hours)" type="number" inputMode="numeric" {...form.register('notifyCommitteeHours', number)} error={errors.notifyCommitteeHours?.message} />
-        <Field label="Full report within (hours)" type="number" inputMode="numeric" {...form.register('fullReportHours', number)} error={errors.fullReportHours?.message} />
+        <Field
+          label="7-day losses that raise a flag (% of the batch)"
+          type="number"
+          inputMode="decimal"
+          step="any"
+          {...form.register('mortalityWeekPct', number)}
+          error={errors.mortalityWeekPct?.message}
+        />
+        <Field
+          label="Tell the welfare officer within (hours)"
+          type="number"
+          inputMode="numeric"
+          {...form.register('notifyWelfareOfficerHours', number)}
+          error={errors.notifyWelfareOfficerHours?.message}
+        />
+        <Field
+          label="Report to the ethics committee within (hours)"
+          type="number"
+          inputMode="numeric"
+          {...form.register('notifyCommitteeHours', number)}
+          error={errors.notifyCommitteeHours?.message}
+        />
+        <Field
+          label="Full report within (hours)"
+          type="number"
+          inputMode="numeric"
+          {...form.register('fullReportHours', number)}
+          error={errors.fullReportHours?.message}
+        />
       </div>
       <p className="text-sm text-tide-700">Common practice for institutional animal-ethics rules; your local code and committee decide.</p>
       <div>
-        <Button type="submit" disabled={update.isPending}>{update.isPending ? 'Saving…' : 'Save animal record settings'}</Button>
+        <Button type="submit" disabled={update.isPending}>
+          {update.isPending ? 'Saving…' : 'Save animal record settings'}
+        </Button>
       </div>
     </form>
   )

@@ -38,7 +38,10 @@ export function MovementEntry({ movement: m, view, timeZone, corrected, correcte
       <p className="text-xs text-tide-600">Recorded by {m.personName}</p>
       {corrected && (
         <p className="flex items-center gap-1 text-sm font-semibold text-tide-800">
-          <CornerDownRight aria-hidden className="size-4" /> Corrects <a href={`#movement-${corrected.id}`} className="underline">#{corrected.id} ({corrected.kind}, {corrected.count} fish)</a>
+          <CornerDownRight aria-hidden className="size-4" /> Corrects{' '}
+          <a href={`#movement-${corrected.id}`} className="underline">
+            #{corrected.id} ({corrected.kind}, {corrected.count} fish)
+          </a>
         </p>
       )}
       {m.correctsId && !corrected && <p className="text-sm text-tide-800">Corrects #{m.correctsId}</p>}
@@ -46,7 +49,12 @@ export function MovementEntry({ movement: m, view, timeZone, corrected, correcte
         <p className="flex items-center gap-1 text-sm font-semibold text-ember-700">
           <Undo2 aria-hidden className="size-4" /> Corrected by{' '}
           {correctedBy.map((c, i) => (
-            <span key={c.id}>{i > 0 && ', '}<a href={`#movement-${c.id}`} className="underline">#{c.id} ({signed(c.count)})</a></span>
+            <span key={c.id}>
+              {i > 0 && ', '}
+              <a href={`#movement-${c.id}`} className="underline">
+                #{c.id} ({signed(c.count)})
+              </a>
+            </span>
           ))}
         </p>
       )}

@@ -31,20 +31,40 @@ export function MovementFields({ form, tanks, causes, correctable }: Props) {
   const tankOptions = (
     <>
       <option value="">Choose a tank…</option>
-      {tanks.map((t) => <option key={t.id} value={t.id}>{t.label}</option>)}
+      {tanks.map((t) => (
+        <option key={t.id} value={t.id}>
+          {t.label}
+        </option>
+      ))}
     </>
   )
   return (
     <div className="grid gap-3 sm:grid-cols-2">
-      {FROM.has(kind) && <SelectField label="From tank" error={error('fromTankId')} {...register('fromTankId')}>{tankOptions}</SelectField>}
-      {TO.has(kind) && <SelectField label="To tank" error={error('toTankId')} {...register('toTankId')}>{tankOptions}</SelectField>}
+      {FROM.has(kind) && (
+        <SelectField label="From tank" error={error('fromTankId')} {...register('fromTankId')}>
+          {tankOptions}
+        </SelectField>
+      )}
+      {TO.has(kind) && (
+        <SelectField label="To tank" error={error('toTankId')} {...register('toTankId')}>
+          {tankOptions}
+        </SelectField>
+      )}
       {kind === 'correction' ? (
         <>
-          <SelectField label="Tank" error={error('tankId')} {...register('tankId')}>{tankOptions}</SelectField>
+          <SelectField label="Tank" error={error('tankId')} {...register('tankId')}>
+            {tankOptions}
+          </SelectField>
           <Field label="Change in count (+ adds, − takes off)" {...num} error={error('delta')} {...register('delta')} />
           <SelectField label="Corrects entry (optional)" error={error('correctsId')} {...register('correctsId')}>
             <option value="">None: a count found wrong</option>
-            {correctable.filter((m) => m.kind !== 'correction').map((m) => <option key={m.id} value={m.id}>#{m.id} {m.kind}, {m.count} fish</option>)}
+            {correctable
+              .filter((m) => m.kind !== 'correction')
+              .map((m) => (
+                <option key={m.id} value={m.id}>
+                  #{m.id} {m.kind}, {m.count} fish
+                </option>
+              ))}
           </SelectField>
         </>
       ) : (
@@ -68,7 +88,11 @@ export function MovementFields({ form, tanks, causes, correctable }: Props) {
         <>
           <SelectField label="Cause of death" error={error('cause')} {...register('cause')}>
             <option value={UNKNOWN_CAUSE}>Unknown</option>
-            {causes.map((c) => <option key={c} value={c}>{c}</option>)}
+            {causes.map((c) => (
+              <option key={c} value={c}>
+                {c}
+              </option>
+            ))}
             <option value={OTHER_CAUSE}>Other (say what)</option>
           </SelectField>
           {cause === OTHER_CAUSE && <Field label="What was the cause?" error={error('causeText')} {...register('causeText')} />}

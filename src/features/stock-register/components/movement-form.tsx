@@ -61,18 +61,32 @@ export function MovementForm({ role, timeZone, batches, tanks, causes, movements
     <form noValidate onSubmit={submit} aria-label="Record a movement" className="flex flex-col gap-4 rounded-xl border border-tide-200 bg-white p-4 md:p-5">
       <div className="grid gap-3 sm:grid-cols-2">
         <SelectField label="What happened" {...form.register('kind')}>
-          {kinds.map((k) => <option key={k} value={k}>{MOVEMENT_KIND_LABELS[k]}</option>)}
+          {kinds.map((k) => (
+            <option key={k} value={k}>
+              {MOVEMENT_KIND_LABELS[k]}
+            </option>
+          ))}
         </SelectField>
         {batches.length > 1 && (
           <SelectField label="Batch" error={form.formState.errors.batchId?.message} {...form.register('batchId')}>
             <option value="">Choose a batch…</option>
-            {batches.map((b) => <option key={b.id} value={b.id}>{b.label}</option>)}
+            {batches.map((b) => (
+              <option key={b.id} value={b.id}>
+                {b.label}
+              </option>
+            ))}
           </SelectField>
         )}
       </div>
       <MovementFields form={form} tanks={tanks} causes={causes} correctable={movements.filter((m) => m.batchId === batchId)} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="When (facility time; empty for now)" type="datetime-local" hint={timeZone} error={form.formState.errors.occurredAt?.message} {...form.register('occurredAt')} />
+        <Field
+          label="When (facility time; empty for now)"
+          type="datetime-local"
+          hint={timeZone}
+          error={form.formState.errors.occurredAt?.message}
+          {...form.register('occurredAt')}
+        />
         <Field label="Note (optional)" error={form.formState.errors.note?.message} {...form.register('note')} />
       </div>
       {refusal && (

@@ -2,7 +2,14 @@ import { ArrowRightLeft, FlaskConical, HeartCrack, Layers, PackagePlus, PencilLi
 import { MOVEMENT_KIND_LABELS, type MovementKind } from '#shared/schemas/stock'
 
 const ICONS: Record<MovementKind, LucideIcon> = {
-  arrival: PackagePlus, transfer: ArrowRightLeft, grading: Layers, mortality: HeartCrack, cull: Scissors, sampling: FlaskConical, dispatch: Truck, correction: PencilLine,
+  arrival: PackagePlus,
+  transfer: ArrowRightLeft,
+  grading: Layers,
+  mortality: HeartCrack,
+  cull: Scissors,
+  sampling: FlaskConical,
+  dispatch: Truck,
+  correction: PencilLine,
 }
 
 /** A movement's kind as icon and words. */

@@ -26,16 +26,28 @@ export function StockFigures({ figures, rows, rowsLabel, emptyText }: { figures:
           <caption className="sr-only">{rowsLabel}</caption>
           <thead className="text-tide-700">
             <tr>
-              <th scope="col" className="py-1 font-semibold">{rowsLabel}</th>
-              <th scope="col" className="py-1 text-right font-semibold">Fish</th>
-              <th scope="col" className="py-1 text-right font-semibold">Biomass</th>
-              <th scope="col" className="py-1 text-right font-semibold">Density</th>
+              <th scope="col" className="py-1 font-semibold">
+                {rowsLabel}
+              </th>
+              <th scope="col" className="py-1 text-right font-semibold">
+                Fish
+              </th>
+              <th scope="col" className="py-1 text-right font-semibold">
+                Biomass
+              </th>
+              <th scope="col" className="py-1 text-right font-semibold">
+                Density
+              </th>
             </tr>
           </thead>
           <tbody className="tabular-nums text-tide-900">
             {rows.map((r) => (
               <tr key={r.key} className="border-t border-tide-100">
-                <th scope="row" className="py-1 font-semibold"><Link to={r.to} className="underline">{r.label}</Link></th>
+                <th scope="row" className="py-1 font-semibold">
+                  <Link to={r.to} className="underline">
+                    {r.label}
+                  </Link>
+                </th>
                 <td className="py-1 text-right">{whole.format(r.count)}</td>
                 <td className="py-1 text-right">{kg.format(r.biomassKg)} kg</td>
                 <td className="py-1 text-right">{r.densityKgM3 === null ? '—' : `${kg.format(r.densityKgM3)} kg/m³`}</td>
@@ -53,7 +65,9 @@ function Figure({ label, value, testId }: { label: string; value: string; testId
   return (
     <div>
       <dt className="text-sm text-tide-600">{label}</dt>
-      <dd className="text-xl font-bold text-tide-900 tabular-nums" data-testid={testId}>{value}</dd>
+      <dd className="text-xl font-bold text-tide-900 tabular-nums" data-testid={testId}>
+        {value}
+      </dd>
     </div>
   )
 }

@@ -25,7 +25,9 @@ export function StockRegisterSection({ figures, rows, rowsLabel, emptyText, move
   return (
     <section aria-labelledby={`${formId}-heading`} className="flex min-w-0 flex-col gap-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 id={`${formId}-heading`} className="text-xl font-bold text-tide-900">Stock register</h2>
+        <h2 id={`${formId}-heading`} className="text-xl font-bold text-tide-900">
+          Stock register
+        </h2>
         {form && (
           <Button variant={open ? 'secondary' : 'primary'} aria-expanded={open} aria-controls={formId} onClick={() => setOpen((o) => !o)}>
             {open ? <ChevronUp aria-hidden className="size-5" /> : <Plus aria-hidden className="size-5" />} {open ? 'Close the form' : 'Record a movement'}
@@ -33,7 +35,9 @@ export function StockRegisterSection({ figures, rows, rowsLabel, emptyText, move
         )}
       </div>
       <StockFigures figures={figures} rows={rows} rowsLabel={rowsLabel} emptyText={emptyText} />
-      <div id={formId} hidden={!open}>{open && form}</div>
+      <div id={formId} hidden={!open}>
+        {open && form}
+      </div>
       <h3 className="text-lg font-bold text-tide-900">Movements</h3>
       <MovementLedger movements={movements} view={view} timeZone={timeZone} />
     </section>

@@ -26,9 +26,27 @@ export interface MovementFormValues {
 }
 
 export const emptyMovementForm = (start: Partial<MovementFormValues> = {}): MovementFormValues => ({
-  kind: 'mortality', batchId: '', fromTankId: '', toTankId: '', tankId: '', count: '', delta: '', meanWeightG: '', origin: '', permitRef: '',
-  healthCertificateRef: '', transportWater: { tempC: '', pH: '', doMgL: '' }, cause: 'unknown', causeText: '', necropsy: false, reason: '',
-  destination: '', correctsId: '', occurredAt: '', note: '', ...start,
+  kind: 'mortality',
+  batchId: '',
+  fromTankId: '',
+  toTankId: '',
+  tankId: '',
+  count: '',
+  delta: '',
+  meanWeightG: '',
+  origin: '',
+  permitRef: '',
+  healthCertificateRef: '',
+  transportWater: { tempC: '', pH: '', doMgL: '' },
+  cause: 'unknown',
+  causeText: '',
+  necropsy: false,
+  reason: '',
+  destination: '',
+  correctsId: '',
+  occurredAt: '',
+  note: '',
+  ...start,
 })
 
 /** "2,4" and "2.4" are both numbers; an empty field is left out (and the schema says it is needed, when it is). */
@@ -42,7 +60,9 @@ const nullable = (text: string) => num(text) ?? null
 /** The values the chosen kind needs, in the shape the server reads; wall time is the facility's. */
 export function movementInputFrom(v: MovementFormValues, timeZone: string): Record<string, unknown> {
   const common = {
-    kind: v.kind, batchId: num(v.batchId), note: optional(v.note),
+    kind: v.kind,
+    batchId: num(v.batchId),
+    note: optional(v.note),
     occurredAt: v.occurredAt ? (DateTime.fromISO(v.occurredAt, { zone: timeZone }).toISO() ?? v.occurredAt) : undefined,
   }
   const moved = { fromTankId: num(v.fromTankId), count: num(v.count) }
@@ -51,8 +71,14 @@ export function movementInputFrom(v: MovementFormValues, timeZone: string): Reco
       const water = { tempC: nullable(v.transportWater.tempC), pH: nullable(v.transportWater.pH), doMgL: nullable(v.transportWater.doMgL) }
       const anyWater = Object.values(water).some((w) => w !== null)
       return {
-        ...common, toTankId: num(v.toTankId), count: num(v.count), meanWeightG: num(v.meanWeightG), origin: v.origin,
-        permitRef: optional(v.permitRef), healthCertificateRef: optional(v.healthCertificateRef), transportWater: anyWater ? water : undefined,
+        ...common,
+        toTankId: num(v.toTankId),
+        count: num(v.count),
+        meanWeightG: num(v.meanWeightG),
+        origin: v.origin,
+        permitRef: optional(v.permitRef),
+        healthCertificateRef: optional(v.healthCertificateRef),
+        transportWater: anyWater ? water : undefined,
       }
     }
     case 'transfer':

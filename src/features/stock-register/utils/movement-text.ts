@@ -32,7 +32,11 @@ export function causeText(m: Pick<Movement, 'cause' | 'causeText'>): string | nu
 /** The facts a committee asks about, one short phrase each. */
 export function movementFacts(m: Movement): string[] {
   const water = m.transportWater
-  const waterText = water && [water.tempC !== null && `${water.tempC} °C`, water.pH !== null && `pH ${water.pH}`, water.doMgL !== null && `DO ${water.doMgL} mg/L`].filter(Boolean).join(', ')
+  const waterText =
+    water &&
+    [water.tempC !== null && `${water.tempC} °C`, water.pH !== null && `pH ${water.pH}`, water.doMgL !== null && `DO ${water.doMgL} mg/L`]
+      .filter(Boolean)
+      .join(', ')
   return [
     m.meanWeightG !== null && `mean ${m.meanWeightG} g`,
     m.origin && `from ${m.origin}`,

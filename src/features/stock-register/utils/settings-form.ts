@@ -10,5 +10,12 @@ export const toSettingsForm = (s: StockSettings): SettingsFormValues => {
 
 export const toSettingsInput = ({ causes, ...rest }: SettingsFormValues): StockSettings => ({
   ...rest,
-  mortalityCauses: [...new Set(causes.split('\n').map((c) => c.trim()).filter(Boolean))],
+  mortalityCauses: [
+    ...new Set(
+      causes
+        .split('\n')
+        .map((c) => c.trim())
+        .filter(Boolean),
+    ),
+  ],
 })

@@ -28,11 +28,25 @@ export function BandLegend({ limit, systemLabel }: { limit: TankLimit; systemLab
         <LegendItem mark={swatch(CHART_COLOURS.critical)}>Critical band: {criticalText(limit, limit.unit)}</LegendItem>
       )}
       {!limited && <li>No limits set for this reading.</li>}
-      <LegendItem mark={mark(<><line x1="0" y1="8" x2="24" y2="8" stroke={CHART_COLOURS.tank} strokeWidth="2" /><DotShape band="ok" cx={12} cy={8} /></>)}>
+      <LegendItem
+        mark={mark(
+          <>
+            <line x1="0" y1="8" x2="24" y2="8" stroke={CHART_COLOURS.tank} strokeWidth="2" />
+            <DotShape band="ok" cx={12} cy={8} />
+          </>,
+        )}
+      >
         This tank
       </LegendItem>
       {systemLabel && (
-        <LegendItem mark={mark(<><line x1="0" y1="8" x2="24" y2="8" stroke={CHART_COLOURS.system} strokeWidth="2" strokeDasharray="4 3" /><DotShape band="ok" cx={12} cy={8} hollow /></>)}>
+        <LegendItem
+          mark={mark(
+            <>
+              <line x1="0" y1="8" x2="24" y2="8" stroke={CHART_COLOURS.system} strokeWidth="2" strokeDasharray="4 3" />
+              <DotShape band="ok" cx={12} cy={8} hollow />
+            </>,
+          )}
+        >
           {systemLabel} (dashed, hollow marks)
         </LegendItem>
       )}

@@ -3,10 +3,18 @@ import type { TankOverview } from '#shared/schemas/tank-page'
 import { formatLocalDay, formatWhen } from '../utils/format'
 
 const STATUS: Record<TankOverview['batches'][number]['status'], string> = {
-  quarantine: 'In quarantine', active: 'Active', dispatched: 'Dispatched', ended: 'Ended',
+  quarantine: 'In quarantine',
+  active: 'Active',
+  dispatched: 'Dispatched',
+  ended: 'Ended',
 }
 const RECORD: Record<string, string> = {
-  transport_box: 'Transport box check', transport_water: 'Transport water test', weighing: 'Weighing', bath: 'Bath', note: 'Note', review: 'Review',
+  transport_box: 'Transport box check',
+  transport_water: 'Transport water test',
+  weighing: 'Weighing',
+  bath: 'Bath',
+  note: 'Note',
+  review: 'Review',
 }
 
 /** Every batch this tank has held, newest arrival first, and the latest entries on their records. */
@@ -20,10 +28,15 @@ export function BatchHistory({ overview, timeZone }: { overview: TankOverview; t
         {batches.map((b) => (
           <li key={b.id} className="rounded-xl border border-tide-200 bg-white p-3 text-sm">
             <p className="flex flex-wrap items-baseline justify-between gap-2">
-              <Link to={`/batches/${b.id}`} className="text-base font-bold text-tide-900 underline">{b.code}</Link>
+              <Link to={`/batches/${b.id}`} className="text-base font-bold text-tide-900 underline">
+                {b.code}
+              </Link>
               <span className="font-semibold text-tide-700">{STATUS[b.status]}</span>
             </p>
-            <p className="text-tide-800">{b.species}{b.origin && ` · from ${b.origin}`}</p>
+            <p className="text-tide-800">
+              {b.species}
+              {b.origin && ` · from ${b.origin}`}
+            </p>
             <p className="text-tide-700">
               Arrived {formatLocalDay(b.arrivalDate)} · {b.count} fish · mean {b.meanWeightG} g
             </p>

@@ -13,9 +13,15 @@ export function EventList({ events }: { events: TankOverview['events'] }) {
       {events.map((e) => (
         <li key={e.id} className="flex flex-wrap items-center gap-x-3 gap-y-0.5 px-3 py-2 text-sm">
           <CalendarRange aria-hidden className="size-4 text-tide-600" />
-          <span className="w-36 tabular-nums text-tide-700">{formatLocalDay(e.localStart)} {e.localStart.slice(11, 16)}</span>
-          <Link to={`/events/${e.id}`} className="font-semibold text-tide-900 underline">{e.title}</Link>
-          <span className="text-tide-700">{e.kind} · {STATUS[e.status] ?? e.status}</span>
+          <span className="w-36 tabular-nums text-tide-700">
+            {formatLocalDay(e.localStart)} {e.localStart.slice(11, 16)}
+          </span>
+          <Link to={`/events/${e.id}`} className="font-semibold text-tide-900 underline">
+            {e.title}
+          </Link>
+          <span className="text-tide-700">
+            {e.kind} · {STATUS[e.status] ?? e.status}
+          </span>
         </li>
       ))}
     </ul>

@@ -13,10 +13,7 @@ interface FlaggedReadingsProps {
 
 /** The chart's flagged marks as text, newest first, for anyone who cannot see the chart. */
 export function FlaggedReadings({ limit, tank, system, systemLabel, timeZone }: FlaggedReadingsProps) {
-  const flagged = [
-    ...tank.map((p) => ({ ...p, where: 'This tank' })),
-    ...system.map((p) => ({ ...p, where: systemLabel ?? 'System' })),
-  ]
+  const flagged = [...tank.map((p) => ({ ...p, where: 'This tank' })), ...system.map((p) => ({ ...p, where: systemLabel ?? 'System' }))]
     .filter((p) => p.band !== 'ok')
     .sort((a, b) => b.t - a.t)
   if (flagged.length === 0) return <p className="text-sm text-tide-700">No flagged {limit.name.toLowerCase()} readings in this range.</p>

@@ -13,10 +13,18 @@ export function LimitsTable({ limits }: { limits: TankLimit[] }) {
         <caption className="sr-only">Limits that apply at this tank</caption>
         <thead className="bg-tide-100 text-tide-800">
           <tr>
-            <th scope="col" className="px-3 py-2">Reading</th>
-            <th scope="col" className="px-3 py-2">Ok</th>
-            <th scope="col" className="px-3 py-2">Critical when</th>
-            <th scope="col" className="px-3 py-2">Set for</th>
+            <th scope="col" className="px-3 py-2">
+              Reading
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Ok
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Critical when
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Set for
+            </th>
           </tr>
         </thead>
         <tbody>

@@ -5,7 +5,9 @@ export function PageSection({ title, children }: { title: string; children: Reac
   const id = useId()
   return (
     <section aria-labelledby={id} className="flex min-w-0 flex-col gap-2">
-      <h2 id={id} className="text-xl font-bold text-tide-900">{title}</h2>
+      <h2 id={id} className="text-xl font-bold text-tide-900">
+        {title}
+      </h2>
       {children}
     </section>
   )

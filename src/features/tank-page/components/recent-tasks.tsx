@@ -16,7 +16,9 @@ export function RecentTasks({ tasks }: { tasks: Task[] }) {
             <span className="flex min-w-0 flex-1 flex-col gap-0.5">
               <span className="font-semibold text-tide-900">{t.title}</span>
               <span className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
-                <span className="tabular-nums text-tide-700">{formatLocalDay(t.localDate)}, {t.localTime}</span>
+                <span className="tabular-nums text-tide-700">
+                  {formatLocalDay(t.localDate)}, {t.localTime}
+                </span>
                 <TaskStatusLabel status={t.status} />
                 {t.flag && <BandBadge band={t.flag} prefix="Flag" />}
                 {t.completedByName && <span className="text-tide-700">by {t.completedByName}</span>}

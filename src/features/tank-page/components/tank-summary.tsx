@@ -10,7 +10,9 @@ export function TankSummary({ overview }: { overview: TankOverview }) {
   return (
     <div className="flex flex-col gap-3 rounded-xl border border-tide-200 bg-white p-4 md:flex-row md:items-start md:justify-between">
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm md:grid-cols-[auto_1fr_auto_1fr]">
-        <dt className="flex items-center gap-1 font-semibold text-tide-800"><MapPin aria-hidden className="size-4" /> Area</dt>
+        <dt className="flex items-center gap-1 font-semibold text-tide-800">
+          <MapPin aria-hidden className="size-4" /> Area
+        </dt>
         <dd className="text-tide-900">
           {area ? `${area.name} (${area.code})` : 'Unknown area'}
           {area?.quarantine && (
@@ -19,10 +21,14 @@ export function TankSummary({ overview }: { overview: TankOverview }) {
             </span>
           )}
         </dd>
-        <dt className="flex items-center gap-1 font-semibold text-tide-800"><Network aria-hidden className="size-4" /> System</dt>
+        <dt className="flex items-center gap-1 font-semibold text-tide-800">
+          <Network aria-hidden className="size-4" /> System
+        </dt>
         <dd className="text-tide-900">{system ? `${system.name} (${system.code})` : 'Stand-alone, no shared water'}</dd>
         <dt className="font-semibold text-tide-800">Kind</dt>
-        <dd className="text-tide-900">{tank.kind === 'bin' ? 'Bin' : 'Tank'}, {litres.format(tank.volumeL)} L</dd>
+        <dd className="text-tide-900">
+          {tank.kind === 'bin' ? 'Bin' : 'Tank'}, {litres.format(tank.volumeL)} L
+        </dd>
         <dt className="font-semibold text-tide-800">In use</dt>
         <dd className="text-tide-900">{tank.inUse ? 'Yes' : 'No, empty or resting'}</dd>
       </dl>

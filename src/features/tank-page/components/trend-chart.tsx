@@ -25,14 +25,12 @@ const dot = (hollow: boolean) =>
 
 /** One parameter over time: the ok, watch and critical bands shaded behind the tank's and the system's readings. */
 export function TrendChart({ limit, tank, system, from, to, timeZone }: TrendChartProps) {
-  const { domain, ticks } = valueScale([...tank, ...system].map((p) => p.value), limit)
+  const { domain, ticks } = valueScale(
+    [...tank, ...system].map((p) => p.value),
+    limit,
+  )
   return (
-    <ComposedChart
-      responsive
-      style={{ width: '100%', height: 240 }}
-      margin={{ top: 8, right: 12, bottom: 4, left: 0 }}
-      title={`${limit.name} over time`}
-    >
+    <ComposedChart responsive style={{ width: '100%', height: 240 }} margin={{ top: 8, right: 12, bottom: 4, left: 0 }} title={`${limit.name} over time`}>
       <CartesianGrid stroke={CHART_COLOURS.grid} strokeDasharray="3 3" />
       <XAxis
         type="number"
@@ -72,7 +70,16 @@ export function TrendChart({ limit, tank, system, from, to, timeZone }: TrendCha
         />
       )}
       {tank.length > 0 && (
-        <Line data={tank} dataKey="value" name="Tank" stroke={CHART_COLOURS.tank} strokeWidth={2} dot={dot(false)} activeDot={false} isAnimationActive={false} />
+        <Line
+          data={tank}
+          dataKey="value"
+          name="Tank"
+          stroke={CHART_COLOURS.tank}
+          strokeWidth={2}
+          dot={dot(false)}
+          activeDot={false}
+          isAnimationActive={false}
+        />
       )}
     </ComposedChart>
   )

@@ -29,7 +29,9 @@ export function TrendsSection({ readings, parameters, selected, days, timeZone, 
         <RangeChoice value={days} onChange={onDaysChange} />
       </div>
       {parameters.length === 0 ? (
-        <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">No readings at this tank or its system in the last {days} days.</p>
+        <p className="rounded-xl border border-dashed border-tide-300 bg-white p-4 text-tide-700">
+          No readings at this tank or its system in the last {days} days.
+        </p>
       ) : (
         <>
           <ParameterChoice parameters={parameters} selected={selected} onChange={onSelectedChange} />
