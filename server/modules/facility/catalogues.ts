@@ -42,9 +42,11 @@ export const tanks = catalogue(TankEntity, TankInputSchema, 'tank', {
     await mustExist(AreaEntity, t.areaId, 'areaId', 'area')
     await mustExist(SystemEntity, t.systemId, 'systemId', 'system')
   },
+  // A deleted tank's untouched future tasks go first, so only its history (record 13f) can keep it.
+  beforeRemove: (tank) => removeUntouchedFutureTasks({ tankId: tank.id }),
   // An emptied tank loses its future untouched tasks; a refilled one gets them back.
   onChange: async (before, after) => {
-    if (before && (!after || (before.inUse && !after.inUse))) await removeUntouchedFutureTasks({ tankId: before.id })
+    if (before && after && before.inUse && !after.inUse) await removeUntouchedFutureTasks({ tankId: before.id })
     if (after && after.inUse && (!before || !before.inUse)) await materialiseForTank(after.id)
     if (before && !after) {
       // A deleted tank leaves the batches that listed it.

@@ -61,6 +61,7 @@ export async function updateRoutine(id: number, { version, ...data }: ParsedUpda
 export async function deleteRoutine(id: number): Promise<void> {
   await audit('routine', id, 'delete', await getRoutine(id), null)
   await removeUntouchedFutureTasks({ routineId: id })
-  // Past and kept tasks stay as records; they keep the routine id for history.
+  // Past and kept tasks stay as records; the database clears their routine id (ON DELETE SET NULL,
+  // record 13f) and the audit row above keeps what the routine was.
   await repo().delete(id)
 }

@@ -11,6 +11,7 @@ import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { notePlanningError, routinesToPlan } from '../routines/routine-planning'
 import { TaskEntity, type TaskRow } from './task.entity'
 import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
+import { UNTOUCHED_TASK } from './untouched'
 
 export const DEFAULT_HORIZON_DAYS = RULE_LIMITS.horizonDays
 // Rows per INSERT: ~400 bytes each, so a statement stays far below max_allowed_packet.
@@ -207,7 +208,7 @@ export async function removeUntouchedFutureTasks(where: { routineId?: number; ta
     .from(TaskEntity)
     .where('dueAt > :now', { now })
     .andWhere("status IN ('planned', 'open')")
-    .andWhere('assignedManually = 0 AND edited = 0 AND completedAt IS NULL')
+    .andWhere(UNTOUCHED_TASK)
   if (where.routineId !== undefined) qb.andWhere('routineId = :routineId', { routineId: where.routineId })
   if (where.tankId !== undefined) qb.andWhere('tankId = :tankId AND routineId IS NOT NULL', { tankId: where.tankId })
   const result = await qb.execute()
