@@ -1,15 +1,13 @@
 import { randomUUID } from 'node:crypto'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import type request from 'supertest'
-import { DataSource, In } from 'typeorm'
-import { createDataSource, db } from '#server/db/data-source'
-import { migrations } from '#server/db/migrations'
+import { In } from 'typeorm'
+import { db } from '#server/db/data-source'
 import { foreignKeyConflict } from '#server/db/unique-conflicts'
-import { ForeignKeys1796560000000 } from '#server/db/migrations/1796560000000-ForeignKeys'
 import { CompletionEntity, PhotoEntity } from '#server/modules/completions/completion.entities'
 import { PersonEntity } from '#server/modules/people/person.entity'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
-import { dropOwnDatabase } from '#tests/support/own-database'
+import { keysIn, ruleOf } from '#tests/support/foreign-keys'
 import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
@@ -24,23 +22,6 @@ const NOT_A_REFERENCE = new Set([
   'text_quotas.summaryProviderId',
 ])
 
-interface KeyRow {
-  TABLE_NAME: string
-  COLUMN_NAME: string
-  REFERENCED_TABLE_NAME: string
-  DELETE_RULE: string
-}
-const keysIn = (ds: DataSource): Promise<KeyRow[]> =>
-  ds.query(
-    `SELECT k.TABLE_NAME, k.COLUMN_NAME, k.REFERENCED_TABLE_NAME, r.DELETE_RULE
-       FROM information_schema.KEY_COLUMN_USAGE k
-       JOIN information_schema.REFERENTIAL_CONSTRAINTS r ON r.CONSTRAINT_SCHEMA = k.CONSTRAINT_SCHEMA AND r.CONSTRAINT_NAME = k.CONSTRAINT_NAME
-      WHERE k.TABLE_SCHEMA = DATABASE() AND k.REFERENCED_TABLE_NAME IS NOT NULL`,
-  )
-const ruleOf = (keys: KeyRow[], table: string, column: string) => {
-  const key = keys.find((k) => k.TABLE_NAME === table && k.COLUMN_NAME === column)
-  return key && `${key.REFERENCED_TABLE_NAME} ${key.DELETE_RULE}`
-}
 const dbError = (err: unknown) => (err as { driverError?: { code?: string } }).driverError?.code ?? (err as { code?: string }).code
 
 let t: TestApp
@@ -156,56 +137,5 @@ describe('foreign keys', () => {
         [planned[0].id, null],
       ].sort(),
     )
-  })
-})
-
-describe('adding the keys to a database that already has rows', () => {
-  const keysMigration = migrations.indexOf(ForeignKeys1796560000000)
-  let name: string
-  let before: DataSource
-  let full: DataSource
-  beforeAll(async () => {
-    // A database migrated up to just before the keys, as a deployment of the previous release is.
-    name = `${t.config.db.database}_fk_${randomUUID().slice(0, 8)}`
-    await t.dataSource.query(`CREATE DATABASE \`${name}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`)
-    full = createDataSource({ ...t.config.db, database: name })
-    before = new DataSource({ ...full.options, migrations: migrations.slice(0, keysMigration) })
-    await before.initialize()
-    await before.runMigrations()
-    await full.initialize()
-  })
-  afterAll(async () => {
-    await before?.destroy()
-    await full?.destroy()
-    if (name) await dropOwnDatabase(t.config.db, name)
-  })
-
-  const insertTask = (routineId: number) =>
-    before.query(
-      `INSERT INTO tasks (routineId, title, category, instructions, targetKind, targetId, localDate, localStart, occurrenceStart, dueAt, windowStartAt, graceUntil, durationMinutes, status, requiredReadings)
-       VALUES (?, 'Old check', 'welfare', '', 'facility', 0, '2026-01-05', '2026-01-05T07:30:00', '2026-01-05T07:30:00', NOW(3), NOW(3), NOW(3), 5, 'done', '[]')`,
-      [routineId],
-    )
-
-  test('a completion pointing at nothing stops the migration with the table and count named, and nothing changes', async () => {
-    await insertTask(424242)
-    await before.query("INSERT INTO completions (id, taskId, personId, outcome, doneAt) VALUES (UUID(), 987654, 987654, 'done', NOW(3))")
-    await expect(full.runMigrations()).rejects.toThrow(/completions\.taskId: 1 row\(s\) point at missing tasks.*completions\.personId: 1 row/)
-    expect(await keysIn(full)).toEqual([])
-    // The harmless orphan was not touched either: the refused run changed nothing.
-    expect(await full.query('SELECT routineId FROM tasks')).toEqual([{ routineId: 424242 }])
-  })
-
-  test('once the completion is repaired, a task of a long-deleted routine loses the pointer and the keys go on; down takes them off again', async () => {
-    await full.query('DELETE FROM completions WHERE taskId = 987654')
-    await full.runMigrations()
-    expect(await full.query('SELECT routineId FROM tasks')).toEqual([{ routineId: null }])
-    const added = (await keysIn(full)).length
-    expect(added).toBe((await keysIn(t.dataSource)).length)
-
-    while ((await full.query('SELECT 1 FROM migrations WHERE name = ?', ['ForeignKeys1796560000000'])).length) await full.undoLastMigration()
-    expect(await keysIn(full)).toEqual([])
-    await full.runMigrations()
-    expect((await keysIn(full)).length).toBe(added)
   })
 })
