@@ -33,6 +33,18 @@ beforeAll(async () => {
 })
 afterAll(() => t.close())
 
+/** A new tank with a daily routine on it, so it has planned tasks. */
+async function tankOnARoutine() {
+  const { tanks } = await makeAreaWithTanks(1)
+  const routine = (
+    await manager
+      .post('/api/routines')
+      .send(routineInput({ targetIds: [tanks[0].id] }))
+      .expect(201)
+  ).body as { id: number }
+  return { tanks, routine }
+}
+
 describe('foreign keys', () => {
   test('the records a history depends on are held by keys in the database', async () => {
     const keys = await keysIn(t.dataSource)
@@ -75,11 +87,7 @@ describe('foreign keys', () => {
   })
 
   test('a tank with a finished task in its history cannot be deleted; the manager is told it is in use', async () => {
-    const { tanks } = await makeAreaWithTanks(1)
-    await manager
-      .post('/api/routines')
-      .send(routineInput({ targetIds: [tanks[0].id] }))
-      .expect(201)
+    const { tanks } = await tankOnARoutine()
     await makeTankTask(tanks[0], { status: 'done', completedAt: new Date(), dueAt: new Date(Date.now() - 3_600_000) })
     const tasksBefore = await db().getRepository(TaskEntity).countBy({ tankId: tanks[0].id })
     const refused = await manager.delete(`/api/tanks/${tanks[0].id}`).expect(409)
@@ -90,11 +98,7 @@ describe('foreign keys', () => {
   })
 
   test('a tank with only planned tasks can still be deleted; its planned tasks go with it', async () => {
-    const { tanks } = await makeAreaWithTanks(1)
-    await manager
-      .post('/api/routines')
-      .send(routineInput({ targetIds: [tanks[0].id] }))
-      .expect(201)
+    const { tanks } = await tankOnARoutine()
     expect(await db().getRepository(TaskEntity).countBy({ tankId: tanks[0].id })).toBeGreaterThan(0)
     await manager.delete(`/api/tanks/${tanks[0].id}`).expect(204)
     expect(await db().getRepository(TaskEntity).countBy({ tankId: tanks[0].id })).toBe(0)
@@ -110,13 +114,7 @@ describe('foreign keys', () => {
   })
 
   test('deleting a routine keeps its finished tasks and the planned one with a photo, clearing their routine id', async () => {
-    const { tanks } = await makeAreaWithTanks(1)
-    const routine = (
-      await manager
-        .post('/api/routines')
-        .send(routineInput({ targetIds: [tanks[0].id] }))
-        .expect(201)
-    ).body
+    const { tanks, routine } = await tankOnARoutine()
     const done = await makeTankTask(tanks[0], { routineId: routine.id, status: 'done', completedAt: new Date(), dueAt: new Date(Date.now() - 3_600_000) })
     const planned = await db()
       .getRepository(TaskEntity)
