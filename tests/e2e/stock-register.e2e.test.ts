@@ -35,7 +35,8 @@ describe('the stock register on the tank page', () => {
     await form.getByRole('button', { name: 'Record movement' }).click()
     await expect.poll(() => register.getByTestId('stock-count').textContent()).toBe('300')
     const entries = register.getByRole('list', { name: 'Stock register, newest first' }).getByRole('listitem')
-    expect(await entries.first().textContent()).toContain(`${first.code} → ${second.code}`)
+    // The count and the register list are separate answers: wait for the list to show the transfer too.
+    await expect.poll(() => entries.first().textContent()).toContain(`${first.code} → ${second.code}`)
     expect(await entries.first().textContent()).toContain('−200 fish')
 
     // More dead than the tank holds: the server's words show, and every field keeps what was typed.
@@ -60,6 +61,7 @@ describe('the stock register on the tank page', () => {
     await form.getByLabel('Number of fish').fill('5')
     await form.getByRole('button', { name: 'Record movement' }).click()
     await expect.poll(() => register.getByTestId('stock-count').textContent()).toBe('295')
+    await expect.poll(() => entries.count()).toBe(3)
 
     // A correction points at the entry it corrects, and that entry says it was corrected.
     const mortalityId = (await entries.first().getAttribute('id'))!.replace('movement-', '')
@@ -69,8 +71,8 @@ describe('the stock register on the tank page', () => {
     await form.getByLabel('Reason').fill('Two of the five recovered and swam off')
     await form.getByRole('button', { name: 'Record movement' }).click()
     await expect.poll(() => register.getByTestId('stock-count').textContent()).toBe('297')
-    expect(await entries.first().textContent()).toContain(`Corrects #${mortalityId}`)
-    expect(await register.locator(`#movement-${mortalityId}`).textContent()).toContain('Corrected by')
+    await expect.poll(() => entries.first().textContent()).toContain(`Corrects #${mortalityId}`)
+    await expect.poll(() => register.locator(`#movement-${mortalityId}`).textContent()).toContain('Corrected by')
     await screenshot(page, 'stock-register-desktop')
     await context.close()
 
