@@ -76,6 +76,9 @@ async function mouseDrag(page: Page, from: Locator, to: Locator) {
   await page.mouse.down()
   await page.mouse.move(a.x + a.width / 2 + 12, a.y + 24, { steps: 4 })
   await page.mouse.move(b.x + b.width / 2, b.y + Math.min(b.height / 2, 60), { steps: 12 })
+  // The board may scroll itself while a card is held near an edge: aim again at where the target is now.
+  const c = (await to.boundingBox())!
+  await page.mouse.move(c.x + c.width / 2, c.y + Math.min(c.height / 2, 60), { steps: 3 })
   await page.mouse.up()
 }
 
@@ -302,13 +305,7 @@ describe('a full day on the board', () => {
     await screenshot(page, 'board-full-day-scrolled')
 
     const unassigned = page.getByRole('region', { name: 'Unassigned', exact: true })
-    const a = (await card.boundingBox())!
-    const b = (await unassigned.boundingBox())!
-    await page.mouse.move(a.x + a.width / 2, a.y + 16)
-    await page.mouse.down()
-    await page.mouse.move(a.x + a.width / 2 + 12, a.y + 24, { steps: 4 })
-    await page.mouse.move(b.x + b.width / 2, b.y + 80, { steps: 16 })
-    await page.mouse.up()
+    await mouseDrag(page, card, unassigned)
     await unassigned.locator(`li[data-task-id="${last.id}"]`).waitFor()
     await techColumn.getByText(`${CARDS - 1} tasks`).waitFor()
     // The column counts the card out as soon as it is dropped; the move commits when its request answers.
