@@ -1,5 +1,4 @@
 import { EntitySchema } from 'typeorm'
-import { references } from '../../db/foreign-keys'
 
 export interface PushSubscriptionRow {
   id: number
@@ -18,7 +17,7 @@ export const PushSubscriptionEntity = new EntitySchema<PushSubscriptionRow>({
   tableName: 'push_subscriptions',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int', foreignKey: references('Person') },
+    personId: { type: 'int' },
     endpointHash: { type: 'char', length: 64 },
     endpoint: { type: 'varchar', length: 1000 },
     p256dh: { type: 'varchar', length: 200 },

@@ -1,7 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { SHIFT_KINDS } from '#shared/schemas/roster'
 import { createdAtColumn } from '../../db/timestamps'
-import { references } from '../../db/foreign-keys'
 
 export interface ShiftRow {
   id: number
@@ -17,7 +16,7 @@ export const ShiftEntity = new EntitySchema<ShiftRow>({
   tableName: 'shifts',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int', foreignKey: references('Person') },
+    personId: { type: 'int' },
     date: { type: 'varchar', length: 10 },
     start: { type: 'varchar', length: 5 },
     end: { type: 'varchar', length: 5 },
@@ -40,7 +39,7 @@ export const OnCallEntity = new EntitySchema<OnCallRow>({
   tableName: 'on_call_duties',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int', foreignKey: references('Person') },
+    personId: { type: 'int' },
     fromDate: { type: 'varchar', length: 10 },
     toDate: { type: 'varchar', length: 10 },
     startsAt: { type: 'datetime', precision: 3 },
@@ -61,7 +60,7 @@ export const HandoverNoteEntity = new EntitySchema<HandoverNoteRow>({
   tableName: 'handover_notes',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int', foreignKey: references('Person') },
+    personId: { type: 'int' },
     text: { type: 'text' },
     createdAt: createdAtColumn,
   },
