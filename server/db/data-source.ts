@@ -2,6 +2,7 @@ import 'reflect-metadata'
 import { AsyncLocalStorage } from 'node:async_hooks'
 import { DataSource, type EntityManager } from 'typeorm'
 import type { AppConfig } from '../lib/config'
+import { CacheInvalidator, invalidateAll } from './cache-generations'
 import { entities } from './entities'
 import { migrations } from './migrations'
 
@@ -15,6 +16,7 @@ export function createDataSource(db: AppConfig['db']): DataSource {
     database: db.database,
     entities,
     migrations,
+    subscribers: [CacheInvalidator],
     synchronize: false,
     // Dates cross the wire as UTC; the server also runs with --default-time-zone=+00:00.
     timezone: 'Z',
@@ -54,6 +56,8 @@ export function withAmbient<T>(scope: AmbientTransaction, work: () => T): T {
 /** The process-wide connection used by services; set once by server/index.ts or a test. */
 export function setDataSource(ds: DataSource) {
   current = ds
+  // Copies read from another database (a test's own) must not be served from this one.
+  invalidateAll()
   if (ds) joinAmbientOnTransaction(ds.manager)
 }
 
@@ -74,6 +78,16 @@ export function db(): EntityManager {
   const scope = ambient.getStore()
   if (scope?.open) return scope.manager
   return dataSource().manager
+}
+
+/**
+ * Runs `work` inside the transaction in progress (the request's or the scheduler step's), or in a
+ * new one when there is none (a script, a test calling a service). Unlike `db().transaction`, it
+ * adds no savepoint, two round trips, to a request that already commits or rolls back as one.
+ */
+export function inTransaction<T>(work: () => Promise<T>): Promise<T> {
+  if (ambient.getStore()?.open) return work()
+  return dataSource().manager.transaction(() => work())
 }
 
 /**

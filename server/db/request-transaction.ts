@@ -1,4 +1,5 @@
 import type { Request, RequestHandler, Response } from 'express'
+import type { QueryRunner } from 'typeorm'
 import { crashPoint } from '../lib/crash-point'
 import { logger } from '../lib/logger'
 import { isDatabaseDown } from './database-errors'
@@ -17,8 +18,7 @@ export function requestTransaction(unwrapped: RegExp[]): RequestHandler {
   return (req, res, next) => {
     if (!WRITES.has(req.method) || unwrapped.some((path) => path.test(req.path))) return next()
     const runner = dataSource().createQueryRunner()
-    // Read committed: each statement sees what others committed (a lost race names its winner).
-    runner.startTransaction('READ COMMITTED').then(
+    startReadCommitted(runner).then(
       () => {
         const scope: AmbientTransaction = { manager: runner.manager, open: true }
         holdResponseUntilSettled(req, res, async (commit) => {
@@ -41,6 +41,23 @@ export function requestTransaction(unwrapped: RegExp[]): RequestHandler {
       },
     )
   }
+}
+
+/** Pooled connections whose session already reads committed. */
+const readCommittedConnections = new WeakSet<object>()
+
+/**
+ * Read committed: each statement sees what others committed (a lost race names its winner). Set
+ * once per pooled connection for its session rather than before every transaction, which would
+ * cost every write request one more round trip. Transactions that ask for another level still get it.
+ */
+async function startReadCommitted(runner: QueryRunner) {
+  const connection = (await runner.connect()) as object
+  if (!readCommittedConnections.has(connection)) {
+    await runner.query('SET SESSION TRANSACTION ISOLATION LEVEL READ COMMITTED')
+    readCommittedConnections.add(connection)
+  }
+  await runner.startTransaction()
 }
 
 type End = Response['end']

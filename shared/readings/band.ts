@@ -14,7 +14,7 @@ export function bandFor(value: number, limit: Bounds | undefined): Band {
 }
 
 /** The limit that applies to one place: a batch's override wins over its system's, which wins over the facility's. */
-export function pickLimit(limits: Limit[], parameterKey: string, where: { systemId: number | null; batchIds: number[] }): Limit | undefined {
+export function pickLimit(limits: readonly Limit[], parameterKey: string, where: { systemId: number | null; batchIds: number[] }): Limit | undefined {
   const own = limits.filter((l) => l.parameterKey === parameterKey)
   return (
     own.find((l) => l.scope === 'batch' && l.scopeId != null && where.batchIds.includes(l.scopeId)) ??

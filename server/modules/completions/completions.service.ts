@@ -4,11 +4,13 @@ import type { CompletionResult, ParsedCompletionInput } from '#shared/schemas/co
 import { MORTALITY_READING } from '#shared/schemas/stock'
 import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
-import { db } from '../../db/data-source'
+import { db, inTransaction } from '../../db/data-source'
+import { duplicateKeyName } from '../../db/database-errors'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { audit } from '../audit/audit.service'
 import { getPersonRow } from '../people/people.service'
 import { toPerson } from '../people/person.mapper'
+import { personNames } from '../people/person-reads'
 import { assessRoundMortality, writeRoundMortality } from '../stock/round-mortality'
 import { closeTask, recheckOf, type TaskRow } from '../tasks/task-writes.service'
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
@@ -24,18 +26,21 @@ import { assertMayComplete } from './who-may-complete'
  * possible, derived values worked out, each reading banded against the limits for that place,
  * a flag and a recheck when anything is out of the ok range, and exactly one winner when two
  * people complete the same task.
+ *
+ * Round trips are the cost (record 16e): the task is read once, the place's rules come from the
+ * process's copies, the answer is built from the rows in hand, and everything the completion
+ * writes (the claim, its record and readings, recheck, alert, proposals, audit row, outbox rows
+ * and the stored answer) joins the request's one transaction.
  */
 export async function completeTask(taskId: number, person: Person, data: ParsedCompletionInput): Promise<CompletionResult> {
-  const replay = await db().getRepository(CompletionEntity).findOneBy({ id: data.completionId })
-  if (replay) {
-    if (replay.taskId !== taskId) throw conflict('That completion id was already used for another task.')
-    // A retry of a committed completion gets the stored answer; completions stored before the
-    // answer joined their commit may have none: answer from the record instead.
-    return (replay.response as CompletionResult | null) ?? answerFromRecord(replay)
-  }
   const task = await getTaskRow(taskId)
-  // A finished task answers 409 with who finished it, before any question of whose it was.
-  if (person.role !== 'observer') await assertStillOpen(task)
+  if (isFinished(task)) {
+    // A retry of a committed completion finds its task finished and gets the first answer.
+    const replay = await replayOf(data.completionId, taskId)
+    if (replay) return replay
+    // A finished task answers 409 with who finished it, before any question of whose it was.
+    if (person.role !== 'observer') await assertStillOpen(task)
+  }
   assertMayComplete(task, person)
   if (data.version !== undefined && data.version !== task.version) {
     throw conflict('This task changed since you opened it (it may have been moved or reassigned). Check it and try again.', { currentVersion: task.version })
@@ -51,7 +56,7 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
   const flag = data.outcome === 'done' ? worstBand([judged.flag, mortality?.band ?? 'ok']) : 'ok'
   const lateMinutes = doneAt > task.dueAt ? Math.floor((doneAt.getTime() - task.dueAt.getTime()) / 60_000) : null
 
-  const result = await db().transaction(async (manager) => {
+  const result = await inTransaction(async () => {
     const closing = {
       outcome: data.outcome,
       flag: flag === 'ok' ? null : flag,
@@ -61,7 +66,13 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
       assigneeId: task.assigneeId ?? performer.id,
     }
     if (!(await closeTask(task, closing))) return null
-    await manager.getRepository(CompletionEntity).insert({
+    // The claim matched the version read above, so the row now is that one with the closing applied.
+    const { outcome, ...closed } = closing
+    const updated: TaskRow = { ...task, ...closed, status: outcome, version: task.version + 1 }
+    // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
+    const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
+    const response: CompletionResult = { task: toTask(updated, await loadTaskContext([updated])), readings: judged.readings, recheckTaskId, notes: judged.notes }
+    await insertCompletion({
       id: data.completionId,
       taskId: task.id,
       personId: performer.id,
@@ -71,49 +82,71 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
       note: data.note ?? null,
       doneAt,
       lateMinutes,
-      response: null as never,
+      response,
     })
     if (judged.readings.length) {
-      await manager.getRepository(ReadingEntity).insert(
-        judged.readings.map((r) => ({
-          completionId: data.completionId,
-          taskId: task.id,
-          tankId: context.tankId,
-          systemId: context.systemId,
-          parameterKey: r.parameterKey,
-          value: r.value,
-          unit: r.unit,
-          band: r.band,
-          derived: r.derived,
-          takenAt: doneAt,
-          personId: performer.id,
-        })),
-      )
+      await db()
+        .getRepository(ReadingEntity)
+        .insert(
+          judged.readings.map((r) => ({
+            completionId: data.completionId,
+            taskId: task.id,
+            tankId: context.tankId,
+            systemId: context.systemId,
+            parameterKey: r.parameterKey,
+            value: r.value,
+            unit: r.unit,
+            band: r.band,
+            derived: r.derived,
+            takenAt: doneAt,
+            personId: performer.id,
+          })),
+        )
     }
-    if (mortality?.plan) await writeRoundMortality(manager, mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
-
-    // The recheck, the alert, the stored answer and the outbox rows commit with the completion:
-    // a crash can lose all of it (the retry then does it all) but never half.
-    const updated = await getTaskRow(taskId)
-    // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
-    const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
+    if (mortality?.plan) await writeRoundMortality(db(), mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
     if (flag === 'critical')
       await startCriticalAlert(
         updated,
         judged.readings.filter((r) => r.band === 'critical'),
       )
     await proposeIncidentsAfterCompletion(updated, flag, judged.readings, mortality?.plan, data.completionId, new Date())
-    const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: judged.readings, recheckTaskId, notes: judged.notes }
-    await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })
     return response
   })
   if (!result) {
-    // Lost the race: say who won.
-    await assertStillOpen(await getTaskRow(taskId))
+    // Lost the race: to this very completion sent twice at once (its answer), or to someone else (who).
+    const now = await getTaskRow(taskId)
+    const replay = isFinished(now) ? await replayOf(data.completionId, taskId) : null
+    if (replay) return replay
+    await assertStillOpen(now)
     throw conflict('This task changed while you were completing it. Check it and try again.')
   }
   return result
+}
+
+const isFinished = (task: Pick<TaskRow, 'status'>) => task.status === 'done' || task.status === 'skipped'
+
+/** The answer already given for this completion id, or null when it was never stored. */
+async function replayOf(completionId: string, taskId: number): Promise<CompletionResult | null> {
+  const replay = await db().getRepository(CompletionEntity).findOneBy({ id: completionId })
+  if (!replay) return null
+  if (replay.taskId !== taskId) throw conflict(USED_ELSEWHERE)
+  // Completions stored before the answer joined their commit may have none: answer from the record.
+  return (replay.response as CompletionResult | null) ?? answerFromRecord(replay)
+}
+
+const USED_ELSEWHERE = 'That completion id was already used for another task.'
+
+/** The completion with its answer stored for a replay; its id taken already means it was sent for another task. */
+async function insertCompletion(row: Omit<CompletionRow, 'createdAt'>) {
+  try {
+    await db()
+      .getRepository(CompletionEntity)
+      .insert({ ...row, response: row.response as never })
+  } catch (err) {
+    if (duplicateKeyName(err) === 'PRIMARY') throw conflict(USED_ELSEWHERE)
+    throw err
+  }
 }
 
 async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
@@ -125,7 +158,7 @@ async function answerFromRecord(row: CompletionRow): Promise<CompletionResult> {
     recheckOf(row.taskId),
   ])
   return {
-    task: toTask(task, await loadTaskContext()),
+    task: toTask(task, await loadTaskContext([task])),
     readings: readings.map(({ parameterKey, value, unit, band, derived }) => ({ parameterKey, value, unit, band, derived })),
     recheckTaskId: recheck?.id ?? null,
     notes: [],
@@ -141,9 +174,9 @@ async function performerFor(person: Person, performedById: number | undefined): 
 }
 
 async function assertStillOpen(task: TaskRow) {
-  if (task.status !== 'done' && task.status !== 'skipped') return
-  const ctx = await loadTaskContext()
-  const who = (task.completedById && ctx.names.get(task.completedById)) || 'someone'
+  if (!isFinished(task)) return
+  const names = await personNames([task.completedById])
+  const who = (task.completedById && names.get(task.completedById)) || 'someone'
   const when = task.completedAt?.toISOString() ?? 'earlier'
   throw conflict(`${who} already ${task.status === 'done' ? 'completed' : 'skipped'} this task at ${when}.`, {
     completedByName: who,

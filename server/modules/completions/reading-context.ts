@@ -1,6 +1,6 @@
 import { pickLimit } from '#shared/readings/band'
 import type { ReadingRule } from '#shared/readings/judge-readings'
-import { batches, systems, tanks } from '../facility/catalogues'
+import { loadCatalogue } from '../facility/facility-catalogue'
 import { listLimits, listParameters } from '../parameters/parameters.service'
 import type { TaskRow } from '../tasks/task-writes.service'
 
@@ -13,19 +13,27 @@ export interface ReadingContext {
   ruleFor: (key: string) => ReadingRule | undefined
 }
 
-/** Where a task's readings were taken, and which rules judge them there. */
+/**
+ * Where a task's readings were taken, and which rules judge them there: from the process's copies
+ * of the catalogue, parameters and limits (record 16e), none read per completion.
+ */
 export async function readingContextFor(task: Pick<TaskRow, 'tankId' | 'targetKind' | 'targetId'>): Promise<ReadingContext> {
-  const tank = task.tankId ? await tanks.get(task.tankId).catch(() => null) : null
+  const [cat, parameters, limits] = await Promise.all([
+    // A tank or system the copy lacks was likely made by another process since it was loaded.
+    loadCatalogue((c) => (!task.tankId || c.tanks.has(task.tankId)) && (task.targetKind !== 'system' || c.systems.has(task.targetId))),
+    listParameters(),
+    listLimits(),
+  ])
+  const tank = task.tankId ? (cat.tanks.get(task.tankId) ?? null) : null
   const systemId = task.targetKind === 'system' ? task.targetId : (tank?.systemId ?? null)
-  const system = systemId ? await systems.get(systemId).catch(() => null) : null
-  const batchIds = (await batches.list())
+  const system = systemId ? (cat.systems.get(systemId) ?? null) : null
+  const batchIds = [...cat.batches.values()]
     .filter(
       (b) =>
         (b.status === 'active' || b.status === 'quarantine') &&
         ((tank && b.tankIds.includes(tank.id)) || (task.targetKind === 'batch' && b.id === task.targetId)),
     )
     .map((b) => b.id)
-  const [parameters, limits] = await Promise.all([listParameters(), listLimits()])
   const byKey = new Map(parameters.map((p) => [p.key, p]))
   const where = { systemId, batchIds }
   const ruleFor = (key: string): ReadingRule | undefined => {

@@ -1,4 +1,5 @@
 import type { Area, Batch, Equipment, Facility, System, Tank } from '#shared/schemas/facility'
+import { cachedRead, frozen } from '../../db/cached-read'
 import { db } from '../../db/data-source'
 import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } from './facility.entities'
 import { getFacility } from './facility.service'
@@ -13,10 +14,9 @@ export interface Catalogue {
   batches: Map<number, Batch>
 }
 
-const byId = <T extends { id: number }>(rows: T[]) => new Map(rows.map((r) => [r.id, r]))
+const byId = <T extends { id: number }>(rows: T[]) => new Map(rows.map((r) => [r.id, frozen(r)]))
 
-/** The facility's structure in memory: small enough to load whole, and it saves joins. */
-export async function loadCatalogue(): Promise<Catalogue> {
+const catalogueCopy = cachedRead('catalogue', async (): Promise<Catalogue> => {
   const [facility, areas, systems, tanks, equipment, batches] = await Promise.all([
     getFacility(),
     db().getRepository(AreaEntity).find(),
@@ -26,4 +26,10 @@ export async function loadCatalogue(): Promise<Catalogue> {
     db().getRepository(BatchEntity).find(),
   ])
   return { facility, areas: byId(areas), systems: byId(systems), tanks: byId(tanks), equipment: byId(equipment), batches: byId(batches) }
-}
+})
+
+/**
+ * The facility's structure in memory: small enough to load whole, and it saves joins. A copy per
+ * process (record 16e); `has` names what the caller needs, and a copy without it is loaded again.
+ */
+export const loadCatalogue = (has?: (cat: Catalogue) => boolean): Promise<Catalogue> => catalogueCopy(has)

@@ -16,7 +16,7 @@ const repo = () => db().getRepository(IncidentEntity)
 const iso = (d: Date | null) => (d ? d.toISOString() : null)
 
 /** `names` (person id → name) lets observers, who cannot list the staff, read who decided and who was involved. */
-export function toIncident(r: IncidentRow, names: Map<number, string> = new Map()): Incident {
+export function toIncident(r: IncidentRow, names: ReadonlyMap<number, string> = new Map()): Incident {
   const { sourceKey: _k, createdAt: _c, ...rest } = r
   return {
     ...rest,

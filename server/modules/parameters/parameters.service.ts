@@ -1,17 +1,32 @@
 import type { Limit, LimitInput, Parameter } from '#shared/schemas/parameter'
 import { audit } from '../audit/audit.service'
+import { cachedRead, frozen } from '../../db/cached-read'
 import { db } from '../../db/data-source'
 import { notFound } from '../../lib/errors'
 import { LimitEntity, ParameterEntity } from './parameter.entities'
 
-export const listParameters = (): Promise<Parameter[]> =>
-  db()
-    .getRepository(ParameterEntity)
-    .find({ order: { id: 'ASC' } })
-export const listLimits = (): Promise<Limit[]> =>
-  db()
-    .getRepository(LimitEntity)
-    .find({ order: { parameterKey: 'ASC', scope: 'ASC' } })
+// Read by every completion and amendment: a copy per process (record 16e).
+const parametersCopy = cachedRead('parameters', async () =>
+  Object.freeze(
+    (
+      await db()
+        .getRepository(ParameterEntity)
+        .find({ order: { id: 'ASC' } })
+    ).map(frozen),
+  ),
+)
+const limitsCopy = cachedRead('parameters', async () =>
+  Object.freeze(
+    (
+      await db()
+        .getRepository(LimitEntity)
+        .find({ order: { parameterKey: 'ASC', scope: 'ASC' } })
+    ).map(frozen),
+  ),
+)
+
+export const listParameters = (): Promise<readonly Parameter[]> => parametersCopy()
+export const listLimits = (): Promise<readonly Limit[]> => limitsCopy()
 
 /** Sets the limits for one parameter at one scope, replacing what was there. */
 export async function upsertLimit(data: LimitInput): Promise<Limit> {

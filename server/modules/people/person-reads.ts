@@ -1,4 +1,5 @@
 import { In } from 'typeorm'
+import { cachedRead } from '../../db/cached-read'
 import { db } from '../../db/data-source'
 import { PersonEntity, type PersonRow } from './person.entity'
 
@@ -18,7 +19,11 @@ export async function activePersonIds(): Promise<Set<number>> {
   return new Set((await people().find({ select: { id: true }, where: { active: true } })).map((p) => p.id))
 }
 
-/** Everyone's name by id, former staff too (old records still name them). */
-export async function personNames(): Promise<Map<number, string>> {
-  return new Map((await people().find({ select: { id: true, name: true } })).map((p) => [p.id, p.name]))
-}
+const namesCopy = cachedRead('people', async () => new Map((await people().find({ select: { id: true, name: true } })).map((p) => [p.id, p.name])))
+
+/**
+ * Everyone's name by id, former staff too (old records still name them). A copy per process
+ * (record 16e); pass the ids the caller needs, and a copy without one of them is loaded again.
+ */
+export const personNames = (needed: ReadonlyArray<number | null> = []): Promise<ReadonlyMap<number, string>> =>
+  namesCopy((names) => needed.every((id) => id === null || names.has(id)))

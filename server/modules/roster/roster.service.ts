@@ -17,8 +17,8 @@ import { getFacility } from '../facility/facility.service'
 import { findPerson, personNames as names } from '../people/person-reads'
 import { OnCallEntity, ShiftEntity, type OnCallRow, type ShiftRow } from './roster.entities'
 
-const toShift = (row: ShiftRow, n: Map<number, string>): Shift => ({ ...row, personName: n.get(row.personId) ?? 'Unknown' })
-const toDuty = (row: OnCallRow, n: Map<number, string>): OnCallDuty => ({
+const toShift = (row: ShiftRow, n: ReadonlyMap<number, string>): Shift => ({ ...row, personName: n.get(row.personId) ?? 'Unknown' })
+const toDuty = (row: OnCallRow, n: ReadonlyMap<number, string>): OnCallDuty => ({
   id: row.id,
   personId: row.personId,
   personName: n.get(row.personId) ?? 'Unknown',

@@ -4,7 +4,7 @@ import { targetLabel, type Catalogue } from './targets'
 
 export interface TaskContext {
   cat: Catalogue
-  names: Map<number, string>
+  names: ReadonlyMap<number, string>
 }
 
 export function toTask(row: TaskRow, ctx: TaskContext): Task {

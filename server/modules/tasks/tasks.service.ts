@@ -11,8 +11,15 @@ import { loadCatalogue, resolveTargets } from './targets'
 
 const repo = () => db().getRepository(TaskEntity)
 
-export async function loadTaskContext(): Promise<TaskContext> {
-  const [cat, names] = await Promise.all([loadCatalogue(), personNames()])
+/**
+ * The catalogue and names that task cards show, from the process's copies (record 16e). Given the
+ * rows about to be shown, a copy that lacks one of their tanks or people is loaded again.
+ */
+export async function loadTaskContext(rows: ReadonlyArray<Pick<TaskRow, 'tankId' | 'assigneeId' | 'completedById'>> = []): Promise<TaskContext> {
+  const [cat, names] = await Promise.all([
+    loadCatalogue((c) => rows.every((r) => r.tankId === null || c.tanks.has(r.tankId))),
+    personNames(rows.flatMap((r) => [r.assigneeId, r.completedById])),
+  ])
   return { cat, names }
 }
 
@@ -40,7 +47,8 @@ export async function getTaskRow(id: number): Promise<TaskRow> {
 }
 
 export async function getTask(id: number): Promise<Task> {
-  return toTask(await getTaskRow(id), await loadTaskContext())
+  const row = await getTaskRow(id)
+  return toTask(row, await loadTaskContext([row]))
 }
 
 /** Several tasks in one read (the live feed's batches); ids that no longer exist are left out. */
