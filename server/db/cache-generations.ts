@@ -1,3 +1,4 @@
+import { EventSubscriber } from 'typeorm'
 import type { EntitySubscriberInterface, InsertEvent, QueryRunner, RemoveEvent, TransactionCommitEvent, TransactionRollbackEvent, UpdateEvent } from 'typeorm'
 
 /**
@@ -77,3 +78,5 @@ export class CacheInvalidator implements EntitySubscriberInterface {
     transactionEnded(event.queryRunner)
   }
 }
+// Registered as TypeORM's decorator would, without decorator syntax (record 001).
+EventSubscriber()(CacheInvalidator)

@@ -7,12 +7,13 @@ import { db } from './data-source'
  */
 export const CACHE_MAX_AGE_MS = 2000
 
+/** A lookup that misses reloads a copy at most this often (a row that is really gone costs no storm of loads). */
+const MISS_RELOAD_AFTER_MS = 250
+
 interface Copy<T> {
   value: Promise<T>
   generation: number
   loadedAt: number
-  /** Already reloaded once because a lookup missed (a tank another process just created). */
-  missReloaded: boolean
 }
 
 /**
@@ -22,12 +23,12 @@ interface Copy<T> {
  * transaction that wrote rows of the kind reads its own state instead of the copy.
  *
  * `read(has)`: when the copy lacks what the caller looks for (`has` answers false), it is loaded
- * again once, as a row written by another process since the last load is the likely reason.
+ * again, as a row written by another process since the last load is the likely reason.
  */
 export function cachedRead<T>(kind: CachedKind, load: () => Promise<T>) {
   let copy: Copy<T> | undefined
   const fresh = (): Copy<T> => {
-    const next: Copy<T> = { value: load(), generation: generationOf(kind), loadedAt: Date.now(), missReloaded: false }
+    const next: Copy<T> = { value: load(), generation: generationOf(kind), loadedAt: Date.now() }
     // A failed load is not kept: the next read tries again.
     next.value.catch(() => {
       if (copy === next) copy = undefined
@@ -41,10 +42,8 @@ export function cachedRead<T>(kind: CachedKind, load: () => Promise<T>) {
     if (wroteInTransaction(db().queryRunner, kind)) return load()
     const current = usable(copy) ? copy : fresh()
     const value = await current.value
-    if (!has || has(value) || current.missReloaded || current !== copy) return value
-    const again = fresh()
-    again.missReloaded = true
-    return again.value
+    if (!has || has(value) || current !== copy || Date.now() - current.loadedAt < MISS_RELOAD_AFTER_MS) return value
+    return fresh().value
   }
 }
 
