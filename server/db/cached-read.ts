@@ -11,39 +11,48 @@ export const CACHE_MAX_AGE_MS = 2000
 const MISS_RELOAD_AFTER_MS = 250
 
 interface Copy<T> {
-  value: Promise<T>
+  value: T
   generation: number
   loadedAt: number
 }
 
 /**
- * A per-process copy of a small, read-mostly table set, loaded on first use. Loads go through
- * `db()`: inside a request they use its own connection (a second one from the pool could wait
- * on requests that each hold one); read committed, so they see only what others committed. A
- * transaction that wrote rows of the kind reads its own state instead of the copy.
+ * A per-process copy of a small, read-mostly table set, loaded on first use. Each caller that
+ * finds no usable copy loads one through `db()` and keeps it: inside a request that is the
+ * request's own connection, and a caller never waits on a load started by another (requests
+ * holding every pooled connection while waiting on a load that needs one more would never end).
+ * Read committed, so a load sees only what others committed; a transaction that wrote rows of the
+ * kind reads its own state instead of the copy. While a copy past its age is being loaded again,
+ * others are still served the old one; a copy made stale by a write is never served.
  *
  * `read(has)`: when the copy lacks what the caller looks for (`has` answers false), it is loaded
  * again, as a row written by another process since the last load is the likely reason.
  */
 export function cachedRead<T>(kind: CachedKind, load: () => Promise<T>) {
   let copy: Copy<T> | undefined
-  const fresh = (): Copy<T> => {
-    const next: Copy<T> = { value: load(), generation: generationOf(kind), loadedAt: Date.now() }
-    // A failed load is not kept: the next read tries again.
-    next.value.catch(() => {
-      if (copy === next) copy = undefined
-    })
-    copy = next
-    return next
+  let loading = 0
+
+  async function loadAndKeep(): Promise<T> {
+    const generation = generationOf(kind)
+    const loadedAt = Date.now()
+    loading++
+    try {
+      const value = await load()
+      // Not kept when a write made it stale meanwhile, or when a load started later was kept first.
+      if (generation === generationOf(kind) && (!copy || copy.generation !== generation || copy.loadedAt <= loadedAt)) copy = { value, generation, loadedAt }
+      return value
+    } finally {
+      loading--
+    }
   }
-  const usable = (c: Copy<T> | undefined): c is Copy<T> => !!c && c.generation === generationOf(kind) && Date.now() - c.loadedAt < CACHE_MAX_AGE_MS
 
   return async function read(has?: (value: T) => boolean): Promise<T> {
     if (wroteInTransaction(db().queryRunner, kind)) return load()
-    const current = usable(copy) ? copy : fresh()
-    const value = await current.value
-    if (!has || has(value) || current !== copy || Date.now() - current.loadedAt < MISS_RELOAD_AFTER_MS) return value
-    return fresh().value
+    const current = copy?.generation === generationOf(kind) ? copy : undefined
+    const usable = current && (Date.now() - current.loadedAt < CACHE_MAX_AGE_MS || loading > 0)
+    const value = usable ? current.value : await loadAndKeep()
+    if (!has || has(value) || Date.now() - (copy?.loadedAt ?? 0) < MISS_RELOAD_AFTER_MS) return value
+    return loadAndKeep()
   }
 }
 
