@@ -17,6 +17,9 @@ const MAX_TASKS_SENT = 2000
 /** A claim older than this belongs to a publisher that died before marking its rows published. */
 const CLAIM_LEASE_SECONDS = 15
 const KEEP_PUBLISHED_MS = 24 * 3_600_000
+/** Published rows are cleared out at most this often, not on every pass (a busy minute has thousands of passes). */
+const CLEAR_EVERY_MS = 60_000
+let clearedAt = 0
 
 export interface PublisherOptions {
   /** The safety net besides the kick after every commit (changes written by another process). */
@@ -74,6 +77,8 @@ export function startPublisher({ intervalMs = 2000 }: PublisherOptions = {}) {
 
 async function drain() {
   while ((await publishBatch()) === CLAIM_BATCH);
+  if (Date.now() - clearedAt < CLEAR_EVERY_MS) return
+  clearedAt = Date.now()
   await dataSource()
     .getRepository(ChangeOutboxEntity)
     .delete({ publishedAt: LessThan(new Date(Date.now() - KEEP_PUBLISHED_MS)) })
