@@ -71,7 +71,12 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
     const updated: TaskRow = { ...task, ...closed, status: outcome, version: task.version + 1 }
     // A paper sheet typed in later asks for no recheck: the moment has passed; the flag stays on record.
     const recheckTaskId = flag === 'ok' || performer.id !== person.id ? null : (await createRecheck(updated, person.id)).id
-    const response: CompletionResult = { task: toTask(updated, await loadTaskContext([updated])), readings: judged.readings, recheckTaskId, notes: judged.notes }
+    const response: CompletionResult = {
+      task: toTask(updated, await loadTaskContext([updated])),
+      readings: judged.readings,
+      recheckTaskId,
+      notes: judged.notes,
+    }
     await insertCompletion({
       id: data.completionId,
       taskId: task.id,
