@@ -65,6 +65,22 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     expect(new Date(incident.reportDueAt).getTime() - noticed).toBe(7 * 24 * HOUR)
   })
 
+  test('when the facility sets its own hours, then a proposal’s three deadlines follow them', async () => {
+    const manager = (await t.signedInAgent('manager')).agent
+    await manager.patch('/api/stock/settings').send({ notifyWelfareOfficerHours: 12, notifyCommitteeHours: 48, fullReportHours: 120 }).expect(200)
+    try {
+      const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9050 * MIN))
+      const [incident] = await incidentsOf(task.id, await signInAs('supervisor'))
+      const noticed = new Date(incident.noticedAt).getTime()
+      expect(new Date(incident.welfareDueAt).getTime() - noticed).toBe(12 * HOUR)
+      expect(new Date(incident.committeeDueAt).getTime() - noticed).toBe(48 * HOUR)
+      expect(new Date(incident.reportDueAt).getTime() - noticed).toBe(120 * HOUR)
+    } finally {
+      // Back to the defaults the other stories in this file count on.
+      await manager.patch('/api/stock/settings').send({ notifyWelfareOfficerHours: 24, notifyCommitteeHours: 72, fullReportHours: 168 }).expect(200)
+    }
+  })
+
   test('a proposal is confirmed or dismissed only with a reason; an observer may add a note but not confirm', async () => {
     const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9100 * MIN))
     const supervisor = await signInAs('supervisor')
