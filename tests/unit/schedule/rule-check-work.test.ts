@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest'
+import { expandRuleBounded } from '#shared/schedule/expand-rule'
 import { parseRule } from '#shared/schedule/parse-rule'
 import { checkPlannableRule } from '#shared/schedule/plannable-rule'
 import { RULE_LIMITS, stepsPerPeriod } from '#shared/schedule/rule-limits'
@@ -43,6 +44,10 @@ describe('which dense rules a routine may use', () => {
       expect(problem).toMatch(/plans tasks to the minute: FREQ=SECONDLY is not used for routines/)
       expect(work).toEqual({ steps: 0, placed: 0 })
     }
+    // Expanding one directly (as the preview could) still refuses a rule rrule would loop on for ever.
+    expect(() => expandRuleBounded({ rrule: 'FREQ=SECONDLY;BYMINUTE=53;BYMONTHDAY=30', dtstart: '2026-01-05T07:30:00', tzid: 'Europe/Oslo' })).toThrow(
+      /cannot plan FREQ=SECONDLY with BYHOUR or BYMINUTE/,
+    )
   })
 
   it('every 20 minutes from 9:00 to 16:40 (RFC 5545, both forms) is 24 a day, under one every 15 minutes, and stays allowed', () => {
