@@ -1,4 +1,3 @@
-import compression from 'compression'
 import express from 'express'
 import helmet from 'helmet'
 import { pinoHttp } from 'pino-http'
@@ -6,6 +5,7 @@ import { randomUUID } from 'node:crypto'
 import { existsSync } from 'node:fs'
 import path from 'node:path'
 import { noStore } from './lib/cache-control'
+import { compress } from './lib/compress'
 import type { AppConfig } from './lib/config'
 import { errorHandler } from './lib/error-handler'
 import { notFound } from './lib/errors'
@@ -66,8 +66,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
       },
     }),
   )
-  // The board of a large facility is megabytes of JSON and the client bundle is half a megabyte: gzip both.
-  app.use(compression())
+  // The board of a large facility is hundreds of kB of JSON and the client bundle is half a megabyte.
+  app.use(compress())
   app.use(
     pinoHttp({
       logger,
