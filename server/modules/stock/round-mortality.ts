@@ -5,7 +5,7 @@ import { balances, largestHolder } from '#shared/stock/ledger'
 import { periodFigures } from '#shared/stock/period-report'
 import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
-import { writeMovement } from './movement-writer'
+import { NO_DETAILS, writeMovement } from './movement-writer'
 import { getStockSettings } from './stock-settings.service'
 import { tankCodes } from './stock.service'
 import { MovementEntity } from './stock.entities'
@@ -112,26 +112,17 @@ export async function writeRoundMortality(manager: EntityManager, plan: RoundMor
   return writeMovement(
     manager,
     {
+      ...NO_DETAILS,
       batchId: plan.batchId,
       kind: 'mortality',
       occurredAt: source.at,
       fromTankId: plan.tankId,
-      toTankId: null,
       count: plan.count,
-      meanWeightG: null,
-      origin: null,
-      permitRef: null,
-      healthCertificateRef: null,
-      transportWater: null,
-      destination: null,
-      reason: null,
       cause: plan.cause,
       causeText: plan.causeText,
       necropsy: plan.necropsy,
-      correctsId: null,
       completionId: source.completionId,
       sourceKey: `completion:${source.completionId}`,
-      note: null,
       personId: source.personId,
     },
     { field: FIELD, describeTank: (id) => codes.get(id) ?? `tank ${id}` },
