@@ -4,6 +4,7 @@ import { DataSource, type EntityManager } from 'typeorm'
 import type { AppConfig } from '../lib/config'
 import { CacheInvalidator, invalidateAll } from './cache-generations'
 import { entities } from './entities'
+import { RoundtideNamingStrategy } from './foreign-keys'
 import { migrations } from './migrations'
 
 export function createDataSource(db: AppConfig['db']): DataSource {
@@ -17,6 +18,7 @@ export function createDataSource(db: AppConfig['db']): DataSource {
     entities,
     migrations,
     subscribers: [CacheInvalidator],
+    namingStrategy: new RoundtideNamingStrategy(),
     synchronize: false,
     // Dates cross the wire as UTC; the server also runs with --default-time-zone=+00:00.
     timezone: 'Z',
