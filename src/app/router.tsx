@@ -119,6 +119,13 @@ export function createRouter(queryClient: QueryClient) {
               },
             },
             {
+              path: 'incidents/new',
+              lazy: async () => {
+                const m = await import('./routes/new-incident-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
               path: 'incidents/:id',
               lazy: async () => {
                 const m = await import('./routes/incident-page')

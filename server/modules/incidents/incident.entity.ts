@@ -16,7 +16,7 @@ type Dates =
   | 'welfareEscalatedAt'
   | 'reportEscalatedAt'
 // Names are looked up when answering, never stored.
-export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'people'> & {
+export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'filedByName' | 'people'> & {
   startedAt: Date
   noticedAt: Date
   decidedAt: Date | null
@@ -61,6 +61,7 @@ export const IncidentEntity = new EntitySchema<IncidentRow>({
     decisionReason: { type: 'varchar', length: 500, nullable: true },
     decidedById: { type: 'int', nullable: true },
     decidedAt: when(true),
+    filedById: { type: 'int', nullable: true },
     welfareDueAt: when(),
     committeeDueAt: when(),
     reportDueAt: when(),

@@ -1,4 +1,5 @@
-import type { DecideIncidentInput, Incident, IncidentNoteInput, UpdateIncidentInput } from '#shared/schemas/incident'
+import type { DecideIncidentInput, FileIncidentInput, Incident, IncidentNoteInput, UpdateIncidentInput } from '#shared/schemas/incident'
+import type { Role } from '#shared/schemas/person'
 import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
 import { recordChange } from '../../realtime/change-outbox'
@@ -6,6 +7,7 @@ import { conflict, notFound, validationError } from '../../lib/errors'
 import { closeIncidentAlert } from '../completions/follow-ups'
 import { listPeople } from '../people/people.service'
 import { DEADLINE_RULES } from './incident-escalation'
+import { insertFiledIncident } from './incident-filing'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
 
 // The clock and the scheduler reach proposals and escalation through this service.
@@ -21,6 +23,7 @@ export function toIncident(r: IncidentRow, names: Map<number, string> = new Map(
   return {
     ...rest,
     decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
+    filedByName: r.filedById ? (names.get(r.filedById) ?? null) : null,
     people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
     startedAt: r.startedAt.toISOString(),
     noticedAt: r.noticedAt.toISOString(),
@@ -53,6 +56,11 @@ async function load(id: number) {
 export const getIncident = async (id: number) => toIncident(await load(id), await personNames())
 
 type Actor = { id: number; name: string }
+
+/** A person files what Roundtide could not see; answered as the whole incident. */
+export async function fileIncident(input: FileIncidentInput, who: Actor & { role: Role }, now = new Date()): Promise<Incident> {
+  return getIncident((await insertFiledIncident(input, who, now)).id)
+}
 
 /** Confirm or dismiss a proposal, always with a reason that stays on the record. */
 export async function decideIncident(id: number, decision: 'confirm' | 'dismiss', { reason }: DecideIncidentInput, who: Actor, now = new Date()) {
@@ -91,14 +99,14 @@ export async function updateIncident(id: number, data: UpdateIncidentInput, now 
   }
   // An empty patch changes nothing (TypeORM refuses an UPDATE without values).
   if (Object.keys(next).length) await repo().update(id, next)
-  if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
+  await closeMetDeadlineAlerts({ ...row, ...next }, now)
   await recordChange('incident', [id])
   return getIncident(id)
 }
 
 /** A deadline met after it escalated stops its alert climbing the ladder. */
-async function closeMetDeadlineAlerts(taskId: number, row: IncidentRow, now: Date) {
-  for (const rule of DEADLINE_RULES) if (row[rule.done] && row[rule.claim]) await closeIncidentAlert(taskId, rule.kind, now)
+async function closeMetDeadlineAlerts(row: IncidentRow, now: Date) {
+  for (const rule of DEADLINE_RULES) if (row[rule.done] && row[rule.claim]) await closeIncidentAlert(row.id, rule.kind, now)
 }
 
 /** Observers (veterinarian, welfare officer) may add a note; nothing else. */

@@ -1,4 +1,5 @@
 import { DateTime } from 'luxon'
+import type { z } from 'zod'
 import { UpdateIncidentInputSchema, type Incident, type UpdateIncidentInput } from '#shared/schemas/incident'
 
 /** The record's fields as typed; times are the facility's wall time (datetime-local). */
@@ -20,7 +21,7 @@ export interface IncidentFormValues {
 }
 
 export const toLocalInput = (iso: string, zone: string) => DateTime.fromISO(iso).setZone(zone).toFormat("yyyy-MM-dd'T'HH:mm")
-const fromLocalInput = (local: string, zone: string) => (local ? (DateTime.fromISO(local, { zone }).toUTC().toISO() ?? local) : '')
+export const fromLocalInput = (local: string, zone: string) => (local ? (DateTime.fromISO(local, { zone }).toUTC().toISO() ?? local) : '')
 
 export function incidentFormValues(i: Incident, zone: string): IncidentFormValues {
   return {
@@ -41,7 +42,7 @@ export function incidentFormValues(i: Incident, zone: string): IncidentFormValue
   }
 }
 
-const whole = (text: string) => (text.trim() === '' ? undefined : Number(text.trim()))
+export const whole = (text: string) => (text.trim() === '' ? undefined : Number(text.trim()))
 
 export type IncidentFormCheck = { ok: true; input: UpdateIncidentInput } | { ok: false; errors: Record<string, string> }
 
@@ -63,8 +64,12 @@ export function checkIncidentForm(v: IncidentFormValues, current: Incident['stat
     correctiveActions: v.correctiveActions,
     status: v.status !== current && v.status !== 'open' ? v.status : undefined,
   })
-  if (parsed.success) return { ok: true, input: parsed.data }
+  return parsed.success ? { ok: true, input: parsed.data } : { ok: false, errors: formErrors(parsed.error) }
+}
+
+/** The schema's first complaint per field, keyed as the form names it ("told.0.at"). */
+export function formErrors(error: z.ZodError): Record<string, string> {
   const errors: Record<string, string> = {}
-  for (const issue of parsed.error.issues) errors[issue.path.join('.')] ??= issue.code === 'invalid_type' ? 'Required' : issue.message
-  return { ok: false, errors }
+  for (const issue of error.issues) errors[issue.path.join('.')] ??= issue.code === 'invalid_type' ? 'Required' : issue.message
+  return errors
 }
