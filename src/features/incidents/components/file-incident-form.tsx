@@ -1,16 +1,16 @@
-import { CircleAlert, FilePlus2, WifiOff } from 'lucide-react'
+import { FilePlus2, WifiOff } from 'lucide-react'
 import { useState } from 'react'
 import { get, useForm, type FieldPath } from 'react-hook-form'
 import type { Incident } from '#shared/schemas/incident'
 import { Button } from '../../../components/ui/button'
 import { Field } from '../../../components/ui/field'
-import { SelectField } from '../../../components/ui/select-field'
+import { FormRefusal } from '../../../components/ui/form-refusal'
 import { TextAreaField } from '../../../components/ui/text-area-field'
 import { ApiError } from '../../../lib/api-client'
 import { useOnline } from '../../../lib/use-online'
 import { useFileIncident } from '../api/use-incident-mutations'
 import { checkFileIncidentForm, emptyFileIncidentForm, type FileIncidentFormValues } from '../utils/file-incident-form'
-import type { Option } from './incident-edit-form'
+import { ChooseSeveral, type Option } from './choose-several'
 
 interface Props {
   timeZone: string
@@ -44,23 +44,26 @@ export function FileIncidentForm({ timeZone, tanks, batches, needsReview, onFile
     file.mutate(check.input, {
       onSuccess: onFiled,
       onError: (e) => {
-        setRefusal(e instanceof ApiError && e.code === 'network' ? 'Not filed: no connection to Roundtide. What you typed is still here; file it again when the connection is back.' : e.message)
+        setRefusal(
+          e instanceof ApiError && e.code === 'network'
+            ? 'Not filed: no connection to Roundtide. What you typed is still here; file it again when the connection is back.'
+            : e.message,
+        )
         if (e instanceof ApiError && e.fieldErrors) setErrors(e.fieldErrors)
       },
     })
   })
 
   const multi = (label: string, name: 'tankIds' | 'batchIds', options: Option[]) => (
-    <SelectField label={label} multiple size={Math.min(6, Math.max(3, options.length))} hint="Hold Ctrl or ⌘ to choose several" error={error(name)} {...register(name)}>
-      {options.map((o) => (
-        <option key={o.id} value={o.id}>
-          {o.label}
-        </option>
-      ))}
-    </SelectField>
+    <ChooseSeveral label={label} options={options} error={error(name)} registration={register(name)} />
   )
   return (
-    <form noValidate aria-label="File an incident" onSubmit={submit} className="grid gap-3 rounded-xl border border-tide-200 bg-white p-4 sm:grid-cols-2 md:p-5">
+    <form
+      noValidate
+      aria-label="File an incident"
+      onSubmit={submit}
+      className="grid gap-3 rounded-xl border border-tide-200 bg-white p-4 sm:grid-cols-2 md:p-5"
+    >
       <Field label="What happened, in a few words" placeholder="Escape from a tank" className="sm:col-span-2" error={error('title')} {...register('title')} />
       <TextAreaField label="Describe what happened" rows={3} className="sm:col-span-2" error={error('whatHappened')} {...register('whatHappened')} />
       <Field label="Started (best estimate)" type="datetime-local" hint={timeZone} error={error('startedAt')} {...register('startedAt')} />
@@ -73,18 +76,16 @@ export function FileIncidentForm({ timeZone, tanks, batches, needsReview, onFile
       </div>
       <TextAreaField label="Immediate actions" rows={3} className="sm:col-span-2" error={error('immediateActions')} {...register('immediateActions')} />
       {needsReview && (
-        <p className="text-sm text-tide-700 sm:col-span-2">A supervisor or manager confirms it before it is reported; the welfare officer’s deadline runs from now.</p>
+        <p className="text-sm text-tide-700 sm:col-span-2">
+          A supervisor or manager confirms it before it is reported; the welfare officer’s deadline runs from now.
+        </p>
       )}
       {!online && (
         <p role="status" className="flex items-start gap-2 rounded-xl bg-ember-50 p-3 font-semibold text-ember-700 sm:col-span-2">
           <WifiOff aria-hidden className="mt-0.5 size-5 shrink-0" /> You are offline. Keep typing; file it when the connection is back.
         </p>
       )}
-      {refusal && (
-        <p role="alert" className="flex items-start gap-2 rounded-xl bg-alarm-50 p-3 font-semibold text-alarm-700 sm:col-span-2">
-          <CircleAlert aria-hidden className="mt-0.5 size-5 shrink-0" /> {refusal}
-        </p>
-      )}
+      <FormRefusal message={refusal} className="sm:col-span-2" />
       <Button type="submit" disabled={file.isPending} className="w-full sm:col-span-2 sm:w-auto sm:justify-self-start">
         <FilePlus2 aria-hidden className="size-5" /> {file.isPending ? 'Filing…' : 'File the incident'}
       </Button>

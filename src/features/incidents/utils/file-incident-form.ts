@@ -1,19 +1,8 @@
 import { DateTime } from 'luxon'
 import { FileIncidentInputSchema, type FileIncidentInput } from '#shared/schemas/incident'
-import { formErrors, fromLocalInput, whole } from './incident-form'
+import { basicsInput, formErrors, type IncidentBasicsValues } from './incident-form'
 
-/** An incident as typed: times in the facility's wall time (datetime-local), numbers as text. */
-export interface FileIncidentFormValues {
-  title: string
-  whatHappened: string
-  startedAt: string
-  noticedAt: string
-  tankIds: string[]
-  batchIds: string[]
-  affected: string
-  dead: string
-  immediateActions: string
-}
+export type FileIncidentFormValues = IncidentBasicsValues
 
 /** A blank form, noticed now (the usual case: filed as soon as it is seen). */
 export function emptyFileIncidentForm(zone: string, now = new Date()): FileIncidentFormValues {
@@ -34,16 +23,6 @@ export type FileIncidentCheck = { ok: true; input: FileIncidentInput } | { ok: f
 
 /** The form in the server's shape, checked by the server's own schema before it is sent. */
 export function checkFileIncidentForm(v: FileIncidentFormValues, zone: string): FileIncidentCheck {
-  const parsed = FileIncidentInputSchema.safeParse({
-    title: v.title,
-    whatHappened: v.whatHappened,
-    startedAt: fromLocalInput(v.startedAt, zone),
-    noticedAt: fromLocalInput(v.noticedAt, zone),
-    tankIds: v.tankIds.map(Number),
-    batchIds: v.batchIds.map(Number),
-    affected: whole(v.affected),
-    dead: whole(v.dead),
-    immediateActions: v.immediateActions,
-  })
+  const parsed = FileIncidentInputSchema.safeParse(basicsInput(v, zone))
   return parsed.success ? { ok: true, input: parsed.data } : { ok: false, errors: formErrors(parsed.error) }
 }

@@ -2,18 +2,22 @@ import { DateTime } from 'luxon'
 import type { z } from 'zod'
 import { UpdateIncidentInputSchema, type Incident, type UpdateIncidentInput } from '#shared/schemas/incident'
 
-/** The record's fields as typed; times are the facility's wall time (datetime-local). */
-export interface IncidentFormValues {
+/** What is typed both when an incident is filed and when its record is filled in; times are the facility's wall time (datetime-local). */
+export interface IncidentBasicsValues {
   title: string
   whatHappened: string
   startedAt: string
   noticedAt: string
   tankIds: string[]
   batchIds: string[]
-  personIds: string[]
   affected: string
   dead: string
   immediateActions: string
+}
+
+/** The whole record as typed. */
+export interface IncidentFormValues extends IncidentBasicsValues {
+  personIds: string[]
   told: Array<{ who: string; at: string }>
   rootCause: string
   correctiveActions: string
@@ -21,7 +25,7 @@ export interface IncidentFormValues {
 }
 
 export const toLocalInput = (iso: string, zone: string) => DateTime.fromISO(iso).setZone(zone).toFormat("yyyy-MM-dd'T'HH:mm")
-export const fromLocalInput = (local: string, zone: string) => (local ? (DateTime.fromISO(local, { zone }).toUTC().toISO() ?? local) : '')
+const fromLocalInput = (local: string, zone: string) => (local ? (DateTime.fromISO(local, { zone }).toUTC().toISO() ?? local) : '')
 
 export function incidentFormValues(i: Incident, zone: string): IncidentFormValues {
   return {
@@ -42,23 +46,28 @@ export function incidentFormValues(i: Incident, zone: string): IncidentFormValue
   }
 }
 
-export const whole = (text: string) => (text.trim() === '' ? undefined : Number(text.trim()))
+const whole = (text: string) => (text.trim() === '' ? undefined : Number(text.trim()))
+
+/** The basic fields in the server's shape (not yet checked). */
+export const basicsInput = (v: IncidentBasicsValues, zone: string) => ({
+  title: v.title,
+  whatHappened: v.whatHappened,
+  startedAt: fromLocalInput(v.startedAt, zone),
+  noticedAt: fromLocalInput(v.noticedAt, zone),
+  tankIds: v.tankIds.map(Number),
+  batchIds: v.batchIds.map(Number),
+  affected: whole(v.affected),
+  dead: whole(v.dead),
+  immediateActions: v.immediateActions,
+})
 
 export type IncidentFormCheck = { ok: true; input: UpdateIncidentInput } | { ok: false; errors: Record<string, string> }
 
 /** The form in the server's shape, checked by the server's schema; status is sent only when it moves on. */
 export function checkIncidentForm(v: IncidentFormValues, current: Incident['status'], zone: string): IncidentFormCheck {
   const parsed = UpdateIncidentInputSchema.safeParse({
-    title: v.title,
-    whatHappened: v.whatHappened,
-    startedAt: fromLocalInput(v.startedAt, zone),
-    noticedAt: fromLocalInput(v.noticedAt, zone),
-    tankIds: v.tankIds.map(Number),
-    batchIds: v.batchIds.map(Number),
+    ...basicsInput(v, zone),
     personIds: v.personIds.map(Number),
-    affected: whole(v.affected),
-    dead: whole(v.dead),
-    immediateActions: v.immediateActions,
     told: v.told.map((t) => ({ who: t.who, at: fromLocalInput(t.at, zone) })),
     rootCause: v.rootCause,
     correctiveActions: v.correctiveActions,
