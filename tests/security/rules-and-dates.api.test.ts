@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
-import { materialise } from '#server/modules/tasks/materialiser'
+import { materialise } from '#server/modules/scheduling/materialiser'
 import { ensureFacilityAndParameters, makeAreaWithTanks, routineInput, routineRow } from '#tests/support/facility-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
 

@@ -1,10 +1,11 @@
+import { ForeignKeys1796560000000 } from './1796560000000-ForeignKeys'
 import { PushSubscriptions1796470100000 } from './1796470100000-PushSubscriptions'
 import { OnCallChannels1796465534514 } from './1796465534514-OnCallChannels'
 import { CylinderReplaceTask1796530013001 } from './1796530013001-CylinderReplaceTask'
 import { ChangeOutbox1796530013000 } from './1796530013000-ChangeOutbox'
 import { StuckSends1796541200044 } from './1796541200044-StuckSends'
 import { PushOutbox1796541200045 } from './1796541200045-PushOutbox'
-import { HandFiledIncidents1796550000014 } from './1796550000014-HandFiledIncidents'
+import { HandFiledIncidents1796570000014 } from './1796570000014-HandFiledIncidents'
 import { IncidentDeadlines1796431400000 } from './1796431400000-IncidentDeadlines'
 import { Incidents1796425000000 } from './1796425000000-Incidents'
 import { RoutinePlanningError1796421762016 } from './1796421762016-RoutinePlanningError'
@@ -39,5 +40,6 @@ export const migrations: Array<new () => object> = [
   CylinderReplaceTask1796530013001,
   StuckSends1796541200044,
   PushOutbox1796541200045,
-  HandFiledIncidents1796550000014,
+  ForeignKeys1796560000000,
+  HandFiledIncidents1796570000014,
 ]

@@ -2,43 +2,19 @@ import { DateTime } from 'luxon'
 import { expandRuleBounded, type Occurrence } from '#shared/schedule/expand-rule'
 import { RULE_LIMITS } from '#shared/schedule/rule-limits'
 import type { Routine } from '#shared/schemas/routine'
-import { db } from '../../db/data-source'
 import { recordBulkTaskChange } from '../../realtime/change-outbox'
 import { logger } from '../../lib/logger'
 import { activePersonIds } from '../people/person-reads'
 import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { notePlanningError, routinesToPlan } from '../routines/routine-planning'
-import { TaskEntity, type TaskRow } from './task.entity'
-import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
+import { insertPlannedTasks } from '../tasks/planned-task-writes'
+import { loadCatalogue, resolveTargets, type Catalogue } from '../tasks/targets'
+import type { TaskRow } from '../tasks/task-writes.service'
 
 export const DEFAULT_HORIZON_DAYS = RULE_LIMITS.horizonDays
 // Rows per INSERT: ~400 bytes each, so a statement stays far below max_allowed_packet.
 const CHUNK = 2000
-// Columns the materialiser writes; the rest take their defaults.
-const INSERT_COLUMNS = [
-  'routineId',
-  'title',
-  'category',
-  'instructions',
-  'priority',
-  'targetKind',
-  'targetId',
-  'tankId',
-  'areaId',
-  'localDate',
-  'localStart',
-  'occurrenceStart',
-  'dueAt',
-  'windowStartAt',
-  'graceUntil',
-  'durationMinutes',
-  'status',
-  'assigneeId',
-  'requiredReadings',
-  'version',
-] as const
-const ROW_PLACEHOLDER = `(${INSERT_COLUMNS.map(() => '?').join(',')})`
 
 export interface MaterialiseOptions {
   routineIds?: number[]
@@ -76,11 +52,11 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
       if (opts.tankId !== undefined && row.tankId !== opts.tankId) continue
       batch.push(row)
       if (batch.length === CHUNK) {
-        created += await insertIgnoringDuplicates(batch)
+        created += await insertPlannedTasks(batch)
         batch = []
       }
     }
-    if (index === routines.length - 1 && batch.length) created += await insertIgnoringDuplicates(batch)
+    if (index === routines.length - 1 && batch.length) created += await insertPlannedTasks(batch)
     opts.onProgress?.(index + 1, routines.length, created)
     // Planning is synchronous work: give waiting requests their turn between routines.
     await new Promise<void>((resolve) => setImmediate(resolve))
@@ -103,20 +79,6 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
 }
 
 const planningErrorText = (err: unknown) => `Tasks could not be planned: ${err instanceof Error ? err.message : String(err)}`.slice(0, 500)
-
-/**
- * One multi-row INSERT IGNORE, written by hand: the query builder spends longer building a
- * 2,000-row statement than the database spends on it. The driver reports the rows really new.
- */
-async function insertIgnoringDuplicates(rows: Array<Partial<TaskRow>>): Promise<number> {
-  const params: unknown[] = []
-  for (const row of rows) {
-    for (const c of INSERT_COLUMNS) params.push(c === 'requiredReadings' ? JSON.stringify(row[c] ?? []) : (row[c] ?? null))
-  }
-  const sql = `INSERT IGNORE INTO tasks (${INSERT_COLUMNS.map((c) => `\`${c}\``).join(',')}) VALUES ${rows.map(() => ROW_PLACEHOLDER).join(',')}`
-  const result = (await db().query(sql, params)) as { affectedRows?: number }
-  return result.affectedRows ?? 0
-}
 
 const WEEK_MS = 7 * 86_400_000
 
@@ -196,30 +158,7 @@ export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, u
   return rows
 }
 
-/**
- * Removes future tasks nobody has touched: not started, not manually assigned, not edited.
- * Used when a routine changes or pauses, or a tank is emptied.
- */
-export async function removeUntouchedFutureTasks(where: { routineId?: number; tankId?: number }, now = new Date()) {
-  const qb = db()
-    .createQueryBuilder()
-    .delete()
-    .from(TaskEntity)
-    .where('dueAt > :now', { now })
-    .andWhere("status IN ('planned', 'open')")
-    .andWhere('assignedManually = 0 AND edited = 0 AND completedAt IS NULL')
-  if (where.routineId !== undefined) qb.andWhere('routineId = :routineId', { routineId: where.routineId })
-  if (where.tankId !== undefined) qb.andWhere('tankId = :tankId AND routineId IS NOT NULL', { tankId: where.tankId })
-  const result = await qb.execute()
-  if (result.affected) await recordBulkTaskChange('removed')
-  return result.affected ?? 0
-}
-
-/** After a routine edit: replace its untouched future tasks with ones from the new rule. */
-export async function rematerialiseRoutine(routineId: number) {
-  const removed = await removeUntouchedFutureTasks({ routineId })
-  const { created } = await materialise({ routineIds: [routineId], from: new Date() })
-  return { removed, created }
-}
+/** After a routine is created or changed: its tasks for the horizon, from now. */
+export const materialiseRoutine = (routineId: number) => materialise({ routineIds: [routineId], from: new Date() })
 
 export const materialiseForTank = (tankId: number) => materialise({ tankId, from: new Date() })
