@@ -57,7 +57,9 @@ describe('an incident Roundtide cannot see, filed by hand', () => {
     await phone.page.getByRole('heading', { name: new RegExp(`^Incident #\\d+: Escape from ${tank.code}$`) }).waitFor()
     await phone.page.getByRole('main').getByText('Open', { exact: true }).waitFor()
     const deadlines = phone.page.getByRole('region', { name: 'Deadlines' })
-    expect(await deadlines.textContent()).toMatch(/Tell the welfare officer: 23 h \d+ min left.*Report to the ethics committee: 2 d 23 h left.*Full report: 6 d 23 h left/)
+    expect(await deadlines.textContent()).toMatch(
+      /Tell the welfare officer: 23 h \d+ min left.*Report to the ethics committee: 2 d 23 h left.*Full report: 6 d 23 h left/,
+    )
     // Filing by a supervisor is the decision: no proposal waits for one.
     expect(await phone.page.getByRole('form', { name: 'Decide on this proposal' }).count()).toBe(0)
     await phone.page.getByRole('list', { name: 'Timeline' }).getByText('Filed by hand by Tui Marsden').waitFor()
@@ -68,7 +70,10 @@ describe('an incident Roundtide cannot see, filed by hand', () => {
     const desk = await s.newPage(DESKTOP)
     await s.signIn(desk.page, supervisor.email)
     await desk.page.getByRole('link', { name: 'Incidents' }).click()
-    const item = desk.page.getByRole('list', { name: 'Incidents' }).getByRole('listitem').filter({ hasText: `Escape from ${tank.code}` })
+    const item = desk.page
+      .getByRole('list', { name: 'Incidents' })
+      .getByRole('listitem')
+      .filter({ hasText: `Escape from ${tank.code}` })
     await item.waitFor()
     expect(await item.textContent()).toMatch(new RegExp(`${tank.code} · 2 affected · filed by hand.*Tell the welfare officer: 23 h \\d+ min left`))
     await screenshot(desk.page, 'incident-filing-desktop-list')

@@ -55,7 +55,12 @@ export async function raiseCriticalAlert(taskId: number, text: string) {
   const detail = text.slice(0, 500)
   const alerts = db().getRepository(AlertEntity)
   const now = new Date()
-  await alerts.createQueryBuilder().insert().values({ taskId, incidentId: null, kind: 'critical_reading', detail, ladderId: null, startedAt: now }).orIgnore().execute()
+  await alerts
+    .createQueryBuilder()
+    .insert()
+    .values({ taskId, incidentId: null, kind: 'critical_reading', detail, ladderId: null, startedAt: now })
+    .orIgnore()
+    .execute()
   await alerts.update(
     { taskId, kind: 'critical_reading', closedAt: Not(IsNull()) },
     { detail, startedAt: now, closedAt: null, acknowledgedAt: null, acknowledgedById: null },
@@ -75,7 +80,12 @@ export type IncidentAlertKind = 'incident_overdue' | 'incident_welfare_overdue' 
  * task the incident came from; an incident filed by hand has no task, and its alert belongs to the
  * incident alone (escalation then uses the facility's standard ladder, record 14e).
  */
-export async function startIncidentAlert(incident: { id: number; taskId: number | null }, detail: string, at: Date, kind: IncidentAlertKind = 'incident_overdue') {
+export async function startIncidentAlert(
+  incident: { id: number; taskId: number | null },
+  detail: string,
+  at: Date,
+  kind: IncidentAlertKind = 'incident_overdue',
+) {
   await db()
     .getRepository(AlertEntity)
     .createQueryBuilder()

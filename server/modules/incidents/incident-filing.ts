@@ -14,7 +14,8 @@ type Filer = { id: number; name: string; role: Role }
 
 async function mustAllExist(ids: number[], known: Promise<Array<{ id: number }>>, field: string, label: string) {
   const existing = new Set((await known).map((r) => r.id))
-  if (ids.some((id) => !existing.has(id))) throw validationError(`Nothing was filed: a ${label} chosen does not exist.`, { [field]: [`Choose existing ${label}s`] })
+  if (ids.some((id) => !existing.has(id)))
+    throw validationError(`Nothing was filed: a ${label} chosen does not exist.`, { [field]: [`Choose existing ${label}s`] })
 }
 
 /**
@@ -25,7 +26,11 @@ async function mustAllExist(ids: number[], known: Promise<Array<{ id: number }>>
  */
 export async function insertFiledIncident(input: FileIncidentInput, who: Filer, now = new Date()): Promise<Pick<Incident, 'id'>> {
   const future = (['startedAt', 'noticedAt'] as const).filter((k) => Date.parse(input[k]) > now.getTime() + CLOCK_SKEW_MS)
-  if (future.length) throw validationError('Nothing was filed: an incident cannot start or be noticed in the future.', Object.fromEntries(future.map((k) => [k, ['Not in the future']])))
+  if (future.length)
+    throw validationError(
+      'Nothing was filed: an incident cannot start or be noticed in the future.',
+      Object.fromEntries(future.map((k) => [k, ['Not in the future']])),
+    )
   await mustAllExist(input.tankIds, tanks.list(), 'tankIds', 'tank')
   await mustAllExist(input.batchIds, batches.list(), 'batchIds', 'batch')
   const confirmed = who.role === 'manager' || who.role === 'supervisor'

@@ -3,7 +3,10 @@ import type { IncidentRow } from './incident.entity'
 
 const HOUR = 3_600_000
 
-type Given = Pick<IncidentRow, 'status' | 'source' | 'taskId' | 'title' | 'whatHappened' | 'startedAt' | 'noticedAt' | 'tankIds' | 'batchIds' | 'affected' | 'dead'> &
+type Given = Pick<
+  IncidentRow,
+  'status' | 'source' | 'taskId' | 'title' | 'whatHappened' | 'startedAt' | 'noticedAt' | 'tankIds' | 'batchIds' | 'affected' | 'dead'
+> &
   Partial<Pick<IncidentRow, 'immediateActions' | 'filedById' | 'decisionReason' | 'decidedById' | 'decidedAt'>>
 
 /**
