@@ -7,7 +7,15 @@ import { ISO_DATE } from '../../features/board/utils/board-dates'
 
 /** Today on the facility's clock (the browser's own when no facility is set up yet). */
 export function todayIn(timeZone: string | undefined) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date())
+  return dayFormatter(timeZone).format(new Date())
+}
+
+// One formatter per zone: building one costs milliseconds, and the board asks on every render.
+const formatters = new Map<string | undefined, Intl.DateTimeFormat>()
+function dayFormatter(timeZone: string | undefined) {
+  let f = formatters.get(timeZone)
+  if (!f) formatters.set(timeZone, (f = new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' })))
+  return f
 }
 
 const facilityToday = async (queryClient: QueryClient) => todayIn((await queryClient.ensureQueryData(facilityQueries.facility()))?.timeZone)
