@@ -55,6 +55,7 @@ start_server() {
     --port="$port" --bind-address=127.0.0.1 --skip-networking=0 --skip-name-resolve \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
     --default-time-zone=+00:00 --innodb-buffer-pool-size=128M --max-connections=400 \
+    --innodb-print-all-deadlocks=ON \
     >/dev/null 2>&1 &
   for _ in $(seq 1 100); do
     if mariadb-admin --no-defaults --socket="$socket" -uroot --silent ping >/dev/null 2>&1; then return; fi

@@ -1,9 +1,10 @@
 import { DateTime } from 'luxon'
 import { db } from '#server/db/data-source'
-import { BatchEntity } from '#server/modules/facility/facility.entities'
+import { updateBatchFromRegister } from '#server/modules/facility/batch-register.service'
+import { NO_DETAILS } from '#server/modules/stock/movement-writer'
 import { MovementEntity, type MovementRow } from '#server/modules/stock/stock.entities'
 import { UNKNOWN_CAUSE } from '#shared/schemas/stock'
-import { applyMovement, balanceKey, type LedgerEntry } from '#shared/stock/ledger'
+import { applyMovement, balanceKey, batchHoldings, largestHolder, type LedgerEntry } from '#shared/stock/ledger'
 import { DEMO_STOCK_STORY, type StoryMovement } from './demo-stock-story'
 
 type NewMovement = Omit<MovementRow, 'id' | 'createdAt'>
@@ -14,31 +15,6 @@ interface Ids {
   supervisor: number
   technician: number
   manager: number
-}
-
-const blank = {
-  fromTankId: null,
-  toTankId: null,
-  meanWeightG: null,
-  origin: null,
-  permitRef: null,
-  healthCertificateRef: null,
-  transportWater: null,
-  destination: null,
-  reason: null,
-  cause: null,
-  causeText: null,
-  necropsy: false,
-  correctsId: null,
-  completionId: null,
-  sourceKey: null,
-  note: null,
-}
-
-/** The fish of the batch holding most in a tank, as the round's mortality field picks it. */
-function largestHolder(onHand: Map<string, number>, tankId: number) {
-  const held = [...onHand.entries()].filter(([k, n]) => k.endsWith(`:${tankId}`) && n > 0).sort((a, b) => b[1] - a[1])
-  return held.length ? { batchId: Number(held[0][0].split(':')[0]), count: held[0][1] } : null
 }
 
 /**
@@ -73,9 +49,9 @@ export async function seedStock(zone: string, ids: Ids): Promise<number> {
     if (p.round) {
       // A death on the round in a tank the register shows empty stays with the readings only, as in the app.
       const holder = largestHolder(onHand, p.round.tankId)
-      if (!holder || holder.count < p.round.dead) continue
+      if (!holder || holder.onHand < p.round.dead) continue
       row = {
-        ...blank,
+        ...NO_DETAILS,
         batchId: holder.batchId,
         kind: 'mortality',
         occurredAt: p.at,
@@ -92,7 +68,7 @@ export async function seedStock(zone: string, ids: Ids): Promise<number> {
       const count = s.count === 'rest' ? (onHand.get(balanceKey(batchId, tank(s.from)!)) ?? 0) : s.count
       const personId = s.kind === 'mortality' ? ids.technician : s.kind === 'dispatch' ? ids.manager : ids.supervisor
       row = {
-        ...blank,
+        ...NO_DETAILS,
         batchId,
         kind: s.kind,
         occurredAt: p.at,
@@ -126,10 +102,8 @@ export async function seedStock(zone: string, ids: Ids): Promise<number> {
       .insert(rows.slice(i, i + 500))
 
   for (const [, batchId] of ids.batches) {
-    const held = [...onHand.entries()].filter(([k, n]) => k.startsWith(`${batchId}:`) && n > 0)
-    await db()
-      .getRepository(BatchEntity)
-      .update(batchId, { count: held.reduce((s, [, n]) => s + n, 0), tankIds: held.map(([k]) => Number(k.split(':')[1])) })
+    const { count, tankIds } = batchHoldings(onHand, batchId)
+    await updateBatchFromRegister(db(), batchId, count, tankIds)
   }
   return rows.length
 }

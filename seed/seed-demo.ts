@@ -13,7 +13,8 @@ import { tanks as tanksCatalogue } from '#server/modules/facility/catalogues'
 import { applyShiftPattern } from '#server/modules/roster/roster.service'
 import { generateRotation } from '#server/modules/roster/rotation.service'
 import { RoutineEntity } from '#server/modules/routines/routine.entity'
-import { materialise } from '#server/modules/tasks/materialiser'
+import { materialise } from '#server/modules/scheduling/materialiser'
+import { subscribeModules } from '#server/module-subscriptions'
 import { EventInputSchema, PlaybookInputSchema } from '#shared/schemas/playbook'
 import type { AssigneeRule } from '#shared/schemas/routine'
 import { DEMO_PEOPLE } from './demo-people'
@@ -32,6 +33,8 @@ const idsByCode = <T extends { id: number; code: string }>(rows: T[]) => new Map
 
 /** Loads the invented demo facility into an empty, migrated database, anchored on today. */
 export async function seedDemo(demoPassword: string, log: (line: string) => void = console.log) {
+  // Filling tanks plans their tasks through scheduling, as in the app.
+  subscribeModules()
   const people = new Map<string, number>()
   for (const person of DEMO_PEOPLE) {
     people.set(person.email, (await createPerson(buildPersonInput({ ...person, password: demoPassword }))).id)

@@ -1,4 +1,3 @@
-import compression from 'compression'
 import express from 'express'
 import helmet from 'helmet'
 import { pinoHttp } from 'pino-http'
@@ -6,6 +5,7 @@ import { randomUUID } from 'node:crypto'
 import { existsSync } from 'node:fs'
 import path from 'node:path'
 import { noStore } from './lib/cache-control'
+import { compress } from './lib/compress'
 import type { AppConfig } from './lib/config'
 import { errorHandler } from './lib/error-handler'
 import { notFound } from './lib/errors'
@@ -32,6 +32,8 @@ import { reportsRouter } from './modules/reports/reports.routes'
 import { routinesRouter } from './modules/routines/routines.routes'
 import { stockRouter } from './modules/stock/stock.routes'
 import { tasksRouter } from './modules/tasks/tasks.routes'
+import { taskMovesRouter } from './modules/scheduling/scheduling.routes'
+import { subscribeModules } from './module-subscriptions'
 
 /**
  * State-changing routes that do not run in one request-long transaction: signing in and out
@@ -50,6 +52,7 @@ export interface AppDeps {
 
 /** Builds the Express app without listening, so tests can drive it in process. */
 export function createApp({ config, sessionStore, clientDir }: AppDeps) {
+  subscribeModules()
   const app = express()
   const passport = configurePassport()
   const sessionMiddleware = createSessionMiddleware(config, sessionStore)
@@ -63,8 +66,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
       },
     }),
   )
-  // The board of a large facility is megabytes of JSON and the client bundle is half a megabyte: gzip both.
-  app.use(compression())
+  // The board of a large facility is hundreds of kB of JSON and the client bundle is half a megabyte.
+  app.use(compress())
   app.use(
     pinoHttp({
       logger,
@@ -90,6 +93,7 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
   api.use('/', parametersRouter)
   api.use('/routines', routinesRouter)
   api.use('/tasks', tasksRouter)
+  api.use('/tasks', taskMovesRouter)
   api.use('/', completionsRouter(config))
   api.use('/', rosterRouter)
   api.use('/', escalationRouter(config))

@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon'
-import { materialise } from '#server/modules/tasks/materialiser'
+import { materialise } from '#server/modules/scheduling/materialiser'
 import { log, seconds, type Row } from './stats'
 
 export const HORIZON_DAYS = 42

@@ -13,6 +13,7 @@ import { measureCompletions } from './completion-load'
 import { measureLighthouse } from './lighthouse-scores'
 import { measureMaterialise } from './materialise-step'
 import { measureRoundJourney } from './round-journey'
+import { measureRuleChecks } from './rule-checks'
 import { signInCookie, startBenchServer, type BenchServer } from './server-handle'
 import { measureSocketFanout } from './socket-fanout'
 import { formatTable, log, reason, seconds, type Row } from './stats'
@@ -128,6 +129,7 @@ try {
   await step('7 morning round', () =>
     measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')),
   )
+  await step('9 rule checks', () => measureRuleChecks(need(facility, 'the facility').zone))
 } finally {
   await cleanUp()
 }

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto'
 import { DateTime } from 'luxon'
 import { db } from '#server/db/data-source'
+import { subscribeModules } from '#server/module-subscriptions'
 import { areas, systems, tanks } from '#server/modules/facility/catalogues'
 import { PersonEntity } from '#server/modules/people/person.entity'
 import { hashPassword } from '#server/modules/people/people.service'
@@ -99,6 +100,8 @@ function routineInputs(areaIds: number[], owners: number[]): RoutineInput[] {
 
 /** The large facility, built through the catalogue services; routines inserted without materialising. */
 export async function buildSyntheticFacility(): Promise<BenchFacility> {
+  // A tank created in use is planned through scheduling, as in the app.
+  subscribeModules()
   const facility = await ensureFacilityAndParameters()
   const madeAreas = []
   for (let a = 0; a < AREA_COUNT; a++) {

@@ -3,6 +3,7 @@ import { AsyncLocalStorage } from 'node:async_hooks'
 import { DataSource, type EntityManager } from 'typeorm'
 import type { AppConfig } from '../lib/config'
 import { entities } from './entities'
+import { RoundtideNamingStrategy } from './foreign-keys'
 import { migrations } from './migrations'
 
 export function createDataSource(db: AppConfig['db']): DataSource {
@@ -15,6 +16,7 @@ export function createDataSource(db: AppConfig['db']): DataSource {
     database: db.database,
     entities,
     migrations,
+    namingStrategy: new RoundtideNamingStrategy(),
     synchronize: false,
     // Dates cross the wire as UTC; the server also runs with --default-time-zone=+00:00.
     timezone: 'Z',

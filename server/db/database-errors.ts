@@ -36,3 +36,20 @@ export function duplicateKeyName(err: unknown): string | null {
   }
   return null
 }
+
+/**
+ * Which foreign key refused a write (record 13f): `missing-parent` when the row points at nothing
+ * (ER_NO_REFERENCED_ROW_2, errno 1452), `in-use` when a deleted row is still pointed at
+ * (ER_ROW_IS_REFERENCED_2, errno 1451), with the pointing column; null for any other error.
+ */
+export function foreignKeyRefusal(err: unknown): { kind: 'missing-parent' | 'in-use'; column: string | null } | null {
+  let current: unknown = err
+  for (let depth = 0; current && depth < 4; depth++) {
+    const e = current as { code?: string; errno?: number; sqlMessage?: string; message?: string; driverError?: unknown }
+    const kind =
+      e.code === 'ER_NO_REFERENCED_ROW_2' || e.errno === 1452 ? 'missing-parent' : e.code === 'ER_ROW_IS_REFERENCED_2' || e.errno === 1451 ? 'in-use' : null
+    if (kind) return { kind, column: /FOREIGN KEY \(`([^`]+)`\)/.exec(e.sqlMessage ?? e.message ?? '')?.[1] ?? null }
+    current = e.driverError
+  }
+  return null
+}

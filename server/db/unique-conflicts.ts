@@ -1,6 +1,6 @@
 import { AppError } from '../lib/errors'
 import { dataSourceIfSet } from './data-source'
-import { duplicateKeyName } from './database-errors'
+import { duplicateKeyName, foreignKeyRefusal } from './database-errors'
 
 /** Words for the columns people choose values for; any other unique column reads as "value". */
 const COLUMN_WORDS: Record<string, string> = { email: 'e-mail address', code: 'code', key: 'key', name: 'name' }
@@ -30,5 +30,22 @@ export function duplicateKeyConflict(err: unknown): AppError | null {
     'conflict',
     `That ${words} is already in use. Choose another and try again.`,
     single ? { fieldErrors: { [single]: ['Already in use'] } } : {},
+  )
+}
+
+/**
+ * A write the foreign keys refused, as 409: what it points at was removed meanwhile, or what it
+ * removes is still part of someone's record. Services check first; this covers the race.
+ */
+export function foreignKeyConflict(err: unknown): AppError | null {
+  const refusal = foreignKeyRefusal(err)
+  if (!refusal) return null
+  if (refusal.kind === 'in-use') return new AppError(409, 'conflict', 'That is still part of other records, so it cannot be removed.')
+  const { column } = refusal
+  return new AppError(
+    409,
+    'conflict',
+    'That refers to something that no longer exists. Reload and try again.',
+    column ? { fieldErrors: { [column]: ['No longer exists'] } } : {},
   )
 }

@@ -7,7 +7,7 @@ import { sendDailyDigestIfDue } from '../modules/escalation/digest'
 import { runEscalations } from '../modules/escalation/escalate'
 import { resolveStuckSends } from '../modules/escalation/stuck-sends'
 import { escalateOverdueIncidents } from '../modules/incidents/incidents.service'
-import { materialise } from '../modules/tasks/materialiser'
+import { materialise } from '../modules/scheduling/materialiser'
 import { advanceTaskStatuses } from './status-clock'
 
 const LOCK_NAME = 'roundtide_scheduler'

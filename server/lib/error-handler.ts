@@ -2,7 +2,7 @@ import type { ErrorRequestHandler } from 'express'
 import { ZodError, z } from 'zod'
 import { AppError } from './errors'
 import { isDatabaseDown } from '../db/database-errors'
-import { duplicateKeyConflict } from '../db/unique-conflicts'
+import { duplicateKeyConflict, foreignKeyConflict } from '../db/unique-conflicts'
 import { logger } from './logger'
 
 type BodyParserError = Error & { type?: string; status?: number }
@@ -21,7 +21,7 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
     res.status(400).json({ error: { code: 'validation_failed', message: `Please check the input: ${first}`, fieldErrors } })
     return
   }
-  const known = err instanceof AppError ? err : duplicateKeyConflict(err)
+  const known = err instanceof AppError ? err : (duplicateKeyConflict(err) ?? foreignKeyConflict(err))
   if (known) {
     res.status(known.status).json({
       error: { code: known.code, message: known.message, fieldErrors: known.fieldErrors, details: known.details },

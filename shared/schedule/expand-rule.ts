@@ -11,7 +11,7 @@ import {
   formatUtcInstant,
   formatWallTime,
   instantToFloatingMs,
-  offsetSteady,
+  offsetSpreadMs,
   parseWallTime,
   resolveZone,
   wallToFloatingMs,
@@ -34,13 +34,20 @@ export type ExpandRuleInput = {
   maxSteps?: number
 }
 
-export type BoundedExpansion = {
-  occurrences: Occurrence[]
+/** The work a walk did: rrule's periods in steps (RULE_LIMITS.maxSteps) and the dates it placed in the zone. */
+export type RuleWork = { steps: number; placed: number }
+
+export type BoundedInstants = {
+  /** The occurrences as instants (UTC milliseconds), in order. */
+  instants: number[]
   /** False when the walk stopped at its period budget before the end of the window. */
   complete: boolean
   /** The end of the window that was searched, as a floating (wall-time-as-UTC) millisecond count. */
   searchedUntilFloatingMs: number
+  work: RuleWork
 }
+
+export type BoundedExpansion = Omit<BoundedInstants, 'instants'> & { occurrences: Occurrence[] }
 
 export type Occurrence = {
   /** Wall time in the rule's zone, `YYYY-MM-DDTHH:mm:ss`. */
@@ -134,6 +141,17 @@ function startNearWindow(rule: ParsedRule, dtstartMs: number, windowStartMs: num
 
 /** expandRule with what the bounds cut off: a walk is never longer than its period budget or the search span. */
 export function expandRuleBounded(input: ExpandRuleInput): BoundedExpansion {
+  const { instants, ...walk } = expandRuleInstants(input)
+  const zone = resolveZone(input.tzid)
+  const occurrences = instants.map((instant) => ({
+    local: formatWallTime(floatingMsToWall(instantToFloatingMs(instant, zone))),
+    utc: formatUtcInstant(instant),
+  }))
+  return { ...walk, occurrences }
+}
+
+/** expandRuleBounded without writing the dates out, for checks that only count them. */
+export function expandRuleInstants(input: ExpandRuleInput): BoundedInstants {
   const zone = resolveZone(input.tzid)
   const dtstartWall = parseWallTime(input.dtstart, 'dtstart')
   const dtstartMs = wallToFloatingMs(dtstartWall)
@@ -149,35 +167,38 @@ export function expandRuleBounded(input: ExpandRuleInput): BoundedExpansion {
   const spanEnd = windowStart + RULE_LIMITS.searchYears * YEAR_MS
   let windowEnd = upper === undefined ? spanEnd : Math.min(spanEnd, instantToFloatingMs(upper, zone) + DAY_MS)
   const searchedUntilFloatingMs = windowEnd
-  if (limit === 0 || (lower !== undefined && upper !== undefined && lower > upper)) return { occurrences: [], complete: true, searchedUntilFloatingMs }
+  if (limit === 0 || (lower !== undefined && upper !== undefined && lower > upper)) {
+    return { instants: [], complete: true, searchedUntilFloatingMs, work: { steps: 0, placed: 0 } }
+  }
 
   const walk = startNearWindow(rule, dtstartMs, windowStart)
   const recurrence = new RRule({ ...rule.options, ...walk.defaults, dtstart: new Date(walk.dtstartMs), until: null, tzid: null }, true)
-  const budget = limitPeriods(recurrence, input.maxSteps ?? RULE_LIMITS.maxSteps, stepsPerPeriod(rule.parts.get('FREQ')))
+  const budget = limitPeriods(recurrence, input.maxSteps ?? RULE_LIMITS.maxSteps, stepsPerPeriod(rule.parts))
   const instants = new Set<number>()
+  let placed = 0
 
   recurrence.between(new Date(windowStart), new Date(windowEnd), true, (floating) => {
     const floatingMs = floating.getTime()
     if (floatingMs > windowEnd) return false
     const instant = floatingMsToInstant(floatingMs, zone)
+    placed++
     if ((lower === undefined || instant >= lower) && (upper === undefined || instant <= upper)) {
       // Set: wall times moved forward out of a DST gap can land on an instant already present
       // (RFC 5545 §3.8.5.3: duplicate instances are ignored)
       instants.add(instant)
-      // A later wall time can map to an earlier instant only across a gap, which is under a day:
-      // look a day further where the offset changes nearby, and stop at once where it does not
-      // (a dense rule would otherwise walk a whole extra day of occurrences).
-      if (instants.size === limit) windowEnd = Math.min(windowEnd, offsetSteady(zone, floatingMs) ? floatingMs : floatingMs + DAY_MS)
+      // A later wall time can map to an earlier instant only across a gap, by less than the gap:
+      // look that much further where the offset changes nearby, and stop at once where it does
+      // not (a dense rule would otherwise walk on; a whole extra day of FREQ=HOURLY with 3,600
+      // times an hour placed 86,400 dates).
+      if (instants.size === limit) windowEnd = Math.min(windowEnd, floatingMs + offsetSpreadMs(zone, floatingMs))
     }
     return true
   })
 
-  const occurrences = [...instants]
-    .sort((a, b) => a - b)
-    .slice(0, limit)
-    .map((instant) => ({
-      local: formatWallTime(floatingMsToWall(instantToFloatingMs(instant, zone))),
-      utc: formatUtcInstant(instant),
-    }))
-  return { occurrences, complete: !budget.exhausted || instants.size >= limit, searchedUntilFloatingMs }
+  return {
+    instants: [...instants].sort((a, b) => a - b).slice(0, limit),
+    complete: !budget.exhausted || instants.size >= limit,
+    searchedUntilFloatingMs,
+    work: { steps: budget.steps, placed },
+  }
 }

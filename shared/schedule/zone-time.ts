@@ -68,33 +68,45 @@ export function parseWallTime(text: string, label: string): WallTime {
   return wall
 }
 
-const BUCKET_MS = 15 * MINUTE_MS
-const offsetsByZone = new Map<string, Map<number, number | null>>()
+const QUARTER_MS = 15 * MINUTE_MS
+type ZoneOffsets = { days: Map<number, number | null>; quarters: Map<number, number | null> }
+const offsetsByZone = new Map<string, ZoneOffsets>()
+
+/** The offset throughout one span of a bucket size, or null when its two ends differ. */
+function steadyOffset(zone: IANAZone, cache: Map<number, number | null>, size: number, instantMs: number): number | null {
+  const bucket = Math.floor(instantMs / size)
+  let known = cache.get(bucket)
+  if (known === undefined) {
+    const first = zone.offset(bucket * size)
+    known = first === zone.offset((bucket + 1) * size - 1) ? first : null
+    if (cache.size >= 100_000) cache.clear()
+    cache.set(bucket, known)
+  }
+  return known
+}
 
 /**
- * The zone's UTC offset in minutes at an instant. Luxon asks Intl on every call (tens of µs),
- * and a dense rule's occurrences ask thousands of times, so offsets are kept per quarter hour:
- * a quarter whose two ends share an offset has that offset throughout (no zone changes twice
- * within 15 minutes); a quarter holding a transition is always asked exactly.
+ * The zone's UTC offset in minutes at an instant. Luxon asks Intl on every call (about 10 µs),
+ * and a dense rule's occurrences ask thousands of times, so offsets are kept per UTC day: a day
+ * whose two ends share an offset has it throughout, since no zone changes and changes back
+ * within a day (the closest two transitions in the time-zone database since 1970 are seven days
+ * apart, by `zdump -v` over every zone). A day holding a transition is kept per quarter hour (no
+ * zone changes twice within 15 minutes), and a quarter holding one is asked exactly.
  */
 function offsetAt(zone: IANAZone, instantMs: number): number {
   let offsets = offsetsByZone.get(zone.name)
-  if (!offsets) offsetsByZone.set(zone.name, (offsets = new Map()))
-  const bucket = Math.floor(instantMs / BUCKET_MS)
-  let known = offsets.get(bucket)
-  if (known === undefined) {
-    const first = zone.offset(bucket * BUCKET_MS)
-    known = first === zone.offset((bucket + 1) * BUCKET_MS - 1) ? first : null
-    if (offsets.size >= 200_000) offsets.clear()
-    offsets.set(bucket, known)
-  }
-  return known ?? zone.offset(instantMs)
+  if (!offsets) offsetsByZone.set(zone.name, (offsets = { days: new Map(), quarters: new Map() }))
+  return steadyOffset(zone, offsets.days, DAY_MS, instantMs) ?? steadyOffset(zone, offsets.quarters, QUARTER_MS, instantMs) ?? zone.offset(instantMs)
 }
 
-/** True when the zone keeps one offset from a day before to a day after this wall time (no transition can reorder times near it). */
-export function offsetSteady(zone: IANAZone, floatingMs: number): boolean {
-  const offset = offsetAt(zone, floatingMs)
-  return offsetAt(zone, floatingMs - DAY_MS) === offset && offsetAt(zone, floatingMs + DAY_MS) === offset
+/**
+ * How far the zone's offset moves between a day before and a day after this wall time, in ms
+ * (0 where it keeps one offset). Only across a gap can a later wall time map to an earlier
+ * instant (a time in the gap is moved forward by it), and never by more than this.
+ */
+export function offsetSpreadMs(zone: IANAZone, floatingMs: number): number {
+  const offsets = [offsetAt(zone, floatingMs - DAY_MS), offsetAt(zone, floatingMs), offsetAt(zone, floatingMs + DAY_MS)]
+  return (Math.max(...offsets) - Math.min(...offsets)) * MINUTE_MS
 }
 
 export function instantToFloatingMs(instantMs: number, zone: IANAZone): number {

@@ -69,3 +69,15 @@ export function applyMovement(current: Map<string, number>, m: LedgerEntry): Sho
 
 export const totalOnHand = (current: Map<string, number>, batchId?: number) =>
   [...current.entries()].filter(([k]) => batchId === undefined || k.startsWith(`${batchId}:`)).reduce((sum, [, n]) => sum + n, 0)
+
+/** What a batch holds now: its count and the tanks that hold any of it (what the batch row keeps). */
+export function batchHoldings(current: Map<string, number>, batchId: number): { count: number; tankIds: number[] } {
+  const held = [...current.entries()].filter(([k, n]) => k.startsWith(`${batchId}:`) && n > 0)
+  return { count: held.reduce((sum, [, n]) => sum + n, 0), tankIds: held.map(([k]) => Number(k.split(':')[1])) }
+}
+
+/** The batch holding most fish in a tank (whose fish a death on the round comes off), with its count. */
+export function largestHolder(current: Map<string, number>, tankId: number): { batchId: number; onHand: number } | null {
+  const held = [...current.entries()].filter(([k, n]) => k.endsWith(`:${tankId}`) && n > 0).sort((a, b) => b[1] - a[1])
+  return held.length ? { batchId: Number(held[0][0].split(':')[0]), onHand: held[0][1] } : null
+}

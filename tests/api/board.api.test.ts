@@ -94,6 +94,29 @@ describe('the day as the board receives it', () => {
     }
     expect(board.people.find((p) => p.personId === tech.id)).toMatchObject({ name: tech.name, taskCount: 1, plannedMinutes: 3 })
   })
+
+  test('a browser that accepts brotli gets the day compressed, and it unpacks to the same day', async () => {
+    const { tanks } = await makeAreaWithTanks(1)
+    const date = inDays(11)
+    // Enough cards to pass the 1 kB below which nothing is compressed.
+    const hours = Array.from({ length: 24 }, (_, h) => String(h).padStart(2, '0'))
+    await Promise.all(hours.map((h) => makeTankTask(tanks[0], { localDate: date, localStart: `${date}T${h}:00:00` })))
+    const plain = await supervisor.get(`/api/tasks/board?date=${date}`).set('accept-encoding', 'identity').expect(200)
+    const packed = await supervisor
+      .get(`/api/tasks/board?date=${date}`)
+      .set('accept-encoding', 'br')
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = []
+        res.on('data', (c: Buffer) => chunks.push(c))
+        res.on('end', () => done(null, Buffer.concat(chunks)))
+      })
+      .expect(200)
+    expect(plain.headers['content-encoding']).toBeUndefined()
+    expect(packed.headers['content-encoding']).toBe('br')
+    // supertest unpacks what the header names, so a wrong header or a corrupt stream fails here.
+    expect(JSON.parse((packed.body as Buffer).toString('utf8'))).toEqual(plain.body)
+  })
 })
 
 describe('assigning on the board', () => {

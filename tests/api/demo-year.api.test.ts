@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { DateTime } from 'luxon'
 import { createDataSource, setDataSource } from '#server/db/data-source'
-import { materialise } from '#server/modules/tasks/materialiser'
+import { materialise } from '#server/modules/scheduling/materialiser'
 import type { DataSource } from 'typeorm'
 import { seedDemo } from '#seed/seed-demo'
 import { testConfig } from '#tests/support/test-app'

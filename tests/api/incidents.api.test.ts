@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { In } from 'typeorm'
 import { db } from '#server/db/data-source'
 import { advanceTaskStatuses } from '#server/jobs/status-clock'
 import { AlertEntity } from '#server/modules/completions/completion.entities'
@@ -65,6 +66,22 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     expect(new Date(incident.reportDueAt).getTime() - noticed).toBe(7 * 24 * HOUR)
   })
 
+  test('when the facility sets its own hours, then a proposal’s three deadlines follow them', async () => {
+    const manager = (await t.signedInAgent('manager')).agent
+    await manager.patch('/api/stock/settings').send({ notifyWelfareOfficerHours: 12, notifyCommitteeHours: 48, fullReportHours: 120 }).expect(200)
+    try {
+      const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9050 * MIN))
+      const [incident] = await incidentsOf(task.id, await signInAs('supervisor'))
+      const noticed = new Date(incident.noticedAt).getTime()
+      expect(new Date(incident.welfareDueAt).getTime() - noticed).toBe(12 * HOUR)
+      expect(new Date(incident.committeeDueAt).getTime() - noticed).toBe(48 * HOUR)
+      expect(new Date(incident.reportDueAt).getTime() - noticed).toBe(120 * HOUR)
+    } finally {
+      // Back to the defaults the other stories in this file count on.
+      await manager.patch('/api/stock/settings').send({ notifyWelfareOfficerHours: 24, notifyCommitteeHours: 72, fullReportHours: 168 }).expect(200)
+    }
+  })
+
   test('a proposal is confirmed or dismissed only with a reason; an observer may add a note but not confirm', async () => {
     const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9100 * MIN))
     const supervisor = await signInAs('supervisor')
@@ -82,6 +99,30 @@ describe('incidents proposed by Roundtide, decided by a person', () => {
     const reported = await supervisor.patch(`/api/incidents/${incident.id}`).send({ rootCause: 'Aerator tripped', status: 'reported' }).expect(200)
     expect(reported.body.status).toBe('reported')
     expect(reported.body.reportedAt).not.toBeNull()
+  })
+
+  test('when a proposal that already escalated its 24 h deadline is dismissed with a reason, then its alert stops and nothing escalates after', async () => {
+    const { task } = await missWelfareCriticalCheck(new Date(Date.now() + 9150 * MIN))
+    const supervisor = await signInAs('supervisor')
+    const [incident] = await incidentsOf(task.id, supervisor)
+    const welfareAlerts = () => db().getRepository(AlertEntity).findBy({ taskId: task.id, kind: 'incident_welfare_overdue' })
+    const welfareLate = new Date(new Date(incident.welfareDueAt).getTime() + MIN)
+    await escalateOverdueIncidents(welfareLate)
+    expect((await welfareAlerts()).map((a) => a.closedAt)).toEqual([null])
+
+    await supervisor.post(`/api/incidents/${incident.id}/dismiss`).send({ reason: '' }).expect(400)
+    const dismissed = (
+      await supervisor.post(`/api/incidents/${incident.id}/dismiss`).send({ reason: 'The check was done on paper; the sheet was typed in late' }).expect(200)
+    ).body as Incident
+    expect(dismissed).toMatchObject({ status: 'dismissed', decisionReason: 'The check was done on paper; the sheet was typed in late' })
+    // No deadline is needed any more, so the ladder stops calling people about it.
+    expect((await welfareAlerts())[0].closedAt).not.toBeNull()
+    await escalateOverdueIncidents(new Date(new Date(incident.reportDueAt).getTime() + HOUR))
+    const later = await db()
+      .getRepository(AlertEntity)
+      .findBy({ taskId: task.id, kind: In(['incident_overdue', 'incident_report_overdue']) })
+    expect(later).toEqual([])
+    await supervisor.post(`/api/incidents/${incident.id}/confirm`).send({ reason: 'Changed my mind' }).expect(409)
   })
 
   test('when a confirmed incident passes its 72 h committee deadline unreported, then it escalates through the ladder once', async () => {

@@ -77,7 +77,17 @@ describe('deaths counted on the round reach the stock register', () => {
     const desk = await s.newPage(DESKTOP)
     await s.signIn(desk.page, supervisor.email)
     await desk.page.goto(`/batches/${batch.id}`)
-    await expect.poll(() => desk.page.getByRole('region', { name: 'Stock register' }).getByTestId('stock-count').textContent()).toBe('397')
+    const batchRegister = desk.page.getByRole('region', { name: 'Stock register' })
+    await expect.poll(() => batchRegister.getByTestId('stock-count').textContent()).toBe('397')
+    // The batch page works its figures out from the same register: 397 fish × 50 g = 19.85 kg,
+    // all of it in the one 1,000 L tank (1 m³), so 19.85 kg/m³; and it lists the same two rows.
+    const figures = await batchRegister.locator('dl').textContent()
+    expect(figures).toContain('Biomass19.85 kg')
+    expect(figures).toContain('Stocking density19.85 kg/m³')
+    const batchEntries = batchRegister.getByRole('list', { name: 'Stock register, newest first' }).getByRole('listitem')
+    expect(await batchEntries.count()).toBe(2)
+    expect(await batchEntries.first().textContent()).toContain('Cause: Water quality')
+    expect(await batchEntries.nth(1).textContent()).toContain('+400 fish')
     await screenshot(desk.page, 'round-mortality-desktop-batch-page')
     await desk.context.close()
   }, 120_000)

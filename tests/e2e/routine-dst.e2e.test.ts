@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { createFacilityIfMissing } from '#server/modules/facility/facility.service'
-import { materialise } from '#server/modules/tasks/materialiser'
+import { materialise } from '#server/modules/scheduling/materialiser'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
 import { DESKTOP, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'

@@ -8,6 +8,9 @@ import { ROUTE_ACCESS } from './route-access'
 import { requestByMethod } from '../support/request-by-method'
 
 const RUNS = Number(process.env.ROUNDTIDE_FUZZ_RUNS ?? 500)
+// Hundreds of requests a test: about 10 s on an idle 2-core machine, three times that when the
+// machine is busy. The limit only guards against a hang; how fast a route answers is the bench's.
+const HANG_GUARD_MS = 120_000
 const TABLES = [
   'tasks',
   'routines',
@@ -142,22 +145,26 @@ const counts = async () =>
 const writeRoutes = Object.keys(ROUTE_ACCESS).filter((k) => /^(POST|PUT|PATCH|DELETE) \/api\//.test(k) && k !== 'DELETE /api/session')
 
 describe(`fuzzing every state-changing route (${RUNS} cases each)`, () => {
-  test.each(writeRoutes)('%s never answers 500, and a refused request writes nothing', async (key) => {
-    const [method, pattern] = key.split(' ')
-    const before = await counts()
-    let accepted = 0
-    await fc.assert(
-      fc.asyncProperty(body, fc.array(id.map(String), { minLength: 2, maxLength: 2 }), async (payload, ids) => {
-        const res = await requestByMethod(manager, method, fill(pattern, ids))
-          .set('content-type', 'application/json')
-          .send(JSON.stringify(payload ?? null))
-        if (res.status < 300) accepted++
-        return res.status < 500
-      }),
-      { numRuns: RUNS },
-    )
-    if (accepted === 0) expect(await counts()).toEqual(before)
-  })
+  test.each(writeRoutes)(
+    '%s never answers 500, and a refused request writes nothing',
+    async (key) => {
+      const [method, pattern] = key.split(' ')
+      const before = await counts()
+      let accepted = 0
+      await fc.assert(
+        fc.asyncProperty(body, fc.array(id.map(String), { minLength: 2, maxLength: 2 }), async (payload, ids) => {
+          const res = await requestByMethod(manager, method, fill(pattern, ids))
+            .set('content-type', 'application/json')
+            .send(JSON.stringify(payload ?? null))
+          if (res.status < 300) accepted++
+          return res.status < 500
+        }),
+        { numRuns: RUNS },
+      )
+      if (accepted === 0) expect(await counts()).toEqual(before)
+    },
+    HANG_GUARD_MS,
+  )
 })
 
 const READS: Array<[string, Record<string, fc.Arbitrary<string>>]> = [
@@ -185,27 +192,31 @@ const READS: Array<[string, Record<string, fc.Arbitrary<string>>]> = [
 ]
 
 describe('fuzzing filters', () => {
-  test.each(READS)('GET %s with generated query strings never answers 500', async (path, fields) => {
-    const dateish = fc.oneof(
-      fc.constantFrom('2026-06-01', '2026-06-30', '2027-13-01', '0000-00-00', '2026-06-01T00:00:00Z', '%ED%A0%80'),
-      impossibleDate,
-      fc.string({ maxLength: 20 }),
-    )
-    const query = fc.record(
-      Object.fromEntries(
-        Object.keys(fields).map((k) => [
-          k,
-          fc.oneof(dateish, fc.integer().map(String), fc.constantFrom('welfare', 'done', 'none', 'csv', 'week', 'person', "1' OR '1'='1")),
-        ]),
-      ),
-      { requiredKeys: [] },
-    )
-    await fc.assert(
-      fc.asyncProperty(query, async (q) => {
-        const res = await manager.get(path).query(q)
-        return res.status < 500
-      }),
-      { numRuns: Math.min(RUNS, 300) },
-    )
-  })
+  test.each(READS)(
+    'GET %s with generated query strings never answers 500',
+    async (path, fields) => {
+      const dateish = fc.oneof(
+        fc.constantFrom('2026-06-01', '2026-06-30', '2027-13-01', '0000-00-00', '2026-06-01T00:00:00Z', '%ED%A0%80'),
+        impossibleDate,
+        fc.string({ maxLength: 20 }),
+      )
+      const query = fc.record(
+        Object.fromEntries(
+          Object.keys(fields).map((k) => [
+            k,
+            fc.oneof(dateish, fc.integer().map(String), fc.constantFrom('welfare', 'done', 'none', 'csv', 'week', 'person', "1' OR '1'='1")),
+          ]),
+        ),
+        { requiredKeys: [] },
+      )
+      await fc.assert(
+        fc.asyncProperty(query, async (q) => {
+          const res = await manager.get(path).query(q)
+          return res.status < 500
+        }),
+        { numRuns: Math.min(RUNS, 300) },
+      )
+    },
+    HANG_GUARD_MS,
+  )
 })

@@ -1,3 +1,4 @@
+import { ForeignKeys1796560000000 } from './1796560000000-ForeignKeys'
 import { PushSubscriptions1796470100000 } from './1796470100000-PushSubscriptions'
 import { OnCallChannels1796465534514 } from './1796465534514-OnCallChannels'
 import { CylinderReplaceTask1796530013001 } from './1796530013001-CylinderReplaceTask'
@@ -38,4 +39,5 @@ export const migrations: Array<new () => object> = [
   CylinderReplaceTask1796530013001,
   StuckSends1796541200044,
   PushOutbox1796541200045,
+  ForeignKeys1796560000000,
 ]

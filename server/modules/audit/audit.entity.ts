@@ -1,4 +1,5 @@
 import { EntitySchema } from 'typeorm'
+import { references } from '../../db/foreign-keys'
 
 export const AUDITED = ['routine', 'playbook', 'limit', 'ladder', 'shift', 'on_call', 'assignment', 'person', 'completion', 'event', 'facility'] as const
 export type AuditedEntity = (typeof AUDITED)[number]
@@ -21,7 +22,7 @@ export const AuditEntity = new EntitySchema<AuditRow>({
   columns: {
     id: { type: 'bigint', primary: true, generated: 'increment' },
     at: { type: 'datetime', precision: 3 },
-    personId: { type: 'int', nullable: true },
+    personId: { type: 'int', nullable: true, foreignKey: references('Person') },
     entity: { type: 'enum', enum: [...AUDITED] },
     entityId: { type: 'varchar', length: 40 },
     action: { type: 'enum', enum: ['create', 'update', 'delete', 'amend'] },

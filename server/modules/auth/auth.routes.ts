@@ -5,7 +5,7 @@ import type { AppConfig } from '../../lib/config'
 import { unauthenticated } from '../../lib/errors'
 import { disconnectSession } from '../../realtime/socket-server'
 import { configurePassport } from './passport'
-import { signedIn } from './require-role'
+import { signedIn } from '../../lib/require-role'
 import { signInLimiters } from './sign-in-limits'
 
 const WRONG = 'That e-mail and password do not match an active account.'

@@ -1,8 +1,8 @@
 import type { ReadingJudgement } from '#shared/readings/judge-readings'
 import { recheckOf, reflagTask, type TaskRow } from '../tasks/task-writes.service'
 import type { CompletionRow } from './completion.entities'
+import { completionJudged } from './completion-judged'
 import { closeCriticalAlert, createRecheck, startCriticalAlert } from './follow-ups'
-import { proposeIncidentsAfterCompletion } from './incident-follow-ups'
 
 /**
  * After an amendment the corrected record is judged again and the task carries the new flag. A
@@ -21,7 +21,7 @@ export async function reflagAfterAmendment(task: TaskRow, completion: Completion
       task,
       judged.readings.filter((r) => r.band === 'critical'),
     )
-    await proposeIncidentsAfterCompletion(reflagged, 'critical', judged.readings, null, completion.id, now)
+    await completionJudged.announce({ task: reflagged, flag: 'critical', readings: judged.readings, mortality: null, completionId: completion.id, now })
   }
   if (task.flag === 'critical') await closeCriticalAlert(task.id, now)
   // As on completion: a flag asks for a recheck by whoever did the check, except for a paper sheet typed in later.

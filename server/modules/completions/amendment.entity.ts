@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface AmendmentRow {
   id: number
@@ -17,8 +18,8 @@ export const AmendmentEntity = new EntitySchema<AmendmentRow>({
   tableName: 'completion_amendments',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    completionId: { type: 'varchar', length: 36 },
-    personId: { type: 'int' },
+    completionId: { type: 'varchar', length: 36, foreignKey: references('Completion') },
+    personId: { type: 'int', foreignKey: references('Person') },
     reason: { type: 'varchar', length: 1000 },
     readings: { type: 'json' },
     note: { type: 'text', nullable: true },

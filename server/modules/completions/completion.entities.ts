@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { BANDS, type Band } from '#shared/schemas/parameter'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface CompletionRow {
   id: string
@@ -23,14 +24,14 @@ export const CompletionEntity = new EntitySchema<CompletionRow>({
   tableName: 'completions',
   columns: {
     id: { type: 'varchar', length: 36, primary: true },
-    taskId: { type: 'int' },
-    personId: { type: 'int' },
+    taskId: { type: 'int', foreignKey: references('Task') },
+    personId: { type: 'int', foreignKey: references('Person') },
     outcome: { type: 'enum', enum: ['done', 'skipped'] },
     skipReason: { type: 'varchar', length: 40, nullable: true },
     note: { type: 'text', nullable: true },
     doneAt: { type: 'datetime', precision: 3 },
     lateMinutes: { type: 'int', nullable: true },
-    enteredById: { type: 'int', nullable: true },
+    enteredById: { type: 'int', nullable: true, foreignKey: references('Person') },
     response: { type: 'json', nullable: true },
     createdAt: createdAtColumn,
   },
@@ -60,19 +61,19 @@ export const ReadingEntity = new EntitySchema<ReadingRow>({
   tableName: 'readings',
   columns: {
     id: { type: 'bigint', primary: true, generated: 'increment' },
-    completionId: { type: 'varchar', length: 36 },
-    taskId: { type: 'int' },
-    tankId: { type: 'int', nullable: true },
-    systemId: { type: 'int', nullable: true },
+    completionId: { type: 'varchar', length: 36, foreignKey: references('Completion') },
+    taskId: { type: 'int', foreignKey: references('Task') },
+    tankId: { type: 'int', nullable: true, foreignKey: references('Tank') },
+    systemId: { type: 'int', nullable: true, foreignKey: references('System') },
     parameterKey: { type: 'varchar', length: 40 },
     value: { type: 'double' },
     unit: { type: 'varchar', length: 40 },
     band: { type: 'enum', enum: [...BANDS] },
     derived: { type: 'boolean', default: false },
     takenAt: { type: 'datetime', precision: 3 },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     supersededAt: { type: 'datetime', precision: 3, nullable: true },
-    amendmentId: { type: 'int', nullable: true },
+    amendmentId: { type: 'int', nullable: true, foreignKey: references('Amendment') },
   },
   indices: [{ columns: ['tankId', 'parameterKey', 'takenAt'] }, { columns: ['systemId', 'parameterKey', 'takenAt'] }, { columns: ['completionId'] }],
 })
@@ -96,13 +97,13 @@ export const AlertEntity = new EntitySchema<AlertRow>({
   tableName: 'alerts',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    taskId: { type: 'int' },
+    taskId: { type: 'int', foreignKey: references('Task') },
     kind: { type: 'enum', enum: [...ALERT_KINDS] },
     detail: { type: 'varchar', length: 500 },
-    ladderId: { type: 'int', nullable: true },
+    ladderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
     startedAt: { type: 'datetime', precision: 3 },
     acknowledgedAt: { type: 'datetime', precision: 3, nullable: true },
-    acknowledgedById: { type: 'int', nullable: true },
+    acknowledgedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     closedAt: { type: 'datetime', precision: 3, nullable: true },
   },
   indices: [{ columns: ['taskId', 'kind'], unique: true }, { columns: ['closedAt'] }],
@@ -124,8 +125,8 @@ export const PhotoEntity = new EntitySchema<PhotoRow>({
   tableName: 'photos',
   columns: {
     id: { type: 'varchar', length: 36, primary: true },
-    taskId: { type: 'int' },
-    personId: { type: 'int' },
+    taskId: { type: 'int', foreignKey: references('Task') },
+    personId: { type: 'int', foreignKey: references('Person') },
     fileName: { type: 'varchar', length: 80 },
     mimeType: { type: 'varchar', length: 40 },
     sizeBytes: { type: 'int' },

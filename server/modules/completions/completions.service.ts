@@ -14,8 +14,8 @@ import { closeTask, recheckOf, type TaskRow } from '../tasks/task-writes.service
 import { getTaskRow, loadTaskContext } from '../tasks/tasks.service'
 import { toTask } from '../tasks/task.mapper'
 import { CompletionEntity, ReadingEntity, type CompletionRow } from './completion.entities'
+import { completionJudged } from './completion-judged'
 import { createRecheck, startCriticalAlert } from './follow-ups'
-import { proposeIncidentsAfterCompletion } from './incident-follow-ups'
 import { readingContextFor, type ReadingContext } from './reading-context'
 import { assertMayComplete } from './who-may-complete'
 
@@ -102,7 +102,14 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
         updated,
         judged.readings.filter((r) => r.band === 'critical'),
       )
-    await proposeIncidentsAfterCompletion(updated, flag, judged.readings, mortality?.plan, data.completionId, new Date())
+    await completionJudged.announce({
+      task: updated,
+      flag,
+      readings: judged.readings,
+      mortality: mortality?.plan,
+      completionId: data.completionId,
+      now: new Date(),
+    })
     const response: CompletionResult = { task: toTask(updated, await loadTaskContext()), readings: judged.readings, recheckTaskId, notes: judged.notes }
     await manager.getRepository(CompletionEntity).update(data.completionId, { response: response as never })
     await audit('completion', data.completionId, 'create', null, { taskId: task.id, outcome: data.outcome, flag, performedById: performer.id, recheckTaskId })

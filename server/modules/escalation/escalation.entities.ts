@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { CHANNELS, NOTIFICATION_STATUSES, type Channel, type LadderStep } from '#shared/schemas/ladder'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface LadderRow {
   id: number
@@ -51,9 +52,9 @@ export const NotificationEntity = new EntitySchema<NotificationRow>({
   tableName: 'notifications',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    alertId: { type: 'int' },
+    alertId: { type: 'int', foreignKey: references('Alert') },
     step: { type: 'int' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     channel: { type: 'enum', enum: [...CHANNELS], default: 'email' },
     email: { type: 'varchar', length: 200 },
     destination: { type: 'varchar', length: 1000, nullable: true },
@@ -182,7 +183,7 @@ export const TextQuotaEntity = new EntitySchema<TextQuotaRow>({
   name: 'TextQuota',
   tableName: 'text_quotas',
   columns: {
-    personId: { type: 'int', primary: true },
+    personId: { type: 'int', primary: true, foreignKey: references('Person') },
     hourStart: { type: 'datetime', precision: 0, primary: true },
     used: { type: 'int', default: 0 },
     suppressed: { type: 'int', default: 0 },

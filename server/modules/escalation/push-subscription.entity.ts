@@ -1,4 +1,5 @@
 import { EntitySchema } from 'typeorm'
+import { references } from '../../db/foreign-keys'
 
 export interface PushSubscriptionRow {
   id: number
@@ -17,7 +18,7 @@ export const PushSubscriptionEntity = new EntitySchema<PushSubscriptionRow>({
   tableName: 'push_subscriptions',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     endpointHash: { type: 'char', length: 64 },
     endpoint: { type: 'varchar', length: 1000 },
     p256dh: { type: 'varchar', length: 200 },

@@ -21,6 +21,8 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
     checkRefs?: (data: Partial<T>) => Promise<void>
     /** Refuses removing something still in use (e.g. an area that holds tanks). */
     checkRemovable?: (row: T) => Promise<void>
+    /** Clears what may go with the row, before the foreign keys judge the delete; a refusal undoes it with the request. */
+    beforeRemove?: (row: T) => Promise<unknown>
   } = {},
 ) {
   type Input = z.output<S>
@@ -66,6 +68,7 @@ export function catalogue<T extends WithId, S extends z.ZodType<Omit<T, 'id'>>>(
     async remove(id: number): Promise<void> {
       const before = await get(id)
       await opts.checkRemovable?.(before)
+      await opts.beforeRemove?.(before)
       try {
         await repo().delete(id)
       } catch (err) {

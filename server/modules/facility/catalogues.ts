@@ -1,9 +1,9 @@
 import { AreaInputSchema, BatchInputSchema, EquipmentInputSchema, SystemInputSchema, TankInputSchema } from '#shared/schemas/facility'
 import { db } from '../../db/data-source'
 import { conflict, validationError } from '../../lib/errors'
-import { removeUntouchedFutureTasks, materialiseForTank } from '../tasks/materialiser'
 import { catalogue } from './catalogue.service'
 import { AreaEntity, BatchEntity, EquipmentEntity, SystemEntity, TankEntity } from './facility.entities'
+import { tankUseChanged } from './tank-changes'
 
 async function mustExist(entity: typeof AreaEntity | typeof SystemEntity | typeof TankEntity, id: number | null | undefined, field: string, label: string) {
   if (id === null || id === undefined) return
@@ -42,10 +42,12 @@ export const tanks = catalogue(TankEntity, TankInputSchema, 'tank', {
     await mustExist(AreaEntity, t.areaId, 'areaId', 'area')
     await mustExist(SystemEntity, t.systemId, 'systemId', 'system')
   },
+  // A deleted tank's untouched future tasks go first, so only its history (record 13f) can keep it.
+  beforeRemove: (tank) => tankUseChanged.announce({ tankId: tank.id, inUse: false }),
   // An emptied tank loses its future untouched tasks; a refilled one gets them back.
   onChange: async (before, after) => {
-    if (before && (!after || (before.inUse && !after.inUse))) await removeUntouchedFutureTasks({ tankId: before.id })
-    if (after && after.inUse && (!before || !before.inUse)) await materialiseForTank(after.id)
+    if (before && after && before.inUse && !after.inUse) await tankUseChanged.announce({ tankId: before.id, inUse: false })
+    if (after && after.inUse && (!before || !before.inUse)) await tankUseChanged.announce({ tankId: after.id, inUse: true })
     if (before && !after) {
       // A deleted tank leaves the batches that listed it.
       const repo = db().getRepository(BatchEntity)

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { BATCH_STATUSES, TANK_KINDS, type Area, type Batch, type Equipment, type Facility, type System, type Tank } from '#shared/schemas/facility'
+import { references } from '../../db/foreign-keys'
 
 // Decimal columns come back from mysql2 as strings; this keeps numbers numbers.
 const decimalAsNumber = { to: (v: number | null) => v, from: (v: string | null) => (v == null ? null : Number(v)) }
@@ -15,8 +16,8 @@ export const FacilityEntity = new EntitySchema<Facility>({
     quarantineDays: { type: 'int', default: 30 },
     arrivalTempDiffLimitC: { type: 'decimal', precision: 4, scale: 1, default: 2, transformer: decimalAsNumber },
     minOxygenHours: { type: 'decimal', precision: 6, scale: 1, default: 12, transformer: decimalAsNumber },
-    defaultLadderId: { type: 'int', nullable: true },
-    fastLadderId: { type: 'int', nullable: true },
+    defaultLadderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
+    fastLadderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
     digestTime: { type: 'varchar', length: 5, default: '07:00' },
   },
 })
@@ -40,7 +41,7 @@ export const SystemEntity = new EntitySchema<System>({
     id: { type: 'int', primary: true, generated: 'increment' },
     code: { type: 'varchar', length: 40, unique: true },
     name: { type: 'varchar', length: 120 },
-    areaId: { type: 'int', nullable: true },
+    areaId: { type: 'int', nullable: true, foreignKey: references('Area') },
     volumeL: { type: 'double' },
     salinitySetpoint: { type: 'double', nullable: true },
   },
@@ -53,8 +54,8 @@ export const TankEntity = new EntitySchema<Tank>({
     id: { type: 'int', primary: true, generated: 'increment' },
     code: { type: 'varchar', length: 40, unique: true },
     name: { type: 'varchar', length: 120 },
-    areaId: { type: 'int' },
-    systemId: { type: 'int', nullable: true },
+    areaId: { type: 'int', foreignKey: references('Area') },
+    systemId: { type: 'int', nullable: true, foreignKey: references('System') },
     volumeL: { type: 'double' },
     kind: { type: 'enum', enum: [...TANK_KINDS], default: 'tank' },
     inUse: { type: 'boolean', default: true },
@@ -70,7 +71,7 @@ export const EquipmentEntity = new EntitySchema<Equipment>({
     code: { type: 'varchar', length: 40, unique: true },
     name: { type: 'varchar', length: 120 },
     kind: { type: 'varchar', length: 60 },
-    areaId: { type: 'int', nullable: true },
+    areaId: { type: 'int', nullable: true, foreignKey: references('Area') },
   },
 })
 

@@ -4,7 +4,7 @@ import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
 import { recordChange } from '../../realtime/change-outbox'
 import { AreaEntity, SystemEntity, TankEntity } from './facility.entities'
-import { materialiseForTank, removeUntouchedFutureTasks } from '../tasks/materialiser'
+import { tankUseChanged } from './tank-changes'
 
 export const TANK_CSV_COLUMNS = ['code', 'name', 'area', 'system', 'volume_l', 'kind', 'in_use'] as const
 const TRUE = new Set(['yes', 'true', '1', 'y'])
@@ -94,9 +94,6 @@ async function saveTanks(rows: TankInput[]): Promise<TankImportResult> {
     }
     if (result.created || result.updated) await recordChange('catalogue')
   })
-  for (const change of changedUse) {
-    if (change.inUse) await materialiseForTank(change.id)
-    else await removeUntouchedFutureTasks({ tankId: change.id })
-  }
+  for (const change of changedUse) await tankUseChanged.announce({ tankId: change.id, inUse: change.inUse })
   return result
 }

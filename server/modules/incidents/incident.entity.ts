@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import type { Incident } from '#shared/schemas/incident'
 import { INCIDENT_SOURCES, INCIDENT_STATUSES } from '#shared/schemas/incident'
+import { references } from '../../db/foreign-keys'
 
 type Dates =
   | 'startedAt'
@@ -44,7 +45,7 @@ export const IncidentEntity = new EntitySchema<IncidentRow>({
     status: { type: 'enum', enum: [...INCIDENT_STATUSES], default: 'proposed' },
     source: { type: 'enum', enum: [...INCIDENT_SOURCES] },
     sourceKey: { type: 'varchar', length: 60, nullable: true, unique: true },
-    taskId: { type: 'int', nullable: true },
+    taskId: { type: 'int', nullable: true, foreignKey: references('Task') },
     title: { type: 'varchar', length: 160 },
     whatHappened: { type: 'text' },
     startedAt: when(),
@@ -59,7 +60,7 @@ export const IncidentEntity = new EntitySchema<IncidentRow>({
     rootCause: { type: 'text' },
     correctiveActions: { type: 'text' },
     decisionReason: { type: 'varchar', length: 500, nullable: true },
-    decidedById: { type: 'int', nullable: true },
+    decidedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     decidedAt: when(true),
     welfareDueAt: when(),
     committeeDueAt: when(),

@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { DecideIncidentInputSchema, IncidentNoteInputSchema, UpdateIncidentInputSchema } from '#shared/schemas/incident'
-import { requireRole, signedIn } from '../auth/require-role'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { addIncidentNote, decideIncident, getIncident, listIncidents, updateIncident } from './incidents.service'
 
 export const incidentsRouter = Router()

@@ -64,6 +64,8 @@ export async function decideIncident(id: number, decision: 'confirm' | 'dismiss'
     const row = await load(id)
     throw conflict(`This incident is already ${row.status}; nothing was changed.`)
   }
+  const decided = await load(id)
+  if (decided.taskId) await closeSettledDeadlineAlerts(decided.taskId, decided, now)
   await recordChange('incident', [id])
   return getIncident(id)
 }
@@ -91,14 +93,19 @@ export async function updateIncident(id: number, data: UpdateIncidentInput, now 
   }
   // An empty patch changes nothing (TypeORM refuses an UPDATE without values).
   if (Object.keys(next).length) await repo().update(id, next)
-  if (row.taskId) await closeMetDeadlineAlerts(row.taskId, { ...row, ...next }, now)
+  if (row.taskId) await closeSettledDeadlineAlerts(row.taskId, { ...row, ...next }, now)
   await recordChange('incident', [id])
   return getIncident(id)
 }
 
-/** A deadline met after it escalated stops its alert climbing the ladder. */
-async function closeMetDeadlineAlerts(taskId: number, row: IncidentRow, now: Date) {
-  for (const rule of DEADLINE_RULES) if (row[rule.done] && row[rule.claim]) await closeIncidentAlert(taskId, rule.kind, now)
+/**
+ * A deadline met after it escalated stops its alert climbing the ladder; so does every deadline
+ * of a dismissed proposal (the welfare one escalates while the proposal waits), none being needed.
+ */
+async function closeSettledDeadlineAlerts(taskId: number, row: IncidentRow, now: Date) {
+  for (const rule of DEADLINE_RULES) {
+    if (row[rule.claim] && (row[rule.done] || row.status === 'dismissed')) await closeIncidentAlert(taskId, rule.kind, now)
+  }
 }
 
 /** Observers (veterinarian, welfare officer) may add a note; nothing else. */

@@ -1,4 +1,5 @@
 import { EntitySchema } from 'typeorm'
+import { references } from '../../db/foreign-keys'
 
 export interface CylinderRow {
   id: number
@@ -35,6 +36,6 @@ export const CylinderEntity = new EntitySchema<CylinderRow>({
     flowLPerMin: { type: 'double', default: 0 },
     lastReadAt: { type: 'datetime', precision: 3, nullable: true },
     active: { type: 'boolean', default: true },
-    replaceTaskId: { type: 'int', nullable: true },
+    replaceTaskId: { type: 'int', nullable: true, foreignKey: references('Task') },
   },
 })

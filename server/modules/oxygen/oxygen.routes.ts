@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { CylinderInputSchema, CylinderReadingInputSchema } from '#shared/schemas/oxygen'
-import { requireRole, signedIn } from '../auth/require-role'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { createCylinder, listCylinders, recordCylinderReading } from './oxygen.service'
 
 export const oxygenRouter = Router()

@@ -1,5 +1,6 @@
 import { EntitySchema } from 'typeorm'
 import { LIMIT_SCOPES, type Limit, type Parameter } from '#shared/schemas/parameter'
+import { references } from '../../db/foreign-keys'
 
 export const ParameterEntity = new EntitySchema<Parameter>({
   name: 'Parameter',
@@ -13,7 +14,7 @@ export const ParameterEntity = new EntitySchema<Parameter>({
     physicalMin: { type: 'double' },
     physicalMax: { type: 'double' },
     derived: { type: 'boolean', default: false },
-    ladderId: { type: 'int', nullable: true },
+    ladderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
   },
 })
 

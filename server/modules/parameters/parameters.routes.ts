@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { LimitInputSchema } from '#shared/schemas/parameter'
-import { requireRole, signedIn } from '../auth/require-role'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { deleteLimit, listLimits, listParameters, upsertLimit } from './parameters.service'
 
 export const parametersRouter = Router()

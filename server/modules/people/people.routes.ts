@@ -1,6 +1,6 @@
 import { Router } from 'express'
 import { CreatePersonInputSchema, PersonIdParamSchema, ResetPasswordInputSchema, UpdatePersonInputSchema } from '#shared/schemas/person'
-import { requireRole } from '../auth/require-role'
+import { requireRole } from '../../lib/require-role'
 import { createPerson, listPeople, listStaff, resetPassword, updatePerson } from './people.service'
 import { forbidden } from '../../lib/errors'
 

@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { EVENT_KINDS, EVENT_STATUSES, type EventKind, type PlaybookStep } from '#shared/schemas/playbook'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface PlaybookRow {
   id: number
@@ -46,18 +47,18 @@ export const EventEntity = new EntitySchema<EventRow>({
   tableName: 'events',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    playbookId: { type: 'int' },
+    playbookId: { type: 'int', foreignKey: references('Playbook') },
     kind: { type: 'enum', enum: [...EVENT_KINDS] },
     title: { type: 'varchar', length: 160 },
     localStart: { type: 'varchar', length: 19 },
     startsAt: { type: 'datetime', precision: 3 },
     tankIds: { type: 'json' },
-    batchId: { type: 'int', nullable: true },
+    batchId: { type: 'int', nullable: true, foreignKey: references('Batch') },
     notes: { type: 'text' },
     status: { type: 'enum', enum: [...EVENT_STATUSES], default: 'planned' },
     fastingFrom: { type: 'datetime', precision: 3, nullable: true },
     fastingTo: { type: 'datetime', precision: 3, nullable: true },
-    createdById: { type: 'int' },
+    createdById: { type: 'int', foreignKey: references('Person') },
     version: { type: 'int', default: 1 },
   },
   indices: [{ columns: ['startsAt'] }],
@@ -80,11 +81,11 @@ export const BatchRecordEntity = new EntitySchema<BatchRecordRow>({
   tableName: 'batch_records',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    batchId: { type: 'int' },
-    eventId: { type: 'int', nullable: true },
+    batchId: { type: 'int', foreignKey: references('Batch') },
+    eventId: { type: 'int', nullable: true, foreignKey: references('FacilityEvent') },
     kind: { type: 'enum', enum: [...BATCH_RECORD_KINDS] },
     data: { type: 'json' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     createdAt: createdAtColumn,
   },
   indices: [{ columns: ['batchId'] }],

@@ -13,7 +13,7 @@ import {
 import { TankReadingsQuerySchema } from '#shared/schemas/tank-page'
 import { toCsv } from '../../lib/csv'
 import { auditTrail } from '../audit/audit-trail'
-import { requireRole } from '../auth/require-role'
+import { requireRole } from '../../lib/require-role'
 import { incidentReport, stockReport } from './animal-record.service'
 import { complianceReport, responseReport, welfareReport } from './reports.service'
 import { tankOverview, tankReadings } from './tank-overview.service'

@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { SHIFT_KINDS } from '#shared/schemas/roster'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface ShiftRow {
   id: number
@@ -16,7 +17,7 @@ export const ShiftEntity = new EntitySchema<ShiftRow>({
   tableName: 'shifts',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     date: { type: 'varchar', length: 10 },
     start: { type: 'varchar', length: 5 },
     end: { type: 'varchar', length: 5 },
@@ -39,7 +40,7 @@ export const OnCallEntity = new EntitySchema<OnCallRow>({
   tableName: 'on_call_duties',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     fromDate: { type: 'varchar', length: 10 },
     toDate: { type: 'varchar', length: 10 },
     startsAt: { type: 'datetime', precision: 3 },
@@ -60,7 +61,7 @@ export const HandoverNoteEntity = new EntitySchema<HandoverNoteRow>({
   tableName: 'handover_notes',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     text: { type: 'text' },
     createdAt: createdAtColumn,
   },

@@ -11,7 +11,7 @@ import {
   ShiftPatternInputSchema,
 } from '#shared/schemas/roster'
 import { recordChange } from '../../realtime/change-outbox'
-import { requireRole, signedIn } from '../auth/require-role'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { applyAssigneeRules } from './assignee-rules.service'
 import { getCalendar } from './calendar.service'
 import { rosterCoverage } from './coverage.service'

@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { PRIORITIES, ROUTINE_CATEGORIES, TARGET_KINDS, type Routine } from '#shared/schemas/routine'
 import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface RoutineRow extends Routine {
   createdAt: Date
@@ -30,7 +31,7 @@ export const RoutineEntity = new EntitySchema<RoutineRow>({
     activeTo: { type: 'varchar', length: 10, nullable: true },
     paused: { type: 'boolean', default: false },
     skipDates: { type: 'json' },
-    ladderId: { type: 'int', nullable: true },
+    ladderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
     planningError: { type: 'varchar', length: 500, nullable: true },
     version: { type: 'int', default: 1 },
     createdAt: createdAtColumn,

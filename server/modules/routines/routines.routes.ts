@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RoutineInputSchema, UpdateRoutineInputSchema } from '#shared/schemas/routine'
-import { requireRole } from '../auth/require-role'
+import { requireRole } from '../../lib/require-role'
 import { createRoutine, deleteRoutine, getRoutine, listRoutines, updateRoutine } from './routines.service'
 
 export const routinesRouter = Router()

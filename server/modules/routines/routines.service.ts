@@ -5,7 +5,8 @@ import { db } from '../../db/data-source'
 import { conflict, notFound, validationError } from '../../lib/errors'
 import { getFacility } from '../facility/facility.service'
 import { listParameters } from '../parameters/parameters.service'
-import { materialise, rematerialiseRoutine, removeUntouchedFutureTasks } from '../tasks/materialiser'
+import { removeUntouchedFutureTasks } from '../tasks/planned-task-writes'
+import { routineNeedsPlanning } from './routine-changes'
 import { RoutineEntity, type RoutineRow } from './routine.entity'
 
 const repo = () => db().getRepository(RoutineEntity)
@@ -40,7 +41,7 @@ export async function createRoutine(data: RoutineData): Promise<Routine> {
   await checkRoutine(data)
   const saved = await repo().save(repo().create({ ...data, version: 1 }))
   await audit('routine', saved.id, 'create', null, toRoutine(saved))
-  if (!saved.paused) await materialise({ routineIds: [saved.id], from: new Date() })
+  if (!saved.paused) await routineNeedsPlanning.announce({ routineId: saved.id })
   return toRoutine(saved)
 }
 
@@ -53,14 +54,16 @@ export async function updateRoutine(id: number, { version, ...data }: ParsedUpda
   await checkRoutine(data)
   const saved = await repo().save({ ...current, ...data, version: current.version + 1 })
   await audit('routine', id, 'update', toRoutine(current), toRoutine(saved))
-  if (saved.paused) await removeUntouchedFutureTasks({ routineId: id })
-  else await rematerialiseRoutine(id)
+  // Its untouched future tasks follow the old rule: they go, and an active routine is planned afresh.
+  await removeUntouchedFutureTasks({ routineId: id })
+  if (!saved.paused) await routineNeedsPlanning.announce({ routineId: id })
   return toRoutine(saved)
 }
 
 export async function deleteRoutine(id: number): Promise<void> {
   await audit('routine', id, 'delete', await getRoutine(id), null)
   await removeUntouchedFutureTasks({ routineId: id })
-  // Past and kept tasks stay as records; they keep the routine id for history.
+  // Past and kept tasks stay as records; the database clears their routine id (ON DELETE SET NULL,
+  // record 13f) and the audit row above keeps what the routine was.
   await repo().delete(id)
 }

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm'
 import type { ParsedMovementInput } from '#shared/schemas/stock'
-import { applyMovement, balanceKey, type LedgerEntry } from '#shared/stock/ledger'
+import { applyMovement, balanceKey, batchHoldings, type LedgerEntry } from '#shared/stock/ledger'
 import { validationError } from '../../lib/errors'
 import { updateBatchFromRegister } from '../facility/batch-register.service'
 import { lockBatchRegister, toEntry } from './stock-lock'
@@ -14,32 +14,35 @@ export interface WriteExtras {
   describeTank?: (tankId: number) => string
 }
 
+/** A movement's columns that only some kinds fill, all empty; each kind fills its own. */
+export const NO_DETAILS = {
+  fromTankId: null,
+  toTankId: null,
+  meanWeightG: null,
+  origin: null,
+  permitRef: null,
+  healthCertificateRef: null,
+  transportWater: null,
+  destination: null,
+  reason: null,
+  cause: null,
+  causeText: null,
+  necropsy: false,
+  correctsId: null,
+  completionId: null,
+  sourceKey: null,
+  note: null,
+} satisfies Partial<MovementRow>
+
 /** The row a parsed movement input becomes (a correction's tank and signed change go in toTankId and count). */
 export function rowFor(input: ParsedMovementInput, personId: number): Omit<MovementRow, 'id' | 'createdAt'> {
-  const none = {
-    fromTankId: null,
-    toTankId: null,
-    meanWeightG: null,
-    origin: null,
-    permitRef: null,
-    healthCertificateRef: null,
-    transportWater: null,
-    destination: null,
-    reason: null,
-    cause: null,
-    causeText: null,
-    necropsy: false,
-    correctsId: null,
-  }
   const common = {
-    ...none,
+    ...NO_DETAILS,
     batchId: input.batchId,
     kind: input.kind,
     occurredAt: input.occurredAt ? new Date(input.occurredAt) : new Date(),
     note: input.note ?? null,
     personId,
-    completionId: null,
-    sourceKey: null,
   }
   switch (input.kind) {
     case 'arrival':
@@ -87,13 +90,8 @@ export async function writeMovement(manager: EntityManager, row: Omit<MovementRo
   const saved = await manager
     .getRepository(MovementEntity)
     .save({ ...row, sourceKey: extras.sourceKey ?? row.sourceKey, completionId: extras.completionId ?? row.completionId })
-  const holding = [...onHand.entries()].filter(([k, n]) => k.startsWith(`${row.batchId}:`) && n > 0)
-  await updateBatchFromRegister(
-    manager,
-    row.batchId,
-    holding.reduce((s, [, n]) => s + n, 0),
-    holding.map(([k]) => Number(k.split(':')[1])),
-  )
+  const { count, tankIds } = batchHoldings(onHand, row.batchId)
+  await updateBatchFromRegister(manager, row.batchId, count, tankIds)
   return saved
 }
 

@@ -1,11 +1,11 @@
 import type { EntityManager } from 'typeorm'
 import type { Band } from '#shared/schemas/parameter'
 import { OTHER_CAUSE, RoundMortalityDetailSchema, UNKNOWN_CAUSE, type RoundMortalityDetail } from '#shared/schemas/stock'
-import { balances } from '#shared/stock/ledger'
+import { balances, largestHolder } from '#shared/stock/ledger'
 import { periodFigures } from '#shared/stock/period-report'
 import { db } from '../../db/data-source'
 import { validationError } from '../../lib/errors'
-import { writeMovement } from './movement-writer'
+import { NO_DETAILS, writeMovement } from './movement-writer'
 import { getStockSettings } from './stock-settings.service'
 import { tankCodes } from './stock.service'
 import { MovementEntity } from './stock.entities'
@@ -42,9 +42,7 @@ async function batchInTank(tankId: number) {
   const rows = await db()
     .getRepository(MovementEntity)
     .find({ where: [{ fromTankId: tankId }, { toTankId: tankId }] })
-  const onHand = balances(rows.map(toEntry))
-  const held = [...onHand.entries()].filter(([k, n]) => k.endsWith(`:${tankId}`) && n > 0).sort((a, b) => b[1] - a[1])
-  return held.length ? { batchId: Number(held[0][0].split(':')[0]), onHand: held[0][1] } : null
+  return largestHolder(balances(rows.map(toEntry)), tankId)
 }
 
 /**
@@ -114,26 +112,17 @@ export async function writeRoundMortality(manager: EntityManager, plan: RoundMor
   return writeMovement(
     manager,
     {
+      ...NO_DETAILS,
       batchId: plan.batchId,
       kind: 'mortality',
       occurredAt: source.at,
       fromTankId: plan.tankId,
-      toTankId: null,
       count: plan.count,
-      meanWeightG: null,
-      origin: null,
-      permitRef: null,
-      healthCertificateRef: null,
-      transportWater: null,
-      destination: null,
-      reason: null,
       cause: plan.cause,
       causeText: plan.causeText,
       necropsy: plan.necropsy,
-      correctsId: null,
       completionId: source.completionId,
       sourceKey: `completion:${source.completionId}`,
-      note: null,
       personId: source.personId,
     },
     { field: FIELD, describeTank: (id) => codes.get(id) ?? `tank ${id}` },

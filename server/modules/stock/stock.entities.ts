@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm'
 import { MOVEMENT_KINDS, type MovementKind } from '#shared/schemas/stock'
 import { createdAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface MovementRow {
   id: number
@@ -37,11 +38,11 @@ export const MovementEntity = new EntitySchema<MovementRow>({
   tableName: 'stock_movements',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    batchId: { type: 'int' },
+    batchId: { type: 'int', foreignKey: references('Batch') },
     kind: { type: 'enum', enum: [...MOVEMENT_KINDS] },
     occurredAt: { type: 'datetime', precision: 3 },
-    fromTankId: { type: 'int', nullable: true },
-    toTankId: { type: 'int', nullable: true },
+    fromTankId: { type: 'int', nullable: true, foreignKey: references('Tank') },
+    toTankId: { type: 'int', nullable: true, foreignKey: references('Tank') },
     count: { type: 'int' },
     meanWeightG: { type: 'double', nullable: true },
     origin: { type: 'varchar', length: 200, nullable: true },
@@ -53,11 +54,11 @@ export const MovementEntity = new EntitySchema<MovementRow>({
     cause: { type: 'varchar', length: 80, nullable: true },
     causeText: { type: 'varchar', length: 500, nullable: true },
     necropsy: { type: 'boolean', default: false },
-    correctsId: { type: 'int', nullable: true },
-    completionId: { type: 'varchar', length: 36, nullable: true },
+    correctsId: { type: 'int', nullable: true, foreignKey: references('StockMovement') },
+    completionId: { type: 'varchar', length: 36, nullable: true, foreignKey: references('Completion') },
     sourceKey: { type: 'varchar', length: 60, nullable: true, unique: true },
     note: { type: 'text', nullable: true },
-    personId: { type: 'int' },
+    personId: { type: 'int', foreignKey: references('Person') },
     createdAt: createdAtColumn,
   },
   indices: [{ columns: ['batchId', 'occurredAt'] }, { columns: ['fromTankId'] }, { columns: ['toTankId'] }, { columns: ['completionId'] }],

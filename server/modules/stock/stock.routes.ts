@@ -1,7 +1,7 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { MovementInputSchema, MovementListQuerySchema, UpdateStockSettingsInputSchema } from '#shared/schemas/stock'
-import { requireRole, signedIn } from '../auth/require-role'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { getStockSettings, updateStockSettings } from './stock-settings.service'
 import { batchStock, listMovements, onHandByTank, recordMovement, tankStock } from './stock.service'
 

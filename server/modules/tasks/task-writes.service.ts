@@ -3,6 +3,7 @@ import { db } from '../../db/data-source'
 import type { TaskStatus } from '#shared/schemas/task'
 import { recordBulkTaskChange, recordTaskChanges } from '../../realtime/change-outbox'
 import { TaskEntity, type TaskRow } from './task.entity'
+import { UNTOUCHED_TASK } from './untouched'
 
 /** The task row other modules build and read; they never touch the entity itself. */
 export type { TaskRow }
@@ -76,7 +77,7 @@ export async function removeUntouchedEventTasks(eventId: number) {
     .delete()
     .from(TaskEntity)
     .where({ eventId, status: In(['planned', 'open', 'overdue']) })
-    .andWhere('assignedManually = 0 AND edited = 0 AND completedAt IS NULL')
+    .andWhere(UNTOUCHED_TASK)
     .execute()
   if (result.affected) await recordBulkTaskChange('event')
 }

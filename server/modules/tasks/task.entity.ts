@@ -3,6 +3,7 @@ import { BANDS, type Band } from '#shared/schemas/parameter'
 import { PRIORITIES, ROUTINE_CATEGORIES, TARGET_KINDS, type Category, type TargetKind } from '#shared/schemas/routine'
 import { TASK_STATUSES, type TaskStatus } from '#shared/schemas/task'
 import { createdAtColumn, updatedAtColumn } from '../../db/timestamps'
+import { references } from '../../db/foreign-keys'
 
 export interface TaskRow {
   id: number
@@ -47,16 +48,16 @@ export const TaskEntity = new EntitySchema<TaskRow>({
   tableName: 'tasks',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    routineId: { type: 'int', nullable: true },
-    eventId: { type: 'int', nullable: true },
+    routineId: { type: 'int', nullable: true, foreignKey: references('Routine', 'SET NULL') },
+    eventId: { type: 'int', nullable: true, foreignKey: references('FacilityEvent') },
     title: { type: 'varchar', length: 160 },
     category: { type: 'enum', enum: [...ROUTINE_CATEGORIES] },
     instructions: { type: 'text' },
     priority: { type: 'enum', enum: [...PRIORITIES], default: 'routine' },
     targetKind: { type: 'enum', enum: [...TARGET_KINDS] },
     targetId: { type: 'int', default: 0 },
-    tankId: { type: 'int', nullable: true },
-    areaId: { type: 'int', nullable: true },
+    tankId: { type: 'int', nullable: true, foreignKey: references('Tank') },
+    areaId: { type: 'int', nullable: true, foreignKey: references('Area') },
     localDate: { type: 'varchar', length: 10 },
     localStart: { type: 'varchar', length: 19 },
     occurrenceStart: { type: 'varchar', length: 19 },
@@ -65,16 +66,16 @@ export const TaskEntity = new EntitySchema<TaskRow>({
     graceUntil: { type: 'datetime', precision: 3 },
     durationMinutes: { type: 'int' },
     status: { type: 'enum', enum: [...TASK_STATUSES], default: 'planned' },
-    assigneeId: { type: 'int', nullable: true },
+    assigneeId: { type: 'int', nullable: true, foreignKey: references('Person') },
     assignedManually: { type: 'boolean', default: false },
     edited: { type: 'boolean', default: false },
     requiredReadings: { type: 'json' },
     flag: { type: 'enum', enum: [...BANDS], nullable: true },
     lateMinutes: { type: 'int', nullable: true },
     completedAt: { type: 'datetime', precision: 3, nullable: true },
-    completedById: { type: 'int', nullable: true },
+    completedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     heldReason: { type: 'varchar', length: 300, nullable: true },
-    recheckOfTaskId: { type: 'int', nullable: true },
+    recheckOfTaskId: { type: 'int', nullable: true, foreignKey: references('Task') },
     version: { type: 'int', default: 1 },
     createdAt: createdAtColumn,
     updatedAt: updatedAtColumn,

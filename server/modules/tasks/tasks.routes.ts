@@ -1,14 +1,12 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
 import { RoundQuerySchema } from '#shared/schemas/round'
-import { BulkMoveInputSchema, CreateTaskInputSchema, MoveTaskInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
+import { CreateTaskInputSchema, TaskListQuerySchema } from '#shared/schemas/task'
 import { z } from 'zod'
 import { calendarDate } from '#shared/schemas/calendar'
-import { AppError, forbidden } from '../../lib/errors'
-import { db } from '../../db/data-source'
-import { requireRole, signedIn } from '../auth/require-role'
+import { forbidden } from '../../lib/errors'
+import { requireRole, signedIn } from '../../lib/require-role'
 import { getBoard } from './board.service'
-import { moveTask } from './move-task.service'
 import { getRound, getRoundSheet } from './round.service'
 import { createOneOffTask, getTask, listTasks } from './tasks.service'
 
@@ -33,26 +31,6 @@ tasksRouter.get('/round-sheet', requireRole('manager', 'supervisor', 'technician
 tasksRouter.get('/board', signedIn, async (req, res) => {
   const { date } = z.object({ date: calendarDate() }).parse(req.query)
   res.json(await getBoard(date))
-})
-tasksRouter.post('/bulk-move', requireRole('manager', 'supervisor'), async (req, res) => {
-  const { tasks, ...move } = BulkMoveInputSchema.parse(req.body)
-  const moved = []
-  const refused = []
-  // One at a time, each in a savepoint, so each card gets its own verdict (a stale one does not
-  // block the rest). Only a refusal is a verdict: a database error fails the whole request.
-  for (const t of tasks) {
-    try {
-      moved.push(await db().transaction(() => moveTask(t.id, req.user!, { ...move, version: t.version })))
-    } catch (err) {
-      if (!(err instanceof AppError)) throw err
-      refused.push({ id: t.id, message: err.message })
-    }
-  }
-  res.json({ moved, refused })
-})
-tasksRouter.patch('/:id', requireRole('manager', 'supervisor'), async (req, res) => {
-  const { id } = IdParamSchema.parse(req.params)
-  res.json(await moveTask(id, req.user!, MoveTaskInputSchema.parse(req.body)))
 })
 tasksRouter.get('/:id', signedIn, async (req, res) => {
   res.json(await getTask(IdParamSchema.parse(req.params).id))

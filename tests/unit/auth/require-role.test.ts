@@ -1,7 +1,7 @@
 import type { Request, Response } from 'express'
 import { describe, expect, test } from 'vitest'
 import { AppError } from '#server/lib/errors'
-import { requireRole } from '#server/modules/auth/require-role'
+import { requireRole } from '#server/lib/require-role'
 import type { Role } from '#shared/schemas/person'
 
 function run(guard: ReturnType<typeof requireRole>, role?: Role) {

@@ -56,6 +56,8 @@ describe('import boundaries', () => {
       'src/features/ponds/api/pond-queries.ts',
       'server/modules/hatchery/hatchery.entity.ts',
       'server/modules/hatchery/hatchery.service.ts',
+      // A cycle of modules, not of files: lint passes it, and module-graph.test.ts does not.
+      'server/modules/hatchery/hatchery-rations.ts',
       'server/modules/feeding/feeding.service.ts',
       'server/modules/feeding/legacy-plan.ts',
     ]) {

@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest'
-import { planRoutineTasks } from '#server/modules/tasks/materialiser'
+import { planRoutineTasks } from '#server/modules/scheduling/materialiser'
 import type { Catalogue } from '#server/modules/tasks/targets'
 import type { Routine } from '#shared/schemas/routine'
 

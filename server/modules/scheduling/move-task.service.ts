@@ -1,16 +1,13 @@
 import { DateTime } from 'luxon'
-import { Between, type EntityManager } from 'typeorm'
 import type { Person } from '#shared/schemas/person'
 import type { MoveTaskInput, Task } from '#shared/schemas/task'
-import { audit } from '../audit/audit.service'
-import { db } from '../../db/data-source'
 import { conflict, forbidden, validationError } from '../../lib/errors'
-import { recordTaskChanges } from '../../realtime/change-outbox'
 import { getFacility } from '../facility/facility.service'
 import { findPerson } from '../people/person-reads'
 import { isOnShift } from '../roster/shift-reads'
-import { TaskEntity, type TaskRow } from './task.entity'
-import { getTask, getTaskRow } from './tasks.service'
+import { routineTasksBetween, writeTaskMove, type TaskMove } from '../tasks/task-move-writes'
+import type { TaskRow } from '../tasks/task-writes.service'
+import { getTask, getTaskRow } from '../tasks/tasks.service'
 
 const FINISHED = ['done', 'skipped']
 
@@ -25,9 +22,9 @@ export async function moveTask(taskId: number, actor: Person, data: MoveTaskInpu
   if (task.version !== data.version) throw conflict('Someone changed this task a moment ago; the board has been refreshed.', { currentVersion: task.version })
   if (FINISHED.includes(task.status)) throw conflict('This task is already finished and stays where it was done.')
 
-  const changes: Partial<TaskRow> = {}
+  const changes: TaskMove = {}
   if (data.date !== undefined && data.date !== task.localDate) Object.assign(changes, await newDay(task, data.date))
-  const day = (changes.localDate as string | undefined) ?? task.localDate
+  const day = changes.localDate ?? task.localDate
   if (data.assigneeId !== undefined) {
     if (data.assigneeId !== null) await assertOnShift(data.assigneeId, day)
     changes.assigneeId = data.assigneeId
@@ -35,24 +32,7 @@ export async function moveTask(taskId: number, actor: Person, data: MoveTaskInpu
   } else if (changes.localDate && task.assigneeId && task.assignedManually) {
     await assertOnShift(task.assigneeId, day)
   }
-  // The move, its audit row and its outbox row commit together, or not at all.
-  await db().transaction(async (manager: EntityManager) => {
-    const result = await manager
-      .createQueryBuilder()
-      .update(TaskEntity)
-      .set({ ...changes, version: () => 'version + 1' })
-      .where('id = :id AND version = :version', { id: task.id, version: task.version })
-      .execute()
-    if (!result.affected) throw conflict('Someone changed this task a moment ago; the board has been refreshed.')
-    await audit(
-      'assignment',
-      task.id,
-      'update',
-      { assigneeId: task.assigneeId, localDate: task.localDate },
-      { assigneeId: changes.assigneeId ?? task.assigneeId, localDate: changes.localDate ?? task.localDate },
-    )
-    await recordTaskChanges([task.id])
-  })
+  await writeTaskMove(task, changes)
   return getTask(task.id)
 }
 
@@ -63,21 +43,12 @@ async function assertOnShift(personId: number, date: string) {
 }
 
 /** A routine task may move only between its neighbouring occurrences, and never into the past. */
-async function newDay(task: TaskRow, date: string): Promise<Partial<TaskRow>> {
+async function newDay(task: TaskRow, date: string): Promise<TaskMove> {
   const zone = (await getFacility()).timeZone
   const today = DateTime.now().setZone(zone).toISODate()!
   if (date < today) throw conflict('A task cannot be moved into the past.')
   if (task.routineId !== null) {
-    const siblings = await db()
-      .getRepository(TaskEntity)
-      .find({
-        where: {
-          routineId: task.routineId,
-          targetKind: task.targetKind,
-          targetId: task.targetId,
-          localDate: Between(minDate(date, task.localDate), maxDate(date, task.localDate)),
-        },
-      })
+    const siblings = await routineTasksBetween(task, minDate(date, task.localDate), maxDate(date, task.localDate))
     const inTheWay = siblings.find(
       (s) =>
         s.id !== task.id && (date > task.localDate ? s.localDate > task.localDate && s.localDate <= date : s.localDate < task.localDate && s.localDate >= date),

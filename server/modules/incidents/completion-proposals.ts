@@ -1,24 +1,13 @@
-import type { Band } from '#shared/schemas/parameter'
-import type { Reading } from '#shared/schemas/completion'
-import { proposeForCriticalRecheck, proposeForMortalityThreshold } from '../incidents/incidents.service'
-import type { RoundMortalityPlan } from '../stock/round-mortality'
+import type { JudgedCompletion } from '../completions/completion-judged'
 import { getTaskRow } from '../tasks/tasks.service'
+import { proposeForCriticalRecheck, proposeForMortalityThreshold } from './incidents.service'
 
 /**
  * After a completion is saved: Roundtide proposes (never files) an incident when a recheck reads
  * critical again after a critical first reading, or when the round's deaths take the batch over
  * the facility's 7-day threshold. A person confirms or dismisses each proposal.
  */
-type CompletedTask = { id: number; title: string; tankId: number | null; recheckOfTaskId: number | null }
-
-export async function proposeIncidentsAfterCompletion(
-  task: CompletedTask,
-  flag: Band,
-  readings: Reading[],
-  mortality: RoundMortalityPlan | null | undefined,
-  completionId: string,
-  now: Date,
-) {
+export async function proposeIncidentsAfterCompletion({ task, flag, readings, mortality, completionId, now }: JudgedCompletion) {
   if (flag === 'critical' && task.recheckOfTaskId) {
     const first = await getTaskRow(task.recheckOfTaskId).catch(() => null)
     if (first?.flag === 'critical') {

@@ -2,43 +2,20 @@ import { DateTime } from 'luxon'
 import { expandRuleBounded, type Occurrence } from '#shared/schedule/expand-rule'
 import { RULE_LIMITS } from '#shared/schedule/rule-limits'
 import type { Routine } from '#shared/schemas/routine'
-import { db } from '../../db/data-source'
 import { recordBulkTaskChange } from '../../realtime/change-outbox'
+import { eventLoopSlices } from '../../lib/event-loop-slices'
 import { logger } from '../../lib/logger'
 import { activePersonIds } from '../people/person-reads'
 import { holdFeedsForAllEvents } from '../playbooks/fasting'
 import { applyAssigneeRules } from '../roster/assignee-rules.service'
 import { notePlanningError, routinesToPlan } from '../routines/routine-planning'
-import { TaskEntity, type TaskRow } from './task.entity'
-import { loadCatalogue, resolveTargets, type Catalogue } from './targets'
+import { insertPlannedTasks } from '../tasks/planned-task-writes'
+import { loadCatalogue, resolveTargets, type Catalogue } from '../tasks/targets'
+import type { TaskRow } from '../tasks/task-writes.service'
 
 export const DEFAULT_HORIZON_DAYS = RULE_LIMITS.horizonDays
 // Rows per INSERT: ~400 bytes each, so a statement stays far below max_allowed_packet.
 const CHUNK = 2000
-// Columns the materialiser writes; the rest take their defaults.
-const INSERT_COLUMNS = [
-  'routineId',
-  'title',
-  'category',
-  'instructions',
-  'priority',
-  'targetKind',
-  'targetId',
-  'tankId',
-  'areaId',
-  'localDate',
-  'localStart',
-  'occurrenceStart',
-  'dueAt',
-  'windowStartAt',
-  'graceUntil',
-  'durationMinutes',
-  'status',
-  'assigneeId',
-  'requiredReadings',
-  'version',
-] as const
-const ROW_PLACEHOLDER = `(${INSERT_COLUMNS.map(() => '?').join(',')})`
 
 export interface MaterialiseOptions {
   routineIds?: number[]
@@ -61,10 +38,11 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
   let created = 0
   // Rows wait in one batch across routines, so small routines share a statement.
   let batch: Array<Partial<TaskRow>> = []
+  const pause = eventLoopSlices()
   for (const [index, routine] of routines.entries()) {
     let rows: Array<Partial<TaskRow>> = []
     try {
-      rows = planRoutineTasks(routine, cat, from, until, activePeople)
+      rows = await planRoutineInSlices(routine, cat, { from, until, activePeople, pause })
       if (routine.planningError !== null) await notePlanningError(routine.id, null)
     } catch (err) {
       // One broken routine (say, a date stored before dates were checked) must not stop the
@@ -76,14 +54,14 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
       if (opts.tankId !== undefined && row.tankId !== opts.tankId) continue
       batch.push(row)
       if (batch.length === CHUNK) {
-        created += await insertIgnoringDuplicates(batch)
+        created += await insertPlannedTasks(batch)
         batch = []
       }
     }
-    if (index === routines.length - 1 && batch.length) created += await insertIgnoringDuplicates(batch)
+    if (index === routines.length - 1 && batch.length) created += await insertPlannedTasks(batch)
     opts.onProgress?.(index + 1, routines.length, created)
     // Planning is synchronous work: give waiting requests their turn between routines.
-    await new Promise<void>((resolve) => setImmediate(resolve))
+    await pause()
   }
   if (created) {
     logger.info({ created, routines: routines.length }, 'tasks materialised')
@@ -103,20 +81,6 @@ export async function materialise(opts: MaterialiseOptions = {}): Promise<{ crea
 }
 
 const planningErrorText = (err: unknown) => `Tasks could not be planned: ${err instanceof Error ? err.message : String(err)}`.slice(0, 500)
-
-/**
- * One multi-row INSERT IGNORE, written by hand: the query builder spends longer building a
- * 2,000-row statement than the database spends on it. The driver reports the rows really new.
- */
-async function insertIgnoringDuplicates(rows: Array<Partial<TaskRow>>): Promise<number> {
-  const params: unknown[] = []
-  for (const row of rows) {
-    for (const c of INSERT_COLUMNS) params.push(c === 'requiredReadings' ? JSON.stringify(row[c] ?? []) : (row[c] ?? null))
-  }
-  const sql = `INSERT IGNORE INTO tasks (${INSERT_COLUMNS.map((c) => `\`${c}\``).join(',')}) VALUES ${rows.map(() => ROW_PLACEHOLDER).join(',')}`
-  const result = (await db().query(sql, params)) as { affectedRows?: number }
-  return result.affectedRows ?? 0
-}
 
 const WEEK_MS = 7 * 86_400_000
 
@@ -140,6 +104,24 @@ function occurrencesBetween(routine: Routine, zone: string, lower: Date, upper: 
     found.push(...week.occurrences)
   }
   return found
+}
+
+/**
+ * planRoutineTasks a week at a time, pausing between weeks: a routine at the density limit (a
+ * task every 15 minutes) on 20 tanks is 80,000 rows, a quarter of a second of work in one piece.
+ */
+async function planRoutineInSlices(
+  routine: Routine,
+  cat: Catalogue,
+  span: { from: Date; until: Date; activePeople: ReadonlySet<number>; pause: () => Promise<void> },
+): Promise<Array<Partial<TaskRow>>> {
+  const rows: Array<Partial<TaskRow>> = []
+  for (let start = span.from.getTime(); start <= span.until.getTime(); start += WEEK_MS) {
+    const end = new Date(Math.min(start + WEEK_MS - 1, span.until.getTime()))
+    for (const row of planRoutineTasks(routine, cat, new Date(start), end, span.activePeople)) rows.push(row)
+    await span.pause()
+  }
+  return rows
 }
 
 function localDay(date: string, zone: string) {
@@ -196,30 +178,7 @@ export function planRoutineTasks(routine: Routine, cat: Catalogue, from: Date, u
   return rows
 }
 
-/**
- * Removes future tasks nobody has touched: not started, not manually assigned, not edited.
- * Used when a routine changes or pauses, or a tank is emptied.
- */
-export async function removeUntouchedFutureTasks(where: { routineId?: number; tankId?: number }, now = new Date()) {
-  const qb = db()
-    .createQueryBuilder()
-    .delete()
-    .from(TaskEntity)
-    .where('dueAt > :now', { now })
-    .andWhere("status IN ('planned', 'open')")
-    .andWhere('assignedManually = 0 AND edited = 0 AND completedAt IS NULL')
-  if (where.routineId !== undefined) qb.andWhere('routineId = :routineId', { routineId: where.routineId })
-  if (where.tankId !== undefined) qb.andWhere('tankId = :tankId AND routineId IS NOT NULL', { tankId: where.tankId })
-  const result = await qb.execute()
-  if (result.affected) await recordBulkTaskChange('removed')
-  return result.affected ?? 0
-}
-
-/** After a routine edit: replace its untouched future tasks with ones from the new rule. */
-export async function rematerialiseRoutine(routineId: number) {
-  const removed = await removeUntouchedFutureTasks({ routineId })
-  const { created } = await materialise({ routineIds: [routineId], from: new Date() })
-  return { removed, created }
-}
+/** After a routine is created or changed: its tasks for the horizon, from now. */
+export const materialiseRoutine = (routineId: number) => materialise({ routineIds: [routineId], from: new Date() })
 
 export const materialiseForTank = (tankId: number) => materialise({ tankId, from: new Date() })

@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express'
 import { ROLE_LABELS, type Role } from '#shared/schemas/person'
-import { forbidden, unauthenticated } from '../../lib/errors'
+import { forbidden, unauthenticated } from './errors'
 
 /** The one guard for every protected route: signed in, and holding one of the roles. */
 export function requireRole(...roles: Role[]): RequestHandler {
