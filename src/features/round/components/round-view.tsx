@@ -58,7 +58,15 @@ function RoundContent({ personId, date, status }: Props) {
     }
   }
   const header = (done = 0, total = 0) => (
-    <RoundHeader date={round?.date ?? date} done={done} total={total} waiting={outbox.waiting} failed={outbox.failed} status={status} />
+    <RoundHeader
+      date={round?.date ?? date}
+      done={done}
+      total={total}
+      waiting={outbox.waiting}
+      failed={outbox.failed}
+      status={status}
+      reserve={!round && !query.isError}
+    />
   )
 
   if (!round) {
