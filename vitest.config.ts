@@ -2,6 +2,10 @@ import { defineConfig } from 'vitest/config'
 
 export default defineConfig({
   test: {
+    // The API files share one database and the browser files each make their own, so the two
+    // projects run side by side (one file at a time within each): on 2 cores the default of one
+    // worker ran the whole suite in series.
+    maxWorkers: 2,
     projects: [
       { test: { name: 'unit', include: ['tests/unit/**/*.test.ts'], environment: 'node' } },
       {

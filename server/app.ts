@@ -119,6 +119,8 @@ export function createApp({ config, sessionStore, clientDir }: AppDeps) {
         // The service worker must be re-checked on every visit, or updates reach phones an hour late.
         setHeaders: (res, file) => {
           if (/(?:^|\/)(sw|registerSW|workbox-[\w-]+)\.js$/.test(file) || file.endsWith('.webmanifest')) res.setHeader('cache-control', 'no-cache')
+          // Vite names everything under assets/ by its content hash: a changed file is a new name, so a phone may keep these for good.
+          else if (file.startsWith(path.resolve(clientDir, 'assets') + path.sep)) res.setHeader('cache-control', 'public, max-age=31536000, immutable')
         },
       }),
     )

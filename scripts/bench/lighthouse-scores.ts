@@ -1,4 +1,4 @@
-import { readFileSync, writeFileSync } from 'node:fs'
+import { copyFileSync, readFileSync, writeFileSync } from 'node:fs'
 import path from 'node:path'
 import { runCommand } from './run-command'
 import { log, ms, seconds, type Row } from './stats'
@@ -45,6 +45,8 @@ export async function measureLighthouse(
     await runCommand('npx', args, { env, timeoutMs: 150_000 })
     lh = JSON.parse(readFileSync(report, 'utf8')) as LighthouseReport
   }
+  // ROUNDTIDE_BENCH_LIGHTHOUSE_DIR=<dir> keeps each report (the work folder is removed at the end) to read where the time goes.
+  if (process.env.ROUNDTIDE_BENCH_LIGHTHOUSE_DIR) copyFileSync(report, path.join(process.env.ROUNDTIDE_BENCH_LIGHTHOUSE_DIR, `lighthouse-${page.slug}.json`))
   const performanceScore = lh.categories.performance?.score
   if (performanceScore == null) {
     const lcp = lh.audits['largest-contentful-paint']?.numericValue

@@ -57,6 +57,8 @@ export const IncidentReportRowSchema = z.object({
   source: z.enum(INCIDENT_SOURCES),
   noticedAt: text(),
   tanks: text(),
+  /** Lost, hurt or dead (an escape loses fish without a death). */
+  affected: count,
   dead: count,
   welfareDueAt: text(),
   welfareDoneAt: text(),

@@ -56,6 +56,9 @@ export const BoardWireSchema = z.object({
 })
 export type BoardWire = z.infer<typeof BoardWireSchema>
 
+/** The same answer with the cards left unchecked, for a client that checks them a slice at a time (`BoardCardWireSchema`). */
+export const BoardWireEnvelopeSchema = BoardWireSchema.extend({ cards: z.array(z.unknown()) })
+
 /** A card as the board draws it; a full task (from a live event or a move) is one too. */
 export type BoardCard = Pick<
   Task,
@@ -83,35 +86,36 @@ export interface Board {
   tasks: BoardCard[]
 }
 
+/** One wire card unfolded into a board card, given the day's kinds, targets and people. */
+export function cardUnfolder(day: Pick<BoardWire, 'date' | 'people' | 'kinds' | 'targets'>): (card: BoardCardWire) => BoardCard {
+  const names = new Map(day.people.map((p) => [p.personId, p.name]))
+  return (c) => {
+    const kind = day.kinds[c.kind]
+    const target = day.targets[c.target]
+    return {
+      id: c.id,
+      title: kind.title,
+      category: kind.category,
+      priority: kind.priority,
+      durationMinutes: kind.durationMinutes,
+      targetLabel: target.label,
+      tankId: target.tankId,
+      areaId: target.areaId,
+      localDate: day.date,
+      localTime: c.time,
+      status: c.status,
+      assigneeId: c.assignee ?? null,
+      assigneeName: c.assignee === undefined ? null : (names.get(c.assignee) ?? null),
+      flag: c.flag ?? null,
+      heldReason: c.held ?? null,
+      version: c.version,
+    }
+  }
+}
+
 /** The wire shape unfolded into cards, so the board and its cache patchers read one kind of object. */
 export function unfoldBoard(wire: BoardWire): Board {
-  const names = new Map(wire.people.map((p) => [p.personId, p.name]))
-  return {
-    date: wire.date,
-    people: wire.people,
-    tasks: wire.cards.map((c) => {
-      const kind = wire.kinds[c.kind]
-      const target = wire.targets[c.target]
-      return {
-        id: c.id,
-        title: kind.title,
-        category: kind.category,
-        priority: kind.priority,
-        durationMinutes: kind.durationMinutes,
-        targetLabel: target.label,
-        tankId: target.tankId,
-        areaId: target.areaId,
-        localDate: wire.date,
-        localTime: c.time,
-        status: c.status,
-        assigneeId: c.assignee ?? null,
-        assigneeName: c.assignee === undefined ? null : (names.get(c.assignee) ?? null),
-        flag: c.flag ?? null,
-        heldReason: c.held ?? null,
-        version: c.version,
-      }
-    }),
-  }
+  return { date: wire.date, people: wire.people, tasks: wire.cards.map(cardUnfolder(wire)) }
 }
 
 export const CalendarDaySchema = z.object({

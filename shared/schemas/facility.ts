@@ -11,9 +11,15 @@ const name = text().trim().min(1, 'Required').max(120)
 const hhmm = text().regex(/^([01]\d|2[0-3]):[0-5]\d$/, 'Use HH:MM, 24-hour')
 const isoDate = calendarDate()
 
+// Building a formatter is the check, and costs milliseconds (a phone's first screen checks the
+// facility's zone): each zone is checked once per process. Only zones that passed are kept, so
+// the memory is bounded by the real zones.
+const knownZones = new Set<string>()
 export function isValidTimeZone(tz: string) {
+  if (knownZones.has(tz)) return true
   try {
     new Intl.DateTimeFormat('en', { timeZone: tz })
+    knownZones.add(tz)
     return true
   } catch {
     return false

@@ -36,6 +36,9 @@ export const IncidentSchema = z.object({
   decidedAt: textField().nullable(),
   /** Names for readers who may not list the staff (observers). */
   decidedByName: textField().nullable(),
+  /** Who filed it by hand (null for Roundtide's proposals). */
+  filedById: z.number().int().nullable(),
+  filedByName: textField().nullable(),
   people: z.array(z.object({ id: z.number().int(), name: textField() })),
   welfareDueAt: textField(),
   committeeDueAt: textField(),
@@ -81,3 +84,23 @@ export const UpdateIncidentInputSchema = z
   })
   .partial()
 export type UpdateIncidentInput = z.infer<typeof UpdateIncidentInputSchema>
+
+/**
+ * An incident a person files by hand (an escape, an injury during handling, a power cut): what
+ * Roundtide cannot see. Deadlines run from when it was noticed, as for a proposal.
+ */
+export const FileIncidentInputSchema = z
+  .object({
+    title: text(160).min(1, 'Say in a few words what happened'),
+    whatHappened: text(4000).min(1, 'Describe what happened'),
+    startedAt: textField().datetime({ message: 'When did it start? Your best estimate' }),
+    noticedAt: textField().datetime({ message: 'When was it noticed?' }),
+    tankIds: z.array(z.number().int().positive()).max(200),
+    batchIds: z.array(z.number().int().positive()).max(200),
+    affected: z.number({ message: 'A whole number, 0 or more' }).int('A whole number, 0 or more').min(0, 'A whole number, 0 or more'),
+    dead: z.number({ message: 'A whole number, 0 or more' }).int('A whole number, 0 or more').min(0, 'A whole number, 0 or more'),
+    immediateActions: text(4000),
+  })
+  .refine((i) => Date.parse(i.startedAt) <= Date.parse(i.noticedAt), { path: ['noticedAt'], message: 'It cannot be noticed before it started' })
+  .refine((i) => i.dead <= i.affected, { path: ['dead'], message: 'The dead are counted among the affected' })
+export type FileIncidentInput = z.infer<typeof FileIncidentInputSchema>

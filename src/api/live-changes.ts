@@ -26,7 +26,8 @@ const SHOWN_BY: Record<Exclude<ChangeKind, 'task' | 'tasks'>, QueryKey[]> = {
   // An event's change creates, removes or holds its tasks.
   event: [EVENTS, taskKeys.all],
   roster: [ROSTER, ON_CALL],
-  incident: [INCIDENTS],
+  // The animal record report lists incidents with their deadlines.
+  incident: [INCIDENTS, REPORTS],
   oxygen: [OXYGEN],
   stock: [TANK_PAGE, REPORTS],
   parameter: [parameterKeys.parameters, parameterKeys.limits],

@@ -24,16 +24,18 @@ export function createRouter(queryClient: QueryClient) {
           children: [
             {
               path: 'round',
-              lazy: async () => {
-                const m = await import('./routes/round-page')
-                return { Component: m.Component, loader: m.loader(queryClient) }
+              // Loader and page load apart: the data is asked for while the page's code downloads.
+              lazy: {
+                loader: async () => (await import('./routes/round-loader')).loader(queryClient),
+                Component: async () => (await import('./routes/round-page')).Component,
               },
             },
             {
               path: 'board',
-              lazy: async () => {
-                const m = await import('./routes/board-page')
-                return { Component: m.Component, loader: m.loader(queryClient) }
+              // Loader and page load apart: the data is asked for while the page's code downloads.
+              lazy: {
+                loader: async () => (await import('./routes/board-loader')).loader(queryClient),
+                Component: async () => (await import('./routes/board-page')).Component,
               },
             },
             { path: 'calendar', lazy: () => import('./routes/calendar-page') },
@@ -115,6 +117,13 @@ export function createRouter(queryClient: QueryClient) {
               path: 'incidents',
               lazy: async () => {
                 const m = await import('./routes/incidents-page')
+                return { Component: m.Component, loader: m.loader(queryClient) }
+              },
+            },
+            {
+              path: 'incidents/new',
+              lazy: async () => {
+                const m = await import('./routes/new-incident-page')
                 return { Component: m.Component, loader: m.loader(queryClient) }
               },
             },

@@ -111,7 +111,7 @@ describe('the animal record for a committee, on the demo year', () => {
     // Dates stay text; numbers become numbers again.
     const parsed = Papa.parse<Record<string, unknown>>(csv.text, {
       header: true,
-      dynamicTyping: (field) => field === 'id' || field === 'dead',
+      dynamicTyping: (field) => field === 'id' || field === 'affected' || field === 'dead',
       skipEmptyLines: true,
     })
     expect(parsed.data.map((r) => IncidentReportRowSchema.parse(r))).toEqual(rows satisfies IncidentReportRow[])

@@ -117,6 +117,7 @@ export const ROUTE_ACCESS: Record<string, Role[] | 'public'> = {
   'GET /api/stock/settings': ALL,
   'PATCH /api/stock/settings': M,
   'GET /api/incidents': ALL,
+  'POST /api/incidents': MST,
   'GET /api/incidents/:id': ALL,
   'POST /api/incidents/:id/confirm': MS,
   'POST /api/incidents/:id/dismiss': MS,

@@ -5,6 +5,7 @@ import { CylinderReplaceTask1796530013001 } from './1796530013001-CylinderReplac
 import { ChangeOutbox1796530013000 } from './1796530013000-ChangeOutbox'
 import { StuckSends1796541200044 } from './1796541200044-StuckSends'
 import { PushOutbox1796541200045 } from './1796541200045-PushOutbox'
+import { HandFiledIncidents1796570000014 } from './1796570000014-HandFiledIncidents'
 import { IncidentDeadlines1796431400000 } from './1796431400000-IncidentDeadlines'
 import { Incidents1796425000000 } from './1796425000000-Incidents'
 import { RoutinePlanningError1796421762016 } from './1796421762016-RoutinePlanningError'
@@ -40,4 +41,5 @@ export const migrations: Array<new () => object> = [
   StuckSends1796541200044,
   PushOutbox1796541200045,
   ForeignKeys1796560000000,
+  HandFiledIncidents1796570000014,
 ]

@@ -1,7 +1,20 @@
 import { EntitySchema } from 'typeorm'
 import { references } from '../../db/foreign-keys'
 
-export const AUDITED = ['routine', 'playbook', 'limit', 'ladder', 'shift', 'on_call', 'assignment', 'person', 'completion', 'event', 'facility'] as const
+export const AUDITED = [
+  'routine',
+  'playbook',
+  'limit',
+  'ladder',
+  'shift',
+  'on_call',
+  'assignment',
+  'person',
+  'completion',
+  'event',
+  'facility',
+  'incident',
+] as const
 export type AuditedEntity = (typeof AUDITED)[number]
 
 export interface AuditRow {

@@ -19,6 +19,7 @@ const LIVE_KIND: Record<AuditedEntity, ChangeKind | null> = {
   completion: null,
   event: 'event',
   facility: 'facility',
+  incident: 'incident',
 }
 
 function clean(value: unknown): unknown {

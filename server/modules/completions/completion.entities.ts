@@ -81,7 +81,10 @@ export const ReadingEntity = new EntitySchema<ReadingRow>({
 export const ALERT_KINDS = ['critical_reading', 'missed_task', 'incident_overdue', 'incident_welfare_overdue', 'incident_report_overdue'] as const
 export interface AlertRow {
   id: number
-  taskId: number
+  /** The task whose ladder it climbs; null for an incident filed by hand, which has no task. */
+  taskId: number | null
+  /** The incident whose deadline passed (incident alerts only). */
+  incidentId: number | null
   kind: (typeof ALERT_KINDS)[number]
   detail: string
   ladderId: number | null
@@ -97,7 +100,8 @@ export const AlertEntity = new EntitySchema<AlertRow>({
   tableName: 'alerts',
   columns: {
     id: { type: 'int', primary: true, generated: 'increment' },
-    taskId: { type: 'int', foreignKey: references('Task') },
+    taskId: { type: 'int', nullable: true, foreignKey: references('Task') },
+    incidentId: { type: 'int', nullable: true, foreignKey: references('Incident') },
     kind: { type: 'enum', enum: [...ALERT_KINDS] },
     detail: { type: 'varchar', length: 500 },
     ladderId: { type: 'int', nullable: true, foreignKey: references('Ladder') },
@@ -106,7 +110,11 @@ export const AlertEntity = new EntitySchema<AlertRow>({
     acknowledgedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     closedAt: { type: 'datetime', precision: 3, nullable: true },
   },
-  indices: [{ columns: ['taskId', 'kind'], unique: true }, { columns: ['closedAt'] }],
+  indices: [
+    { columns: ['taskId', 'kind'], unique: true },
+    { name: 'IDX_alerts_incident_kind', columns: ['incidentId', 'kind'], unique: true },
+    { columns: ['closedAt'] },
+  ],
 })
 
 export interface PhotoRow {

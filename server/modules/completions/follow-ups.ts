@@ -55,7 +55,12 @@ export async function raiseCriticalAlert(taskId: number, text: string) {
   const detail = text.slice(0, 500)
   const alerts = db().getRepository(AlertEntity)
   const now = new Date()
-  await alerts.createQueryBuilder().insert().values({ taskId, kind: 'critical_reading', detail, ladderId: null, startedAt: now }).orIgnore().execute()
+  await alerts
+    .createQueryBuilder()
+    .insert()
+    .values({ taskId, incidentId: null, kind: 'critical_reading', detail, ladderId: null, startedAt: now })
+    .orIgnore()
+    .execute()
   await alerts.update(
     { taskId, kind: 'critical_reading', closedAt: Not(IsNull()) },
     { detail, startedAt: now, closedAt: null, acknowledgedAt: null, acknowledgedById: null },
@@ -70,19 +75,28 @@ export async function closeCriticalAlert(taskId: number, at: Date) {
 
 export type IncidentAlertKind = 'incident_overdue' | 'incident_welfare_overdue' | 'incident_report_overdue'
 
-/** An incident past one of its deadlines climbs the ladder of the task it came from, once per deadline. */
-export async function startIncidentAlert(taskId: number, detail: string, at: Date, kind: IncidentAlertKind = 'incident_overdue') {
+/**
+ * An incident past one of its deadlines starts one alert per deadline. It climbs the ladder of the
+ * task the incident came from; an incident filed by hand has no task, and its alert belongs to the
+ * incident alone (escalation then uses the facility's standard ladder, record 14e).
+ */
+export async function startIncidentAlert(
+  incident: { id: number; taskId: number | null },
+  detail: string,
+  at: Date,
+  kind: IncidentAlertKind = 'incident_overdue',
+) {
   await db()
     .getRepository(AlertEntity)
     .createQueryBuilder()
     .insert()
-    .values({ taskId, kind, detail: detail.slice(0, 500), ladderId: null, startedAt: at })
+    .values({ taskId: incident.taskId, incidentId: incident.id, kind, detail: detail.slice(0, 500), ladderId: null, startedAt: at })
     .orIgnore()
     .execute()
-  logger.warn({ taskId, kind, detail }, 'incident overdue: escalation started')
+  logger.warn({ incidentId: incident.id, taskId: incident.taskId, kind, detail }, 'incident overdue: escalation started')
 }
 
 /** The deadline was met after all: its alert stops climbing. */
-export async function closeIncidentAlert(taskId: number, kind: IncidentAlertKind, at: Date) {
-  await db().getRepository(AlertEntity).update({ taskId, kind, closedAt: IsNull() }, { closedAt: at })
+export async function closeIncidentAlert(incidentId: number, kind: IncidentAlertKind, at: Date) {
+  await db().getRepository(AlertEntity).update({ incidentId, kind, closedAt: IsNull() }, { closedAt: at })
 }

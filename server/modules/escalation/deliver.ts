@@ -49,8 +49,11 @@ interface Context {
   transport: Transport
   channels: Channels
   alert: AlertRow
-  task: TaskRow
+  /** Null for an incident filed by hand: its messages point at the incident. */
+  task: TaskRow | null
   label: string
+  /** The page the message opens, from the site's root. */
+  path: string
   now: Date
 }
 
@@ -69,12 +72,13 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
     const claim = await repo.update({ id: row.id, status: row.status }, { status: 'sending', claimedAt: now })
     if (!claim.affected) continue
     const alert = await findAlert(row.alertId)
-    const task = alert ? await findTaskRow(alert.taskId) : null
-    if (!alert || !task || alert.acknowledgedAt || alert.closedAt) {
+    const task = alert?.taskId ? await findTaskRow(alert.taskId) : null
+    const about = alert ? subjectOf(alert, task, cat!) : null
+    if (!alert || !about || alert.acknowledgedAt || alert.closedAt) {
       await repo.update(row.id, { status: 'superseded' })
       continue
     }
-    const context: Context = { config, transport, channels, alert, task, label: targetLabel(task.targetKind, task.targetId, cat!), now }
+    const context: Context = { config, transport, channels, alert, task, ...about, now }
     try {
       const outcome = await sendOne(row, context)
       const base = { subject: outcome.subject.slice(0, 300), attempts: row.attempts + 1 }
@@ -112,9 +116,16 @@ export async function deliverPending(config: AppConfig, transport: Transport, no
   return { sent, failed }
 }
 
+/** Where a message points: the task, or the incident when a hand-filed incident's alert has no task; null when that is gone. */
+function subjectOf(alert: AlertRow, task: TaskRow | null, cat: Awaited<ReturnType<typeof loadCatalogue>>): { label: string; path: string } | null {
+  if (task) return { label: targetLabel(task.targetKind, task.targetId, cat), path: `/tasks/${task.id}` }
+  if (alert.taskId === null && alert.incidentId !== null) return { label: `Incident #${alert.incidentId}`, path: `/incidents/${alert.incidentId}` }
+  return null
+}
+
 async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
-  const taskUrl = `${c.config.publicUrl}/tasks/${c.task.id}`
-  const input = { alert: c.alert, task: c.task, step: row.step, now: c.now, targetLabel: c.label, taskUrl }
+  const link = `${c.config.publicUrl}${c.path}`
+  const input = { alert: c.alert, task: c.task, step: row.step, now: c.now, targetLabel: c.label, link }
   const token = signAckToken(c.config.ackSecret, row.id, new Date(c.now.getTime() + c.config.mail.ackTtlHours * 3_600_000))
   if (row.channel === 'email') {
     const message = composeMessage({ ...input, ackUrl: `${c.config.publicUrl}/ack/${token}` })
@@ -143,7 +154,7 @@ async function sendOne(row: NotificationRow, c: Context): Promise<Outcome> {
     title: subject,
     body,
     tag: `alert-${c.alert.id}`,
-    url: `/tasks/${c.task.id}`,
+    url: c.path,
     ackUrl: `/ack/${token}`,
   })
   return pushed.status === 'sent' ? { status: 'sent', subject, providerId: pushed.providerId ?? undefined } : { ...pushed, subject }

@@ -3,6 +3,7 @@ import { db } from '../../db/data-source'
 import { stepChannels } from '#shared/schemas/ladder'
 import { acknowledgeOpenAlert, closeAlert, openAlertsStartedBy, type AlertRow } from '../completions/alert-records'
 import { getFacility } from '../facility/facility.service'
+import { incidentOwner } from '../incidents/incident-lookups'
 import { taskRowsByIds, type TaskRow } from '../tasks/task-queries'
 import { recheckOf } from '../tasks/task-writes.service'
 import { NotificationEntity } from './escalation.entities'
@@ -10,7 +11,7 @@ import { ladderFor } from './ladders.service'
 import { channelsFor, destinationFor } from './channels'
 import { inQuietHours, onCallHolder, quietHoursEnd, resolveRecipients } from './recipients'
 
-export const isUrgent = (alert: AlertRow, task: TaskRow) => alert.kind === 'critical_reading' || task.priority === 'welfare_critical'
+export const isUrgent = (alert: AlertRow, task: TaskRow | null) => alert.kind === 'critical_reading' || task?.priority === 'welfare_critical'
 
 /**
  * Climbs every open ladder one tick: closes alerts whose task was answered, and queues the
@@ -21,12 +22,14 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
   const alerts = await openAlertsStartedBy(now)
   if (!alerts.length) return { queued: 0, closed: 0 }
   const zone = (await getFacility()).timeZone
-  const tasks = new Map((await taskRowsByIds(alerts.map((a) => a.taskId))).map((t) => [t.id, t]))
+  const tasks = new Map((await taskRowsByIds(alerts.flatMap((a) => a.taskId ?? []))).map((t) => [t.id, t]))
   let queued = 0
   let closed = 0
   for (const alert of alerts) {
-    const task = tasks.get(alert.taskId)
-    if (!task || (await answered(alert, task))) {
+    const task = alert.taskId === null ? null : (tasks.get(alert.taskId) ?? null)
+    // An incident filed by hand has no task: its alert answers to the incident, and "assignee" means who filed it.
+    const owner = alert.taskId === null && alert.incidentId !== null ? await incidentOwner(alert.incidentId) : null
+    if (task ? await answered(alert, task) : !owner) {
       await closeAlert(alert.id, now)
       closed++
       continue
@@ -44,7 +47,7 @@ export async function runEscalations(now: Date): Promise<{ queued: number; close
       .filter((s) => s.i > highest && alert.startedAt.getTime() + s.afterMinutes * 60_000 <= now.getTime())
     const step = dueSteps.at(-1)
     if (!step) continue
-    const people = await resolveRecipients(step.notify, task, now, zone)
+    const people = await resolveRecipients(step.notify, { assigneeId: task ? task.assigneeId : (owner?.filedById ?? null) }, now, zone)
     const holder = await onCallHolder(now)
     const urgent = isUrgent(alert, task)
     const rows = people.flatMap((p) => {

@@ -77,5 +77,5 @@ export async function acknowledgeByToken(secret: string, token: string, now = ne
   // Alerts are never deleted, so a notification always has one; this only guards the type.
   if (!alert) throw notFound('That alert')
   const first = await acknowledgeAlert(alert.id, row.personId, now)
-  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId, byName: person.name }
+  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId ?? undefined, byName: person.name }
 }

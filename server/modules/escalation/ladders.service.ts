@@ -45,17 +45,18 @@ export async function updateLadder(id: number, input: LadderInput): Promise<Ladd
 /**
  * Which ladder an alert climbs: the routine's own for a missed task, the parameter's for a
  * critical reading; otherwise the facility's fast ladder for welfare-critical tasks and
- * critical readings, and its standard ladder for the rest.
+ * critical readings, and its standard ladder for the rest (an incident filed by hand has no task
+ * and climbs the standard ladder: a late report is not an emergency at the tank).
  */
-export async function ladderFor(alert: AlertRow, task: TaskRow): Promise<{ name: string; steps: LadderStep[] }> {
+export async function ladderFor(alert: AlertRow, task: TaskRow | null): Promise<{ name: string; steps: LadderStep[] }> {
   let id = alert.ladderId
-  if (!id && alert.kind === 'missed_task' && task.routineId) id = await routineLadderId(task.routineId)
+  if (!id && alert.kind === 'missed_task' && task?.routineId) id = await routineLadderId(task.routineId)
   if (!id && alert.kind === 'critical_reading') {
     const keys = alert.detail.split(', ').map((part) => part.split(' ')[0])
     const params = await listParameters()
     id = params.find((p) => keys.includes(p.key) && p.ladderId)?.ladderId ?? null
   }
-  const fast = alert.kind === 'critical_reading' || task.priority === 'welfare_critical'
+  const fast = alert.kind === 'critical_reading' || task?.priority === 'welfare_critical'
   if (!id) {
     const facility = await getFacility()
     id = fast ? facility.fastLadderId : facility.defaultLadderId

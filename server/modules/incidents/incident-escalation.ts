@@ -48,7 +48,7 @@ export const DEADLINE_RULES: DeadlineRule[] = [
   },
 ]
 
-/** Every deadline passed without its date climbs the ladder of the incident's task, once each. */
+/** Every deadline passed without its date climbs a ladder once: the incident's task's, or for one filed by hand the standard ladder. */
 export async function escalateOverdueIncidents(now: Date): Promise<number> {
   const repo = db().getRepository(IncidentEntity)
   let started = 0
@@ -56,8 +56,8 @@ export async function escalateOverdueIncidents(now: Date): Promise<number> {
     const due = await repo.find({ where: { status: In(rule.statuses), [rule.done]: IsNull(), [rule.claim]: IsNull(), [rule.due]: LessThanOrEqual(now) } })
     for (const incident of due) {
       const claimed = await repo.update({ id: incident.id, [rule.claim]: IsNull() }, { [rule.claim]: now })
-      if (!claimed.affected || !incident.taskId) continue
-      await startIncidentAlert(incident.taskId, `Incident #${incident.id} ${rule.say}: ${incident.title}`, now, rule.kind)
+      if (!claimed.affected) continue
+      await startIncidentAlert(incident, `Incident #${incident.id} ${rule.say}: ${incident.title}`, now, rule.kind)
       started++
     }
   }

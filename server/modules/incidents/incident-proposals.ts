@@ -1,9 +1,7 @@
 import { db } from '../../db/data-source'
 import { recordChange } from '../../realtime/change-outbox'
-import { getStockSettings } from '../stock/stock-settings.service'
 import { IncidentEntity } from './incident.entity'
-
-const HOUR = 3_600_000
+import { newIncident } from './new-incident'
 
 export interface IncidentProposal {
   source: 'missed_task' | 'critical_recheck' | 'mortality_threshold'
@@ -23,43 +21,24 @@ export interface IncidentProposal {
  * hours from the facility's settings. One proposal per cause (unique source key).
  */
 export async function proposeIncident(p: IncidentProposal, now: Date): Promise<void> {
-  const s = await getStockSettings()
+  const row = await newIncident({
+    status: 'proposed',
+    source: p.source,
+    taskId: p.taskId,
+    title: p.title,
+    whatHappened: p.whatHappened,
+    startedAt: p.startedAt,
+    noticedAt: now,
+    tankIds: p.tankIds,
+    batchIds: p.batchIds ?? [],
+    affected: p.dead ?? 0,
+    dead: p.dead ?? 0,
+  })
   await db()
     .getRepository(IncidentEntity)
     .createQueryBuilder()
     .insert()
-    .values({
-      status: 'proposed',
-      source: p.source,
-      sourceKey: p.sourceKey,
-      taskId: p.taskId,
-      title: p.title.slice(0, 160),
-      whatHappened: p.whatHappened,
-      startedAt: p.startedAt,
-      noticedAt: now,
-      tankIds: p.tankIds,
-      batchIds: p.batchIds ?? [],
-      personIds: [],
-      affected: p.dead ?? 0,
-      dead: p.dead ?? 0,
-      immediateActions: '',
-      told: [],
-      rootCause: '',
-      correctiveActions: '',
-      decisionReason: null,
-      decidedById: null,
-      decidedAt: null,
-      welfareDueAt: new Date(now.getTime() + s.notifyWelfareOfficerHours * HOUR),
-      committeeDueAt: new Date(now.getTime() + s.notifyCommitteeHours * HOUR),
-      reportDueAt: new Date(now.getTime() + s.fullReportHours * HOUR),
-      welfareNotifiedAt: null,
-      reportedAt: null,
-      closedAt: null,
-      escalatedAt: null,
-      welfareEscalatedAt: null,
-      reportEscalatedAt: null,
-      notes: [],
-    })
+    .values({ ...row, sourceKey: p.sourceKey })
     .orIgnore()
     .execute()
   await recordChange('incident')

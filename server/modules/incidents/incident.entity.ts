@@ -17,7 +17,7 @@ type Dates =
   | 'welfareEscalatedAt'
   | 'reportEscalatedAt'
 // Names are looked up when answering, never stored.
-export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'people'> & {
+export type IncidentRow = Omit<Incident, Dates | 'decidedByName' | 'filedByName' | 'people'> & {
   startedAt: Date
   noticedAt: Date
   decidedAt: Date | null
@@ -62,6 +62,7 @@ export const IncidentEntity = new EntitySchema<IncidentRow>({
     decisionReason: { type: 'varchar', length: 500, nullable: true },
     decidedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     decidedAt: when(true),
+    filedById: { type: 'int', nullable: true, foreignKey: references('Person') },
     welfareDueAt: when(),
     committeeDueAt: when(),
     reportDueAt: when(),

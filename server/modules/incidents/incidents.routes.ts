@@ -1,8 +1,8 @@
 import { Router } from 'express'
 import { IdParamSchema } from '#shared/schemas/facility'
-import { DecideIncidentInputSchema, IncidentNoteInputSchema, UpdateIncidentInputSchema } from '#shared/schemas/incident'
+import { DecideIncidentInputSchema, FileIncidentInputSchema, IncidentNoteInputSchema, UpdateIncidentInputSchema } from '#shared/schemas/incident'
 import { requireRole, signedIn } from '../../lib/require-role'
-import { addIncidentNote, decideIncident, getIncident, listIncidents, updateIncident } from './incidents.service'
+import { addIncidentNote, decideIncident, fileIncident, getIncident, listIncidents, updateIncident } from './incidents.service'
 
 export const incidentsRouter = Router()
 
@@ -10,6 +10,10 @@ const id = (params: unknown) => IdParamSchema.parse(params).id
 
 incidentsRouter.get('/incidents', signedIn, async (_req, res) => {
   res.json(await listIncidents())
+})
+// A technician may file too (often first at the tank); theirs waits for a supervisor's decision (record 14e).
+incidentsRouter.post('/incidents', requireRole('manager', 'supervisor', 'technician'), async (req, res) => {
+  res.status(201).json(await fileIncident(FileIncidentInputSchema.parse(req.body), req.user!))
 })
 incidentsRouter.get('/incidents/:id', signedIn, async (req, res) => {
   res.json(await getIncident(id(req.params)))

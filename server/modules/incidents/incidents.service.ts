@@ -1,4 +1,5 @@
-import type { DecideIncidentInput, Incident, IncidentNoteInput, UpdateIncidentInput } from '#shared/schemas/incident'
+import type { DecideIncidentInput, FileIncidentInput, Incident, IncidentNoteInput, UpdateIncidentInput } from '#shared/schemas/incident'
+import type { Role } from '#shared/schemas/person'
 import { welfareToldAt } from '#shared/incidents/deadlines'
 import { db } from '../../db/data-source'
 import { recordChange } from '../../realtime/change-outbox'
@@ -6,6 +7,7 @@ import { conflict, notFound, validationError } from '../../lib/errors'
 import { closeIncidentAlert } from '../completions/follow-ups'
 import { listPeople } from '../people/people.service'
 import { DEADLINE_RULES } from './incident-escalation'
+import { insertFiledIncident } from './incident-filing'
 import { IncidentEntity, type IncidentRow } from './incident.entity'
 
 // The clock and the scheduler reach proposals and escalation through this service.
@@ -21,6 +23,7 @@ export function toIncident(r: IncidentRow, names: ReadonlyMap<number, string> = 
   return {
     ...rest,
     decidedByName: r.decidedById ? (names.get(r.decidedById) ?? null) : null,
+    filedByName: r.filedById ? (names.get(r.filedById) ?? null) : null,
     people: r.personIds.map((id) => ({ id, name: names.get(id) ?? `Person ${id}` })),
     startedAt: r.startedAt.toISOString(),
     noticedAt: r.noticedAt.toISOString(),
@@ -54,6 +57,11 @@ export const getIncident = async (id: number) => toIncident(await load(id), awai
 
 type Actor = { id: number; name: string }
 
+/** A person files what Roundtide could not see; answered as the whole incident. */
+export async function fileIncident(input: FileIncidentInput, who: Actor & { role: Role }, now = new Date()): Promise<Incident> {
+  return getIncident((await insertFiledIncident(input, who, now)).id)
+}
+
 /** Confirm or dismiss a proposal, always with a reason that stays on the record. */
 export async function decideIncident(id: number, decision: 'confirm' | 'dismiss', { reason }: DecideIncidentInput, who: Actor, now = new Date()) {
   const result = await repo().update(
@@ -65,7 +73,7 @@ export async function decideIncident(id: number, decision: 'confirm' | 'dismiss'
     throw conflict(`This incident is already ${row.status}; nothing was changed.`)
   }
   const decided = await load(id)
-  if (decided.taskId) await closeSettledDeadlineAlerts(decided.taskId, decided, now)
+  await closeSettledDeadlineAlerts(decided, now)
   await recordChange('incident', [id])
   return getIncident(id)
 }
@@ -93,7 +101,7 @@ export async function updateIncident(id: number, data: UpdateIncidentInput, now 
   }
   // An empty patch changes nothing (TypeORM refuses an UPDATE without values).
   if (Object.keys(next).length) await repo().update(id, next)
-  if (row.taskId) await closeSettledDeadlineAlerts(row.taskId, { ...row, ...next }, now)
+  await closeSettledDeadlineAlerts({ ...row, ...next }, now)
   await recordChange('incident', [id])
   return getIncident(id)
 }
@@ -102,9 +110,9 @@ export async function updateIncident(id: number, data: UpdateIncidentInput, now 
  * A deadline met after it escalated stops its alert climbing the ladder; so does every deadline
  * of a dismissed proposal (the welfare one escalates while the proposal waits), none being needed.
  */
-async function closeSettledDeadlineAlerts(taskId: number, row: IncidentRow, now: Date) {
+async function closeSettledDeadlineAlerts(row: IncidentRow, now: Date) {
   for (const rule of DEADLINE_RULES) {
-    if (row[rule.claim] && (row[rule.done] || row.status === 'dismissed')) await closeIncidentAlert(taskId, rule.kind, now)
+    if (row[rule.claim] && (row[rule.done] || row.status === 'dismissed')) await closeIncidentAlert(row.id, rule.kind, now)
   }
 }
 

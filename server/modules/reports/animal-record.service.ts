@@ -89,6 +89,7 @@ export async function incidentReport(from: string, to: string, now = new Date())
       source: i.source,
       noticedAt: i.noticedAt,
       tanks: i.tankIds.map((t) => codes.get(t) ?? `tank ${t}`).join(', '),
+      affected: i.affected,
       dead: i.dead,
       welfareDueAt: welfare.dueAt,
       welfareDoneAt: welfare.doneAt ?? '',

@@ -31,7 +31,7 @@ export async function getOnCallSummary() {
   const recentFlags = await flaggedSince(new Date(now.getTime() - 3 * 86_400_000))
   const rechecks = await rechecksOf(recentFlags.map((f) => f.id))
   const alerts = await openUnacknowledgedAlerts(50)
-  const alertTasks = await taskRowsByIds(alerts.map((a) => a.taskId))
+  const alertTasks = await taskRowsByIds(alerts.flatMap((a) => a.taskId ?? []))
   return {
     now: duty ? { ...duty, phone: holder?.phone ?? null, email: holder?.email ?? null } : null,
     next: next ?? null,

@@ -1,34 +1,14 @@
-import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query'
 import { Loader2 } from 'lucide-react'
-import { redirect, useNavigation, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom'
+import { useNavigation, useSearchParams } from 'react-router-dom'
 import { catalogueQueries } from '../../api/catalogues'
 import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { authQueries } from '../../features/auth/api/auth-queries'
 import { boardQueries } from '../../features/board/api/board-queries'
 import { BoardView } from '../../features/board/components/board-view'
-import { fullDay, ISO_DATE } from '../../features/board/utils/board-dates'
-
-/** Today on the facility's clock (the browser's own when no facility is set up yet). */
-function todayIn(timeZone: string | undefined) {
-  return new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(new Date())
-}
-
-const facilityToday = async (queryClient: QueryClient) => todayIn((await queryClient.ensureQueryData(facilityQueries.facility()))?.timeZone)
-
-export const loader =
-  (queryClient: QueryClient) =>
-  async ({ request }: LoaderFunctionArgs) => {
-    const url = new URL(request.url)
-    const date = url.searchParams.get('date')
-    if (!date || !ISO_DATE.test(date)) {
-      url.searchParams.set('date', await facilityToday(queryClient))
-      throw redirect(`${url.pathname}?${url.searchParams}`)
-    }
-    void queryClient.prefetchQuery(catalogueQueries.areas())
-    await queryClient.ensureQueryData(boardQueries.day(date))
-    return null
-  }
+import { fullDay } from '../../features/board/utils/board-dates'
+import { todayIn } from './board-loader'
 
 export function Component() {
   const [params] = useSearchParams()

@@ -1,9 +1,11 @@
-import { useQuery, type QueryClient } from '@tanstack/react-query'
-import { useSearchParams } from 'react-router-dom'
+import { useQuery, useSuspenseQuery, type QueryClient } from '@tanstack/react-query'
+import { FilePlus2 } from 'lucide-react'
+import { Link, useSearchParams } from 'react-router-dom'
 import { catalogueQueries } from '../../api/catalogues'
 import { facilityQueries } from '../../api/facility'
 import { PageHeader } from '../../components/ui/page-state'
 import { QueryState } from '../../components/ui/query-state'
+import { authQueries } from '../../features/auth/api/auth-queries'
 import { incidentQueries } from '../../features/incidents/api/incident-queries'
 import { IncidentFilterBar } from '../../features/incidents/components/incident-filter-bar'
 import { IncidentList } from '../../features/incidents/components/incident-list'
@@ -18,6 +20,7 @@ export const loader = (queryClient: QueryClient) => () => {
 }
 
 export function Component() {
+  const { data: me } = useSuspenseQuery(authQueries.me())
   const [params, setParams] = useSearchParams()
   const filters = filtersFrom(params)
   const now = useNow()
@@ -41,10 +44,20 @@ export function Component() {
 
   return (
     <section className="mx-auto flex w-full max-w-5xl flex-col gap-4">
-      <PageHeader title="Incidents" />
+      <PageHeader title="Incidents">
+        {me.role !== 'observer' && (
+          <Link
+            to="/incidents/new"
+            className="inline-flex min-h-11 items-center justify-center gap-2 rounded-lg bg-tide-700 px-4 font-semibold text-white hover:bg-tide-800"
+          >
+            <FilePlus2 aria-hidden className="size-5" /> File an incident
+          </Link>
+        )}
+      </PageHeader>
       <p className="text-sm text-tide-700">
-        Roundtide proposes an incident when a welfare-critical check is missed; a supervisor or manager confirms or dismisses it. Deadlines count down from when
-        it was noticed.
+        Roundtide proposes an incident when a welfare-critical check is missed, a critical reading is confirmed or deaths pass the threshold; a supervisor or
+        manager confirms or dismisses it. What Roundtide cannot see (an escape, an injury during handling, a power cut) is filed by hand. Deadlines count down
+        from when it was noticed.
       </p>
       <IncidentFilterBar filters={filters} onChange={change} />
       <QueryState queries={[list, tanks, zone]} what="the incidents">

@@ -1,13 +1,18 @@
 import { queryOptions } from '@tanstack/react-query'
-import { BoardWireSchema, unfoldBoard } from '#shared/schemas/board'
+import { BoardCardWireSchema, BoardWireEnvelopeSchema, cardUnfolder, type Board } from '#shared/schemas/board'
 import { taskKeys } from '../../../api/tasks/task-keys'
 import { apiFetch } from '../../../lib/api-client'
+import { parseInSlices } from '../../../lib/parse-in-slices'
 
 export const boardQueries = {
   day: (date: string) =>
     queryOptions({
       queryKey: taskKeys.board(date),
-      // Sent compact (each kind and target once); the cache holds plain cards.
-      queryFn: async () => unfoldBoard(await apiFetch(`/tasks/board?date=${date}`, BoardWireSchema)),
+      // Sent compact (each kind and target once); the cache holds plain cards. A full day's cards
+      // are checked and unfolded a slice at a time, so a phone's main thread never blocks on them.
+      queryFn: async (): Promise<Board> => {
+        const wire = await apiFetch(`/tasks/board?date=${date}`, BoardWireEnvelopeSchema)
+        return { date: wire.date, people: wire.people, tasks: await parseInSlices(wire.cards, BoardCardWireSchema, cardUnfolder(wire)) }
+      },
     }),
 }

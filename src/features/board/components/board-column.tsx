@@ -1,9 +1,10 @@
 import { useDroppable } from '@dnd-kit/core'
 import { clsx } from 'clsx'
-import { useId, type ReactNode } from 'react'
+import { useCallback, useId, useRef, type ReactNode } from 'react'
 import type { BoardCard, BoardColumnPerson } from '#shared/schemas/board'
+import { useNearViewport } from '../hooks/use-near-viewport'
 import { columnId, type DropTarget } from '../utils/drop-targets'
-import { CardList, type CardPlacement } from './card-list'
+import { CardList, CardListPlaceholder, type CardPlacement } from './card-list'
 import { ColumnHeader } from './column-header'
 
 interface Props {
@@ -23,11 +24,21 @@ export function BoardColumn({ person, allTasks, shown, droppable, activeId, rend
     ? { kind: 'column', assigneeId: person.personId, name: person.name }
     : { kind: 'column', assigneeId: null, name: 'Unassigned' }
   const { setNodeRef, isOver } = useDroppable({ id: columnId(target.assigneeId), data: target, disabled: !droppable })
+  const sectionRef = useRef<HTMLElement | null>(null)
+  const setRefs = useCallback(
+    (el: HTMLElement | null) => {
+      sectionRef.current = el
+      setNodeRef(el)
+    },
+    [setNodeRef],
+  )
+  // The column (a drop target, with its totals) is always there; its cards are drawn once it is near the viewport.
+  const near = useNearViewport(sectionRef)
   const hidden = allTasks.length - shown.length
 
   return (
     <section
-      ref={setNodeRef}
+      ref={setRefs}
       aria-labelledby={headingId}
       className={clsx(
         'flex min-w-0 flex-col rounded-xl ring-1 transition-colors md:w-60 md:shrink-0 xl:w-64',
@@ -41,7 +52,7 @@ export function BoardColumn({ person, allTasks, shown, droppable, activeId, rend
         taskCount={allTasks.length}
         plannedMinutes={allTasks.reduce((sum, t) => sum + t.durationMinutes, 0)}
       />
-      <CardList cards={shown} activeId={activeId} renderCard={renderCard} />
+      {near ? <CardList cards={shown} activeId={activeId} renderCard={renderCard} /> : <CardListPlaceholder count={shown.length} />}
       {shown.length === 0 && (
         <p className="px-3 pb-3 text-sm text-tide-600">
           {hidden > 0 ? `${hidden} hidden by the filters` : droppable ? 'No tasks. Drop a card here.' : 'No tasks.'}

@@ -20,11 +20,19 @@ interface Props {
 }
 
 const GAP = 8
+const ESTIMATED_CARD = 96
 
 /** A column's cards: all of them when few, a window of them inside a scroll box when many. */
 export function CardList({ cards, activeId, renderCard }: Props) {
   if (cards.length <= WINDOW_FROM) return <ul className="flex flex-1 flex-col gap-2 p-2">{cards.map((t) => renderCard(t))}</ul>
   return <WindowedCards cards={cards} activeId={activeId} renderCard={renderCard} />
+}
+
+/** Holds a not yet drawn column's place at about its drawn height, so the page does not jump when it is drawn. */
+export function CardListPlaceholder({ count }: { count: number }) {
+  if (count === 0) return null
+  if (count > WINDOW_FROM) return <div aria-hidden className="h-[70vh]" />
+  return <div aria-hidden style={{ height: count * (ESTIMATED_CARD + GAP) + GAP }} />
 }
 
 function WindowedCards({ cards, activeId, renderCard }: Props) {
@@ -40,7 +48,7 @@ function WindowedCards({ cards, activeId, renderCard }: Props) {
   const virtualizer = useVirtualizer({
     count: cards.length,
     getScrollElement: () => scrollRef.current,
-    estimateSize: () => 96,
+    estimateSize: () => ESTIMATED_CARD,
     getItemKey: (i) => cards[i].id,
     overscan: 3,
     gap: GAP,

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query'
-import { IncidentSchema, type Incident, type UpdateIncidentInput } from '#shared/schemas/incident'
+import { IncidentSchema, type FileIncidentInput, type Incident, type UpdateIncidentInput } from '#shared/schemas/incident'
 import { apiFetch, jsonBody } from '../../../lib/api-client'
 import { incidentKeys } from './incident-queries'
 
@@ -24,3 +24,18 @@ export const useAddIncidentNote = (id: number) => useIncidentChange(id, (text: s
 
 export const useUpdateIncident = (id: number) =>
   useIncidentChange(id, (input: UpdateIncidentInput) => apiFetch(`/incidents/${id}`, IncidentSchema, { method: 'PATCH', ...jsonBody(input) }))
+
+/** Files an incident by hand; the answer goes into the cache so its record opens at once. The form shows refusals itself. */
+export function useFileIncident() {
+  const queryClient = useQueryClient()
+  return useMutation({
+    mutationFn: (input: FileIncidentInput) => post('/incidents', input),
+    // Sent now or refused now: a form left pending offline would file it later without the person seeing it.
+    networkMode: 'always',
+    meta: { errorShownInline: true },
+    onSuccess: (incident) => {
+      queryClient.setQueryData(incidentKeys.detail(incident.id), incident)
+      return queryClient.invalidateQueries({ queryKey: incidentKeys.list() })
+    },
+  })
+}

@@ -61,6 +61,7 @@ export function IncidentDetails({ incident: i, timeZone, tankCodes, batchCodes }
       </Row>
       <Row label="Root cause">{orNone(i.rootCause)}</Row>
       <Row label="Corrective actions">{orNone(i.correctiveActions)}</Row>
+      {i.filedByName && <Row label="Filed by hand by">{i.filedByName}</Row>}
       {i.taskId && (
         <Row label="From the task">
           <Link to={`/tasks/${i.taskId}`} className="underline">

@@ -9,12 +9,8 @@ import { TextAreaField } from '../../../components/ui/text-area-field'
 import { ApiError } from '../../../lib/api-client'
 import { useUpdateIncident } from '../api/use-incident-mutations'
 import { checkIncidentForm, incidentFormValues, type IncidentFormValues } from '../utils/incident-form'
+import { ChooseSeveral, type Option } from './choose-several'
 import { ToldFields } from './told-fields'
-
-export interface Option {
-  id: number
-  label: string
-}
 
 interface Props {
   incident: Incident
@@ -57,20 +53,7 @@ export function IncidentEditForm({ incident, timeZone, tanks, batches, people, o
     })
   })
   const multi = (label: string, name: 'tankIds' | 'batchIds' | 'personIds', options: Option[]) => (
-    <SelectField
-      label={label}
-      multiple
-      size={Math.min(6, Math.max(3, options.length))}
-      hint="Hold Ctrl or ⌘ to choose several"
-      error={error(name)}
-      {...register(name)}
-    >
-      {options.map((o) => (
-        <option key={o.id} value={o.id}>
-          {o.label}
-        </option>
-      ))}
-    </SelectField>
+    <ChooseSeveral label={label} options={options} error={error(name)} registration={register(name)} />
   )
   return (
     <form noValidate aria-label="Incident record" onSubmit={submit} className="grid gap-3 rounded-xl border border-tide-200 bg-white p-4 sm:grid-cols-2">

@@ -33,7 +33,9 @@ export function IncidentList({ incidents, now, timeZone, tankCodes }: Props) {
             <p className="text-sm text-tide-700">
               Noticed {formatWhen(i.noticedAt, timeZone)}
               {i.tankIds.length > 0 && ` · ${i.tankIds.map((id) => tankCodes.get(id) ?? `tank ${id}`).join(', ')}`}
+              {i.affected > i.dead && ` · ${i.affected} affected`}
               {i.dead > 0 && ` · ${i.dead} dead`}
+              {i.source === 'manual' && ' · filed by hand'}
               {missed > 0 && ` · ${missed} deadline${missed === 1 ? '' : 's'} missed`}
             </p>
             <div className="md:col-span-2">

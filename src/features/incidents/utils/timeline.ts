@@ -21,10 +21,13 @@ const SOURCE: Record<Incident['source'], string> = {
 /** Everything that happened to the incident, and its three deadlines, in time order. */
 export function incidentTimeline(i: Incident, deadlines: DeadlineStatus[]): TimelineEntry[] {
   const by = i.decidedByName ? ` by ${i.decidedByName}` : ''
+  const filed = i.source === 'manual' && i.filedByName ? `Filed by hand by ${i.filedByName}` : SOURCE[i.source]
+  // A supervisor or manager who files an incident confirms it by filing; only a technician's waits for a decision.
+  const decidedApart = i.decidedAt && !(i.source === 'manual' && i.decidedById === i.filedById)
   const entries: Array<TimelineEntry | null> = [
     { at: i.startedAt, kind: 'started', title: 'Started' },
-    { at: i.noticedAt, kind: 'proposed', title: SOURCE[i.source], text: i.whatHappened },
-    i.decidedAt
+    { at: i.noticedAt, kind: 'proposed', title: filed, text: i.whatHappened },
+    decidedApart && i.decidedAt
       ? {
           at: i.decidedAt,
           kind: i.status === 'dismissed' ? 'dismissed' : 'confirmed',

@@ -3,6 +3,7 @@ import { useEffect, useRef, useState, type ReactNode } from 'react'
 import type { Socket } from 'socket.io-client'
 import { DataChangedEventSchema, LIVE_EVENTS, TasksUpdatedEventSchema } from '#shared/schemas/live'
 import { refetchChangedKinds } from '../../../api/live-changes'
+import { whenIdle } from '../../../lib/when-idle'
 import { patchTaskViews, refetchTaskViews } from '../../../api/tasks/task-cache'
 import { LiveStatusContext, type LiveStatus } from '../hooks/use-live-status'
 import { useSessionPersonId } from '../hooks/use-session-person-id'
@@ -33,14 +34,17 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
 
   useEffect(() => {
     if (personId === null) return
-    // socket.io-client loads after the first paint: the page needs its data first, live changes next.
+    // socket.io-client loads once the page is idle: the page needs its code and data first, live changes next.
     let cancelled = false
     let teardown: (() => void) | undefined
-    void import('../api/socket-client').then(
-      ({ createLiveSocket }) => {
-        if (!cancelled) teardown = connect(createLiveSocket())
-      },
-      () => !cancelled && setState({ personId, status: 'offline' }),
+    const cancelLoad = whenIdle(
+      () =>
+        void import('../api/socket-client').then(
+          ({ createLiveSocket }) => {
+            if (!cancelled) teardown = connect(createLiveSocket())
+          },
+          () => !cancelled && setState({ personId, status: 'offline' }),
+        ),
     )
     const connect = (socket: Socket) => {
       const report = (status: LiveStatus) => setState({ personId, status })
@@ -96,6 +100,7 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
     }
     return () => {
       cancelled = true
+      cancelLoad()
       teardown?.()
     }
   }, [personId, queryClient])

@@ -14,6 +14,7 @@ const KINDS = [
   ['completion', 'Completions and corrections'],
   ['event', 'Events'],
   ['facility', 'Facility'],
+  ['incident', 'Incidents filed by hand'],
 ] as const
 
 export function AuditKindSelect({ value, onChange }: { value: string; onChange: (entity: string) => void }) {

@@ -39,6 +39,7 @@ const columns = (zone: string): ReadonlyArray<ReportColumn<IncidentReportRow>> =
   { label: 'Status', cell: (r) => STATUS[r.status] ?? r.status },
   { label: 'Noticed', cell: (r) => formatWhen(r.noticedAt, zone) },
   { label: 'Tanks', cell: (r) => r.tanks || '—' },
+  { label: 'Affected', cell: (r) => r.affected, numeric: true },
   { label: 'Dead', cell: (r) => r.dead, numeric: true },
   { label: 'Welfare officer told', cell: (r) => <Deadline state={r.welfare} dueAt={r.welfareDueAt} doneAt={r.welfareDoneAt} zone={zone} /> },
   { label: 'Committee told', cell: (r) => <Deadline state={r.committee} dueAt={r.committeeDueAt} doneAt={r.committeeDoneAt} zone={zone} /> },

@@ -9,10 +9,12 @@ interface Props {
   waiting: number
   failed: number
   status: ReactNode
+  /** While the round loads: keep the date's and the progress line's room, so the list does not jump down when it arrives. */
+  reserve?: boolean
 }
 
 /** Sticky on the phone so progress and the connection stay in view while walking the round. */
-export function RoundHeader({ date, done, total, waiting, failed, status }: Props) {
+export function RoundHeader({ date, done, total, waiting, failed, status, reserve = false }: Props) {
   const pct = total ? Math.round((done / total) * 100) : 0
   return (
     <header className="sticky top-0 z-10 -mx-4 -mt-4 mb-4 border-b border-tide-200 bg-tide-50/95 px-4 pt-3 pb-3 backdrop-blur md:-mx-8 md:-mt-8 md:px-8 md:pt-6">
@@ -20,12 +22,12 @@ export function RoundHeader({ date, done, total, waiting, failed, status }: Prop
         <div className="flex items-start justify-between gap-3">
           <div className="min-w-0">
             <h1 className="text-2xl font-bold text-tide-900">Round</h1>
-            {date && <p className="text-tide-700">{longDate(date)}</p>}
+            {(date || reserve) && <p className="text-tide-700">{date ? longDate(date) : '\u00a0'}</p>}
           </div>
           {status}
         </div>
-        {total > 0 && (
-          <div className="mt-2">
+        {(total > 0 || reserve) && (
+          <div className={total > 0 ? 'mt-2' : 'invisible mt-2'} aria-hidden={total > 0 ? undefined : true}>
             <div
               role="progressbar"
               aria-label="Round progress"

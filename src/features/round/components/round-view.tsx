@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button'
 import { ErrorState, LoadingState } from '../../../components/ui/page-state'
 import { roundQueries } from '../api/round-queries'
 import type { SubmitOutcome } from '../api/use-submit-completion'
-import { useOnline } from '../hooks/use-online'
+import { useOnline } from '../../../lib/use-online'
 import { startOutbox } from '../outbox/outbox-sender'
 import { useOutbox } from '../outbox/use-outbox'
 import { DraftsProvider } from '../state/drafts'
@@ -58,7 +58,15 @@ function RoundContent({ personId, date, status }: Props) {
     }
   }
   const header = (done = 0, total = 0) => (
-    <RoundHeader date={round?.date ?? date} done={done} total={total} waiting={outbox.waiting} failed={outbox.failed} status={status} />
+    <RoundHeader
+      date={round?.date ?? date}
+      done={done}
+      total={total}
+      waiting={outbox.waiting}
+      failed={outbox.failed}
+      status={status}
+      reserve={!round && !query.isError}
+    />
   )
 
   if (!round) {

@@ -1,4 +1,4 @@
-import { CircleAlert, Save } from 'lucide-react'
+import { Save } from 'lucide-react'
 import { useState } from 'react'
 import { useForm, type FieldPath } from 'react-hook-form'
 import { toast } from 'sonner'
@@ -6,6 +6,7 @@ import type { Role } from '#shared/schemas/person'
 import { MOVEMENT_KINDS, MOVEMENT_KIND_LABELS, TECHNICIAN_MOVEMENT_KINDS, type Movement } from '#shared/schemas/stock'
 import { Button } from '../../../components/ui/button'
 import { Field } from '../../../components/ui/field'
+import { FormRefusal } from '../../../components/ui/form-refusal'
 import { SelectField } from '../../../components/ui/select-field'
 import { ApiError } from '../../../lib/api-client'
 import { useRecordMovement } from '../api/use-record-movement'
@@ -89,11 +90,7 @@ export function MovementForm({ role, timeZone, batches, tanks, causes, movements
         />
         <Field label="Note (optional)" error={form.formState.errors.note?.message} {...form.register('note')} />
       </div>
-      {refusal && (
-        <p role="alert" className="flex items-start gap-2 rounded-xl bg-alarm-50 p-3 font-semibold text-alarm-700">
-          <CircleAlert aria-hidden className="mt-0.5 size-5 shrink-0" /> {refusal}
-        </p>
-      )}
+      <FormRefusal message={refusal} />
       <Button type="submit" disabled={record.isPending} className="w-full sm:w-auto sm:self-start">
         <Save aria-hidden className="size-5" /> {record.isPending ? 'Saving…' : 'Record movement'}
       </Button>
