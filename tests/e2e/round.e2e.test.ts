@@ -155,6 +155,32 @@ describe('the round on a phone', () => {
     await mePage.context.close()
   })
 
+  test('when the live-feed code fails to arrive, it is fetched again once the network is back, and what changed meanwhile shows', async () => {
+    const tech = await s.createPerson('technician')
+    const supervisor = await s.createPerson('supervisor', { name: 'Pell Supervisor' })
+    const { tanks } = await makeAreaWithTanks(1, { roundOrder: 5 })
+    const task = await taskDueIn(tanks[0], 35, { title: 'Late DO check', assigneeId: tech.id, requiredReadings: ['temp_c'] })
+    const { page, context } = await s.newPage(PHONE)
+    // The socket's code is loaded once the page is idle; here its first fetch fails, as on a phone
+    // that lost the network just then.
+    let refused = 0
+    await page.route('**/assets/socket-client-*.js', (route) => (refused++ === 0 ? route.abort('internetdisconnected') : route.continue()))
+    await s.signIn(page, tech.email)
+    await page.getByRole('status', { name: 'Connection: Offline' }).waitFor()
+    const agent = await signInAs(supervisor.email)
+    await agent
+      .post(`/api/tasks/${task.id}/completion`)
+      .send(completion({ temp_c: 27.9 }))
+      .expect(200)
+    await context.setOffline(true)
+    await context.setOffline(false)
+    await page.getByRole('status', { name: 'Connection: Live' }).waitFor()
+    await openTask(page, 'Late DO check')
+    await page.getByText('Done by Pell Supervisor').waitFor()
+    expect(refused).toBe(2)
+    await context.close()
+  })
+
   test('a queued completion that someone else beat is kept on the task, with who and when, until dismissed', async () => {
     const tech = await s.createPerson('technician')
     const supervisor = await s.createPerson('supervisor', { name: 'Odile Supervisor' })

@@ -37,18 +37,27 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
     // socket.io-client loads once the page is idle: the page needs its code and data first, live changes next.
     let cancelled = false
     let teardown: (() => void) | undefined
-    const cancelLoad = whenIdle(
-      () =>
-        void import('../api/socket-client').then(
-          ({ createLiveSocket }) => {
-            if (!cancelled) teardown = connect(createLiveSocket())
-          },
-          () => !cancelled && setState({ personId, status: 'offline' }),
-        ),
-    )
-    const connect = (socket: Socket) => {
+    let failedLoads = 0
+    // The code can fail to arrive (the phone went offline before the page was idle): try again when
+    // the network is back, or live changes would never start on this page.
+    const retryLoad = () => !cancelled && load()
+    const load = () =>
+      void import('../api/socket-client').then(
+        ({ createLiveSocket }) => {
+          if (!cancelled) teardown = connect(createLiveSocket(), failedLoads > 0)
+        },
+        () => {
+          if (cancelled) return
+          failedLoads++
+          setState({ personId, status: 'offline' })
+          window.addEventListener('online', retryLoad, { once: true })
+        },
+      )
+    const cancelLoad = whenIdle(load)
+    /** `late`: the socket comes after a failed load, so changes made meanwhile were never heard. */
+    const connect = (socket: Socket, late: boolean) => {
       const report = (status: LiveStatus) => setState({ personId, status })
-      let missed = false
+      let missed = late
       const lost = () => {
         missed = true
         report(navigator.onLine ? 'reconnecting' : 'offline')
@@ -101,6 +110,7 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
     return () => {
       cancelled = true
       cancelLoad()
+      window.removeEventListener('online', retryLoad)
       teardown?.()
     }
   }, [personId, queryClient])
