@@ -8,6 +8,7 @@ import path from 'node:path'
 import { setTimeout as sleep } from 'node:timers/promises'
 import type { DataSource } from 'typeorm'
 import { createDataSource, setDataSource } from '#server/db/data-source'
+import { subscribeModules } from '#server/module-subscriptions'
 import { loadConfig } from '#server/lib/config'
 
 export { sleep }
@@ -49,6 +50,8 @@ export async function openDb(): Promise<DataSource> {
   const ds = createDataSource(loadConfig().db)
   await ds.initialize()
   setDataSource(ds)
+  // The fixtures call the services directly, so this process needs the module hooks the app sets up.
+  subscribeModules()
   return ds
 }
 
