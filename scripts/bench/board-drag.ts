@@ -1,3 +1,5 @@
+import { writeFileSync } from 'node:fs'
+import path from 'node:path'
 import { chromium, type Browser, type Page } from 'playwright-core'
 import { log, ms, percentile, type Row } from './stats'
 
@@ -22,6 +24,31 @@ const STOP_FRAME_CLOCK = '(() => { window.__framesOn = false; return window.__fr
 /** Records the time between animation frames until stopped; the page's own clock. */
 const startFrameClock = (page: Page) => page.evaluate(START_FRAME_CLOCK)
 const stopFrameClock = (page: Page) => page.evaluate<number[]>(STOP_FRAME_CLOCK)
+
+/**
+ * ROUNDTIDE_BENCH_DRAG_PROFILE=<dir>: records the drag as a Chrome trace (board-drag-trace.json, for
+ * chrome://tracing or the Performance panel) and a CDP CPU profile (board-drag.cpuprofile), to see
+ * where the frames go. Profiling slows the page, so a run with it says nothing about the goal.
+ */
+async function startDragProfile(browser: Browser, page: Page) {
+  const dir = process.env.ROUNDTIDE_BENCH_DRAG_PROFILE
+  if (!dir) return async (_frames: number[]) => {}
+  const cdp = await page.context().newCDPSession(page)
+  await cdp.send('Profiler.enable')
+  await cdp.send('Profiler.setSamplingInterval', { interval: 200 })
+  await browser.startTracing(page, {
+    path: path.join(dir, 'board-drag-trace.json'),
+    categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing'],
+  })
+  await cdp.send('Profiler.start')
+  return async (frames: number[]) => {
+    writeFileSync(path.join(dir, 'board-drag-frames.json'), JSON.stringify(frames))
+    const { profile } = await cdp.send('Profiler.stop')
+    writeFileSync(path.join(dir, 'board-drag.cpuprofile'), JSON.stringify(profile))
+    await browser.stopTracing()
+    log(`board drag: profile and trace written to ${dir}`)
+  }
+}
 
 /**
  * Measurement 2 (browser): a supervisor opens a full day's board and drags a card by mouse from
@@ -54,6 +81,7 @@ export async function measureBoardDrag(url: string, cookie: string, date: string
     const a = (await source.boundingBox())!
     const b = (await columns.nth(0).boundingBox())!
     await page.mouse.move(a.x + a.width / 2, a.y + 16)
+    const stopProfile = await startDragProfile(browser, page)
     await startFrameClock(page)
     const dragStart = performance.now()
     await page.mouse.down()
@@ -63,6 +91,7 @@ export async function measureBoardDrag(url: string, cookie: string, date: string
     await columns.nth(0).locator(`li[data-task-id="${taskId}"]`).waitFor({ timeout: 15_000 })
     const dropMs = performance.now() - dragStart
     const frames = await stopFrameClock(page)
+    await stopProfile(frames)
     if (frames.length < 10) throw new Error(`only ${frames.length} animation frames were seen during the drag`)
     const p95 = percentile(frames, 95)
     log(`board drag: ${frames.length} frames, p95 ${ms(p95)}`)
