@@ -94,7 +94,13 @@ export async function measureBoardDrag(url: string, cookie: string, date: string
     await stopProfile(frames)
     if (frames.length < 10) throw new Error(`only ${frames.length} animation frames were seen during the drag`)
     const p95 = percentile(frames, 95)
-    log(`board drag: ${frames.length} frames, p95 ${ms(p95)}`)
+    log(
+      `board drag: ${frames.length} frames, p95 ${ms(p95)}; longest ${[...frames]
+        .sort((x, y) => y - x)
+        .slice(0, 8)
+        .map(Math.round)
+        .join(', ')} ms`,
+    )
     return [
       {
         measurement: '2 board drag in the browser (full day)',

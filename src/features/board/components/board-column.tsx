@@ -1,6 +1,6 @@
 import { useDroppable } from '@dnd-kit/core'
 import { clsx } from 'clsx'
-import { useCallback, useId, useRef, type ReactNode } from 'react'
+import { memo, useCallback, useId, useMemo, useRef, type ReactNode } from 'react'
 import type { BoardCard, BoardColumnPerson } from '#shared/schemas/board'
 import { useNearViewport } from '../hooks/use-near-viewport'
 import { columnId, type DropTarget } from '../utils/drop-targets'
@@ -13,12 +13,13 @@ interface Props {
   allTasks: BoardCard[]
   shown: BoardCard[]
   droppable: boolean
+  /** The card being dragged, given only to the column it comes from (the others need not redraw). */
   activeId: number | null
   renderCard: (task: BoardCard, placement?: CardPlacement) => ReactNode
 }
 
-/** Unassigned, or one person's day: a drop target for cards. */
-export function BoardColumn({ person, allTasks, shown, droppable, activeId, renderCard }: Props) {
+/** Unassigned, or one person's day: a drop target for cards. Memoised: a drag redraws only the columns it touches. */
+export const BoardColumn = memo(function BoardColumn({ person, allTasks, shown, droppable, activeId, renderCard }: Props) {
   const headingId = useId()
   const target: DropTarget = person
     ? { kind: 'column', assigneeId: person.personId, name: person.name }
@@ -35,6 +36,7 @@ export function BoardColumn({ person, allTasks, shown, droppable, activeId, rend
   // The column (a drop target, with its totals) is always there; its cards are drawn once it is near the viewport.
   const near = useNearViewport(sectionRef)
   const hidden = allTasks.length - shown.length
+  const plannedMinutes = useMemo(() => allTasks.reduce((sum, t) => sum + t.durationMinutes, 0), [allTasks])
 
   return (
     <section
@@ -46,12 +48,7 @@ export function BoardColumn({ person, allTasks, shown, droppable, activeId, rend
         isOver ? 'ring-2 ring-tide-600 bg-tide-100' : 'ring-tide-200',
       )}
     >
-      <ColumnHeader
-        headingId={headingId}
-        person={person}
-        taskCount={allTasks.length}
-        plannedMinutes={allTasks.reduce((sum, t) => sum + t.durationMinutes, 0)}
-      />
+      <ColumnHeader headingId={headingId} person={person} taskCount={allTasks.length} plannedMinutes={plannedMinutes} />
       {near ? <CardList cards={shown} activeId={activeId} renderCard={renderCard} /> : <CardListPlaceholder count={shown.length} />}
       {shown.length === 0 && (
         <p className="px-3 pb-3 text-sm text-tide-600">
@@ -60,4 +57,4 @@ export function BoardColumn({ person, allTasks, shown, droppable, activeId, rend
       )}
     </section>
   )
-}
+})

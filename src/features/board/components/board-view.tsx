@@ -1,9 +1,10 @@
 import { DndContext, DragOverlay } from '@dnd-kit/core'
-import { useMemo } from 'react'
+import { useCallback, useMemo } from 'react'
 import type { Board, BoardCard } from '#shared/schemas/board'
 import type { Area } from '#shared/schemas/facility'
 import { FINISHED_STATUSES } from '#shared/schemas/task'
 import { byTime } from '../../../api/tasks/board-cache'
+import { useBoardColumns } from '../hooks/use-board-columns'
 import { useBoardDnd } from '../hooks/use-board-dnd'
 import { useBoardParams } from '../hooks/use-board-params'
 import { useSelection } from '../hooks/use-selection'
@@ -26,17 +27,6 @@ interface Props {
   canEdit: boolean
 }
 
-/** Each column's cards, all and after the filters, in one pass over the day. */
-function byColumn(all: BoardCard[], shown: ReadonlySet<BoardCard>) {
-  const columns = new Map<number | null, { all: BoardCard[]; shown: BoardCard[] }>()
-  for (const t of all) {
-    let c = columns.get(t.assigneeId)
-    if (!c) columns.set(t.assigneeId, (c = { all: [], shown: [] }))
-    c.all.push(t)
-    if (shown.has(t)) c.shown.push(t)
-  }
-  return columns
-}
 const EMPTY = { all: [], shown: [] }
 
 export function BoardView({ board, areas, today, canEdit }: Props) {
@@ -44,16 +34,29 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
   const { selected, toggle, clear } = useSelection()
   const sorted = useMemo(() => [...board.tasks].sort(byTime), [board.tasks])
   const visible = useMemo(() => sorted.filter((t) => matchesFilters(t, filters)), [sorted, filters])
-  const columns = useMemo(() => byColumn(sorted, new Set(visible)), [sorted, visible])
+  const columns = useBoardColumns(sorted, visible)
   const { contextProps, active, movingCount } = useBoardDnd({ date: board.date, visible, selected, clearSelection: clear })
-  const movable = (t: BoardCard) => canEdit && !FINISHED_STATUSES.includes(t.status)
   const selectedShown = visible.filter((t) => selected.has(t.id)).length
 
   const column = (assigneeId: number | null) => columns.get(assigneeId) ?? EMPTY
-  const renderCard = (t: BoardCard, placement?: CardPlacement) => (
-    <TaskCard key={t.id} task={t} movable={movable(t)} selected={selected.has(t.id)} onToggle={toggle} placement={placement} />
+  // Stable across a drag, so the memoised columns and cards it does not touch are not drawn again.
+  const renderCard = useCallback(
+    (t: BoardCard, placement?: CardPlacement) => (
+      <TaskCard
+        key={t.id}
+        task={t}
+        movable={canEdit && !FINISHED_STATUSES.includes(t.status)}
+        selected={selected.has(t.id)}
+        onToggle={toggle}
+        index={placement?.index}
+        start={placement?.start}
+        measure={placement?.measure}
+      />
+    ),
+    [canEdit, selected, toggle],
   )
-  const activeId = active?.id ?? null
+  // Only the column the dragged card comes from keeps it drawn; the others get null and skip the redraw.
+  const activeIn = (assigneeId: number | null) => (active && active.assigneeId === assigneeId ? active.id : null)
   const unassigned = column(null)
 
   return (
@@ -75,7 +78,7 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
           <p className="text-sm text-tide-700">Nobody is on shift on this day yet. Add shifts on the roster to give people a column here.</p>
         )}
         <div className="flex flex-col gap-3 md:flex-row md:items-stretch md:overflow-x-auto md:pb-2">
-          <BoardColumn person={null} allTasks={unassigned.all} shown={unassigned.shown} droppable={canEdit} activeId={activeId} renderCard={renderCard} />
+          <BoardColumn person={null} allTasks={unassigned.all} shown={unassigned.shown} droppable={canEdit} activeId={activeIn(null)} renderCard={renderCard} />
           {board.people.map((person) => {
             const own = column(person.personId)
             return (
@@ -85,7 +88,7 @@ export function BoardView({ board, areas, today, canEdit }: Props) {
                 allTasks={own.all}
                 shown={own.shown}
                 droppable={canEdit}
-                activeId={activeId}
+                activeId={activeIn(person.personId)}
                 renderCard={renderCard}
               />
             )

@@ -1,5 +1,5 @@
 import { defaultRangeExtractor, useVirtualizer, type Range } from '@tanstack/react-virtual'
-import { useCallback, useRef, type ReactNode } from 'react'
+import { memo, useCallback, useRef, type ReactNode } from 'react'
 import type { BoardCard } from '#shared/schemas/board'
 
 /** Above this many cards a column draws only the ones in view (a full day holds thousands). */
@@ -22,11 +22,11 @@ interface Props {
 const GAP = 8
 const ESTIMATED_CARD = 96
 
-/** A column's cards: all of them when few, a window of them inside a scroll box when many. */
-export function CardList({ cards, activeId, renderCard }: Props) {
+/** A column's cards: all of them when few, a window of them inside a scroll box when many. Redrawn only when its props change. */
+export const CardList = memo(function CardList({ cards, activeId, renderCard }: Props) {
   if (cards.length <= WINDOW_FROM) return <ul className="flex flex-1 flex-col gap-2 p-2">{cards.map((t) => renderCard(t))}</ul>
   return <WindowedCards cards={cards} activeId={activeId} renderCard={renderCard} />
-}
+})
 
 /** Holds a not yet drawn column's place at about its drawn height, so the page does not jump when it is drawn. */
 export function CardListPlaceholder({ count }: { count: number }) {

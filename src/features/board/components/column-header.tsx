@@ -1,4 +1,5 @@
 import { Clock, Inbox, UserX } from 'lucide-react'
+import { memo } from 'react'
 import type { BoardColumnPerson } from '#shared/schemas/board'
 import { minutesText } from '../utils/task-text'
 
@@ -10,7 +11,8 @@ interface Props {
   plannedMinutes: number
 }
 
-export function ColumnHeader({ headingId, person, taskCount, plannedMinutes }: Props) {
+/** Memoised: the column around it redraws whenever a drag starts, changes target or ends. */
+export const ColumnHeader = memo(function ColumnHeader({ headingId, person, taskCount, plannedMinutes }: Props) {
   return (
     <header className="flex flex-col gap-0.5 border-b border-tide-200 px-3 py-2">
       <h2 id={headingId} className="flex items-center gap-1.5 font-bold text-tide-900">
@@ -34,4 +36,4 @@ export function ColumnHeader({ headingId, person, taskCount, plannedMinutes }: P
       </p>
     </header>
   )
-}
+})

@@ -1,11 +1,12 @@
 import { clsx } from 'clsx'
 import { CirclePause } from 'lucide-react'
+import { memo } from 'react'
 import type { BoardCard } from '#shared/schemas/board'
 import { FlagLabel, WelfareLabel } from './flag-label'
 import { TaskStatusLabel } from '../../../components/ui/task-status-label'
 
-/** What a card says about its task; shared by the card and the preview that follows a drag. */
-export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; cornerTaken?: boolean }) {
+/** What a card says about its task; shared by the card and the preview that follows a drag. Redrawn only when the task changes. */
+export const TaskCardBody = memo(function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; cornerTaken?: boolean }) {
   const flagged = task.flag === 'watch' || task.flag === 'critical'
   return (
     <div className="flex min-w-0 flex-1 flex-col gap-0.5">
@@ -30,4 +31,4 @@ export function TaskCardBody({ task, cornerTaken = false }: { task: BoardCard; c
       )}
     </div>
   )
-}
+})

@@ -29,7 +29,8 @@ export function WeekDay({ date, href, current, today, droppable, dragging }: Pro
         className={clsx(
           'flex min-h-11 flex-col items-center justify-center rounded-lg px-1 py-1 text-center ring-1 transition-colors',
           current ? 'bg-tide-700 text-white ring-tide-700' : 'bg-white text-tide-800 ring-tide-200 hover:bg-tide-50',
-          inviting && 'border-2 border-dashed border-tide-400',
+          // An outline takes no room: a border here moved the columns when a drag began.
+          inviting && 'outline-2 -outline-offset-2 outline-dashed outline-tide-400',
           isOver && 'bg-tide-100 ring-2 ring-tide-600',
         )}
       >

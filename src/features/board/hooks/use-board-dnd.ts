@@ -14,6 +14,12 @@ interface Options {
   clearSelection: () => void
 }
 
+// Constant options: a new object each render would make new sensors, and with them a new drag
+// context for every card on the board to re-render.
+const MOUSE = { activationConstraint: { distance: 5 } }
+// A held press on the handle starts a drag; a swipe anywhere else still scrolls the page.
+const TOUCH = { activationConstraint: { delay: 250, tolerance: 5 } }
+
 const taskOf = (event: { active: { data: { current?: unknown } } }) => (event.active.data.current as DragItem | undefined)?.task
 
 /** Sensors, keyboard steps, words for screen readers, and what a drop means for the board. */
@@ -22,12 +28,8 @@ export function useBoardDnd({ date, visible, selected, clearSelection }: Options
   const [nav] = useState(createKeyboardNavigation)
   const [active, setActive] = useState<BoardCard | null>(null)
 
-  const sensors = useSensors(
-    useSensor(MouseSensor, { activationConstraint: { distance: 5 } }),
-    // A held press on the handle starts a drag; a swipe anywhere else still scrolls the page.
-    useSensor(TouchSensor, { activationConstraint: { delay: 250, tolerance: 5 } }),
-    useSensor(KeyboardSensor, { coordinateGetter: nav.coordinateGetter }),
-  )
+  const [keyboard] = useState(() => ({ coordinateGetter: nav.coordinateGetter }))
+  const sensors = useSensors(useSensor(MouseSensor, MOUSE), useSensor(TouchSensor, TOUCH), useSensor(KeyboardSensor, keyboard))
 
   const moving = useCallback(
     (task: BoardCard) => (selected.has(task.id) && selected.size > 1 ? [task, ...visible.filter((t) => t.id !== task.id && selected.has(t.id))] : [task]),
