@@ -29,7 +29,10 @@ function frameNamer(clientDir: string | null) {
     if (mapFile && !maps.has(mapFile)) maps.set(mapFile, existsSync(mapFile) ? new SourceMapConsumer(JSON.parse(readFileSync(mapFile, 'utf8'))) : null)
     const original = mapFile ? maps.get(mapFile)?.originalPositionFor({ line: frame.lineNumber + 1, column: frame.columnNumber }) : undefined
     if (original?.source) {
-      const source = original.source.replace(/^.*node_modules\//, '').replace(/^.*?\/(src|shared)\//, '$1/')
+      // A library's path from its package folder on; ours from src/ or shared/.
+      const source = original.source.includes('node_modules/')
+        ? original.source.replace(/^.*node_modules\//, '')
+        : original.source.replace(/^.*?\/(src|shared)\//, '$1/')
       return `${original.name ?? frame.functionName ?? '(anonymous)'} ${source}:${original.line}`
     }
     return `${frame.functionName || '(anonymous)'} ${file}:${frame.lineNumber + 1}:${frame.columnNumber + 1}`
