@@ -52,6 +52,27 @@ function selfTimes(profile: CpuProfile, name: (frame: ProfileNode['callFrame']) 
   return [...totals].map(([where, t]) => ({ where, ms: t })).sort((a, b) => b.ms - a.ms)
 }
 
+/**
+ * Blocking time as Lighthouse counts it (each stretch of work beyond 50 ms), from the samples: a
+ * run of samples with no idle between them is one task. Idle gaps shorter than a sample merge two
+ * tasks, so this errs high.
+ */
+function blockingTime(profile: CpuProfile): { blockingMs: number; longest: number; longTasks: number } {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]))
+  const runs: number[] = []
+  let run = 0
+  profile.samples.forEach((id, i) => {
+    const idle = byId.get(id)?.callFrame.functionName === '(idle)'
+    if (idle) {
+      if (run > 0) runs.push(run)
+      run = 0
+    } else run += (profile.timeDeltas[i] ?? 0) / 1000
+  })
+  if (run > 0) runs.push(run)
+  const long = runs.filter((r) => r > 50)
+  return { blockingMs: long.reduce((sum, r) => sum + r - 50, 0), longest: Math.max(0, ...runs), longTasks: long.length }
+}
+
 /** Self time summed by library (the package under node_modules) or by our own folder. */
 function byLibrary(top: Array<{ where: string; ms: number }>): string {
   const sums = new Map<string, number>()
@@ -100,10 +121,11 @@ export async function profilePage(url: string, pagePath: string, cookie: string,
     if (outDir) writeFileSync(path.join(outDir, `profile${pagePath.replace(/\W+/g, '-')}.cpuprofile`), JSON.stringify(profile))
     const top = selfTimes(profile, frameNamer(clientDir))
     const busy = top.reduce((sum, t) => sum + t.ms, 0)
+    const blocking = blockingTime(profile)
     for (const t of top.slice(0, 30)) log(`  ${ms(t.ms).padStart(9)}  ${t.where}`)
     return {
       measurement: `10 profile ${pagePath} (CPU ×${CPU_SLOWDOWN}, first ${SETTLE_MS / 1000} s)`,
-      result: `main thread busy ${ms(busy)}`,
+      result: `main thread busy ${ms(busy)}, blocking ${ms(blocking.blockingMs)} (${blocking.longTasks} tasks over 50 ms, longest ${ms(blocking.longest)})`,
       detail: `by library: ${byLibrary(top)}; top: ${top
         .slice(0, 4)
         .map((t) => `${t.where} ${ms(t.ms)}`)
