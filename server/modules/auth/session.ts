@@ -1,5 +1,6 @@
 import session from 'express-session'
 import MySQLStoreFactory from 'express-mysql-session'
+import { escapeId } from 'mysql2'
 import type { AppConfig } from '../../lib/config'
 import { logger } from '../../lib/logger'
 import { SESSION_PERSON_COLUMNS, sessionPersonFrom, type SessionPerson } from '../people/session-person'
@@ -47,6 +48,12 @@ export function createSessionStore(config: AppConfig): SessionStore {
   return store
 }
 
+/** What the store keeps of its options and its mysql2 pool (express-mysql-session types neither). */
+interface StoreInternals {
+  options: { schema: { tableName: string; columnNames: Record<'session_id' | 'expires' | 'data', string> } }
+  connection: { pool: { execute(sql: string, params: unknown[], callback: (err: Error | null, result: unknown) => void): void } }
+}
+
 /** The person each loaded session names, read with it; keyed by the session's `passport.user` object. */
 const peopleOfSessions = new WeakMap<object, SessionPerson | null>()
 
@@ -62,13 +69,16 @@ export const personReadWithSession = (stored: object): SessionPerson | null | un
  * request, so a deactivation or password reset still ends older sessions on their next request.
  */
 function readPersonWithSession(store: SessionStore) {
-  const { tableName, columnNames } = (store as unknown as { options: { schema: { tableName: string; columnNames: Record<string, string> } } }).options.schema
+  const { options, connection } = store as unknown as StoreInternals
+  const { tableName, columnNames } = options.schema
   const sql =
-    `SELECT s.?? AS data, s.?? AS expires, ${SESSION_PERSON_COLUMNS} FROM ?? s ` +
-    "LEFT JOIN people p ON p.id = CAST(JSON_VALUE(s.??, '$.passport.user.id') AS UNSIGNED) WHERE s.?? = ?"
-  const query = (store as unknown as { query: (sql: string, params: unknown[]) => Promise<[Array<Record<string, unknown>>]> }).query.bind(store)
+    `SELECT s.${escapeId(columnNames.data)} AS data, s.${escapeId(columnNames.expires)} AS expires, ${SESSION_PERSON_COLUMNS} FROM ${escapeId(tableName)} s ` +
+    `LEFT JOIN people p ON p.id = CAST(JSON_VALUE(s.${escapeId(columnNames.data)}, '$.passport.user.id') AS UNSIGNED) WHERE s.${escapeId(columnNames.session_id)} = ?`
   const get = async (sid: string) => {
-    const [rows] = await query(sql, [columnNames.data, columnNames.expires, tableName, columnNames.data, columnNames.session_id, sid])
+    // A prepared statement on the store's own pool (its callback side: no stack captured per call).
+    const rows = await new Promise<Array<Record<string, unknown>>>((resolve, reject) =>
+      connection.pool.execute(sql, [sid], (err, result) => (err ? reject(err) : resolve(result as Array<Record<string, unknown>>))),
+    )
     const row = rows[0]
     // Expired sessions read as none, as the store's own get does.
     if (!row || Number(row.expires) < Math.round(Date.now() / 1000)) return null
