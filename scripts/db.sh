@@ -2,7 +2,9 @@
 # Runs Roundtide's private MariaDB server: loopback only, data under .data/.
 # Usage: scripts/db.sh ensure|start|stop|status|reset
 # Settings (env): ROUNDTIDE_DB_PORT (3307), ROUNDTIDE_DB_HOME (.data/mariadb),
-#   ROUNDTIDE_DB_NAME (roundtide), ROUNDTIDE_DB_USER (roundtide), ROUNDTIDE_DB_PASSWORD (roundtide-local)
+#   ROUNDTIDE_DB_NAME (roundtide), ROUNDTIDE_DB_USER (roundtide), ROUNDTIDE_DB_PASSWORD (roundtide-local),
+#   ROUNDTIDE_DB_BUFFER_POOL (1G: InnoDB's page cache; a year of a large facility's tasks and their
+#   indexes outgrew 128M, and every insert then read index pages from disk)
 set -euo pipefail
 
 root_dir="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -11,6 +13,7 @@ home="${ROUNDTIDE_DB_HOME:-$root_dir/.data/mariadb}"
 db_name="${ROUNDTIDE_DB_NAME:-roundtide}"
 db_user="${ROUNDTIDE_DB_USER:-roundtide}"
 db_password="${ROUNDTIDE_DB_PASSWORD:-roundtide-local}"
+buffer_pool="${ROUNDTIDE_DB_BUFFER_POOL:-1G}"
 data="$home/data"
 run="$home/run"
 log="$home/log"
@@ -54,7 +57,7 @@ start_server() {
     --socket="$socket" --pid-file="$pid_file" --log-error="$log/error.log" \
     --port="$port" --bind-address=127.0.0.1 --skip-networking=0 --skip-name-resolve \
     --character-set-server=utf8mb4 --collation-server=utf8mb4_unicode_ci \
-    --default-time-zone=+00:00 --innodb-buffer-pool-size=128M --max-connections=400 \
+    --default-time-zone=+00:00 --innodb-buffer-pool-size="$buffer_pool" --max-connections=400 \
     --innodb-print-all-deadlocks=ON \
     >/dev/null 2>&1 &
   for _ in $(seq 1 100); do
@@ -88,9 +91,11 @@ case "${1:-ensure}" in
     install_server; init_data; start_server; create_database "$db_name"
     echo "MariaDB ready on 127.0.0.1:$port (database $db_name)" ;;
   create-db) create_database "${2:?database name}" ;;
+  # A server started before the setting grew keeps its old cache; InnoDB resizes it online.
+  grow-buffer-pool) client -e "SET GLOBAL innodb_buffer_pool_size = GREATEST(@@innodb_buffer_pool_size, ${2:-1073741824})" ;;
   stop) stop_server ;;
   status) if is_running; then echo "running (pid $(cat "$pid_file"), port $port)"; else echo "stopped"; exit 3; fi ;;
   socket) echo "$socket" ;;
   reset) stop_server; rm -rf "$data"; echo "Removed $data" ;;
-  *) echo "usage: $0 ensure|start|stop|status|reset|create-db NAME" >&2; exit 2 ;;
+  *) echo "usage: $0 ensure|start|stop|status|reset|create-db NAME|grow-buffer-pool [BYTES]" >&2; exit 2 ;;
 esac

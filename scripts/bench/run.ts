@@ -11,6 +11,7 @@ import { measureBoard } from './board-latency'
 import { buildClient, measureBundle, measureStackFloor } from './bundle-size'
 import { measureCompletions } from './completion-load'
 import { measureLighthouse } from './lighthouse-scores'
+import { profilePage } from './page-profile'
 import { measureMaterialise } from './materialise-step'
 import { measureRoundJourney } from './round-journey'
 import { measureRuleChecks } from './rule-checks'
@@ -129,6 +130,11 @@ try {
   await step('7 morning round', () =>
     measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')),
   )
+  // Diagnostic only: ROUNDTIDE_BENCH_PROFILE=1 writes where the Round's main thread spends its first seconds.
+  if (process.env.ROUNDTIDE_BENCH_PROFILE)
+    await step('10 profile Round', () =>
+      profilePage(url(), '/round', need(cookies.technician, 'a signed-in technician'), clientDir, process.env.ROUNDTIDE_BENCH_LIGHTHOUSE_DIR),
+    )
   await step('9 rule checks', () => measureRuleChecks(need(facility, 'the facility').zone))
 } finally {
   await cleanUp()

@@ -17,18 +17,20 @@ function realDateTime(text: string): boolean {
   return isRealDate(year, month, day) && hour <= 23 && minute <= 59 && second <= 59
 }
 
+const CALENDAR_DATE = text()
+  .regex(DATE, 'Use YYYY-MM-DD')
+  // zod runs refinements after a failed regex too; the shape error already speaks for that case.
+  .refine((text) => {
+    const parts = DATE.exec(text)?.map(Number)
+    return !parts || isRealDate(parts[1], parts[2], parts[3])
+  }, 'There is no such date')
+
 /**
  * The one schema for a calendar date, `YYYY-MM-DD`: the shape, and a day that exists.
  * Every date field in the shared schemas uses it, so an impossible date is a 400 at the door.
+ * One instance, as with `text()`.
  */
-export const calendarDate = () =>
-  text()
-    .regex(DATE, 'Use YYYY-MM-DD')
-    // zod runs refinements after a failed regex too; the shape error already speaks for that case.
-    .refine((text) => {
-      const parts = DATE.exec(text)?.map(Number)
-      return !parts || isRealDate(parts[1], parts[2], parts[3])
-    }, 'There is no such date')
+export const calendarDate = () => CALENDAR_DATE
 
 /** A wall-clock date and time without a zone, `YYYY-MM-DDTHH:mm[:ss]`, on a real day and a real time. */
 export const wallDateTime = ({ seconds }: { seconds: 'required' | 'optional' }) =>

@@ -1,5 +1,6 @@
 import { DateTime } from 'luxon'
 import Papa from 'papaparse'
+import request from 'supertest'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { AuditEntity } from '#server/modules/audit/audit.entity'
@@ -195,6 +196,12 @@ describe('a hand-filed incident past its deadlines', () => {
       expect(m.subject).toMatch(new RegExp(`^INCIDENT deadline passed: Incident #${incident.id} `))
       expect(m.text).toContain(`${t.config.publicUrl}/incidents/${incident.id}`)
     }
+
+    // Acknowledging from the mail: with no task to open, the answer page links to the incident.
+    const ackPath = /\/ack\/[\w.-]+/.exec(mails[0].text)![0]
+    const answered = await request(t.app).post(ackPath).type('form').send({}).expect(200)
+    expect(answered.text).toContain(`<a href="/incidents/${incident.id}">Open the incident</a>`)
+    expect(answered.text).not.toContain('Open the task')
   })
 
   test('a deadline met after it escalated stops its alert climbing', async () => {

@@ -59,7 +59,13 @@ export async function acknowledgeInApp(alertId: number, person: { id: number; ro
   await acknowledgeAlert(alertId, person.id)
 }
 
-export type AckOutcome = { status: 'acknowledged' | 'already' | 'forged' | 'expired' | 'used' | 'inactive'; taskId?: number; byName?: string }
+export type AckOutcome = {
+  status: 'acknowledged' | 'already' | 'forged' | 'expired' | 'used' | 'inactive'
+  taskId?: number
+  /** A hand-filed incident's alert has no task; the page links to the incident instead. */
+  incidentId?: number
+  byName?: string
+}
 
 /** What an acknowledge link does: a forged, expired or already-used token changes nothing. */
 export async function acknowledgeByToken(secret: string, token: string, now = new Date()): Promise<AckOutcome> {
@@ -77,5 +83,5 @@ export async function acknowledgeByToken(secret: string, token: string, now = ne
   // Alerts are never deleted, so a notification always has one; this only guards the type.
   if (!alert) throw notFound('That alert')
   const first = await acknowledgeAlert(alert.id, row.personId, now)
-  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId ?? undefined, byName: person.name }
+  return { status: first ? 'acknowledged' : 'already', taskId: alert.taskId ?? undefined, incidentId: alert.incidentId ?? undefined, byName: person.name }
 }

@@ -17,18 +17,4 @@ export function weekOf(iso: string): string[] {
   return Array.from({ length: 7 }, (_, i) => addDays(monday, i))
 }
 
-// Names by hand rather than Intl.DateTimeFormat: the board is in English, and building a
-// formatter costs tens of milliseconds of a phone's first render for a dozen labels.
-const WEEKDAYS = ['Sunday', 'Monday', 'Tuesday', 'Wednesday', 'Thursday', 'Friday', 'Saturday']
-const MONTHS = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December']
-const weekday = (iso: string) => WEEKDAYS[asDate(iso).getUTCDay()]
-
-/** "Tuesday 8 December" */
-export const longDay = (iso: string) => `${weekday(iso)} ${dayOfMonth(iso)} ${MONTHS[asDate(iso).getUTCMonth()]}`
-/** "Tuesday, 8 December 2026" */
-export const fullDay = (iso: string) => `${weekday(iso)}, ${dayOfMonth(iso)} ${MONTHS[asDate(iso).getUTCMonth()]} ${asDate(iso).getUTCFullYear()}`
-/** "Tue" */
-export const shortWeekday = (iso: string) => weekday(iso).slice(0, 3)
-export function dayOfMonth(iso: string) {
-  return String(asDate(iso).getUTCDate())
-}
+export { dayOfMonth, fullDay, longDay, shortWeekday } from '../../../lib/day-names'

@@ -1,14 +1,7 @@
+import { formatWhen } from '../../../lib/zone-format'
+
 /** An instant as facility wall time: "Wed 3 Dec, 09:00". */
-export const formatInstant = (iso: string, zone: string) =>
-  new Intl.DateTimeFormat('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-    timeZone: zone,
-  }).format(new Date(iso))
+export const formatInstant = (iso: string, zone: string) => formatWhen(iso, zone)
 
 /** 31.5 h as "31 h 30 min"; whole days beyond two days. */
 export function formatHours(hours: number): string {

@@ -1,14 +1,12 @@
+import { clockTime, dateFormat } from '../../../lib/zone-format'
 import { DateTime } from 'luxon'
 
 /** "Wednesday 2 December 2026" for a facility date (YYYY-MM-DD). */
 export const longDate = (isoDate: string) =>
-  new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' }).format(
-    new Date(`${isoDate}T00:00:00Z`),
-  )
+  dateFormat('UTC', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' }).format(new Date(`${isoDate}T00:00:00Z`))
 
 /** "08:10" in the facility's zone. */
-export const clockTime = (iso: string, timeZone: string) =>
-  new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(new Date(iso))
+export { clockTime }
 
 /** A time written on the sheet for the sheet's day, as an instant; null when it is not a time. */
 export function paperTime(date: string, hhmm: string, timeZone: string): string | null {

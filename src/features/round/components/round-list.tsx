@@ -1,7 +1,8 @@
+import { useDeferredValue } from 'react'
 import type { Round } from '#shared/schemas/round'
 import type { SubmitOutcome } from '../api/use-submit-completion'
 import type { OutboxEntry } from '../outbox/outbox-store'
-import { groupRound } from '../utils/group-round'
+import { firstTasks, groupRound } from '../utils/group-round'
 import { AreaSection } from './area-section'
 import { TaskItem } from './task-item'
 
@@ -16,10 +17,18 @@ interface Props {
   onFinished: (taskId: number, outcome: SubmitOutcome) => void
 }
 
+// About what a phone shows before scrolling.
+const FIRST_SCREEN_TASKS = 8
+
 export function RoundList({ round, expandedId, advancedTo, outboxByTask, onToggle, ...rest }: Props) {
+  // The list's first render draws the first screen only; the rest follows in React's background
+  // pass, which yields to the browser every few milliseconds. Drawing a long round in one go kept a
+  // slowed phone's main thread busy for hundreds of milliseconds right when the page appeared.
+  const everything = useDeferredValue(true, false)
+  const groups = groupRound(round)
   return (
     <div className="flex flex-col gap-6">
-      {groupRound(round).map((group) => (
+      {(everything ? groups : firstTasks(groups, FIRST_SCREEN_TASKS)).map((group) => (
         <AreaSection key={group.key} group={group}>
           {group.targets.map((target) => (
             <div key={target.key} className="flex flex-col gap-2">

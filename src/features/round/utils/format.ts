@@ -1,17 +1,14 @@
-/** "10:42" in the facility's time zone, whatever the phone's own zone is. */
-export function clockTime(iso: string, timeZone: string): string {
-  return new Intl.DateTimeFormat('en-GB', { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(new Date(iso))
-}
+import { longDay } from '../../../lib/day-names'
+import { clockTime, dateFormat } from '../../../lib/zone-format'
 
-/** "Wednesday 2 December" for a facility date (YYYY-MM-DD). */
-export function longDate(isoDate: string): string {
-  const [y, m, d] = isoDate.split('-').map(Number)
-  return new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', timeZone: 'UTC' }).format(new Date(Date.UTC(y, m - 1, d)))
-}
+export { clockTime }
+
+/** "Wednesday 2 December" for a facility date (YYYY-MM-DD); names by hand, as the header is drawn on the first frame. */
+export const longDate = longDay
 
 /** A time for "done at", with the date only when it is not the round's day. */
 export function doneAt(iso: string, timeZone: string, roundDate: string): string {
-  const day = new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date(iso))
+  const day = dateFormat(timeZone, {}, 'en-CA').format(new Date(iso))
   const time = clockTime(iso, timeZone)
   return day === roundDate ? time : `${time} on ${longDate(day)}`
 }

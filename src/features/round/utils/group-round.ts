@@ -29,3 +29,20 @@ export function groupRound(round: Round): AreaGroup[] {
 }
 
 export const isFinished = (task: RoundTask) => task.status === 'done' || task.status === 'skipped'
+
+/** The same groups cut after the first `limit` tasks (in walking order), for a first screen. */
+export function firstTasks(groups: AreaGroup[], limit: number): AreaGroup[] {
+  const cut: AreaGroup[] = []
+  let left = limit
+  for (const group of groups) {
+    if (left <= 0) break
+    const targets: TargetGroup[] = []
+    for (const target of group.targets) {
+      if (left <= 0) break
+      targets.push(target.tasks.length <= left ? target : { ...target, tasks: target.tasks.slice(0, left) })
+      left -= target.tasks.length
+    }
+    cut.push({ ...group, targets })
+  }
+  return cut
+}
