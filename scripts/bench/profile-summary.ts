@@ -3,17 +3,7 @@
 // --busy keeps only the seconds in which the process was less than 60 % idle; --from S keeps only samples from
 // second S on (the bench's server spends its first seconds loading modules and signing in).
 import { readFileSync } from 'node:fs'
-
-interface ProfileNode {
-  id: number
-  callFrame: { functionName: string; url: string; lineNumber: number }
-  children?: number[]
-}
-interface Profile {
-  nodes: ProfileNode[]
-  samples: number[]
-  timeDeltas: number[]
-}
+import type { CpuProfile as Profile, ProfileNode } from './page-profile'
 
 const [file, ...flags] = process.argv.slice(2)
 if (!file) throw new Error('usage: profile-summary.ts <file.cpuprofile> [--busy] [--top N]')
