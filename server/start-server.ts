@@ -58,6 +58,8 @@ export async function startServer(given: AppConfig, opts: StartOptions = {}) {
   const server = createServer(app)
   const redis = config.redisUrl ? await createRedisAdapter(config.redisUrl) : null
   attachSocketServer(server, { sessionMiddleware, passport, allowedOrigins: config.allowedOrigins, behindProxy: config.cookieSecure }, redis?.adapter)
+  // The store creates its table at start; a sign-in answered before that failed with a 500.
+  await sessionStore.onReady()
   await new Promise<void>((resolve) => server.listen(config.port, config.host, resolve))
   const smtp = config.mail.mode === 'local' && opts.localSmtp !== false ? await startLocalSmtpIfFree(config.mail.port, config.mail.host) : null
   // Port 0 asks for a free port (tests); mail then goes to wherever our own server listens.

@@ -9,12 +9,12 @@ const CPU_SLOWDOWN = 4
 const PHONE = { width: 412, height: 823 }
 const SETTLE_MS = 8000
 
-interface ProfileNode {
+export interface ProfileNode {
   id: number
   callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number }
   children?: number[]
 }
-interface CpuProfile {
+export interface CpuProfile {
   nodes: ProfileNode[]
   samples: number[]
   timeDeltas: number[]

@@ -23,6 +23,9 @@ const generations = new Map<CachedKind, number>()
 /** Kinds written inside a transaction still open: invalidated again once it ends. */
 const openWrites = new WeakMap<QueryRunner, Set<CachedKind>>()
 
+/** Whether writes to this table make a copy stale: such writes must go through TypeORM, which the invalidator sees. */
+export const isCachedTable = (tableName: string) => tableName in KIND_OF_TABLE
+
 export const generationOf = (kind: CachedKind) => generations.get(kind) ?? 0
 
 export function invalidate(kind: CachedKind) {

@@ -52,12 +52,16 @@ const readCommittedConnections = new WeakSet<object>()
  * cost every write request one more round trip. Transactions that ask for another level still get it.
  */
 async function startReadCommitted(runner: QueryRunner) {
-  const connection = (await runner.connect()) as object
-  if (!readCommittedConnections.has(connection)) {
-    await runner.query('SET SESSION TRANSACTION ISOLATION LEVEL READ COMMITTED')
-    readCommittedConnections.add(connection)
-  }
+  await readCommittedSession(runner)
   await runner.startTransaction()
+}
+
+/** Makes the runner's pooled connection read committed for good (once per connection); a statement run alone on it then reads committed too. */
+export async function readCommittedSession(runner: QueryRunner) {
+  const connection = (await runner.connect()) as object
+  if (readCommittedConnections.has(connection)) return
+  await runner.query('SET SESSION TRANSACTION ISOLATION LEVEL READ COMMITTED')
+  readCommittedConnections.add(connection)
 }
 
 type End = Response['end']

@@ -1,5 +1,5 @@
 import type { ChangeKind } from '#shared/schemas/live'
-import { db } from '../db/data-source'
+import { insertRows } from '../db/prepared'
 import { ChangeOutboxEntity } from './change-outbox.entity'
 
 const CHUNK = 1000
@@ -12,10 +12,7 @@ const MAX_TASK_ROWS = 2000
  */
 export async function recordChange(kind: ChangeKind, ids: ReadonlyArray<number | string | null> = [null]) {
   const rows = [...new Set(ids)].map((id) => ({ kind, entityId: id === null ? null : String(id) }))
-  for (let i = 0; i < rows.length; i += CHUNK)
-    await db()
-      .getRepository(ChangeOutboxEntity)
-      .insert(rows.slice(i, i + CHUNK))
+  for (let i = 0; i < rows.length; i += CHUNK) await insertRows(ChangeOutboxEntity, rows.slice(i, i + CHUNK))
 }
 
 export async function recordTaskChanges(ids: readonly number[], reason = 'many') {

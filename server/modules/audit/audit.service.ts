@@ -1,5 +1,5 @@
 import type { ChangeKind } from '#shared/schemas/live'
-import { db } from '../../db/data-source'
+import { insertRows } from '../../db/prepared'
 import { currentPersonId } from '../../lib/request-context'
 import { recordChange } from '../../realtime/change-outbox'
 import { AuditEntity, type AuditRow, type AuditedEntity } from './audit.entity'
@@ -33,9 +33,8 @@ function clean(value: unknown): unknown {
  * and the outbox row that tells the live feed, both in the caller's transaction.
  */
 export async function audit(entity: AuditedEntity, entityId: number | string, action: AuditRow['action'], before: unknown, after: unknown) {
-  await db()
-    .getRepository(AuditEntity)
-    .insert({
+  await insertRows(AuditEntity, [
+    {
       at: new Date(),
       personId: currentPersonId(),
       entity,
@@ -43,7 +42,8 @@ export async function audit(entity: AuditedEntity, entityId: number | string, ac
       action,
       before: clean(before) as never,
       after: clean(after) as never,
-    })
+    },
+  ])
   const kind = LIVE_KIND[entity]
   if (kind) await recordChange(kind, [entityId])
 }

@@ -3,6 +3,7 @@ import { Strategy as LocalStrategy } from 'passport-local'
 import { getPersonRow, verifyCredentials } from '../people/people.service'
 import { toPerson } from '../people/person.mapper'
 import type { Person } from '#shared/schemas/person'
+import { personReadWithSession } from './session'
 
 interface SessionUser {
   id: number
@@ -34,6 +35,12 @@ export function configurePassport() {
     done(null, { id: user.id, v: user.sessionVersion ?? 0 } satisfies SessionUser)
   })
   passport.deserializeUser((stored: SessionUser, done) => {
+    const read = personReadWithSession(stored)
+    if (read !== undefined) {
+      // Read in the session's own statement (record 16h); the same checks as below.
+      if (!read || !read.active || read.sessionVersion !== stored.v) return done(null, false)
+      return done(null, { ...read.person, sessionVersion: read.sessionVersion })
+    }
     getPersonRow(stored.id)
       .then((row) => {
         // A deactivated person or a reset password ends every older session.

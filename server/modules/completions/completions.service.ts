@@ -6,6 +6,7 @@ import type { Person } from '#shared/schemas/person'
 import { IsNull } from 'typeorm'
 import { db, inTransaction } from '../../db/data-source'
 import { duplicateKeyName } from '../../db/database-errors'
+import { insertRows } from '../../db/prepared'
 import { conflict, forbidden, validationError } from '../../lib/errors'
 import { audit } from '../audit/audit.service'
 import { getPersonRow } from '../people/people.service'
@@ -90,23 +91,22 @@ export async function completeTask(taskId: number, person: Person, data: ParsedC
       response,
     })
     if (judged.readings.length) {
-      await db()
-        .getRepository(ReadingEntity)
-        .insert(
-          judged.readings.map((r) => ({
-            completionId: data.completionId,
-            taskId: task.id,
-            tankId: context.tankId,
-            systemId: context.systemId,
-            parameterKey: r.parameterKey,
-            value: r.value,
-            unit: r.unit,
-            band: r.band,
-            derived: r.derived,
-            takenAt: doneAt,
-            personId: performer.id,
-          })),
-        )
+      await insertRows(
+        ReadingEntity,
+        judged.readings.map((r) => ({
+          completionId: data.completionId,
+          taskId: task.id,
+          tankId: context.tankId,
+          systemId: context.systemId,
+          parameterKey: r.parameterKey,
+          value: r.value,
+          unit: r.unit,
+          band: r.band,
+          derived: r.derived,
+          takenAt: doneAt,
+          personId: performer.id,
+        })),
+      )
     }
     if (mortality?.plan) await writeRoundMortality(db(), mortality.plan, { completionId: data.completionId, personId: performer.id, at: doneAt })
     if (flag === 'critical')
@@ -152,9 +152,7 @@ const USED_ELSEWHERE = 'That completion id was already used for another task.'
 /** The completion with its answer stored for a replay; its id taken already means it was sent for another task. */
 async function insertCompletion(row: Omit<CompletionRow, 'createdAt'>) {
   try {
-    await db()
-      .getRepository(CompletionEntity)
-      .insert({ ...row, response: row.response as never })
+    await insertRows(CompletionEntity, [{ ...row, response: row.response as never }])
   } catch (err) {
     if (duplicateKeyName(err) === 'PRIMARY') throw conflict(USED_ELSEWHERE)
     throw err

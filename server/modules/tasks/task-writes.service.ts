@@ -1,5 +1,6 @@
 import { In, Not } from 'typeorm'
 import { db } from '../../db/data-source'
+import { execute } from '../../db/prepared'
 import type { TaskStatus } from '#shared/schemas/task'
 import { recordBulkTaskChange, recordTaskChanges } from '../../realtime/change-outbox'
 import { TaskEntity, type TaskRow } from './task.entity'
@@ -37,16 +38,15 @@ export interface Closing {
  * winner when two complete it at once); answers whether this call closed it.
  */
 export async function closeTask(task: Pick<TaskRow, 'id' | 'version'>, closing: Closing): Promise<boolean> {
-  const { outcome, ...fields } = closing
-  const claimed = await db()
-    .createQueryBuilder()
-    .update(TaskEntity)
-    .set({ ...fields, status: outcome, version: () => 'version + 1' })
-    .where('id = :id AND version = :version', { id: task.id, version: task.version })
-    .andWhere("status NOT IN ('done', 'skipped')")
-    .execute()
-  if (claimed.affected) await recordTaskChanges([task.id])
-  return !!claimed.affected
+  const { outcome, flag, lateMinutes, completedAt, completedById, assigneeId } = closing
+  // A prepared statement on the hot path of every completion (record 16h); updatedAt as TypeORM's update sets it.
+  const claimed = await execute<{ affectedRows: number }>(
+    'UPDATE tasks SET status = ?, flag = ?, lateMinutes = ?, completedAt = ?, completedById = ?, assigneeId = ?, ' +
+      "version = version + 1, updatedAt = CURRENT_TIMESTAMP(3) WHERE id = ? AND version = ? AND status NOT IN ('done', 'skipped')",
+    [outcome, flag, lateMinutes, completedAt, completedById, assigneeId, task.id, task.version],
+  )
+  if (claimed.affectedRows) await recordTaskChanges([task.id])
+  return !!claimed.affectedRows
 }
 
 /** A finished task's flag after its readings were corrected and judged again (an amendment). */
