@@ -2,18 +2,15 @@ import { DateTime } from 'luxon'
 import type { CDPSession, Locator } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { createShift } from '#server/modules/roster/roster.service'
-import { screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const TABLET = { width: 820, height: 1180 }
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 /** A real touch drag through Chromium's input pipeline: press, hold past the sensor's delay, move, lift. */

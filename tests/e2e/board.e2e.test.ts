@@ -7,8 +7,8 @@ import { createShift } from '#server/modules/roster/roster.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
 import type { Tank } from '#shared/schemas/facility'
 import type { Task } from '#shared/schemas/task'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const TABLET = { width: 820, height: 1180 }
@@ -17,10 +17,7 @@ const CARDS = 400
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 /** A task on a facility day at a local time, unassigned unless told. */

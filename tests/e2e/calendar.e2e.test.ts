@@ -4,18 +4,15 @@ import type { Page } from 'playwright-core'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { createOnCall, createShift } from '#server/modules/roster/roster.service'
 import type { Tank } from '#shared/schemas/facility'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const TABLET = { width: 820, height: 1180 }
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 function taskAt(tank: Tank, date: string, time: string, extra: Parameters<typeof makeTankTask>[1] = {}) {

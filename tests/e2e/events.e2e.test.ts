@@ -5,16 +5,13 @@ import { createPlaybook } from '#server/modules/playbooks/playbooks.service'
 import type { Tank } from '#shared/schemas/facility'
 import { PlaybookInputSchema } from '#shared/schemas/playbook'
 import type { Task } from '#shared/schemas/task'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 /** A routine-style feed on a tank at a facility wall time. */

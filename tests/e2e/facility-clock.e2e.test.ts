@@ -1,13 +1,9 @@
 import { afterAll, beforeAll, describe, test } from 'vitest'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 // Any real zone other than the demo's will do; this one is far from it, so nothing matches by accident.

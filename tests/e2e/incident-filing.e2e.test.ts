@@ -1,14 +1,11 @@
 import { DateTime } from 'luxon'
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 const local = (d: DateTime) => d.setZone(zone).toFormat("yyyy-MM-dd'T'HH:mm")

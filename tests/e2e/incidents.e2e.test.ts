@@ -3,8 +3,8 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { advanceTaskStatuses } from '#server/jobs/status-clock'
 import type { Tank } from '#shared/schemas/facility'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 const MIN = 60_000
@@ -12,10 +12,7 @@ const HOUR = 60 * MIN
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 /** A welfare-critical check whose grace ends at `missedAt`; the status clock then runs at `clockAt` and proposes an incident. */

@@ -3,17 +3,14 @@ import { afterAll, beforeAll, describe, expect, test } from 'vitest'
 import { db } from '#server/db/data-source'
 import { MovementEntity } from '#server/modules/stock/stock.entities'
 import { recordMovement } from '#server/modules/stock/stock.service'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { makeBatch, parsedArrival } from '#tests/support/stock-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 describe('deaths counted on the round reach the stock register', () => {

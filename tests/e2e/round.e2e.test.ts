@@ -6,16 +6,13 @@ import { db } from '#server/db/data-source'
 import { CompletionEntity, PhotoEntity } from '#server/modules/completions/completion.entities'
 import { TEST_PASSWORD } from '#seed/factories'
 import type { Tank } from '#shared/schemas/facility'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
-import { ensureFacilityAndParameters, makeAreaWithTanks } from '#tests/support/facility-fixtures'
+import { DESKTOP, PHONE, screenshot, type BrowserSession, startBrowserOnFacility } from '#tests/support/browser'
+import { makeAreaWithTanks } from '#tests/support/facility-fixtures'
 import { completion, makeTankTask, setSystemLimit } from '#tests/support/task-fixtures'
 
 let s: BrowserSession
 let zone: string
-beforeAll(async () => {
-  s = await startBrowserSession()
-  zone = (await ensureFacilityAndParameters()).timeZone
-})
+beforeAll(async () => ({ s, zone } = await startBrowserOnFacility()))
 afterAll(() => s?.close())
 
 /** A task on the facility's today, due `minutes` from now, so it sits on today's round. */

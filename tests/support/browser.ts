@@ -6,6 +6,7 @@ import { createPerson } from '#server/modules/people/people.service'
 import { buildPersonInput, TEST_PASSWORD } from '#seed/factories'
 import type { Role } from '#shared/schemas/person'
 import { createOwnDatabase, dropOwnDatabase } from './own-database'
+import { ensureFacilityAndParameters } from './facility-fixtures'
 import { testConfig } from './test-app'
 
 export const PHONE = { width: 390, height: 844 }
@@ -65,4 +66,10 @@ export type BrowserSession = Awaited<ReturnType<typeof startBrowserSession>>
 
 export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path: path.join('test-results', `${name}.png`), fullPage: true })
+}
+
+/** A browser session on a facility with its parameters, and the facility's zone: most journeys start here. */
+export async function startBrowserOnFacility(): Promise<{ s: BrowserSession; zone: string }> {
+  const s = await startBrowserSession()
+  return { s, zone: (await ensureFacilityAndParameters()).timeZone }
 }
