@@ -2,14 +2,26 @@ import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query'
 import { ApiError } from '../lib/api-client'
 import { toastError } from '../lib/toast'
 
-function sendToSignIn() {
-  const here = window.location.pathname + window.location.search
-  if (!window.location.pathname.startsWith('/sign-in')) {
-    window.location.assign(`/sign-in?redirectTo=${encodeURIComponent(here)}`)
-  }
+/** Where the person was, or was going: a refused session comes back there after signing in. */
+export interface Place {
+  pathname: string
+  search: string
 }
 
-export function createQueryClient() {
+/** Sends a refused session to sign-in; the app hands in its router so this stays a soft navigation. */
+export type SendToSignIn = () => void
+
+export function signInPathFrom(place: Place): string | null {
+  if (place.pathname.startsWith('/sign-in')) return null
+  return `/sign-in?redirectTo=${encodeURIComponent(place.pathname + place.search)}`
+}
+
+const reload: SendToSignIn = () => {
+  const path = signInPathFrom(window.location)
+  if (path) window.location.assign(path)
+}
+
+export function createQueryClient(sendToSignIn: SendToSignIn = reload) {
   return new QueryClient({
     defaultOptions: {
       queries: {

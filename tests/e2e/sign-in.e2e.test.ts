@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
+import { TEST_PASSWORD } from '#seed/factories'
 import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
 
 let s: BrowserSession
@@ -21,8 +22,32 @@ describe('signing in and out', () => {
     await screenshot(page, 'technician-phone-more')
     await page.getByRole('button', { name: 'Sign out' }).click()
     await page.waitForURL('**/sign-in')
+    const documents: string[] = []
+    page.on('request', (request) => void (request.isNavigationRequest() && documents.push(request.url())))
     await page.goto('/round')
     await page.waitForURL('**/sign-in?redirectTo=%2Fround')
+    await page.getByRole('button', { name: 'Sign in' }).waitFor()
+    // The round's early request and the session check both meet the refusal; the page still loads once.
+    expect(documents).toHaveLength(1)
+    await context.close()
+  })
+
+  test('when the session ends elsewhere, the open round goes to sign in at once and comes back after, without reloading', async () => {
+    const tech = await s.createPerson('technician')
+    const { page, context } = await s.newPage(PHONE)
+    await s.signIn(page, tech.email)
+    await page.getByRole('navigation', { name: 'Main' }).filter({ visible: true }).getByRole('link', { name: 'Round' }).waitFor()
+    const documents: string[] = []
+    page.on('request', (request) => void (request.isNavigationRequest() && documents.push(request.url())))
+    // Signing out through the API, as another tab would, leaves this page holding a dead session.
+    expect((await page.request.delete('/api/session')).ok()).toBe(true)
+    // The server drops the session's live connection, so the page learns without a click.
+    await page.waitForURL('**/sign-in?redirectTo=%2Fround')
+    await page.getByLabel('E-mail').fill(tech.email)
+    await page.getByLabel('Password').fill(TEST_PASSWORD)
+    await page.getByRole('button', { name: 'Sign in' }).click()
+    await page.waitForURL('**/round')
+    expect(documents).toHaveLength(0)
     await context.close()
   })
 

@@ -8,6 +8,7 @@ import { authQueries } from '../../features/auth/api/auth-queries'
 import { useSignOut } from '../../features/auth/api/use-sign-out'
 import { ApiError } from '../../lib/api-client'
 import { navFor } from '../navigation'
+import { signInPathFrom } from '../query-client'
 
 export const loader =
   (queryClient: QueryClient) =>
@@ -16,8 +17,7 @@ export const loader =
       return await queryClient.ensureQueryData(authQueries.me())
     } catch (error) {
       if (error instanceof ApiError && error.status === 401) {
-        const url = new URL(request.url)
-        throw redirect(`/sign-in?redirectTo=${encodeURIComponent(url.pathname + url.search)}`)
+        throw redirect(signInPathFrom(new URL(request.url)) ?? '/sign-in')
       }
       throw error
     }

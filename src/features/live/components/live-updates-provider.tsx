@@ -79,7 +79,12 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
         if (missed) void refetchTaskViews(queryClient)
         missed = false
       })
-      socket.on('disconnect', lost)
+      socket.on('disconnect', (reason) => {
+        lost()
+        // The server closes a session's sockets when it ends (signed out elsewhere, person disabled):
+        // asking who is signed in then meets the refusal that sends this page to sign in.
+        if (reason === 'io server disconnect') void queryClient.invalidateQueries({ queryKey: sessionKey })
+      })
       socket.on('connect_error', lost)
       const onOffline = () => {
         // The socket may not notice a dead network until its ping times out; the browser knows sooner.
@@ -113,7 +118,7 @@ export function LiveUpdatesProvider({ sessionKey, onSignedOut, children }: Props
       window.removeEventListener('online', retryLoad)
       teardown?.()
     }
-  }, [personId, queryClient])
+  }, [personId, queryClient, sessionKey])
 
   const status: LiveStatus = personId === null ? 'signed-out' : state.personId === personId ? state.status : 'connecting'
   return <LiveStatusContext.Provider value={status}>{children}</LiveStatusContext.Provider>
