@@ -8,16 +8,22 @@ export function yieldToMain(): Promise<void> {
 }
 
 /**
- * Checks a long list item by item against its schema and maps each, a slice at a time, yielding
+ * Checks a long list (`count` items, read by `itemAt`) item by item against its schema and maps each, a slice at a time, yielding
  * between slices: a day of 6,000 board cards checked in one go blocks a phone's main thread for
  * a long task, in slices it never does. Throws the schema's error like `schema.parse`.
  */
-export async function parseInSlices<T extends z.ZodType, R>(items: unknown[], schema: T, map: (item: z.output<T>) => R, sliceSize = 500): Promise<R[]> {
-  const out: R[] = new Array<R>(items.length)
-  for (let start = 0; start < items.length; start += sliceSize) {
+export async function parseInSlices<T extends z.ZodType, R>(
+  count: number,
+  itemAt: (i: number) => unknown,
+  schema: T,
+  map: (item: z.output<T>) => R,
+  sliceSize = 500,
+): Promise<R[]> {
+  const out: R[] = new Array<R>(count)
+  for (let start = 0; start < count; start += sliceSize) {
     if (start > 0) await yieldToMain()
-    const end = Math.min(items.length, start + sliceSize)
-    for (let i = start; i < end; i++) out[i] = map(schema.parse(items[i]))
+    const end = Math.min(count, start + sliceSize)
+    for (let i = start; i < end; i++) out[i] = map(schema.parse(itemAt(i)))
   }
   return out
 }

@@ -7,7 +7,7 @@ import { OnCallEntity } from '#server/modules/roster/roster.entities'
 import { createShift } from '#server/modules/roster/roster.service'
 import { createRoutine, updateRoutine } from '#server/modules/routines/routines.service'
 import { TaskEntity } from '#server/modules/tasks/task.entity'
-import { BoardWireSchema, unfoldBoard } from '#shared/schemas/board'
+import { BoardWireSchema, unfoldBoard, wireCards } from '#shared/schemas/board'
 import { ensureFacilityAndParameters, makeAreaWithTanks, routineData } from '#tests/support/facility-fixtures'
 import { makeTankTask } from '#tests/support/task-fixtures'
 import { startTestApp, type TestApp } from '#tests/support/test-app'
@@ -45,7 +45,7 @@ describe('the day as the board receives it', () => {
     ])
     const { body } = await supervisor.get(`/api/tasks/board?date=${date}`).expect(200)
     const wire = BoardWireSchema.parse(body)
-    const ours = wire.cards.filter((c) => made.some((m) => m.id === c.id))
+    const ours = wireCards(wire.cards).filter((c) => made.some((m) => m.id === c.id))
     expect(ours).toHaveLength(4)
     // Four cards of one routine-like kind on two tanks and an area: the kind once, each target once.
     expect(new Set(ours.map((c) => c.kind)).size).toBe(1)
@@ -99,8 +99,8 @@ describe('the day as the board receives it', () => {
     const { tanks } = await makeAreaWithTanks(1)
     const date = inDays(11)
     // Enough cards to pass the 1 kB below which nothing is compressed.
-    const hours = Array.from({ length: 24 }, (_, h) => String(h).padStart(2, '0'))
-    await Promise.all(hours.map((h) => makeTankTask(tanks[0], { localDate: date, localStart: `${date}T${h}:00:00` })))
+    const times = Array.from({ length: 96 }, (_, q) => `${String(Math.floor(q / 4)).padStart(2, '0')}:${String((q % 4) * 15).padStart(2, '0')}`)
+    await Promise.all(times.map((t) => makeTankTask(tanks[0], { localDate: date, localStart: `${date}T${t}:00` })))
     const plain = await supervisor.get(`/api/tasks/board?date=${date}`).set('accept-encoding', 'identity').expect(200)
     const packed = await supervisor
       .get(`/api/tasks/board?date=${date}`)

@@ -1,4 +1,4 @@
-import type { BoardCardWire, BoardColumnPerson, BoardWire } from '#shared/schemas/board'
+import { emptyColumns, pushCard, type BoardCardWire, type BoardColumnPerson, type BoardWire } from '#shared/schemas/board'
 import type { Band } from '#shared/schemas/parameter'
 import type { Category, TargetKind } from '#shared/schemas/routine'
 import type { Task, TaskStatus } from '#shared/schemas/task'
@@ -67,7 +67,8 @@ export async function getBoard(date: string): Promise<BoardWire> {
   const kindOf = indexer(kinds)
   const targetOf = indexer(targets)
   const load = new Map<number, { taskCount: number; plannedMinutes: number }>()
-  const cards = rows.map((r): BoardCardWire => {
+  const cards = emptyColumns()
+  for (const r of rows) {
     const card: BoardCardWire = {
       id: r.id,
       kind: kindOf(`${r.title}\u0000${r.category}\u0000${r.priority}\u0000${r.durationMinutes}`, () => ({
@@ -94,8 +95,8 @@ export async function getBoard(date: string): Promise<BoardWire> {
     }
     if (r.flag !== null) card.flag = r.flag
     if (r.heldReason !== null) card.held = r.heldReason
-    return card
-  })
+    pushCard(cards, card)
+  }
   return { date, people: await columns(shifts, load), kinds, targets, cards }
 }
 
