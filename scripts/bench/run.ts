@@ -131,9 +131,14 @@ try {
     measureRoundJourney(url(), need(cookies.technician, 'a signed-in technician'), need(roundTaskIds.length || null, 'the morning round')),
   )
   // Diagnostic only: ROUNDTIDE_BENCH_PROFILE=1 writes where the Round's main thread spends its first seconds.
+  // ROUNDTIDE_BENCH_PROFILE=board profiles the full day's board as well.
   if (process.env.ROUNDTIDE_BENCH_PROFILE)
     await step('10 profile Round', () =>
       profilePage(url(), '/round', need(cookies.technician, 'a signed-in technician'), clientDir, process.env.ROUNDTIDE_BENCH_LIGHTHOUSE_DIR),
+    )
+  if (process.env.ROUNDTIDE_BENCH_PROFILE === 'board')
+    await step('10 profile board', () =>
+      profilePage(url(), `/board?date=${day(1)}`, need(cookies.supervisor, 'a signed-in supervisor'), clientDir, process.env.ROUNDTIDE_BENCH_LIGHTHOUSE_DIR),
     )
   await step('9 rule checks', () => measureRuleChecks(need(facility, 'the facility').zone))
 } finally {

@@ -47,7 +47,7 @@ describe('the board on a tablet', () => {
     await createShift({ personId: tech.id, date, start: '07:00', end: '15:30', kind: 'day' })
     const supervisor = await s.createPerson('supervisor')
 
-    const context = await s.browser.newContext({ viewport: TABLET, hasTouch: true, baseURL: s.url, serviceWorkers: 'block' })
+    const context = await s.newContext({ viewport: TABLET, hasTouch: true })
     const page = await context.newPage()
     await s.signIn(page, supervisor.email)
     await page.goto(`/board?date=${date}&area=${area.id}`)

@@ -59,7 +59,7 @@ describe('push alerts on the installed app', () => {
       .save({ personId: person.id, fromDate: '2000-01-01', toDate: '2000-01-02', startsAt: new Date(now - 60 * MIN), endsAt: new Date(now + 600 * MIN) })
 
     // Service workers are allowed here (other journeys block them) and notifications are permitted, as after "Allow".
-    const context = await s.browser.newContext({ viewport: PHONE, baseURL: s.url, serviceWorkers: 'allow' })
+    const context = await s.newContext({ viewport: PHONE, serviceWorkers: 'allow' })
     await context.grantPermissions(['notifications'], { origin: s.url })
     const page = await context.newPage()
     await s.signIn(page, person.email)

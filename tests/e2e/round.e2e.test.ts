@@ -213,7 +213,7 @@ describe('the round on a phone', () => {
     const { tanks } = await makeAreaWithTanks(1, { roundOrder: 4 })
     await taskDueIn(tanks[0], 30, { title: 'Night feed', assigneeId: tech.id, requiredReadings: [] })
     // The other tests block service workers (see tests/support/browser.ts); this one needs it.
-    const context = await s.browser.newContext({ viewport: PHONE, baseURL: s.url, serviceWorkers: 'allow' })
+    const context = await s.newContext({ viewport: PHONE, serviceWorkers: 'allow' })
     const page = await context.newPage()
     await s.signIn(page, tech.email)
     await row(page, 'Night feed').waitFor()
