@@ -1,6 +1,7 @@
 import { writeFileSync } from 'node:fs'
 import path from 'node:path'
 import { chromium, type Browser, type Page } from 'playwright-core'
+import { startCpuSampling } from './page-profile'
 import { log, ms, percentile, type Row } from './stats'
 
 const DESKTOP = { width: 1440, height: 900 }
@@ -33,17 +34,14 @@ const stopFrameClock = (page: Page) => page.evaluate<number[]>(STOP_FRAME_CLOCK)
 async function startDragProfile(browser: Browser, page: Page) {
   const dir = process.env.ROUNDTIDE_BENCH_DRAG_PROFILE
   if (!dir) return async (_frames: number[]) => {}
-  const cdp = await page.context().newCDPSession(page)
-  await cdp.send('Profiler.enable')
-  await cdp.send('Profiler.setSamplingInterval', { interval: 200 })
   await browser.startTracing(page, {
     path: path.join(dir, 'board-drag-trace.json'),
     categories: ['devtools.timeline', 'disabled-by-default-devtools.timeline', 'blink.user_timing'],
   })
-  await cdp.send('Profiler.start')
+  const stopSampling = await startCpuSampling(await page.context().newCDPSession(page))
   return async (frames: number[]) => {
     writeFileSync(path.join(dir, 'board-drag-frames.json'), JSON.stringify(frames))
-    const { profile } = await cdp.send('Profiler.stop')
+    const profile = await stopSampling()
     writeFileSync(path.join(dir, 'board-drag.cpuprofile'), JSON.stringify(profile))
     await browser.stopTracing()
     log(`board drag: profile and trace written to ${dir}`)

@@ -1,6 +1,6 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs'
 import path from 'node:path'
-import { chromium } from 'playwright-core'
+import { chromium, type CDPSession } from 'playwright-core'
 import { SourceMapConsumer } from 'source-map-js'
 import { log, ms, type Row } from './stats'
 
@@ -94,6 +94,14 @@ function byLibrary(top: Array<{ where: string; ms: number }>): string {
     .join(', ')
 }
 
+/** V8's sampling profiler on the page behind `cdp`, every 200 µs; the returned function stops it and gives the profile. */
+export async function startCpuSampling(cdp: CDPSession): Promise<() => Promise<CpuProfile>> {
+  await cdp.send('Profiler.enable')
+  await cdp.send('Profiler.setSamplingInterval', { interval: 200 })
+  await cdp.send('Profiler.start')
+  return async () => ((await cdp.send('Profiler.stop')) as { profile: CpuProfile }).profile
+}
+
 /**
  * Measurement 10 (diagnostic, ROUNDTIDE_BENCH_PROFILE=1): where a page's main thread spends its
  * time in the first seconds on a slowed phone, from V8's sampling profiler. Build the client
@@ -112,12 +120,10 @@ export async function profilePage(url: string, pagePath: string, cookie: string,
     const page = await context.newPage()
     const cdp = await context.newCDPSession(page)
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_SLOWDOWN })
-    await cdp.send('Profiler.enable')
-    await cdp.send('Profiler.setSamplingInterval', { interval: 200 })
-    await cdp.send('Profiler.start')
+    const stopSampling = await startCpuSampling(cdp)
     await page.goto(pagePath)
     await page.waitForTimeout(SETTLE_MS)
-    const { profile } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile }
+    const profile = await stopSampling()
     if (outDir) writeFileSync(path.join(outDir, `profile${pagePath.replace(/\W+/g, '-')}.cpuprofile`), JSON.stringify(profile))
     const top = selfTimes(profile, frameNamer(clientDir))
     const busy = top.reduce((sum, t) => sum + t.ms, 0)

@@ -1,12 +1,19 @@
 import { afterAll, beforeAll, describe, expect, test } from 'vitest'
-import { TEST_PASSWORD } from '#seed/factories'
-import { DESKTOP, PHONE, screenshot, startBrowserSession, type BrowserSession } from '#tests/support/browser'
+import type { Page } from 'playwright-core'
+import { DESKTOP, PHONE, screenshot, startBrowserSession, submitSignIn, type BrowserSession } from '#tests/support/browser'
 
 let s: BrowserSession
 beforeAll(async () => {
   s = await startBrowserSession()
 })
 afterAll(() => s?.close())
+
+/** The pages the browser loads from here on (a soft navigation loads none). */
+function documentsLoaded(page: Page): string[] {
+  const documents: string[] = []
+  page.on('request', (request) => void (request.isNavigationRequest() && documents.push(request.url())))
+  return documents
+}
 
 describe('signing in and out', () => {
   test('a technician on a phone signs in, sees the round navigation without People, and signs out', async () => {
@@ -22,8 +29,7 @@ describe('signing in and out', () => {
     await screenshot(page, 'technician-phone-more')
     await page.getByRole('button', { name: 'Sign out' }).click()
     await page.waitForURL('**/sign-in')
-    const documents: string[] = []
-    page.on('request', (request) => void (request.isNavigationRequest() && documents.push(request.url())))
+    const documents = documentsLoaded(page)
     await page.goto('/round')
     await page.waitForURL('**/sign-in?redirectTo=%2Fround')
     await page.getByRole('button', { name: 'Sign in' }).waitFor()
@@ -37,15 +43,12 @@ describe('signing in and out', () => {
     const { page, context } = await s.newPage(PHONE)
     await s.signIn(page, tech.email)
     await page.getByRole('navigation', { name: 'Main' }).filter({ visible: true }).getByRole('link', { name: 'Round' }).waitFor()
-    const documents: string[] = []
-    page.on('request', (request) => void (request.isNavigationRequest() && documents.push(request.url())))
+    const documents = documentsLoaded(page)
     // Signing out through the API, as another tab would, leaves this page holding a dead session.
     expect((await page.request.delete('/api/session')).ok()).toBe(true)
     // The server drops the session's live connection, so the page learns without a click.
     await page.waitForURL('**/sign-in?redirectTo=%2Fround')
-    await page.getByLabel('E-mail').fill(tech.email)
-    await page.getByLabel('Password').fill(TEST_PASSWORD)
-    await page.getByRole('button', { name: 'Sign in' }).click()
+    await submitSignIn(page, tech.email)
     await page.waitForURL('**/round')
     expect(documents).toHaveLength(0)
     await context.close()
@@ -82,9 +85,7 @@ describe('signing in and out', () => {
     const tech = await s.createPerson('technician')
     const { page, context } = await s.newPage(PHONE)
     await page.goto('/sign-in')
-    await page.getByLabel('E-mail').fill(tech.email)
-    await page.getByLabel('Password').fill('definitely-wrong')
-    await page.getByRole('button', { name: 'Sign in' }).click()
+    await submitSignIn(page, tech.email, 'definitely-wrong')
     await page.getByRole('alert').filter({ hasText: 'do not match' }).waitFor()
     expect(page.url()).toContain('/sign-in')
     await context.close()

@@ -44,9 +44,7 @@ export async function startBrowserSession() {
 
   async function signIn(page: Page, email: string, password = TEST_PASSWORD) {
     await page.goto('/sign-in')
-    await page.getByLabel('E-mail').fill(email)
-    await page.getByLabel('Password').fill(password)
-    await page.getByRole('button', { name: 'Sign in' }).click()
+    await submitSignIn(page, email, password)
     await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'))
   }
 
@@ -69,6 +67,13 @@ export async function startBrowserSession() {
 }
 
 export type BrowserSession = Awaited<ReturnType<typeof startBrowserSession>>
+
+/** Fills and sends the sign-in form already on the page (keeping whatever `redirectTo` it has). */
+export async function submitSignIn(page: Page, email: string, password = TEST_PASSWORD) {
+  await page.getByLabel('E-mail').fill(email)
+  await page.getByLabel('Password').fill(password)
+  await page.getByRole('button', { name: 'Sign in' }).click()
+}
 
 const CLOSE_WAIT_MS = 10_000
 
