@@ -48,6 +48,8 @@ describe('signing in and out', () => {
     expect((await page.request.delete('/api/session')).ok()).toBe(true)
     // The server drops the session's live connection, so the page learns without a click.
     await page.waitForURL('**/sign-in?redirectTo=%2Fround')
+    await page.getByRole('status').filter({ hasText: 'the page you were opening' }).waitFor()
+    await screenshot(page, 'session-ended-phone-sign-in')
     await submitSignIn(page, tech.email)
     await page.waitForURL('**/round')
     expect(documents).toHaveLength(0)

@@ -18,6 +18,11 @@ export function Component() {
             <p className="text-sm text-tide-600">Sign in to your facility</p>
           </div>
         </div>
+        {safeRedirect && (
+          <p role="status" className="mb-4 rounded-lg bg-tide-50 px-3 py-2 text-sm text-tide-800">
+            Sign in to go on to the page you were opening.
+          </p>
+        )}
         <SignInForm onSignedIn={(person) => navigate(safeRedirect ?? homeFor(person.role), { replace: true })} />
       </div>
     </main>
